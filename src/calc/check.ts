@@ -1,0 +1,43 @@
+/**
+ * The check record: the one shape every quantitative check produces.
+ * Rules, reports and the map read this record; nobody re-derives a pass/fail.
+ *
+ * Margin convention (dimensionless, positive = passes):
+ *   sense "max" (value must not exceed limit):     margin = (limit − value) / limit
+ *   sense "min" (value must reach at least limit): margin = (value − limit) / limit
+ * A margin of 0.25 therefore reads "25 % of the limit to spare".
+ */
+export interface CheckRecord {
+  /** Stable identifier, e.g. "pressure", "pv", "wear-life". */
+  id: string;
+  /** What is checked, in words a reviewer reads. */
+  label: string;
+  /** The computed value, SI base units (temperatures °C, lives in hours where unit says "h"). */
+  value: number;
+  /** The limit it is held against, same unit. */
+  limit: number;
+  /** Unit of value and limit, e.g. "Pa", "m/s", "Pa*m/s", "m", "h", "degC", "1". */
+  unit: string;
+  /** Signed margin as defined above. */
+  margin: number;
+  pass: boolean;
+  /** Where the limit comes from: standard, book, table — or "common practice" / "from memory". */
+  source: string;
+  /** Whether the limit is an upper ("max") or lower ("min") bound. */
+  sense: 'max' | 'min';
+}
+
+/** Build a check record, computing margin and pass from the sense of the limit. */
+export function makeCheck(
+  id: string,
+  label: string,
+  value: number,
+  limit: number,
+  unit: string,
+  sense: 'max' | 'min',
+  source: string,
+): CheckRecord {
+  const margin = sense === 'max' ? (limit - value) / limit : (value - limit) / limit;
+  const pass = sense === 'max' ? value <= limit : value >= limit;
+  return { id, label, value, limit, unit, margin, pass, source, sense };
+}

@@ -1,0 +1,112 @@
+/**
+ * The duty case as understood, in SI base units. This is what the calculation
+ * kernels receive; the case-file loader (src/case/load.ts) produces it from
+ * YAML/JSON with units. Units: lengths m, forces N, shaft speed rev/s,
+ * angles rad, frequency Hz (full cycles per second), viscosity Pa·s,
+ * temperatures °C, pressures Pa, wear factor m³/(N·m) = m²/N.
+ * Life targets keep the unit their key names (hours).
+ */
+export type Shock = 'none' | 'light' | 'moderate' | 'heavy';
+export type Supply = 'none' | 'grease' | 'oil-bath' | 'oil-feed';
+export type Contamination = 'clean' | 'normal' | 'dirty' | 'severe';
+export type Priority = 'cost' | 'friction' | 'maintenance' | 'noise' | 'precision';
+
+/** A bushing material class, in the same shape as the rows of data/bushing-materials.json (SI). */
+export interface BushingMaterial {
+  id: string;
+  name: string;
+  /** Maximum mean projected pressure, Pa. */
+  maxPressure: number;
+  /** Maximum sliding speed, m/s. */
+  maxVelocity: number;
+  /** Maximum PV, Pa·m/s. */
+  maxPV: number;
+  /** Typical dimensional wear factor k, m³/(N·m) (= m²/N). */
+  wearFactor: number;
+  /** Low and high ends of the published scatter of k, m³/(N·m). Default: typical/3 and typical×3. */
+  wearFactorLow?: number;
+  wearFactorHigh?: number;
+  /** Typical friction coefficient, boundary regime, dimensionless. */
+  friction: number;
+  /** Maximum continuous temperature of the material, °C. */
+  maxTemperature: number;
+  source: string;
+}
+
+export interface OperatingPointSI {
+  /** Share of running time, 0..1; shares add to 1. */
+  share: number;
+  /** Radial load, N. */
+  radial: number;
+  /** Axial load, N. */
+  axial: number;
+  /** Shaft speed, rev/s (absent for an oscillating shaft: the shaft's oscillation applies). */
+  speed?: number;
+}
+
+export interface CaseSI {
+  title: string;
+  shaft: {
+    /** Shaft (journal) diameter, m. */
+    diameter: number;
+    /** Rotational speed, rev/s. Exactly one of speed and oscillation is present. */
+    speed?: number;
+    /** Oscillation: total swing angle (rad) and full cycles per second (Hz). */
+    oscillation?: { angle: number; frequency: number };
+  };
+  load: { radial: number; axial: number; shock: Shock };
+  /** Operating points replacing shaft speed and load, when given. */
+  duty?: OperatingPointSI[];
+  life: {
+    /** Life target, hours. */
+    hours: number;
+    /** Radial wear a bushing may lose, m. */
+    wearAllowance: number;
+    /** Required reliability for rolling-bearing life, percent (90 unless given). */
+    reliability: number;
+  };
+  space: {
+    /** Axial room for the support, m. */
+    maxLength: number;
+    /** Radial room: housing bore available, m. */
+    maxOuterDiameter: number;
+  };
+  lubrication: {
+    supply: Supply;
+    /** ISO VG grade number (e.g. 68) when an oil grade is named. */
+    oilGrade?: number;
+    /** Fixed dynamic viscosity, Pa·s (then no thermal iteration). */
+    viscosity?: number;
+    /** Oil inlet temperature, °C. */
+    inletTemperature: number;
+  };
+  environment: {
+    /** Ambient temperature, °C. */
+    ambient: number;
+    contamination: Contamination;
+    startsPerHour: number;
+  };
+  /** Priorities 1..5 (3 = neutral). */
+  priorities: Record<Priority, number>;
+  bushing?: { length?: number; material?: string | BushingMaterial };
+  rolling?: {
+    type?: 'ball' | 'roller';
+    /** Supplier basic dynamic load rating C, N. */
+    dynamicRating?: number;
+    /** Supplier basic static load rating C0, N. */
+    staticRating?: number;
+    /** Supplier fatigue load limit Cu, N. */
+    fatigueLimit?: number;
+    /** Supplier bearing outside diameter and width, m (optional). */
+    outerDiameter?: number;
+    width?: number;
+  };
+  journal?: { length?: number; radialClearance?: number; clearanceRatio?: number };
+}
+
+/** An assumption or default applied while reading the case, shown in every output. */
+export interface Assumption {
+  field: string;
+  value: string;
+  reason: string;
+}

@@ -1,0 +1,65 @@
+import { readFileSync } from 'node:fs';
+import { z } from 'zod';
+import type { OilGrade } from '../calc/lubricant.js';
+
+/**
+ * Loaders for the tables in data/. Each table is validated by a zod schema when read;
+ * a row that fails names the file, the row and the field. Tables are read once and cached.
+ */
+export class DataError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'DataError';
+  }
+}
+
+const dataDir = new URL('../../data/', import.meta.url);
+const cache = new Map<string, unknown>();
+
+/** Read data/<file> and validate it with schema; cached per file. */
+export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
+  const hit = cache.get(file);
+  if (hit !== undefined) return hit as T;
+  let raw: unknown;
+  try {
+    raw = JSON.parse(readFileSync(new URL(file, dataDir), 'utf8'));
+  } catch (e) {
+    throw new DataError(`data/${file}: cannot be read as JSON (${(e as Error).message})`);
+  }
+  const parsed = schema.safeParse(raw);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0]!;
+    throw new DataError(
+      `data/${file}: field ${issue.path.join('.') || '(root)'}: ${issue.message}`,
+    );
+  }
+  cache.set(file, parsed.data);
+  return parsed.data;
+}
+
+const positive = z.number().positive();
+const oilGradeSchema = z.object({
+  grade: positive,
+  nu40: positive,
+  nu100: positive,
+  density15: positive,
+  specificHeat: positive,
+  source: z.string().min(1),
+});
+const lubricantsSchema = z.object({
+  description: z.string(),
+  units: z.record(z.string(), z.string()),
+  densityTemperatureCoefficient: z.object({ value: positive, unit: z.string(), source: z.string() }),
+  greaseBaseOil: z.object({ grade: positive, source: z.string() }),
+  grades: z.array(oilGradeSchema).min(1),
+});
+export type LubricantTable = z.infer<typeof lubricantsSchema>;
+
+export function lubricants(): LubricantTable {
+  return loadTable('lubricants.json', lubricantsSchema);
+}
+
+/** The oil grade row for an ISO VG number, or undefined. */
+export function oilGrade(grade: number): OilGrade | undefined {
+  return lubricants().grades.find((g) => g.grade === grade);
+}
