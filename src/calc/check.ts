@@ -41,3 +41,20 @@ export function makeCheck(
   const pass = sense === 'max' ? value <= limit : value >= limit;
   return { id, label, value, limit, unit, margin, pass, source, sense };
 }
+
+/**
+ * One line of the calculation sheet: a figure with its formula and the values
+ * substituted into it, so a reviewer can redo the arithmetic. Values SI.
+ */
+export interface SheetLine {
+  /** What the figure is, e.g. "Mean pressure P". */
+  label: string;
+  /** The formula in symbols, e.g. "P = F/(D·L)". */
+  formula: string;
+  /** The formula with numbers, e.g. "P = 3200 N/(0.040 m · 0.040 m)". */
+  substituted: string;
+  value: number;
+  unit: string;
+  /** Source of the formula. */
+  source: string;
+}
