@@ -43,6 +43,12 @@ export interface SolveOptions {
   maxIter?: number;
   /** Starting pressure field (same layout as FilmSolution.p), e.g. the solution at a nearby ε. */
   initial?: Float64Array;
+  /**
+   * Apply the Swift–Stieber condition p ≥ 0 (default true). false keeps sub-ambient
+   * pressures: the full-Sommerfeld film, used only to check the closed-form
+   * long-bearing limit.
+   */
+  cavitation?: boolean;
 }
 
 export interface FilmSolution {
@@ -119,6 +125,7 @@ export function solveReynolds(
   const omega = opts.omega ?? defaultOmega(mesh, lengthToDiameter);
   const tol = opts.tol ?? 1e-8;
   const maxIter = opts.maxIter ?? 20000;
+  const floor = opts.cavitation === false ? -Infinity : 0;
   const lambda = 1 / (lengthToDiameter * lengthToDiameter); // (D/L)²
   const dz = 1 / m;
   const stride = m + 1;
@@ -171,11 +178,12 @@ export function solveReynolds(
         const gs = (e * p[rowE + j]! + w * p[rowW + j]! + z * (p[k + 1]! + south) - bi) * d;
         const old = p[k]!;
         let v = old + omega * (gs - old);
-        if (v < 0) v = 0;
+        if (v < floor) v = floor;
         p[k] = v;
         const dv = v > old ? v - old : old - v;
         if (dv > maxDelta) maxDelta = dv;
         if (v > maxP) maxP = v;
+        else if (-v > maxP) maxP = -v;
       }
     }
     if (maxP > 0 && maxDelta <= tol * maxP) {
