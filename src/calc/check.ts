@@ -58,3 +58,11 @@ export interface SheetLine {
   /** Source of the formula. */
   source: string;
 }
+
+/** A number written for a calculation sheet: four significant figures, no trailing zeros. */
+export function num(x: number, digits = 4): string {
+  if (x === 0 || !Number.isFinite(x)) return String(x);
+  const a = Math.abs(x);
+  if (a >= 1e-3 && a < 1e6) return String(+x.toPrecision(digits));
+  return x.toExponential(digits - 1).replace(/\.?0+e/, 'e');
+}

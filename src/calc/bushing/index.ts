@@ -1,0 +1,276 @@
+import type { Assumption, BushingMaterial, CaseSI } from '../../case/types.js';
+import { makeCheck, num, type CheckRecord, type SheetLine } from '../check.js';
+import { operatingPoints } from '../duty.js';
+import { bushingFactors, bushingMaterials, type BushingMaterialRow } from '../../data/bushing.js';
+import {
+  frictionHeat,
+  meanPressure,
+  oscillatingSlidingSpeed,
+  peakPressure,
+  rotatingSlidingSpeed,
+  temperatureRise,
+} from './formulas.js';
+
+/** One material class sized and checked for the case. SI units; lives in hours. */
+export interface BushingMaterialResult {
+  id: string;
+  name: string;
+  /** Bushing length, m: the case's, or the one chosen (see `lengthChosen`). */
+  length: number;
+  lengthChosen: 'case' | 'shortest-meeting-limits' | 'space-limited';
+  outerDiameter: number;
+  lengthToDiameter: number;
+  /** Governing (largest over the duty) mean pressure, Pa. */
+  pressure: number;
+  peakPressure: number;
+  /** Governing sliding speed, m/s. */
+  velocity: number;
+  /** Governing PV, Pa·m/s. */
+  pv: number;
+  factors: { motion: number; environment: number };
+  /** Typical wear factor, m³/(N·m). */
+  wearFactor: number;
+  /** Radial wear depth after the life target, at the most loaded line (peak pressure), m. */
+  wearDepth: number;
+  /** The same with the mean pressure, m (for comparison). */
+  wearDepthMeanPressure: number;
+  wearBasis: 'peak-pressure';
+  /** Hours to wear through the allowance at the typical wear factor. */
+  lifeHours: number;
+  /** Hours to the allowance at the high (short), typical and low (long) wear factor. */
+  lifeBand: { short: number; typical: number; long: number };
+  /** Wear depth after the life target at high, typical and low wear factor, m. */
+  wearDepthBand: { high: number; typical: number; low: number };
+  /** Shortest length meeting pressure, PV and wear life, regardless of space, m. */
+  minLength: number;
+  minLengthBy: { pressure: number; pv: number; wear: number };
+  /** Steady running temperature estimate, °C. */
+  temperature: number;
+  frictionCoefficient: number;
+  /** Frictional power at the governing point, W. */
+  frictionPower: number;
+  feasible: boolean;
+  checks: CheckRecord[];
+  source: string;
+}
+
+export interface BushingResult {
+  option: 'bushing';
+  materials: BushingMaterialResult[];
+  best: string | null;
+  /** Why the best was chosen, or why none fits. */
+  bestReason: string;
+  feasible: boolean;
+  assumed: Assumption[];
+  warnings: string[];
+  sheet: SheetLine[];
+}
+
+interface Point {
+  share: number;
+  F: number;
+  V: number;
+}
+
+const HOUR = 3600;
+/** Lengths are chosen in whole millimetres, as a drawing would give them. */
+const LENGTH_STEP = 1e-3;
+
+/**
+ * Size and check every bushing material class (or the one the case names) for the duty.
+ * Method: mean pressure, PV and sliding speed against the material's limits; Archard wear at
+ * the most loaded line with motion and environment multipliers, summed over the duty points;
+ * the shortest length meeting pressure, PV and the wear life; a lumped temperature rise.
+ * See ./formulas.ts for each equation and its source.
+ */
+export function checkBushing(c: CaseSI): BushingResult {
+  const factors = bushingFactors();
+  const assumed: Assumption[] = [];
+  const warnings: string[] = [];
+  const D = c.shaft.diameter;
+  const osc = c.shaft.oscillation;
+  const points: Point[] = operatingPoints(c).map((p) => ({
+    share: p.share,
+    F: p.radial,
+    V: osc ? oscillatingSlidingSpeed(D, osc.angle, osc.frequency) : rotatingSlidingSpeed(D, p.speed ?? 0),
+  }));
+  if (points.some((p) => p.V === 0)) warnings.push('an operating point has zero speed: no sliding, no wear at that point');
+  if (c.load.axial > 0 || (c.duty ?? []).some((p) => p.axial > 0)) {
+    warnings.push('axial load is not carried by a plain bushing: add a thrust washer or shoulder (not checked here)');
+  }
+
+  const motionKey = osc ? 'oscillating' : 'rotating';
+  const fm = factors.motion.find((m) => m.key === motionKey)!;
+  const fe = factors.environment.find((m) => m.key === c.environment.contamination)!;
+  assumed.push({ field: 'bushing.motionFactor', value: String(fm.value), reason: `${fm.note} (${fm.source})` });
+  assumed.push({ field: 'bushing.environmentFactor', value: String(fe.value), reason: `${c.environment.contamination}: ${fe.note} (${fe.source})` });
+  assumed.push({ field: 'bushing.heat', value: `h = ${factors.heat.dissipation} W/(m^2*K), A = ${factors.heat.areaFactor}·π·D·L`, reason: `${factors.heat.note} (${factors.heat.source})` });
+  if (c.lubrication.supply !== 'none') {
+    warnings.push(`the case offers ${c.lubrication.supply} lubrication; the bushing figures are for boundary (rubbing) lubrication, which is conservative where a lubricant reaches the bore`);
+  }
+
+  const all = bushingMaterials();
+  const named = c.bushing?.material;
+  const candidates: (BushingMaterial | BushingMaterialRow)[] =
+    named === undefined ? all : typeof named === 'string' ? all.filter((m) => m.id === named) : [named];
+
+  const materials = candidates.map((m) => checkMaterial(c, m, points, fm.value, fe.value, factors));
+  const feasible = materials.filter((m) => m.feasible);
+  let best: BushingMaterialResult | undefined;
+  let bestReason: string;
+  if (feasible.length) {
+    // Most robust: the largest smallest margin over the governing checks; ties keep data order.
+    const score = (m: BushingMaterialResult) => Math.min(...m.checks.filter((k) => k.id !== 'length-to-diameter').map((k) => k.margin));
+    best = feasible.reduce((a, b) => (score(b) > score(a) ? b : a));
+    bestReason = `${best.name} at ${num(best.length * 1000, 3)} mm long has the largest smallest margin (${(score(best) * 100).toFixed(0)} %) of the ${feasible.length} material(s) that pass every check`;
+  } else {
+    bestReason = `no material passes every check: ${whyNone(materials)}`;
+    warnings.push(bestReason);
+  }
+  const shown = best ?? materials[0];
+  return {
+    option: 'bushing',
+    materials,
+    best: best?.id ?? null,
+    bestReason,
+    feasible: best !== undefined,
+    assumed,
+    warnings,
+    sheet: shown ? sheetFor(c, shown, points) : [],
+  };
+}
+
+function checkMaterial(
+  c: CaseSI,
+  m: BushingMaterial | BushingMaterialRow,
+  points: Point[],
+  fMotion: number,
+  fEnv: number,
+  factors: ReturnType<typeof bushingFactors>,
+): BushingMaterialResult {
+  const D = c.shaft.diameter;
+  const T = c.life.hours;
+  const allowance = c.life.wearAllowance;
+  const kLow = m.wearFactorLow ?? m.wearFactor / 3;
+  const kHigh = m.wearFactorHigh ?? m.wearFactor * 3;
+
+  // Each limit scales as 1/L, so the shortest length for each is a closed form.
+  const Fmax = Math.max(...points.map((p) => p.F));
+  const FVmax = Math.max(...points.map((p) => p.F * p.V));
+  const Vmax = Math.max(...points.map((p) => p.V));
+  // Wear rate at unit length, m/h × m: Σ share·f_m·f_e·k·(4F/(πD))·V·3600
+  const wearRateTimesL = (k: number) =>
+    points.reduce((s, p) => s + p.share * fMotion * fEnv * k * ((4 * p.F) / (Math.PI * D)) * p.V * HOUR, 0);
+  const minLengthBy = {
+    pressure: Fmax / (D * m.maxPressure),
+    pv: FVmax / (D * m.maxPV),
+    wear: (wearRateTimesL(m.wearFactor) * T) / allowance,
+  };
+  const minLength = Math.max(minLengthBy.pressure, minLengthBy.pv, minLengthBy.wear);
+
+  const ld = factors.lengthToDiameter;
+  let length: number;
+  let lengthChosen: BushingMaterialResult['lengthChosen'];
+  if (c.bushing?.length !== undefined) {
+    length = c.bushing.length;
+    lengthChosen = 'case';
+  } else {
+    const wanted = Math.ceil(Math.max(minLength, ld.min * D) / LENGTH_STEP - 1e-9) * LENGTH_STEP;
+    length = Math.min(wanted, c.space.maxLength);
+    lengthChosen = wanted > c.space.maxLength ? 'space-limited' : 'shortest-meeting-limits';
+  }
+
+  const wall = Math.max('minWall' in m ? m.minWall : 1.5e-3, ('wallFraction' in m ? m.wallFraction : 0.1) * D);
+  const outerDiameter = D + 2 * wall;
+  const pressure = meanPressure(Fmax, D, length);
+  const pPeak = peakPressure(Fmax, D, length);
+  const pv = FVmax / (D * length);
+  const rate = (k: number) => wearRateTimesL(k) / length; // m/h
+  const life = (k: number) => allowance / rate(k);
+  const wearDepthTyp = rate(m.wearFactor) * T;
+  const governing = points.reduce((a, b) => (b.F * b.V > a.F * a.V ? b : a));
+  const Q = frictionHeat(m.friction, governing.F, governing.V);
+  const temperature = c.environment.ambient + temperatureRise(Q, factors.heat.dissipation, factors.heat.areaFactor, D, length);
+  const src = m.source;
+  const wearSrc = `Archard wear law, The Tribology Handbook 2nd ed. 1995, A5; wear factor: ${src}`;
+  const lOverD = length / D;
+
+  const checks: CheckRecord[] = [
+    makeCheck('pressure', 'Mean pressure P = F/(D·L)', pressure, m.maxPressure, 'Pa', 'max', src),
+    makeCheck('velocity', 'Sliding speed V', Vmax, m.maxVelocity, 'm/s', 'max', src),
+    makeCheck('pv', 'PV', pv, m.maxPV, 'Pa*m/s', 'max', src),
+    makeCheck('wear-life', 'Hours to wear through the allowance (typical wear factor)', life(m.wearFactor), T, 'h', 'min', wearSrc),
+    makeCheck('temperature', 'Running temperature (lumped estimate)', temperature, m.maxTemperature, 'degC', 'max', `${src}; heat model: ${factors.heat.source}`),
+    makeCheck('axial-space', 'Length within the axial space', length, c.space.maxLength, 'm', 'max', 'the case (space.maxLength)'),
+    makeCheck('radial-space', 'Outer diameter within the housing bore', outerDiameter, c.space.maxOuterDiameter, 'm', 'max', 'the case (space.maxOuterDiameter); wall thickness common practice'),
+    lOverD < 1
+      ? makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.min, '1', 'min', ld.source)
+      : makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.max, '1', 'max', ld.source),
+  ];
+  // Length/diameter is advice (edge loading, misalignment), not a limit: it does not gate feasibility.
+  const feasible = checks.every((k) => k.pass || k.id === 'length-to-diameter');
+
+  return {
+    id: m.id,
+    name: m.name,
+    length,
+    lengthChosen,
+    outerDiameter,
+    lengthToDiameter: lOverD,
+    pressure,
+    peakPressure: pPeak,
+    velocity: Vmax,
+    pv,
+    factors: { motion: fMotion, environment: fEnv },
+    wearFactor: m.wearFactor,
+    wearDepth: wearDepthTyp,
+    wearDepthMeanPressure: (wearDepthTyp * Math.PI) / 4,
+    wearBasis: 'peak-pressure',
+    lifeHours: life(m.wearFactor),
+    lifeBand: { short: life(kHigh), typical: life(m.wearFactor), long: life(kLow) },
+    wearDepthBand: { high: rate(kHigh) * T, typical: wearDepthTyp, low: rate(kLow) * T },
+    minLength,
+    minLengthBy,
+    temperature,
+    frictionCoefficient: m.friction,
+    frictionPower: Q,
+    feasible,
+    checks,
+    source: src,
+  };
+}
+
+function whyNone(ms: BushingMaterialResult[]): string {
+  const count = new Map<string, number>();
+  for (const m of ms) for (const k of m.checks) if (!k.pass && k.id !== 'length-to-diameter') count.set(k.label, (count.get(k.label) ?? 0) + 1);
+  return [...count.entries()].map(([label, n]) => `${label} fails for ${n} of ${ms.length}`).join('; ');
+}
+
+function sheetFor(c: CaseSI, m: BushingMaterialResult, points: Point[]): SheetLine[] {
+  const D = c.shaft.diameter;
+  const L = m.length;
+  const g = points.reduce((a, b) => (b.F * b.V > a.F * a.V ? b : a));
+  const Fmax = Math.max(...points.map((p) => p.F));
+  const hb = 'The Tribology Handbook 2nd ed. 1995, A4-A5';
+  const lines: SheetLine[] = [
+    { label: 'Mean pressure P', formula: 'P = F/(D·L)', substituted: `P = ${num(Fmax)} N / (${num(D)} m · ${num(L)} m)`, value: m.pressure, unit: 'Pa', source: hb },
+    { label: 'Peak pressure p_peak', formula: 'p_peak = 4F/(π·D·L)', substituted: `p_peak = 4·${num(Fmax)} N / (π·${num(D)} m · ${num(L)} m)`, value: m.peakPressure, unit: 'Pa', source: hb },
+    c.shaft.oscillation
+      ? { label: 'Mean sliding speed V', formula: 'V = θ·D·f', substituted: `V = ${num(c.shaft.oscillation.angle)} rad · ${num(D)} m · ${num(c.shaft.oscillation.frequency)} Hz`, value: m.velocity, unit: 'm/s', source: 'kinematics of oscillation' }
+      : { label: 'Sliding speed V', formula: 'V = π·D·N', substituted: `V = π·${num(D)} m · ${num(m.velocity / (Math.PI * D))} rev/s`, value: m.velocity, unit: 'm/s', source: hb },
+    { label: 'PV', formula: 'PV = F·V/(D·L), largest over the duty', substituted: `PV = ${num(g.F)} N · ${num(g.V)} m/s / (${num(D)} m · ${num(L)} m)`, value: m.pv, unit: 'Pa*m/s', source: hb },
+    {
+      label: 'Wear depth at life target',
+      formula: 'h = Σ share·f_m·f_e·k·p_peak·V·t',
+      substituted: points.length === 1
+        ? `h = ${m.factors.motion}·${m.factors.environment}·${num(m.wearFactor)} m^2/N · ${num(m.peakPressure)} Pa · ${num(m.velocity)} m/s · ${num(c.life.hours * HOUR)} s`
+        : `h = Σ over ${points.length} duty points, ${m.factors.motion}·${m.factors.environment}·${num(m.wearFactor)} m^2/N · p_peak,i · V_i · share_i · ${num(c.life.hours * HOUR)} s`,
+      value: m.wearDepth,
+      unit: 'm',
+      source: 'Archard 1953; The Tribology Handbook 2nd ed. 1995, A5',
+    },
+    { label: 'Wear life', formula: 't = allowance / (h/T)', substituted: `t = ${num(c.life.wearAllowance)} m / (${num(m.wearDepth)} m / ${num(c.life.hours)} h)`, value: m.lifeHours, unit: 'h', source: 'Archard 1953' },
+    { label: 'Frictional heat Q', formula: 'Q = f·F·V', substituted: `Q = ${m.frictionCoefficient} · ${num(g.F)} N · ${num(g.V)} m/s`, value: m.frictionPower, unit: 'W', source: hb },
+  ];
+  return lines;
+}

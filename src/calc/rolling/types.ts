@@ -1,0 +1,94 @@
+import type { Assumption } from '../../case/types.js';
+import type { CheckRecord, SheetLine } from '../check.js';
+import type { RollingType } from './life.js';
+
+/**
+ * Result of the rolling-bearing check (a contract read by the CLI, the rules and the
+ * reports). Lives in hours, L10 in million revolutions, ndm in mm·r/min, speeds in
+ * rev/s, everything else SI (m, N, W, N·m, m²/s, °C). A figure that does not apply is
+ * null, never NaN or Infinity.
+ */
+export interface RollingCandidate {
+  /** Stable id: "supplier" for the case's own bearing, else the ISO 15 row id (e.g. "dgb-02-40"). */
+  id: string;
+  type: RollingType;
+  /** Kind in words, e.g. "deep-groove ball". */
+  kind: string;
+  /** Dimension series ("02", "03"), or "supplier". */
+  series: string;
+  /** Generic designation in words. */
+  designation: string;
+  /** Bore d, m. */
+  bore: number;
+  /** Outside diameter D, m (null when a supplier bearing gives none and no ISO 15 row of its bore exists). */
+  outerDiameter: number | null;
+  /** Width B, m (null as above). */
+  width: number | null;
+  /** Basic dynamic load rating C, N. */
+  dynamicRating: number;
+  /** Basic static load rating C0, N. */
+  staticRating: number;
+  /** Fatigue load limit Cu, N (supplier's, or C0/22, C0/8.2). */
+  fatigueLimit: number;
+  ratingSource: 'supplier' | 'estimated';
+  /** Pitch diameter dm, m (estimated as (d+D)/2). */
+  pitchDiameter: number;
+  /** Estimated rolling-element diameter, m, and count (for the oscillation criterion, and the ratings when estimated). */
+  elementDiameter: number;
+  elementCount: number;
+  /** X and Y of the heaviest operating point. */
+  X: number;
+  Y: number;
+  /** Dynamic equivalent load (duty-spectrum mean, times service factor), N. */
+  equivalentLoad: number;
+  /** Peak static equivalent load P0, N. */
+  staticEquivalentLoad: number;
+  /** Basic rating life, million revolutions (null with no load). */
+  L10: number | null;
+  /** Basic rating life, hours (null with no rotation or no load). */
+  L10h: number | null;
+  /** Life modification factor for reliability. */
+  a1: number;
+  aISO: number | null;
+  /** Viscosity ratio κ = ν/ν1 as computed (before the standard's limits). */
+  kappa: number | null;
+  /** Modified rating life a1·a_ISO·L10h, hours. */
+  L10mh: number | null;
+  /** Static safety factor C0/P0 (null with no load). */
+  s0: number | null;
+  /** Speed factor at the highest point speed, mm·r/min. */
+  ndm: number;
+  /** Time-weighted mean friction torque, N·m, and friction power, W. */
+  frictionTorque: number;
+  frictionPower: number;
+  /** Grease relubrication interval (grease life for a sealed bearing), hours; null on oil or with no rotation. */
+  relubricationHours: number | null;
+  /** Estimated operating temperature, °C. */
+  temperature: number;
+  /** Kinematic viscosity of the (base) oil at the operating temperature, m²/s. */
+  viscosity: number;
+  /** Rated viscosity ν1, m²/s (null with no rotation). */
+  ratedViscosity: number | null;
+  /** Smallest swing angle for full rolling-element overlap, rad (oscillating shafts only). */
+  criticalSwingAngle: number | null;
+  /** Reasons that rule the bearing out regardless of the checks. */
+  exclusions: string[];
+  feasible: boolean;
+  checks: CheckRecord[];
+}
+
+export interface RollingResult {
+  option: 'rolling';
+  /** Dynamic equivalent load of the best (else first) candidate, N; null when there is none and no bound can be formed. */
+  equivalentLoad: number | null;
+  /** Time-weighted mean speed, rev/s (the equivalent rotational speed for an oscillating shaft). */
+  equivalentSpeed: number;
+  /** Basic dynamic rating needed for the life target with a1 (a_ISO taken as 1), N; null with no rotation or no target. */
+  requiredDynamicRating: number | null;
+  candidates: RollingCandidate[];
+  best: string | null;
+  feasible: boolean;
+  assumed: Assumption[];
+  warnings: string[];
+  sheet: SheetLine[];
+}

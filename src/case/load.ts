@@ -1,0 +1,81 @@
+import { readFileSync, statSync } from 'node:fs';
+import { parse as parseYaml, YAMLParseError } from 'yaml';
+import { caseFileSchema } from './schema.js';
+import { completeCase, type Problem } from './defaults.js';
+import type { Assumption, CaseSI } from './types.js';
+import { lubricants } from '../data/load.js';
+import { bushingMaterials } from '../data/bushing.js';
+
+/** A case that cannot be used: every problem found, each naming its field. Exit code 2. */
+export class CaseError extends Error {
+  constructor(
+    readonly source: string,
+    readonly problems: Problem[],
+  ) {
+    super(`${source}: ${problems.map((p) => `${p.field}: ${p.message}`).join('; ')}`);
+    this.name = 'CaseError';
+  }
+}
+
+export interface LoadedCase {
+  case: CaseSI;
+  assumed: Assumption[];
+  /** The case as the user wrote it (units as given). */
+  given: unknown;
+}
+
+/** Largest case file accepted, bytes: a duty case is a page of text. */
+const MAX_BYTES = 1_000_000;
+
+/** Read and validate a case file (YAML or JSON). Throws CaseError listing every problem. */
+export function loadCaseFile(path: string): LoadedCase {
+  let text: string;
+  try {
+    const st = statSync(path);
+    if (st.isDirectory()) throw new CaseError(path, [{ field: '(file)', message: 'is a directory; expected a YAML or JSON case file' }]);
+    if (st.size > MAX_BYTES) throw new CaseError(path, [{ field: '(file)', message: `is ${st.size} bytes; expected a case file under ${MAX_BYTES} bytes` }]);
+    text = readFileSync(path, 'utf8');
+  } catch (e) {
+    if (e instanceof CaseError) throw e;
+    const code = (e as NodeJS.ErrnoException).code;
+    const why = code === 'ENOENT' ? 'no such file' : code === 'EACCES' ? 'permission denied' : (e as Error).message;
+    throw new CaseError(path, [{ field: '(file)', message: `cannot be read (${why}); expected a YAML or JSON case file` }]);
+  }
+  return parseCaseText(text, path);
+}
+
+/** Validate case text (YAML or JSON); `source` names it in messages. */
+export function parseCaseText(text: string, source = '(case)'): LoadedCase {
+  if (text.includes('\u0000')) {
+    throw new CaseError(source, [{ field: '(file)', message: 'holds binary data; expected a YAML or JSON text file' }]);
+  }
+  let raw: unknown;
+  try {
+    // maxAliasCount bounds alias expansion ("billion laughs"); duplicate keys are errors.
+    raw = parseYaml(text, { maxAliasCount: 50, uniqueKeys: true, prettyErrors: true });
+  } catch (e) {
+    const msg = e instanceof YAMLParseError ? e.message.split('\n')[0]! : (e as Error).message;
+    throw new CaseError(source, [{ field: '(file)', message: `is not valid YAML or JSON: ${msg}` }]);
+  }
+  return validateCase(raw, source);
+}
+
+/** Validate an already-parsed case object. Throws CaseError listing every problem. */
+export function validateCase(raw: unknown, source = '(case)'): LoadedCase {
+  if (raw === null || typeof raw !== 'object' || Array.isArray(raw)) {
+    throw new CaseError(source, [{ field: '(file)', message: `holds ${raw === null || raw === undefined ? 'nothing' : Array.isArray(raw) ? 'a list' : `a ${typeof raw}`}; expected a mapping with title, shaft, load, life, space…` }]);
+  }
+  const parsed = caseFileSchema.safeParse(raw);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => ({
+      field: i.path.length ? i.path.map((p, k) => (typeof p === 'number' ? `[${p}]` : k ? `.${String(p)}` : String(p))).join('') : '(file)',
+      message: i.message,
+    }));
+    throw new CaseError(source, problems);
+  }
+  const grades = lubricants().grades.map((g) => g.grade);
+  const materials = bushingMaterials().map((m) => m.id);
+  const done = completeCase(parsed.data, grades, materials);
+  if (done.problems.length) throw new CaseError(source, done.problems);
+  return { case: done.case, assumed: done.assumed, given: raw };
+}

@@ -1,0 +1,118 @@
+import Qty from 'js-quantities';
+
+/**
+ * Quantity parsing at the boundary: "40 mm", "720 lbf", "1500 rpm", "104 degF",
+ * "5e-7 mm^3/(N*m)" → one number in the SI unit the kernels use. Parsed once,
+ * here; nothing inside the calculation sees a unit string.
+ *
+ * Plain numbers are taken as already in the internal unit of the kind
+ * (SI base units; shaft speed rev/s; temperature °C; life hours).
+ */
+export type Kind =
+  | 'length'
+  | 'force'
+  | 'speed'
+  | 'velocity'
+  | 'time'
+  | 'temperature'
+  | 'viscosity'
+  | 'pressure'
+  | 'pv'
+  | 'angle'
+  | 'frequency'
+  | 'wearFactor';
+
+interface KindInfo {
+  /** Unit of the internal number, as js-quantities spells it. */
+  unit: string;
+  /** Unit shown to people for the internal number. */
+  label: string;
+  /** Examples of accepted strings, for error messages. */
+  examples: string;
+  /** Words for the kind, for error messages. */
+  noun: string;
+}
+
+export const KINDS: Record<Kind, KindInfo> = {
+  length: { unit: 'm', label: 'm', examples: '"40 mm" or "1.5 in"', noun: 'a length' },
+  force: { unit: 'N', label: 'N', examples: '"3.2 kN" or "720 lbf"', noun: 'a force' },
+  speed: { unit: 'rpm', label: 'rev/s', examples: '"1500 rpm" or "25 rev/s"', noun: 'a rotational speed' },
+  velocity: { unit: 'm/s', label: 'm/s', examples: '"2 m/s" or "400 ft/min"', noun: 'a sliding speed' },
+  time: { unit: 'h', label: 'h', examples: '"20000 h"', noun: 'a duration' },
+  temperature: { unit: 'tempC', label: 'degC', examples: '"40 degC" or "104 degF"', noun: 'a temperature' },
+  viscosity: { unit: 'Pa*s', label: 'Pa*s', examples: '"0.03 Pa*s" or "68 cSt"', noun: 'a viscosity' },
+  pressure: { unit: 'Pa', label: 'Pa', examples: '"2 MPa" or "300 psi"', noun: 'a pressure' },
+  pv: { unit: 'Pa*m/s', label: 'Pa*m/s', examples: '"1.75 MPa*m/s" or "50000 psi*ft/min"', noun: 'a PV value (pressure × sliding speed)' },
+  angle: { unit: 'rad', label: 'rad', examples: '"60 deg"', noun: 'an angle' },
+  frequency: { unit: 'Hz', label: 'Hz', examples: '"0.5 Hz"', noun: 'a frequency' },
+  wearFactor: { unit: 'm^2/N', label: 'm^3/(N*m)', examples: '"5e-7 mm^3/(N*m)"', noun: 'a wear factor (volume per load per sliding distance)' },
+};
+
+/** Density used to turn a kinematic viscosity into a dynamic one when a case gives cSt, kg/m³ (from memory: typical mineral oil near 40 °C). */
+export const KINEMATIC_TO_DYNAMIC_DENSITY = 870;
+
+export class QuantityError extends Error {}
+
+/** Rewrite the spellings js-quantities lacks into ones it knows. */
+function normalise(text: string, kind: Kind): { text: string; scale: number } {
+  let t = text.trim().replace(/·/g, '*').replace(/\s*\*\s*/g, '*').replace(/\s*\/\s*/g, '/');
+  let scale = 1;
+  // Everything after a "/" is a denominator for js-quantities, so "(N*m)" after "/" loses its brackets.
+  t = t.replace(/\/\(([^()]*)\)/g, '/$1');
+  t = t.replace(/°\s*C\b/g, 'degC').replace(/°\s*F\b/g, 'degF');
+  if (kind === 'temperature') {
+    t = t.replace(/\bdegC\b|\bcelsius\b|\bC$/, 'tempC').replace(/\bdegF\b|\bfahrenheit\b|\bF$/, 'tempF').replace(/\bK$|\bdegK\b|\bkelvin\b/, 'tempK');
+  }
+  // Revolutions: js-quantities knows rpm only.
+  if (/\b(rev|r)\/s$|\brps$/.test(t)) {
+    t = t.replace(/\b(rev|r)\/s$|\brps$/, 'rpm');
+    scale = 60;
+  } else if (/\b(rev|r)\/min$/.test(t)) {
+    t = t.replace(/\b(rev|r)\/min$/, 'rpm');
+  }
+  return { text: t, scale };
+}
+
+/**
+ * Parse one quantity. Returns the number in the internal unit of `kind`.
+ * Throws QuantityError with a message saying what was given and what was expected.
+ */
+export function parseQuantity(value: unknown, kind: Kind): number {
+  const info = KINDS[kind];
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) throw new QuantityError(`got ${String(value)}; expected a finite number or ${info.noun} such as ${info.examples}`);
+    return value;
+  }
+  if (typeof value !== 'string') {
+    throw new QuantityError(`got ${describe(value)}; expected ${info.noun} such as ${info.examples}`);
+  }
+  const { text, scale } = normalise(value, kind);
+  if (/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(text)) return Number(text);
+  let q: Qty;
+  try {
+    q = Qty(text);
+  } catch {
+    throw new QuantityError(`"${value}" is not a quantity this tool can read; expected ${info.noun} such as ${info.examples}`);
+  }
+  if (!Number.isFinite(q.scalar)) throw new QuantityError(`"${value}" is not a finite number; expected ${info.noun} such as ${info.examples}`);
+  if (kind === 'viscosity' && q.isCompatible('m^2/s') && !q.isCompatible('Pa*s')) {
+    return q.to('m^2/s').scalar * KINEMATIC_TO_DYNAMIC_DENSITY;
+  }
+  if (kind === 'temperature' && !q.units().startsWith('temp') && q.kind() === 'temperature') {
+    throw new QuantityError(`"${value}" is a temperature difference; expected a temperature such as ${info.examples}`);
+  }
+  if (!q.isCompatible(info.unit)) {
+    const got = q.kind() ? `a ${q.kind().replace(/_/g, ' ')}` : `units of ${q.units()}`;
+    throw new QuantityError(`"${value}" is ${got}; expected ${info.noun} such as ${info.examples}`);
+  }
+  let n = q.to(info.unit).scalar * scale;
+  if (kind === 'speed') n /= 60; // internal shaft speed: rev/s
+  return n;
+}
+
+function describe(v: unknown): string {
+  if (v === null) return 'null';
+  if (Array.isArray(v)) return 'a list';
+  if (typeof v === 'object') return 'a mapping';
+  return `${typeof v} ${JSON.stringify(v)}`;
+}

@@ -1,0 +1,184 @@
+import { z } from 'zod';
+import { parseQuantity, QuantityError, type Kind } from './quantity.js';
+
+/**
+ * The duty-case file schema (a contract: external tools write these keys).
+ * Quantities are strings with units or plain numbers in the internal unit;
+ * each is converted to SI here, once. Defaults are not applied here but in
+ * defaults.ts, which records each one as an assumption.
+ */
+
+type Bound = 'positive' | 'nonnegative' | 'any';
+
+/** A quantity field of the given kind; `bound` rejects zero/negative values at the boundary. */
+export function quantity(kind: Kind, bound: Bound = 'positive') {
+  return z.unknown().transform((v, ctx) => {
+    if (v === undefined) {
+      ctx.addIssue({ code: 'custom', message: `missing; expected ${kindHint(kind)}` });
+      return z.NEVER;
+    }
+    try {
+      const n = parseQuantity(v, kind);
+      if (bound === 'positive' && !(n > 0)) {
+        ctx.addIssue({ code: 'custom', message: `got ${show(v)}; expected a value greater than zero` });
+        return z.NEVER;
+      }
+      if (bound === 'nonnegative' && !(n >= 0)) {
+        ctx.addIssue({ code: 'custom', message: `got ${show(v)}; expected zero or more` });
+        return z.NEVER;
+      }
+      return n;
+    } catch (e) {
+      if (!(e instanceof QuantityError)) throw e;
+      ctx.addIssue({ code: 'custom', message: e.message });
+      return z.NEVER;
+    }
+  });
+}
+
+function kindHint(kind: Kind): string {
+  try {
+    parseQuantity(Symbol(), kind);
+  } catch (e) {
+    return (e as Error).message.replace(/^got .*?; expected /, '');
+  }
+  return kind;
+}
+
+function show(v: unknown): string {
+  return typeof v === 'string' ? `"${v}"` : JSON.stringify(v);
+}
+
+/** A mapping that rejects unknown keys, naming them and the keys it knows. */
+function mapping<S extends z.ZodRawShape>(shape: S) {
+  const known = Object.keys(shape).join(', ');
+  return z.strictObject(shape, {
+    error: (iss) => {
+      if (iss.code === 'unrecognized_keys') {
+        return `unknown key ${iss.keys.map((k) => `"${k}"`).join(', ')}; expected one of: ${known}`;
+      }
+      if (iss.code === 'invalid_type') return `got ${describeInput(iss.input)}; expected a mapping with keys: ${known}`;
+      return undefined;
+    },
+  });
+}
+
+function choice<T extends readonly [string, ...string[]]>(values: T) {
+  return z.enum(values, {
+    error: (iss) => `got ${describeInput(iss.input)}; expected one of: ${values.join(', ')}`,
+  });
+}
+
+function describeInput(v: unknown): string {
+  if (v === undefined) return 'nothing (missing)';
+  if (v === null) return 'null';
+  if (Array.isArray(v)) return 'a list';
+  if (typeof v === 'object') return 'a mapping';
+  return show(v);
+}
+
+const text = (what: string) =>
+  z.string({ error: (iss) => `got ${describeInput(iss.input)}; expected ${what}` }).min(1, { error: `is empty; expected ${what}` });
+
+const plain = (what: string, min: number, max: number) =>
+  z
+    .number({ error: (iss) => `got ${describeInput(iss.input)}; expected ${what}` })
+    .refine((n) => Number.isFinite(n) && n >= min && n <= max, { error: (iss) => `got ${show(iss.input)}; expected ${what}` });
+
+export const SHOCKS = ['none', 'light', 'moderate', 'heavy'] as const;
+export const SUPPLIES = ['none', 'grease', 'oil-bath', 'oil-feed'] as const;
+export const CONTAMINATIONS = ['clean', 'normal', 'dirty', 'severe'] as const;
+export const PRIORITIES = ['cost', 'friction', 'maintenance', 'noise', 'precision'] as const;
+
+export const materialSchema = mapping({
+  id: text('a material id such as "my-bronze"'),
+  name: text('a material name'),
+  maxPressure: quantity('pressure'),
+  maxVelocity: quantity('velocity'),
+  maxPV: quantity('pv'),
+  wearFactor: quantity('wearFactor'),
+  wearFactorLow: quantity('wearFactor').optional(),
+  wearFactorHigh: quantity('wearFactor').optional(),
+  friction: plain('a friction coefficient between 0.001 and 1', 0.001, 1),
+  maxTemperature: quantity('temperature', 'any'),
+  source: text('where the values come from (datasheet, handbook)'),
+});
+
+const pointSchema = mapping({
+  share: plain('a share of running time between 0 and 1', 0, 1),
+  radial: quantity('force'),
+  axial: quantity('force', 'nonnegative').optional(),
+  speed: quantity('speed').optional(),
+});
+
+/** Oil as written: "ISO VG 68", "VG 68" or 68. */
+const oilSchema = z.unknown().transform((v, ctx) => {
+  const m = typeof v === 'number' ? [String(v), String(v)] : typeof v === 'string' ? /^\s*(?:ISO\s*)?(?:VG\s*)?(\d+)\s*$/i.exec(v) : null;
+  if (!m) {
+    ctx.addIssue({ code: 'custom', message: `got ${describeInput(v)}; expected an ISO viscosity grade such as "ISO VG 68"` });
+    return z.NEVER;
+  }
+  return Number(m[1]);
+});
+
+export const caseFileSchema = mapping({
+  title: text('a title for the case'),
+  shaft: mapping({
+    diameter: quantity('length'),
+    speed: quantity('speed').optional(),
+    oscillation: mapping({ angle: quantity('angle'), frequency: quantity('frequency') }).optional(),
+  }),
+  load: mapping({
+    radial: quantity('force').optional(),
+    axial: quantity('force', 'nonnegative').optional(),
+    shock: choice(SHOCKS).optional(),
+  }).optional(),
+  duty: z.array(pointSchema, { error: 'expected a list of operating points' }).min(1, { error: 'is empty; expected at least one operating point' }).optional(),
+  life: mapping({
+    hours: quantity('time'),
+    wearAllowance: quantity('length').optional(),
+    reliability: plain('a reliability in percent between 90 and 99.95', 90, 99.95).optional(),
+  }),
+  space: mapping({
+    maxLength: quantity('length'),
+    maxOuterDiameter: quantity('length'),
+  }),
+  lubrication: mapping({
+    supply: choice(SUPPLIES).optional(),
+    oil: oilSchema.optional(),
+    viscosity: quantity('viscosity').optional(),
+    inletTemperature: quantity('temperature', 'any').optional(),
+  }).optional(),
+  environment: mapping({
+    ambient: quantity('temperature', 'any').optional(),
+    contamination: choice(CONTAMINATIONS).optional(),
+    startsPerHour: plain('a number of starts per hour from 0 to 10000', 0, 10000).optional(),
+  }).optional(),
+  priorities: mapping(
+    Object.fromEntries(PRIORITIES.map((p) => [p, plain('a priority from 1 (unimportant) to 5 (essential)', 1, 5).optional()])) as Record<
+      (typeof PRIORITIES)[number],
+      z.ZodOptional<ReturnType<typeof plain>>
+    >,
+  ).optional(),
+  bushing: mapping({
+    length: quantity('length').optional(),
+    material: z.union([text('a material id'), materialSchema], {
+      error: 'expected a material id from data/bushing-materials.json or an inline material with id, name, maxPressure, maxVelocity, maxPV, wearFactor, friction, maxTemperature, source',
+    }).optional(),
+  }).optional(),
+  rolling: mapping({
+    type: choice(['ball', 'roller'] as const).optional(),
+    dynamicRating: quantity('force').optional(),
+    staticRating: quantity('force').optional(),
+    fatigueLimit: quantity('force').optional(),
+    outerDiameter: quantity('length').optional(),
+    width: quantity('length').optional(),
+  }).optional(),
+  journal: mapping({
+    length: quantity('length').optional(),
+    radialClearance: quantity('length').optional(),
+    clearanceRatio: plain('a clearance ratio c/r between 0.0001 and 0.01', 0.0001, 0.01).optional(),
+  }).optional(),
+});
+
+export type CaseFile = z.output<typeof caseFileSchema>;

@@ -1,0 +1,60 @@
+import { loadCaseFile, type LoadedCase } from '../case/load.js';
+import type { UnitSystem } from '../report/units.js';
+import { CAUTION, assumptionsBlock, warningsBlock } from '../report/text.js';
+import { UsageError } from './errors.js';
+
+export type Format = 'text' | 'json';
+export interface OutputOptions {
+  format: Format;
+  units: UnitSystem;
+}
+
+export const CHECKS = ['bushing', 'rolling', 'journal'] as const;
+export type CheckName = (typeof CHECKS)[number];
+
+/** Parse --format / --units values into the options object, or a UsageError naming the flag. */
+export function outputOptions(raw: { format?: string; units?: string }, formats: readonly string[] = ['text', 'json']): OutputOptions {
+  const format = raw.format ?? 'text';
+  if (!formats.includes(format)) throw new UsageError(`--format: got "${format}"; expected one of: ${formats.join(', ')}`);
+  const u = (raw.units ?? 'SI').toUpperCase();
+  if (u !== 'SI' && u !== 'US') throw new UsageError(`--units: got "${raw.units}"; expected SI or US`);
+  return { format: format as Format, units: u };
+}
+
+/** Run one check on a case file and return the text to print. Kernels load lazily. */
+export async function runCheck(name: string, file: string, opts: OutputOptions): Promise<string> {
+  if (!(CHECKS as readonly string[]).includes(name)) {
+    throw new UsageError(`check: got "${name}"; expected one of: ${CHECKS.join(', ')}`);
+  }
+  const loaded = loadCaseFile(file);
+  const { json, text } = await computeCheck(name as CheckName, loaded, opts);
+  return opts.format === 'json' ? JSON.stringify(json, null, 2) : text;
+}
+
+async function computeCheck(name: CheckName, loaded: LoadedCase, opts: OutputOptions): Promise<{ json: unknown; text: string }> {
+  const c = loaded.case;
+  const wrap = (r: { option: string; assumed: LoadedCase['assumed']; warnings: string[] }, body: string) => {
+    const { option, assumed, ...rest } = r;
+    const json = { option, case: c, assumed: [...loaded.assumed, ...assumed], ...rest };
+    const text = [
+      `${c.title}`,
+      body,
+      assumptionsBlock(json.assumed),
+      warningsBlock(r.warnings),
+      CAUTION,
+    ]
+      .filter(Boolean)
+      .join('\n\n');
+    return { json, text };
+  };
+  switch (name) {
+    case 'bushing': {
+      const { checkBushing } = await import('../calc/bushing/index.js');
+      const { bushingText } = await import('../report/bushing-text.js');
+      const r = checkBushing(c);
+      return wrap(r, bushingText(r, opts.units));
+    }
+    default:
+      throw new UsageError(`check ${name}: not available in this version`);
+  }
+}

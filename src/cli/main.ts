@@ -1,0 +1,65 @@
+#!/usr/bin/env node
+import { readFileSync } from 'node:fs';
+import { Command, CommanderError, Option } from 'commander';
+import { CaseError } from '../case/load.js';
+import { DataError } from '../data/load.js';
+import { EXIT, UsageError } from './errors.js';
+import { outputOptions, runCheck } from './check.js';
+
+const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
+
+const debug = process.argv.includes('--debug');
+
+/** Every error ends here: user errors exit 2 with one message per problem; defects exit 70. */
+function fail(e: unknown): never {
+  if (e instanceof CaseError) {
+    process.stderr.write(`shaftwise: ${e.source}: ${e.problems.length} problem${e.problems.length > 1 ? 's' : ''}\n`);
+    for (const p of e.problems) process.stderr.write(`  ${p.field}: ${p.message}\n`);
+    process.exit(EXIT.badInput);
+  }
+  if (e instanceof UsageError || e instanceof DataError) {
+    process.stderr.write(`shaftwise: ${e.message}\n`);
+    process.exit(EXIT.badInput);
+  }
+  if (e instanceof CommanderError) {
+    process.exit(e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help' ? EXIT.ok : EXIT.badInput);
+  }
+  process.stderr.write(
+    `shaftwise: internal defect (${(e as Error)?.message ?? String(e)}). This is a bug, not your input: please report it with the case file and the command` +
+      (debug ? '' : '; run again with --debug for the full trace') +
+      '.\n',
+  );
+  if (debug) process.stderr.write(`${(e as Error)?.stack ?? ''}\n`);
+  process.exit(EXIT.defect);
+}
+
+const formatOption = () => new Option('--format <format>', 'output format: text or json').default('text');
+const unitsOption = () => new Option('--units <system>', 'units for text output: SI or US (JSON is always SI)').default('SI');
+
+const program = new Command()
+  .name('shaftwise')
+  .description('Choose how a shaft is supported: plain bushing, rolling bearing or oil-film journal bearing.\nConcept-stage estimates: confirm with supplier data and testing.')
+  .version(pkg.version, '-V, --version', 'print the version')
+  .option('--debug', 'print the full trace of an internal defect')
+  .exitOverride()
+  .showHelpAfterError('(run shaftwise --help for usage)')
+  .configureOutput({ writeErr: (s) => process.stderr.write(s) });
+
+program
+  .command('check')
+  .description('run one option\'s check on a duty case')
+  .argument('<option>', 'bushing, rolling or journal')
+  .argument('<case>', 'duty case file (YAML or JSON)')
+  .addOption(formatOption())
+  .addOption(unitsOption())
+  .exitOverride()
+  .action(async (option: string, file: string, raw: { format?: string; units?: string }) => {
+    const out = await runCheck(option, file, outputOptions(raw));
+    process.stdout.write(out + '\n');
+  });
+
+try {
+  await program.parseAsync(process.argv);
+} catch (e) {
+  fail(e);
+}

@@ -1,0 +1,47 @@
+import { Chalk } from 'chalk';
+import type { CheckRecord } from '../calc/check.js';
+import type { Assumption } from '../case/types.js';
+import { fmt, type UnitSystem } from './units.js';
+import { table } from './table.js';
+
+/** Colour only on a terminal and never under NO_COLOR; the marks read the same without it. */
+export const paint = new Chalk({ level: process.env.NO_COLOR !== undefined && process.env.NO_COLOR !== '' ? 0 : process.stdout.isTTY ? 1 : 0 });
+
+export const CAUTION =
+  'Concept-stage estimate: confirm with the supplier\'s data and by test. Bearing failure can injure people: ' +
+  'follow local codes, standards and licensed engineering practice.';
+
+export const mark = (pass: boolean): string => (pass ? paint.green('ok  ') : paint.red.bold('FAIL'));
+
+export function heading(text: string): string {
+  return paint.bold(text) + '\n' + '='.repeat(text.length);
+}
+
+/** A table of check records: mark, check, value, limit, margin, source. */
+export function checksTable(checks: CheckRecord[], units: UnitSystem): string {
+  return table(
+    ['', 'check', 'value', 'limit', 'margin', 'limit from'],
+    checks.map((k) => [
+      mark(k.pass),
+      k.label,
+      fmt(k.value, k.unit, units),
+      `${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, units)}`,
+      `${k.margin >= 0 ? '+' : ''}${(k.margin * 100).toFixed(0)} %`,
+      shorten(k.source, 60),
+    ]),
+  );
+}
+
+export function assumptionsBlock(assumed: Assumption[]): string {
+  if (!assumed.length) return '';
+  return 'Assumed:\n' + assumed.map((a) => `  - ${a.field} = ${a.value}: ${a.reason}`).join('\n');
+}
+
+export function warningsBlock(warnings: string[]): string {
+  if (!warnings.length) return '';
+  return 'Warnings:\n' + warnings.map((w) => `  ! ${w}`).join('\n');
+}
+
+export function shorten(s: string, n: number): string {
+  return s.length <= n ? s : s.slice(0, n - 1) + '…';
+}
