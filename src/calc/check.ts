@@ -25,6 +25,18 @@ export interface CheckRecord {
   source: string;
   /** Whether the limit is an upper ("max") or lower ("min") bound. */
   sense: 'max' | 'min';
+  /** Advice rather than a limit: shown with its mark, but it does not decide feasibility. */
+  advisory?: boolean;
+}
+
+/** Mark a check as advice: it is reported but does not gate feasibility. */
+export function advisory(k: CheckRecord): CheckRecord {
+  return { ...k, advisory: true };
+}
+
+/** True when every check that is a limit (not advice) passes. */
+export function allLimitsPass(checks: CheckRecord[]): boolean {
+  return checks.every((k) => k.pass || k.advisory === true);
 }
 
 /** Build a check record, computing margin and pass from the sense of the limit. */

@@ -31,7 +31,8 @@ export function bushingText(r: BushingResult, units: UnitSystem): string {
         `wear after the life target ${fmt(m.wearDepth, 'm', units)} (peak pressure; ${fmt(m.wearDepthMeanPressure, 'm', units)} at mean pressure), ` +
         `factors motion ×${m.factors.motion}, environment ×${m.factors.environment}, k = ${fmt(m.wearFactor, 'm^2/N', units)}`,
     );
-    out.push(checksTable(m.checks, units));
+    out.push(checksTable(m.checks, units, m.source));
+    out.push(`  Material data: ${m.source}`);
   }
   return out.join('\n');
 }

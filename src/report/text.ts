@@ -11,23 +11,25 @@ export const CAUTION =
   'Concept-stage estimate: confirm with the supplier\'s data and by test. Bearing failure can injure people: ' +
   'follow local codes, standards and licensed engineering practice.';
 
-export const mark = (pass: boolean): string => (pass ? paint.green('ok  ') : paint.red.bold('FAIL'));
+export const mark = (pass: boolean, advice = false): string =>
+  pass ? paint.green('ok  ') : advice ? paint.yellow('note') : paint.red.bold('FAIL');
 
 export function heading(text: string): string {
   return paint.bold(text) + '\n' + '='.repeat(text.length);
 }
 
 /** A table of check records: mark, check, value, limit, margin, source. */
-export function checksTable(checks: CheckRecord[], units: UnitSystem): string {
+/** `rowSource`, when given, is a data row's source printed once below: checks citing it say so instead of repeating it. */
+export function checksTable(checks: CheckRecord[], units: UnitSystem, rowSource?: string): string {
   return table(
     ['', 'check', 'value', 'limit', 'margin', 'limit from'],
     checks.map((k) => [
-      mark(k.pass),
+      mark(k.pass, k.advisory),
       k.label,
       fmt(k.value, k.unit, units),
       `${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, units)}`,
       `${k.margin >= 0 ? '+' : ''}${(k.margin * 100).toFixed(0)} %`,
-      shorten(k.source, 60),
+      rowSource && k.source.startsWith(rowSource) ? 'material data, below' + (k.source.length > rowSource.length ? ' + heat model' : '') : shorten(k.source, 48),
     ]),
   );
 }

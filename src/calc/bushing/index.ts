@@ -1,5 +1,5 @@
 import type { Assumption, BushingMaterial, CaseSI } from '../../case/types.js';
-import { makeCheck, num, type CheckRecord, type SheetLine } from '../check.js';
+import { advisory, allLimitsPass, makeCheck, num, type CheckRecord, type SheetLine } from '../check.js';
 import { operatingPoints } from '../duty.js';
 import { bushingFactors, bushingMaterials, type BushingMaterialRow } from '../../data/bushing.js';
 import {
@@ -120,7 +120,7 @@ export function checkBushing(c: CaseSI): BushingResult {
   let bestReason: string;
   if (feasible.length) {
     // Most robust: the largest smallest margin over the governing checks; ties keep data order.
-    const score = (m: BushingMaterialResult) => Math.min(...m.checks.filter((k) => k.id !== 'length-to-diameter').map((k) => k.margin));
+    const score = (m: BushingMaterialResult) => Math.min(...m.checks.filter((k) => !k.advisory).map((k) => k.margin));
     best = feasible.reduce((a, b) => (score(b) > score(a) ? b : a));
     bestReason = `${best.name} at ${num(best.length * 1000, 3)} mm long has the largest smallest margin (${(score(best) * 100).toFixed(0)} %) of the ${feasible.length} material(s) that pass every check`;
   } else {
@@ -200,15 +200,18 @@ function checkMaterial(
     makeCheck('velocity', 'Sliding speed V', Vmax, m.maxVelocity, 'm/s', 'max', src),
     makeCheck('pv', 'PV', pv, m.maxPV, 'Pa*m/s', 'max', src),
     makeCheck('wear-life', 'Hours to wear through the allowance (typical wear factor)', life(m.wearFactor), T, 'h', 'min', wearSrc),
-    makeCheck('temperature', 'Running temperature (lumped estimate)', temperature, m.maxTemperature, 'degC', 'max', `${src}; heat model: ${factors.heat.source}`),
+    // Advisory: the one-node heat model is crude; PV is the published thermal criterion.
+    advisory(makeCheck('temperature', 'Running temperature (lumped estimate, advisory)', temperature, m.maxTemperature, 'degC', 'max', `${src}; heat model: ${factors.heat.source}`)),
     makeCheck('axial-space', 'Length within the axial space', length, c.space.maxLength, 'm', 'max', 'the case (space.maxLength)'),
     makeCheck('radial-space', 'Outer diameter within the housing bore', outerDiameter, c.space.maxOuterDiameter, 'm', 'max', 'the case (space.maxOuterDiameter); wall thickness common practice'),
-    lOverD < 1
-      ? makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.min, '1', 'min', ld.source)
-      : makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.max, '1', 'max', ld.source),
+    // Length/diameter is advice (edge loading, misalignment), not a limit.
+    advisory(
+      lOverD < 1
+        ? makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.min, '1', 'min', ld.source)
+        : makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.max, '1', 'max', ld.source),
+    ),
   ];
-  // Length/diameter is advice (edge loading, misalignment), not a limit: it does not gate feasibility.
-  const feasible = checks.every((k) => k.pass || k.id === 'length-to-diameter');
+  const feasible = allLimitsPass(checks);
 
   return {
     id: m.id,
@@ -242,7 +245,7 @@ function checkMaterial(
 
 function whyNone(ms: BushingMaterialResult[]): string {
   const count = new Map<string, number>();
-  for (const m of ms) for (const k of m.checks) if (!k.pass && k.id !== 'length-to-diameter') count.set(k.label, (count.get(k.label) ?? 0) + 1);
+  for (const m of ms) for (const k of m.checks) if (!k.pass && !k.advisory) count.set(k.label, (count.get(k.label) ?? 0) + 1);
   return [...count.entries()].map(([label, n]) => `${label} fails for ${n} of ${ms.length}`).join('; ');
 }
 

@@ -1,0 +1,56 @@
+// Unit parsing at the boundary (exact unit conversions: NIST SP 811, 2008, Appendix B).
+import { describe, expect, it } from 'vitest';
+import { parseQuantity } from '../../src/case/quantity.js';
+
+describe('parseQuantity: SI and US customary strings to the internal unit', () => {
+  const cases: [string, Parameters<typeof parseQuantity>[1], number][] = [
+    ['40 mm', 'length', 0.04],
+    ['1.5 in', 'length', 0.0381], // 1 in = 0.0254 m exactly (NIST SP 811)
+    ['3.2 kN', 'force', 3200],
+    ['720 lbf', 'force', 720 * 4.4482216152605], // 1 lbf = 4.4482216152605 N (NIST SP 811)
+    ['1500 rpm', 'speed', 25],
+    ['25 rev/s', 'speed', 25],
+    ['90 rev/min', 'speed', 1.5],
+    ['20000 h', 'time', 20000],
+    ['0.25 mm', 'length', 0.00025],
+    ['40 degC', 'temperature', 40],
+    ['104 degF', 'temperature', 40],
+    ['313.15 K', 'temperature', 40],
+    ['0.03 Pa*s', 'viscosity', 0.03],
+    ['2 MPa', 'pressure', 2e6],
+    ['300 psi', 'pressure', 300 * 6894.757293168],
+    ['1.75 MPa*m/s', 'pv', 1.75e6],
+    ['5e-7 mm^3/(N*m)', 'wearFactor', 5e-16],
+    ['60 deg', 'angle', Math.PI / 3],
+    ['0.5 Hz', 'frequency', 0.5],
+    ['400 ft/min', 'velocity', 400 * 0.3048 / 60],
+  ];
+  for (const [text, kind, expected] of cases) {
+    it(`${text} → ${expected} (${kind})`, () => {
+      // Relative 1e-6: js-quantities carries lbf and psi to 7 significant figures
+      // (4.448222 N, 6894.76 Pa), 1e-7 from the exact NIST values; far inside any engineering need.
+      expect(Math.abs(parseQuantity(text, kind) / expected - 1)).toBeLessThan(1e-6);
+    });
+  }
+
+  it('kinematic viscosity in cSt becomes dynamic with the stated typical density', () => {
+    expect(parseQuantity('68 cSt', 'viscosity')).toBeCloseTo(68e-6 * 870, 10);
+  });
+
+  it('plain numbers are taken in the internal unit (temperatures °C)', () => {
+    expect(parseQuantity(0.04, 'length')).toBe(0.04);
+    expect(parseQuantity(40, 'temperature')).toBe(40);
+  });
+
+  it('a unit of the wrong kind names the kind found and the kind expected', () => {
+    expect(() => parseQuantity('40 kg', 'length')).toThrow(/"40 kg" is a mass; expected a length/);
+    expect(() => parseQuantity('3 mm', 'force')).toThrow(/is a length; expected a force/);
+  });
+
+  it('rejects junk, NaN and infinities', () => {
+    expect(() => parseQuantity('forty mm', 'length')).toThrow(/not a quantity/);
+    expect(() => parseQuantity(Number.NaN, 'length')).toThrow(/finite/);
+    expect(() => parseQuantity(Number.POSITIVE_INFINITY, 'force')).toThrow(/finite/);
+    expect(() => parseQuantity(true, 'force')).toThrow(/expected a force/);
+  });
+});
