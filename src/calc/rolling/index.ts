@@ -186,8 +186,8 @@ export function checkRolling(c: CaseSI): RollingResult {
     .filter((k) => k.feasible)
     .sort(
       (a, b) =>
-        (a.outerDiameter ?? Infinity) - (b.outerDiameter ?? Infinity) ||
-        (a.width ?? Infinity) - (b.width ?? Infinity) ||
+        orderNullLast(a.outerDiameter, b.outerDiameter) ||
+        orderNullLast(a.width, b.width) ||
         (a.ratingSource === 'supplier' ? -1 : 0) - (b.ratingSource === 'supplier' ? -1 : 0) ||
         (a.type === 'ball' ? -1 : 0) - (b.type === 'ball' ? -1 : 0),
     );
@@ -548,7 +548,6 @@ function caseViscosity(
 
 function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
   const lines: SheetLine[] = [];
-  const p = lifeExponent(k.type);
   const pTxt = k.type === 'ball' ? '3' : '10/3';
   const heavy = x.points.reduce((a, b) => (b.Fr + b.Fa > a.Fr + a.Fa ? b : a), x.points[0]!);
   lines.push({
@@ -617,7 +616,6 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
       source: 'bearing-maker technical guide (seen, as in the shared reference)',
     });
   }
-  void p;
   return lines;
 }
 
@@ -626,6 +624,14 @@ function nearestBores(rows: BoundaryRow[], dMm: number): number[] {
   const below = bores.filter((b) => b < dMm).pop();
   const above = bores.find((b) => b > dMm);
   return [below, above].filter((b): b is number => b !== undefined);
+}
+
+/** Ascending order with unknown sizes last (never NaN, which would upset the sort). */
+function orderNullLast(a: number | null, b: number | null): number {
+  if (a === null && b === null) return 0;
+  if (a === null) return 1;
+  if (b === null) return -1;
+  return a - b;
 }
 
 function finiteOr(v: number | undefined, fallback: number): number {
