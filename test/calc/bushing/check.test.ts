@@ -1,0 +1,71 @@
+// Behaviour of the bushing check on invented cases (properties of the method, worked by hand).
+import { describe, expect, it } from 'vitest';
+import { checkBushing } from '../../../src/calc/bushing/index.js';
+import { pumpCase } from '../../helpers/case.js';
+
+describe('checkBushing', () => {
+  it('at the reported shortest length the governing limit is met with zero margin', () => {
+    const first = checkBushing(pumpCase({ bushing: { material: 'sintered-bronze' } })).materials[0]!;
+    const atMin = checkBushing(pumpCase({ bushing: { material: 'sintered-bronze', length: first.minLength } })).materials[0]!;
+    const governing = Math.min(...atMin.checks.filter((k) => ['pressure', 'pv', 'wear-life'].includes(k.id)).map((k) => k.margin));
+    expect(governing).toBeCloseTo(0, 9);
+  });
+
+  it('reports the life as a band ordered by wear factor, and the depth at the life target', () => {
+    const r = checkBushing(pumpCase());
+    for (const m of r.materials) {
+      expect(m.lifeBand.short).toBeLessThan(m.lifeBand.typical);
+      expect(m.lifeBand.typical).toBeLessThan(m.lifeBand.long);
+      expect(m.lifeHours).toBe(m.lifeBand.typical);
+      // depth after T hours and hours to the allowance are the same straight line
+      expect(m.wearDepth * (m.lifeHours / 10000)).toBeCloseTo(0.2e-3, 12);
+      expect(m.wearDepthMeanPressure / m.wearDepth).toBeCloseTo(Math.PI / 4, 12);
+    }
+  });
+
+  it('wear over a duty spectrum is the share-weighted sum of the points', () => {
+    const fixed = { material: 'acetal', length: '30 mm' };
+    const a = checkBushing(pumpCase({ bushing: fixed, load: { radial: '1 kN' }, shaft: { diameter: '30 mm', speed: '200 rpm' } })).materials[0]!;
+    const b = checkBushing(pumpCase({ bushing: fixed, load: { radial: '2 kN' }, shaft: { diameter: '30 mm', speed: '50 rpm' } })).materials[0]!;
+    const duty = checkBushing(
+      pumpCase({
+        bushing: fixed,
+        shaft: { diameter: '30 mm', speed: '200 rpm' },
+        duty: [
+          { share: 0.6, radial: '1 kN', speed: '200 rpm' },
+          { share: 0.4, radial: '2 kN', speed: '50 rpm' },
+        ],
+      }),
+    ).materials[0]!;
+    expect(duty.wearDepth).toBeCloseTo(0.6 * a.wearDepth + 0.4 * b.wearDepth, 12);
+    expect(duty.pressure).toBeCloseTo(b.pressure, 6); // governing = largest load
+  });
+
+  it('a longer bushing never wears deeper and never has a higher PV', () => {
+    let last = Infinity;
+    let lastPv = Infinity;
+    for (const L of [15, 20, 30, 45]) {
+      const m = checkBushing(pumpCase({ bushing: { material: 'nylon', length: `${L} mm` } })).materials[0]!;
+      expect(m.wearDepth).toBeLessThan(last);
+      expect(m.pv).toBeLessThan(lastPv);
+      last = m.wearDepth;
+      lastPv = m.pv;
+    }
+  });
+
+  it('an oscillating shaft slides at θ·D·f and carries the oscillation motion factor', () => {
+    const r = checkBushing(pumpCase({ shaft: { diameter: '30 mm', oscillation: { angle: '60 deg', frequency: '0.5 Hz' } } }));
+    const m = r.materials[0]!;
+    expect(m.velocity).toBeCloseTo((Math.PI / 3) * 0.03 * 0.5, 12);
+    expect(m.factors.motion).toBe(2);
+  });
+
+  it('names the best material or says why none fits', () => {
+    const easy = checkBushing(pumpCase({ shaft: { diameter: '30 mm', speed: '20 rpm' }, load: { radial: '300 N' }, life: { hours: '2000 h' } }));
+    expect(easy.best).not.toBeNull();
+    expect(easy.materials.find((m) => m.id === easy.best)!.feasible).toBe(true);
+    const hard = checkBushing(pumpCase({ shaft: { diameter: '30 mm', speed: '3000 rpm' }, load: { radial: '20 kN' } }));
+    expect(hard.best).toBeNull();
+    expect(hard.bestReason).toMatch(/no material passes every check/);
+  });
+});
