@@ -26,8 +26,9 @@ import { eccentricityFromSommerfeld, pointAtEccentricity, type DimensionlessPoin
  * and outlet), and the maximum temperature estimate is T_max = T_in + ΔT (the outlet).
  * μ = μ(T_eff) by the Walther law (lubricant.ts). The fixed point T = T_in + k·ΔT(μ(T))
  * is found by bracketing and the Illinois false-position method; converged when the
- * bracket is narrower than 0.01 K (THERMAL_TOLERANCE_K). Failure to bracket or converge
- * throws: no unconverged numbers are returned.
+ * bracket is narrower than 0.01 K (THERMAL_TOLERANCE_K). Failure to converge throws: no
+ * unconverged numbers are returned. No equilibrium below THERMAL_CEILING_C is reported as
+ * thermal runaway (flagged, temperatures as lower bounds), not as a number.
  *
  * Symbols: W radial load N; N speed rev/s; μ Pa·s; r, c, L, D m; ρ kg/m³; cp J/(kg·K);
  * temperatures °C (differences K).
@@ -37,6 +38,14 @@ import { eccentricityFromSommerfeld, pointAtEccentricity, type DimensionlessPoin
 
 export const THERMAL_SHARE = 0.5;
 export const THERMAL_TOLERANCE_K = 0.01;
+/**
+ * Ceiling of the effective-temperature search, °C. Mineral oils flash at about
+ * 200–250 °C (from memory) and the Walther law is an extrapolation far beyond 100 °C, so
+ * no equilibrium is sought above this: when the balance still lacks one at the ceiling,
+ * the point is evaluated at the ceiling viscosity and flagged `thermalRunaway` (its
+ * temperatures are then lower bounds of a bearing that would not reach equilibrium).
+ */
+export const THERMAL_CEILING_C = 250;
 
 export interface Geometry {
   /** Journal diameter D, m. */
@@ -97,6 +106,8 @@ export interface OperatingResult {
   specificHeatUsed: number;
   /** True when ε fell beyond the table (order-of-magnitude figures). */
   extrapolated: boolean;
+  /** True when no thermal equilibrium exists below THERMAL_CEILING_C (temperatures are lower bounds). */
+  thermalRunaway: boolean;
   thermalIterations: number;
   point: DimensionlessPoint;
 }
@@ -156,6 +167,7 @@ export function matchLoad(
     densityUsed: rho,
     specificHeatUsed: cp,
     extrapolated: pt.extrapolated,
+    thermalRunaway: false,
     thermalIterations: 0,
     point: pt,
   };
@@ -191,30 +203,28 @@ export function operatingPoint(table: JournalTable, input: OperatingInput): Oper
   // g(T) = T_in + k·ΔT(T) − T: positive at T_in (ΔT > 0), decreasing as T rises.
   const gOf = (res: OperatingResult, t: number): number => res.effectiveTemperature - t;
 
+  if (!(tIn < THERMAL_CEILING_C))
+    throw new Error(`journal: inlet temperature ${tIn} °C is at or above the ${THERMAL_CEILING_C} °C ceiling of the thermal balance`);
   let a = tIn;
   let ra = evalAt(a);
   let ga = gOf(ra, a);
   let span = Math.max(10, ga * 2);
-  let b = a + span;
+  let b = Math.min(THERMAL_CEILING_C, a + span);
   let rb = evalAt(b);
   let gb = gOf(rb, b);
   let count = 2;
-  // Expand until the sign changes; 1000 K above the inlet is far past any oil's life.
+  // Expand the bracket until the sign changes, up to the ceiling.
   while (gb > 0) {
-    if (span > 1000)
-      throw new Error(
-        `journal: thermal balance has no solution within ${tIn.toFixed(1)}–${b.toFixed(1)} °C (film temperature keeps rising)`,
-      );
+    if (b >= THERMAL_CEILING_C) return { ...rb, thermalRunaway: true, thermalIterations: count };
     a = b;
     ra = rb;
     ga = gb;
     span *= 2;
-    b = tIn + span;
+    b = Math.min(THERMAL_CEILING_C, tIn + span);
     rb = evalAt(b);
     gb = gOf(rb, b);
     count++;
   }
-  // Illinois false position on [a, b] with g(a) > 0 ≥ g(b).
   // ga, gb may be halved by the Illinois rule; the residuals of ra, rb are recomputed.
   let side = 0;
   for (let it = 0; it < 200; it++) {
