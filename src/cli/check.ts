@@ -54,7 +54,17 @@ async function computeCheck(name: CheckName, loaded: LoadedCase, opts: OutputOpt
       const r = checkBushing(c);
       return wrap(r, bushingText(r, opts.units));
     }
-    default:
-      throw new UsageError(`check ${name}: not available in this version`);
+    case 'rolling': {
+      const { checkRolling } = await import('../calc/rolling/index.js');
+      const { rollingText } = await import('../report/rolling-text.js');
+      const r = checkRolling(c);
+      return wrap(r, rollingText(r, opts.units));
+    }
+    case 'journal': {
+      const { checkJournal } = await import('../calc/journal/index.js');
+      const { journalText } = await import('../report/journal-text.js');
+      const r = checkJournal(c);
+      return wrap(r, journalText(r, opts.units));
+    }
   }
 }

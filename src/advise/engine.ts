@@ -1,0 +1,204 @@
+import { Engine, type RuleResult } from 'json-rules-engine';
+import type { Assumption, CaseSI } from '../case/types.js';
+import type { CheckRecord } from '../calc/check.js';
+import { checkBushing, type BushingResult } from '../calc/bushing/index.js';
+import { checkRolling } from '../calc/rolling/index.js';
+import type { RollingResult } from '../calc/rolling/types.js';
+import { checkJournal, type JournalResult } from '../calc/journal/index.js';
+import { bushingFigures, dutyFacts, journalFigures, rollingFigures, type Figures, type OptionFigures } from './facts.js';
+import { loadRules, type LoadedRule } from './load-rules.js';
+import { OPTIONS, type Condition, type OptionName, type leafSchema } from './rule-schema.js';
+import type { z } from 'zod';
+
+export interface Reason {
+  rule: string;
+  /** Points after the priority weight (negative counts against). */
+  points: number;
+  because: string;
+  /** Points as written in the rule, and the weight applied. */
+  basePoints: number;
+  weight: number;
+  priority?: string;
+  file: string;
+}
+
+export interface RankedOption {
+  option: OptionName;
+  rank: number;
+  score: number;
+  feasible: boolean;
+  design: OptionFigures['design'];
+  figures: { lifeHours: number | null; lifeRatio: number | null; frictionPower: number | null; length: number | null; outerDiameter: number | null };
+  reasons: Reason[];
+  /** Limit checks that fail, for an option excluded by its check. */
+  failed: CheckRecord[];
+  /** Why the option is excluded (check findings and exclusion rules); empty when feasible. */
+  excluded: string[];
+}
+
+export interface ConditionTrace {
+  fact: string;
+  path?: string;
+  operator: string;
+  value: unknown;
+  /** The fact value the engine saw (undefined when the condition was not reached). */
+  factResult?: unknown;
+  result?: boolean;
+}
+
+export interface RuleTrace {
+  rule: string;
+  file: string;
+  fired: boolean;
+  event: LoadedRule['event'];
+  conditions: ConditionTrace[];
+}
+
+export interface AdviceResult {
+  recommendation: OptionName | null;
+  ranking: RankedOption[];
+  checks: { bushing: BushingResult; rolling: RollingResult; journal: JournalResult };
+  assumed: Assumption[];
+  warnings: string[];
+  /** How ties were broken, when there was one. */
+  tieBreak: string | null;
+  /** What would make an option feasible, when none is. */
+  toMakeFeasible: string[];
+  /** Every rule evaluated, fired or not, with the fact values it saw. */
+  rules: RuleTrace[];
+}
+
+/** Fixed order for ties: the simpler and cheaper support first (common practice). */
+const TIE_ORDER: OptionName[] = ['bushing', 'rolling', 'journal'];
+const NEUTRAL_PRIORITY = 3;
+
+/**
+ * Advise on a case: run the three checks as dynamic facts (computed on first use, cached for
+ * the run), evaluate every rule in rules/, gate feasibility on the checks, score and rank.
+ * Deterministic: the same case gives the same result, byte for byte.
+ */
+export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: LoadedRule[] = loadRules()): Promise<AdviceResult> {
+  const engine = new Engine([], { allowUndefinedFacts: true });
+  const cache: Partial<{ bushing: BushingResult; rolling: RollingResult; journal: JournalResult }> = {};
+  const bushing = () => (cache.bushing ??= checkBushing(c));
+  const rolling = () => (cache.rolling ??= checkRolling(c));
+  const journal = () => (cache.journal ??= checkJournal(c));
+  const figures = (): Figures => ({
+    bushing: bushingFigures(bushing(), c),
+    rolling: rollingFigures(rolling(), c),
+    journal: journalFigures(journal()),
+  });
+  engine.addFact('case', c);
+  engine.addFact('duty', dutyFacts(c));
+  engine.addFact('bushing', () => bushing(), { cache: true });
+  engine.addFact('rolling', () => rolling(), { cache: true });
+  engine.addFact('journal', () => journal(), { cache: true });
+  engine.addFact('figures', () => figures(), { cache: true });
+  rules.forEach((r) => engine.addRule({ name: r.name, conditions: r.conditions as never, event: { type: r.event.type, params: { ...r.event } } }));
+
+  const run = await engine.run();
+  const fired = new Set(run.results.map((r) => r.name));
+  const byName = new Map<string, RuleResult>([...run.results, ...run.failureResults].map((r) => [r.name, r]));
+  const traces: RuleTrace[] = rules.map((r) => ({
+    rule: r.name,
+    file: r.file,
+    fired: fired.has(r.name),
+    event: r.event,
+    conditions: flatten(byName.get(r.name)?.conditions as unknown as Condition | undefined),
+  }));
+
+  const fig = figures();
+  const checks = { bushing: bushing(), rolling: rolling(), journal: journal() };
+  const ranking = OPTIONS.map((option): RankedOption => {
+    const f = fig[option];
+    const reasons: Reason[] = [];
+    const excluded: string[] = [];
+    if (!f.feasible) excluded.push(...(f.why.length ? f.why : ['its check found no feasible design']));
+    for (const r of rules) {
+      if (!fired.has(r.name) || r.event.option !== option) continue;
+      if (r.event.type === 'exclude') {
+        excluded.push(r.because);
+        reasons.push({ rule: r.name, points: 0, basePoints: 0, weight: 1, because: r.because, file: r.file });
+        continue;
+      }
+      const weight = r.event.priority ? c.priorities[r.event.priority] / NEUTRAL_PRIORITY : 1;
+      const reason: Reason = { rule: r.name, points: round2(r.event.points * weight), basePoints: r.event.points, weight: round2(weight), because: r.because, file: r.file };
+      if (r.event.priority) reason.priority = r.event.priority;
+      reasons.push(reason);
+    }
+    return {
+      option,
+      rank: 0,
+      score: round2(reasons.reduce((s, x) => s + x.points, 0)),
+      feasible: excluded.length === 0,
+      design: f.design,
+      figures: { lifeHours: f.lifeHours, lifeRatio: f.lifeRatio, frictionPower: f.frictionPower, length: f.length, outerDiameter: f.outerDiameter },
+      reasons,
+      failed: f.failed,
+      excluded: dedupe(excluded),
+    };
+  });
+  ranking.sort((a, b) => Number(b.feasible) - Number(a.feasible) || b.score - a.score || TIE_ORDER.indexOf(a.option) - TIE_ORDER.indexOf(b.option));
+  ranking.forEach((r, i) => (r.rank = i + 1));
+
+  let tieBreak: string | null = null;
+  const top = ranking[0]!;
+  const tied = ranking.filter((r) => r.feasible === top.feasible && r.score === top.score);
+  if (tied.length > 1) {
+    tieBreak = `${tied.map((r) => r.option).join(' and ')} tie on ${top.score} points; the tie is broken by the fixed order bushing, rolling, journal (the simpler and cheaper support first)`;
+  }
+  const recommendation = top.feasible ? top.option : null;
+  const warnings = dedupe([...checks.bushing.warnings.map((w) => `bushing: ${w}`), ...checks.rolling.warnings.map((w) => `rolling: ${w}`), ...checks.journal.warnings.map((w) => `journal: ${w}`)]);
+  return {
+    recommendation,
+    ranking,
+    checks,
+    assumed: [...caseAssumed, ...checks.bushing.assumed, ...checks.rolling.assumed, ...checks.journal.assumed],
+    warnings,
+    tieBreak,
+    toMakeFeasible: recommendation === null ? suggestions(c, checks, fig) : [],
+    rules: traces,
+  };
+}
+
+/** The leaf conditions of a rule result, in order, with the fact values the engine saw. */
+function flatten(cond: Condition | undefined): ConditionTrace[] {
+  if (!cond) return [];
+  if ('all' in cond) return cond.all.flatMap(flatten);
+  if ('any' in cond) return cond.any.flatMap(flatten);
+  if ('not' in cond) return flatten(cond.not);
+  const seen = cond as z.infer<typeof leafSchema> & { factResult?: unknown; result?: boolean };
+  const t: ConditionTrace = { fact: seen.fact, operator: seen.operator, value: seen.value };
+  if (seen.path !== undefined) t.path = seen.path;
+  if (seen.factResult !== undefined) t.factResult = seen.factResult;
+  if (seen.result !== undefined) t.result = seen.result;
+  return [t];
+}
+
+/** What would make an option feasible, from the failing checks (the designer's next move). */
+function suggestions(c: CaseSI, checks: AdviceResult['checks'], fig: Figures): string[] {
+  const out: string[] = [];
+  const b = checks.bushing.materials.filter((m) => m.checks.find((k) => k.id === 'velocity')?.pass);
+  if (b.length) {
+    const m = [...b].sort((x, y) => x.minLength - y.minLength)[0]!;
+    out.push(
+      `bushing: ${m.name} would need ${fmtMm(m.minLength)} of length (the case allows ${fmtMm(c.space.maxLength)}); or a shorter life target (it reaches ${Math.round(m.lifeHours)} h of ${c.life.hours} h), a larger wear allowance or cleaner running`,
+    );
+  } else {
+    out.push('bushing: the sliding speed is beyond every material class: a lower speed or a smaller shaft');
+  }
+  if (!fig.rolling.feasible) {
+    const why = fig.rolling.failed.map((k) => k.label.toLowerCase());
+    out.push(`rolling: ${why.length ? `fails on ${why.join(', ')}` : fig.rolling.why[0] ?? 'no candidate fits'}; more radial room (a larger housing bore) admits a larger series, or give a supplier's bearing with higher ratings`);
+  }
+  if (c.lubrication.supply === 'none' || c.lubrication.supply === 'grease') {
+    out.push('journal: an oil supply (oil bath, or pumped and filtered oil) is needed for a full film');
+  } else if (!fig.journal.feasible) {
+    out.push(`journal: fails on ${fig.journal.failed.map((k) => k.label.toLowerCase()).join(', ') || 'its criteria'}; more length, a higher speed or a more viscous oil thickens the film`);
+  }
+  return out;
+}
+
+const round2 = (x: number) => Math.round(x * 100) / 100;
+const dedupe = (xs: string[]) => [...new Set(xs)];
+const fmtMm = (m: number) => `${Math.round(m * 1000)} mm`;

@@ -1,0 +1,47 @@
+import { readdirSync, readFileSync } from 'node:fs';
+import { DataError } from '../data/load.js';
+import { ruleFileSchema, type Rule } from './rule-schema.js';
+
+export interface LoadedRule extends Rule {
+  /** The file it came from, e.g. "rules/lubrication.json". */
+  file: string;
+  concern: string;
+}
+
+/** A rule file that does not validate: names the file and the rule. Exit code 2. */
+export class RuleFileError extends DataError {}
+
+const rulesDir = new URL('../../rules/', import.meta.url);
+
+/** Load and validate every rules/*.json, in file-name order (so results are deterministic). */
+export function loadRules(dir: URL = rulesDir): LoadedRule[] {
+  const files = readdirSync(dir).filter((f) => f.endsWith('.json')).sort();
+  const out: LoadedRule[] = [];
+  const names = new Map<string, string>();
+  for (const f of files) {
+    const label = `rules/${f}`;
+    let raw: unknown;
+    try {
+      raw = JSON.parse(readFileSync(new URL(f, dir), 'utf8'));
+    } catch (e) {
+      throw new RuleFileError(`${label}: not valid JSON (${(e as Error).message})`);
+    }
+    const parsed = ruleFileSchema.safeParse(raw);
+    if (!parsed.success) {
+      const issue = parsed.error.issues[0]!;
+      const idx = issue.path[0] === 'rules' && typeof issue.path[1] === 'number' ? issue.path[1] : undefined;
+      const ruleName =
+        idx !== undefined ? ((raw as { rules?: { name?: unknown }[] }).rules?.[idx]?.name ?? `#${idx + 1}`) : undefined;
+      const where = ruleName !== undefined ? `rule ${JSON.stringify(ruleName)}, ` : '';
+      throw new RuleFileError(`${label}: ${where}field ${issue.path.slice(idx !== undefined ? 2 : 0).join('.') || '(file)'}: ${issue.message}`);
+    }
+    for (const r of parsed.data.rules) {
+      const seen = names.get(r.name);
+      if (seen) throw new RuleFileError(`${label}: rule "${r.name}": the name is already used in ${seen}; expected unique rule names`);
+      names.set(r.name, label);
+      out.push({ ...r, file: label, concern: parsed.data.concern });
+    }
+  }
+  if (!out.length) throw new RuleFileError(`rules/: no rule files found; expected rules/*.json`);
+  return out;
+}

@@ -1,0 +1,93 @@
+import type { AdviceResult, RankedOption } from '../advise/engine.js';
+import type { SheetLine } from '../calc/check.js';
+import { fmt, type UnitSystem } from './units.js';
+import { table } from './table.js';
+import { checksTable, heading, paint, shorten } from './text.js';
+
+const NAMES = { bushing: 'Plain bushing', rolling: 'Rolling bearing', journal: 'Journal bearing' } as const;
+
+function designLine(r: RankedOption, units: UnitSystem): string {
+  const d = r.design;
+  const mm = (k: string) => (typeof d[k] === 'number' ? fmt(d[k] as number, 'm', units) : '—');
+  switch (r.option) {
+    case 'bushing':
+      return d.material ? `${d.name} (${d.material}), ${mm('length')} long, OD ${mm('outerDiameter')}` : 'no material';
+    case 'rolling':
+      return d.bearing ? `${d.designation} (${d.bearing}), ${mm('bore')} × ${mm('outerDiameter')} × ${mm('width')}, C ${fmt(d.dynamicRating as number, 'N', units)} (${d.ratingSource})` : 'no candidate';
+    case 'journal':
+      return `${mm('length')} long (L/D ${(d.lengthToDiameter as number).toFixed(2)}), radial clearance ${fmt(d.radialClearance as number, 'm', units)}, ${d.oil}`;
+  }
+}
+
+/** The advice for a person: recommendation, ranking, reasons for and against, failed checks. */
+export function adviceText(a: AdviceResult, units: UnitSystem, explain = false): string {
+  const out: string[] = [heading('Advice')];
+  out.push(
+    a.recommendation
+      ? paint.bold(`Recommended: ${NAMES[a.recommendation].toLowerCase()} — ${designLine(a.ranking[0]!, units)}.`)
+      : paint.bold('No option is feasible for this duty as given.'),
+  );
+  if (a.tieBreak) out.push(`Tie: ${a.tieBreak}.`);
+  out.push(
+    table(
+      ['rank', 'option', 'feasible', 'score', 'life', 'friction power', 'length', 'OD'],
+      a.ranking.map((r) => [
+        String(r.rank),
+        r.option,
+        r.feasible ? 'yes' : 'NO',
+        r.score.toFixed(2),
+        r.option === 'journal' ? (r.feasible ? 'full film: no wear limit' : '—') : fmt(r.figures.lifeHours, 'h', units),
+        fmt(r.figures.frictionPower, 'W', units),
+        fmt(r.figures.length, 'm', units),
+        fmt(r.figures.outerDiameter, 'm', units),
+      ]),
+    ),
+  );
+  for (const r of a.ranking) {
+    out.push(`\n${paint.bold(`${r.rank}. ${NAMES[r.option]}`)} — ${designLine(r, units)}`);
+    const pro = r.reasons.filter((x) => x.points > 0);
+    const con = r.reasons.filter((x) => x.points < 0);
+    for (const x of pro) out.push(`  + ${x.points.toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`);
+    for (const x of con) out.push(`  − ${Math.abs(x.points).toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`);
+    if (!r.feasible) {
+      for (const e of r.excluded) out.push(`  excluded: ${e}`);
+      if (r.failed.length) out.push(checksTable(r.failed, units));
+    }
+  }
+  if (a.toMakeFeasible.length) {
+    out.push('\nWhat would make an option feasible:');
+    for (const s of a.toMakeFeasible) out.push(`  - ${s}`);
+  }
+  out.push('\nScores are the sum of rule points (rules/*.json, common practice), weighted by the case priorities (priority/3); the checks decide feasibility.');
+  if (explain) out.push(explainText(a, units));
+  return out.join('\n');
+}
+
+/** --explain: every rule evaluated with the fact values it saw, and each check's calculation sheet. */
+export function explainText(a: AdviceResult, units: UnitSystem): string {
+  const out: string[] = ['\n' + heading('Rules evaluated')];
+  out.push(
+    table(
+      ['fired', 'rule', 'event', 'conditions (fact value seen)'],
+      a.rules.map((r) => [
+        r.fired ? 'yes' : 'no',
+        `${r.rule} (${r.file.replace('rules/', '')})`,
+        r.event.type === 'exclude' ? `exclude ${r.event.option}` : `${r.event.points > 0 ? '+' : ''}${r.event.points} ${r.event.option}${r.event.priority ? ` ×${r.event.priority}` : ''}`,
+        r.conditions
+          .map((c) => `${c.fact}${c.path ? c.path.slice(1) : ''} ${c.operator} ${JSON.stringify(c.value)} [saw ${c.factResult === undefined ? 'not evaluated' : shorten(JSON.stringify(c.factResult), 24)}${c.result === undefined ? '' : c.result ? ': true' : ': false'}]`)
+          .join('; '),
+      ]),
+    ),
+  );
+  out.push('\n' + heading('Calculation sheet'));
+  const sheets: [string, SheetLine[]][] = [
+    ['Plain bushing', a.checks.bushing.sheet],
+    ['Rolling bearing', a.checks.rolling.sheet],
+    ['Journal bearing', a.checks.journal.sheet],
+  ];
+  for (const [name, lines] of sheets) {
+    out.push(`\n${paint.bold(name)}`);
+    for (const l of lines) out.push(`  ${l.label}: ${l.formula}\n      ${l.substituted} = ${fmt(l.value, l.unit, units, 4)}   [${l.source}]`);
+  }
+  return out.join('\n');
+}
