@@ -161,7 +161,8 @@ export function evaluateDesign(
   const results: PointResult[] = points.map((p) => {
     const load = Math.max(MIN_LOAD, p.load * loadFactor);
     if (!(p.speed > 0)) {
-      const mu = candidate.fluid.kind === 'fixed' ? candidate.fluid.viscosity : 0;
+      // No rotation (or no lubricant, oil "none"): no film; report the viscosity only when it is a given one.
+      const mu = candidate.fluid.kind === 'fixed' && candidate.oil !== 'none' ? candidate.fluid.viscosity : 0;
       const r = noFilm(geometry, load, inletTemperature, mu);
       return { share: p.share, load, speed: 0, film: false, result: r, allowableFilm: hAllow, filmMargin: -1 };
     }

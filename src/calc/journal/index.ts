@@ -369,6 +369,10 @@ export function checkJournal(c: CaseSI): JournalResult {
     warnings.push(
       `Lightly loaded: eccentricity ratio ${fmt(light.value, 3)} below ${light.limit}; a plain full bearing is prone to oil whirl (consider a lobed or tilting-pad bearing, or a smaller length).`,
     );
+  if (g.film && res.unitLoad < crit.typicalUnitLoadMin)
+    warnings.push(
+      `Mean unit load ${fmt(res.unitLoad / 1e6, 3)} MPa is below the typical ${fmt(crit.typicalUnitLoadMin / 1e6, 2)}–${fmt(crit.typicalUnitLoadMax / 1e6, 2)} MPa: the bearing could be shorter (${crit.sources['typicalUnitLoadMax']}).`,
+    );
   if (c.environment.startsPerHour > crit.frequentStartsPerHour)
     warnings.push(
       `Frequent starts (${c.environment.startsPerHour} per hour, above ${crit.frequentStartsPerHour}): each start runs in boundary lubrication; start-up unit load and lining wear govern (${crit.sources['frequentStartsPerHour']}).`,
