@@ -1,0 +1,193 @@
+import { existsSync } from 'node:fs';
+import { relative, resolve } from 'node:path';
+import { validateCase } from '../../case/load.js';
+import { UsageError } from '../errors.js';
+import type { Document } from 'yaml';
+import {
+  answersFromCase,
+  checkAnswer,
+  nextQuestion,
+  progress,
+  QUESTIONS,
+  steeringAnswers,
+  type Answers,
+  type Question,
+} from './questions.js';
+import { applyAnswers, freeName, newDocument, readSaved, renderCase, writeAtomic, type AskState } from './save.js';
+import type { AskDeps, AskHooks, AskOptions } from './types.js';
+
+/**
+ * The prompt runner: asks the next unanswered question, saves after every answer,
+ * and finishes with validation and advice. The prompts themselves come in through
+ * `Prompter`, so tests drive it without a terminal.
+ */
+
+/** One prompt. `input` re-asks until validate returns true; `select` offers choices; `confirm` yes/no. */
+export type PromptSpec =
+  | {
+      kind: 'input';
+      message: string;
+      help: string;
+      default: string;
+      validate: (text: string) => true | string;
+      /** Called with the text as it is typed, so an interrupt loses nothing. */
+      onDraft: (text: string) => void;
+    }
+  | { kind: 'select'; message: string; help: string; default: string; choices: { value: string; name: string; description?: string }[] }
+  | { kind: 'confirm'; message: string; help: string; default: boolean };
+
+export type Prompter = (spec: PromptSpec) => Promise<string | boolean>;
+
+/** Exit code after Ctrl-C: 128 + SIGINT (2), the shell's convention for "stopped by the user" — not bad input (2). */
+export const EXIT_INTERRUPTED = 130;
+
+export interface AskResult {
+  status: 'done' | 'interrupted';
+  file: string;
+}
+
+/** The error inquirer throws on Ctrl-C (ExitPromptError); matched by name so this module needs no prompt library. */
+export function isInterrupt(e: unknown): boolean {
+  return e instanceof Error && (e.name === 'ExitPromptError' || e.name === 'AbortPromptError');
+}
+
+function specFor(q: Question, a: Answers, def: string, onDraft: (t: string) => void): PromptSpec {
+  if (q.kind === 'choice') {
+    const choices = q.choices!().map((c) => ({ ...c }));
+    return { kind: 'select', message: q.message, help: q.help, default: choices.some((c) => c.value === def) ? def : q.default(a), choices };
+  }
+  return {
+    kind: 'input',
+    message: q.message,
+    help: q.help,
+    default: def,
+    validate: (text) => {
+      const c = checkAnswer(q, text === '' ? def : text, a);
+      return c.ok ? true : c.message;
+    },
+    onDraft,
+  };
+}
+
+export interface Session {
+  file: string;
+  document: Document;
+  answers: Answers;
+  state: AskState;
+}
+
+/** Save the session: the case keys answered so far, and the steering state in the header comment. */
+function save(s: Session, done: boolean): void {
+  applyAnswers(s.document, s.answers, QUESTIONS);
+  s.state.steer = steeringAnswers(s.answers);
+  writeAtomic(s.file, renderCase(s.document, s.state, displayPath(s.file), done));
+}
+
+function displayPath(file: string): string {
+  const rel = relative(process.cwd(), file);
+  const p = rel && !rel.startsWith('..') ? rel : file;
+  return /[\s'"$`\\]/.test(p) ? `'${p.replace(/'/g, `'\\''`)}'` : p;
+}
+
+/** Ask every unanswered question, saving as it goes. Returns false when interrupted. */
+export async function runQuestions(s: Session, prompt: Prompter, say: (line: string) => void): Promise<boolean> {
+  let section = '';
+  for (let next = nextQuestion(s.answers); next; next = nextQuestion(s.answers)) {
+    const q = next.question;
+    if (q.section !== section) {
+      section = q.section;
+      say(`\n${section}`);
+    }
+    if (next.stale) say(`  The saved answer is not usable (${next.stale.reason}); please answer again.`);
+    const draft = s.state.draft?.id === q.id ? s.state.draft.text : undefined;
+    const def = draft ?? (next.stale && typeof next.stale.value === 'string' ? next.stale.value : q.default(s.answers));
+    if (draft !== undefined) say(`  (what you had typed last time is offered as the default)`);
+    let typed = '';
+    try {
+      const got = await prompt(specFor(q, s.answers, def, (t) => (typed = t)));
+      const c = checkAnswer(q, got === '' ? def : got, s.answers);
+      // The prompt validated already; a prompter that did not is caught here, not in the file.
+      if (!c.ok) throw new Error(`prompt returned an answer that does not pass: ${c.message}`);
+      s.answers[q.id] = c.value;
+      delete s.state.draft;
+      save(s, false);
+    } catch (e) {
+      if (!isInterrupt(e)) throw e;
+      if (q.kind !== 'choice' && typed.trim() !== '') s.state.draft = { id: q.id, text: typed };
+      save(s, false);
+      return false;
+    }
+  }
+  return true;
+}
+
+function resumeHint(file: string): string {
+  return `shaftwise ask --resume ${displayPath(file)}`;
+}
+
+/** Open the session: a fresh file (never over an existing one) or the file to resume. */
+function open(opts: AskOptions, cwd: string, say: (l: string) => void): Session {
+  if (opts.resume !== undefined) {
+    const from = resolve(cwd, opts.resume);
+    const file = opts.save !== undefined ? resolve(cwd, opts.save) : from;
+    if (file !== from && existsSync(file)) {
+      throw new UsageError(`--save ${opts.save}: already exists; expected a new file name (or leave out --save to continue ${opts.resume} in place)`);
+    }
+    const saved = readSaved(from);
+    const answers = answersFromCase(saved.doc, saved.state.steer);
+    const p = progress(answers);
+    say(`Resuming ${displayPath(from)}: ${p.answered} of ${p.total} questions answered.` + (file !== from ? ` Saving to ${displayPath(file)}.` : ''));
+    return { file, document: saved.document, answers, state: saved.state };
+  }
+  let file: string;
+  if (opts.save !== undefined) {
+    file = resolve(cwd, opts.save);
+    if (existsSync(file)) {
+      throw new UsageError(`--save ${opts.save}: already exists; expected a new file name, or continue that file with: shaftwise ask --resume ${opts.save}`);
+    }
+  } else {
+    file = freeName(resolve(cwd, 'shaftwise-case.yaml'));
+  }
+  return { file, document: newDocument(), answers: {}, state: {} };
+}
+
+/** The whole `ask` command: open, ask, validate, advise, offer the note. */
+export async function runAsk(opts: AskOptions, deps: AskDeps, hooks: AskHooks = {}): Promise<AskResult> {
+  const say = hooks.say ?? ((l: string) => void process.stdout.write(l + '\n'));
+  const tty = hooks.isTTY ?? (hooks.prompter ? true : process.stdin.isTTY === true);
+  if (!tty) {
+    throw new UsageError(
+      'ask needs an interactive terminal, and standard input is not one. ' +
+        'To run without questions, write the duty in a case file (see examples/sawmill-infeed-roller.yaml and the README) and run: shaftwise advise CASE',
+    );
+  }
+  const cwd = hooks.cwd ?? process.cwd();
+  const s = open(opts, cwd, say);
+  // Written at once so the name is taken and a Ctrl-C at the first question still leaves a file to resume.
+  save(s, false);
+  say(`Answers are saved to ${displayPath(s.file)} as you go. Enter takes the default in brackets; Ctrl-C stops, and ${resumeHint(s.file)} continues.`);
+  const prompt = hooks.prompter ?? (await (await import('./prompts.js')).inquirerPrompter());
+
+  const finished = await runQuestions(s, prompt, say);
+  if (!finished) {
+    say(`\nStopped. Your answers so far are saved in ${displayPath(s.file)}.\nContinue with: ${resumeHint(s.file)}`);
+    return { status: 'interrupted', file: s.file };
+  }
+  // The whole case must pass exactly as a case file would; a hand-edited key that does not is reported (exit 2).
+  validateCase(s.document.toJS({ maxAliasCount: 50 }), displayPath(s.file));
+  save(s, true);
+  say(`\nThe case is complete and saved in ${displayPath(s.file)}.\n`);
+  say(await deps.advise(s.file));
+  if (deps.offerNote) {
+    let yes: string | boolean;
+    try {
+      yes = await prompt({ kind: 'confirm', message: 'Write the design-review note for this case now?', help: 'The note sets out inputs, checks with margins and why the other options lost.', default: true });
+    } catch (e) {
+      if (!isInterrupt(e)) throw e;
+      say(`\nNo note written. The case is complete in ${displayPath(s.file)}.`);
+      return { status: 'interrupted', file: s.file };
+    }
+    if (yes === true) await deps.offerNote(s.file);
+  }
+  return { status: 'done', file: s.file };
+}

@@ -1,0 +1,29 @@
+import type { Prompter } from './run.js';
+
+/** What `ask` needs from the rest of the program. */
+export interface AskDeps {
+  /** The advice text for a finished case file, printed as it is. */
+  advise: (casePath: string) => Promise<string>;
+  /** Write the design-review note for the case; when given, the user is asked whether to. */
+  offerNote?: (casePath: string) => Promise<void>;
+}
+
+/** The command's options. */
+export interface AskOptions {
+  /** Where to save the answers (must not exist). */
+  save?: string;
+  /** A file an earlier `ask` was writing, to continue. */
+  resume?: string;
+}
+
+/** Test hooks: replace the terminal. Left out, the real prompts and process streams are used. */
+export interface AskHooks {
+  /** Prompts to use instead of inquirer's; implies an interactive session unless isTTY says otherwise. */
+  prompter?: Prompter;
+  /** Override the check that standard input is a terminal. */
+  isTTY?: boolean;
+  /** Lines for the user (section titles, help, the resume hint); default: standard output. */
+  say?: (line: string) => void;
+  /** Directory for relative paths and the default file name; default: the working directory. */
+  cwd?: string;
+}
