@@ -122,3 +122,25 @@ console.log(`  amortised with the build over ${n} points: ${((buildMs + perPoint
   }
   console.log(`\n== 60×60 load–speed map, one L/D, cold table: ${(now() - tt).toFixed(0)} ms for ${count} points ==`);
 }
+
+// 6. checkJournal end to end on an invented case (design sweep: 6 L/D × 6 c/r × 9 grades).
+{
+  const { checkJournal } = await import('../dist/calc/journal/index.js');
+  clearTableCache();
+  const c = {
+    title: 'Bench: irrigation lift pump line shaft (invented)',
+    shaft: { diameter: 0.06, speed: 1450 / 60 },
+    load: { radial: 2500, axial: 0, shock: 'light' },
+    life: { hours: 40000, wearAllowance: 0.0002, reliability: 90 },
+    space: { maxLength: 0.07, maxOuterDiameter: 0.1 },
+    lubrication: { supply: 'oil-feed', inletTemperature: 40 },
+    environment: { ambient: 30, contamination: 'normal', startsPerHour: 2 },
+    priorities: { cost: 3, friction: 3, maintenance: 3, noise: 3, precision: 3 },
+  };
+  let tt = now();
+  const r = checkJournal(c);
+  const cold = now() - tt;
+  tt = now();
+  checkJournal(c);
+  console.log(`\n== checkJournal, ${r.sweep.length}-design sweep: cold ${cold.toFixed(0)} ms (tables built), warm ${(now() - tt).toFixed(0)} ms ==`);
+}

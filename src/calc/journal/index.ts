@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { Assumption, CaseSI } from '../../case/types.js';
-import type { CheckRecord, SheetLine } from '../check.js';
+import { makeCheck, type CheckRecord, type SheetLine } from '../check.js';
 import { operatingPoints, pointSpeed } from '../duty.js';
 import type { OilGrade } from '../lubricant.js';
 import { loadTable, lubricants, oilGrade } from '../../data/load.js';
@@ -20,7 +20,6 @@ import {
   type SweepRow,
 } from './design.js';
 import { THERMAL_SHARE, THERMAL_TOLERANCE_K, type Fluid } from './operating-point.js';
-import { makeCheck } from '../check.js';
 
 export * from './mesh.js';
 export * from './reynolds.js';
