@@ -2,6 +2,32 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { DataError } from '../data/load.js';
 import { ruleFileSchema, type Rule } from './rule-schema.js';
 
+interface Issue {
+  code: string;
+  path: PropertyKey[];
+  message: string;
+  errors?: Issue[][];
+}
+
+/**
+ * A condition is a union (leaf, all, any, not); zod reports a failed union as one
+ * "invalid input". Dig into the branches for the most specific problem: the one
+ * whose path reaches deepest, so the message names the bad fact or operator.
+ */
+function deepest(issue: Issue): Issue {
+  if (issue.code !== 'invalid_union' || !issue.errors?.length) return issue;
+  let best: Issue | undefined;
+  for (const branch of issue.errors) {
+    for (const inner of branch) {
+      const d = deepest(inner);
+      const full = { ...d, path: [...issue.path, ...d.path] };
+      // Prefer deeper paths; among equals, prefer a specific message over "unknown key".
+      if (!best || full.path.length > best.path.length || (full.path.length === best.path.length && best.code === 'unrecognized_keys' && full.code !== 'unrecognized_keys')) best = full;
+    }
+  }
+  return best ?? issue;
+}
+
 export interface LoadedRule extends Rule {
   /** The file it came from, e.g. "rules/lubrication.json". */
   file: string;
@@ -28,7 +54,7 @@ export function loadRules(dir: URL = rulesDir): LoadedRule[] {
     }
     const parsed = ruleFileSchema.safeParse(raw);
     if (!parsed.success) {
-      const issue = parsed.error.issues[0]!;
+      const issue = deepest(parsed.error.issues[0]!);
       const idx = issue.path[0] === 'rules' && typeof issue.path[1] === 'number' ? issue.path[1] : undefined;
       const ruleName =
         idx !== undefined ? ((raw as { rules?: { name?: unknown }[] }).rules?.[idx]?.name ?? `#${idx + 1}`) : undefined;
