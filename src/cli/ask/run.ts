@@ -71,6 +71,8 @@ function specFor(q: Question, a: Answers, def: string, onDraft: (t: string) => v
 
 export interface Session {
   file: string;
+  /** Directory that relative names in messages are relative to. */
+  cwd: string;
   document: Document;
   answers: Answers;
   state: AskState;
@@ -80,11 +82,12 @@ export interface Session {
 function save(s: Session, done: boolean): void {
   applyAnswers(s.document, s.answers, QUESTIONS);
   s.state.steer = steeringAnswers(s.answers);
-  writeAtomic(s.file, renderCase(s.document, s.state, displayPath(s.file), done));
+  writeAtomic(s.file, renderCase(s.document, s.state, displayPath(s.file, s.cwd), done));
 }
 
-function displayPath(file: string): string {
-  const rel = relative(process.cwd(), file);
+/** The file as the user should type it: relative to the working directory when inside it, quoted for a shell when needed. */
+function displayPath(file: string, cwd: string): string {
+  const rel = relative(cwd, file);
   const p = rel && !rel.startsWith('..') ? rel : file;
   return /[\s'"$`\\]/.test(p) ? `'${p.replace(/'/g, `'\\''`)}'` : p;
 }
@@ -121,8 +124,8 @@ export async function runQuestions(s: Session, prompt: Prompter, say: (line: str
   return true;
 }
 
-function resumeHint(file: string): string {
-  return `shaftwise ask --resume ${displayPath(file)}`;
+function resumeHint(s: Session): string {
+  return `shaftwise ask --resume ${displayPath(s.file, s.cwd)}`;
 }
 
 /** Open the session: a fresh file (never over an existing one) or the file to resume. */
@@ -133,11 +136,11 @@ function open(opts: AskOptions, cwd: string, say: (l: string) => void): Session 
     if (file !== from && existsSync(file)) {
       throw new UsageError(`--save ${opts.save}: already exists; expected a new file name (or leave out --save to continue ${opts.resume} in place)`);
     }
-    const saved = readSaved(from);
+    const saved = readSaved(from, opts.resume);
     const answers = answersFromCase(saved.doc, saved.state.steer);
     const p = progress(answers);
-    say(`Resuming ${displayPath(from)}: ${p.answered} of ${p.total} questions answered.` + (file !== from ? ` Saving to ${displayPath(file)}.` : ''));
-    return { file, document: saved.document, answers, state: saved.state };
+    say(`Resuming ${displayPath(from, cwd)}: ${p.answered} of ${p.total} questions answered.` + (file !== from ? ` Saving to ${displayPath(file, cwd)}.` : ''));
+    return { file, cwd, document: saved.document, answers, state: saved.state };
   }
   let file: string;
   if (opts.save !== undefined) {
@@ -148,7 +151,7 @@ function open(opts: AskOptions, cwd: string, say: (l: string) => void): Session 
   } else {
     file = freeName(resolve(cwd, 'shaftwise-case.yaml'));
   }
-  return { file, document: newDocument(), answers: {}, state: {} };
+  return { file, cwd, document: newDocument(), answers: {}, state: {} };
 }
 
 /** The whole `ask` command: open, ask, validate, advise, offer the note. */
@@ -165,18 +168,18 @@ export async function runAsk(opts: AskOptions, deps: AskDeps, hooks: AskHooks = 
   const s = open(opts, cwd, say);
   // Written at once so the name is taken and a Ctrl-C at the first question still leaves a file to resume.
   save(s, false);
-  say(`Answers are saved to ${displayPath(s.file)} as you go. Enter takes the default in brackets; Ctrl-C stops, and ${resumeHint(s.file)} continues.`);
+  say(`Answers are saved to ${displayPath(s.file, s.cwd)} as you go. Enter takes the default in brackets; Ctrl-C stops, and ${resumeHint(s)} continues.`);
   const prompt = hooks.prompter ?? (await (await import('./prompts.js')).inquirerPrompter());
 
   const finished = await runQuestions(s, prompt, say);
   if (!finished) {
-    say(`\nStopped. Your answers so far are saved in ${displayPath(s.file)}.\nContinue with: ${resumeHint(s.file)}`);
+    say(`\nStopped. Your answers so far are saved in ${displayPath(s.file, s.cwd)}.\nContinue with: ${resumeHint(s)}`);
     return { status: 'interrupted', file: s.file };
   }
   // The whole case must pass exactly as a case file would; a hand-edited key that does not is reported (exit 2).
-  validateCase(s.document.toJS({ maxAliasCount: 50 }), displayPath(s.file));
+  validateCase(s.document.toJS({ maxAliasCount: 50 }), displayPath(s.file, s.cwd));
   save(s, true);
-  say(`\nThe case is complete and saved in ${displayPath(s.file)}.\n`);
+  say(`\nThe case is complete and saved in ${displayPath(s.file, s.cwd)}.\n`);
   say(await deps.advise(s.file));
   if (deps.offerNote) {
     let yes: string | boolean;
@@ -184,7 +187,7 @@ export async function runAsk(opts: AskOptions, deps: AskDeps, hooks: AskHooks = 
       yes = await prompt({ kind: 'confirm', message: 'Write the design-review note for this case now?', help: 'The note sets out inputs, checks with margins and why the other options lost.', default: true });
     } catch (e) {
       if (!isInterrupt(e)) throw e;
-      say(`\nNo note written. The case is complete in ${displayPath(s.file)}.`);
+      say(`\nNo note written. The case is complete in ${displayPath(s.file, s.cwd)}.`);
       return { status: 'interrupted', file: s.file };
     }
     if (yes === true) await deps.offerNote(s.file);

@@ -66,25 +66,25 @@ export function renderCase(document: Document, state: AskState, file: string, do
 }
 
 /** Read a saved (possibly partial) case. Throws UsageError naming the file when it cannot be used. */
-export function readSaved(file: string): SavedCase {
+export function readSaved(file: string, shownAs = file): SavedCase {
   let text: string;
   try {
-    if (statSync(file).isDirectory()) throw new UsageError(`--resume ${file}: is a directory; expected the case file shaftwise ask was writing`);
+    if (statSync(file).isDirectory()) throw new UsageError(`--resume ${shownAs}: is a directory; expected the case file shaftwise ask was writing`);
     text = readFileSync(file, 'utf8');
   } catch (e) {
     if (e instanceof UsageError) throw e;
     const code = (e as NodeJS.ErrnoException).code;
     const why = code === 'ENOENT' ? 'no such file' : code === 'EACCES' ? 'permission denied' : (e as Error).message;
-    throw new UsageError(`--resume ${file}: cannot be read (${why}); expected the case file shaftwise ask was writing`);
+    throw new UsageError(`--resume ${shownAs}: cannot be read (${why}); expected the case file shaftwise ask was writing`);
   }
   // Same limits as the case loader: bounded aliases, duplicate keys are errors.
   const parsed = parseDocument(text, { uniqueKeys: true, prettyErrors: true });
   if (parsed.errors.length) {
-    throw new UsageError(`--resume ${file}: is not valid YAML (${parsed.errors[0]!.message.split('\n')[0]}); expected a case file`);
+    throw new UsageError(`--resume ${shownAs}: is not valid YAML (${parsed.errors[0]!.message.split('\n')[0]}); expected a case file`);
   }
   const raw: unknown = parsed.toJS({ maxAliasCount: 50 });
   if (raw !== null && raw !== undefined && (typeof raw !== 'object' || Array.isArray(raw))) {
-    throw new UsageError(`--resume ${file}: holds ${Array.isArray(raw) ? 'a list' : `a ${typeof raw}`}; expected a mapping with the case keys (title, shaft, load…)`);
+    throw new UsageError(`--resume ${shownAs}: holds ${Array.isArray(raw) ? 'a list' : `a ${typeof raw}`}; expected a mapping with the case keys (title, shaft, load…)`);
   }
   const document = raw === null || raw === undefined ? newDocument() : parsed;
   if (document !== parsed) document.commentBefore = parsed.commentBefore ?? parsed.comment ?? null;
