@@ -1,10 +1,11 @@
 #!/usr/bin/env node
 import { readFileSync } from 'node:fs';
-import { Command, CommanderError, Option } from 'commander';
+import { Command, CommanderError } from 'commander';
 import { CaseError } from '../case/load.js';
 import { DataError } from '../data/load.js';
 import { EXIT, UsageError } from './errors.js';
-import { outputOptions, runCheck } from './check.js';
+import { registerCheck } from './commands/check.js';
+import { registerAdvise } from './commands/advise.js';
 
 const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
 
@@ -33,9 +34,6 @@ function fail(e: unknown): never {
   process.exit(EXIT.defect);
 }
 
-const formatOption = () => new Option('--format <format>', 'output format: text or json').default('text');
-const unitsOption = () => new Option('--units <system>', 'units for text output: SI or US (JSON is always SI)').default('SI');
-
 const program = new Command()
   .name('shaftwise')
   .description('Choose how a shaft is supported: plain bushing, rolling bearing or oil-film journal bearing.\nConcept-stage estimates: confirm with supplier data and testing.')
@@ -45,32 +43,8 @@ const program = new Command()
   .showHelpAfterError('(run shaftwise --help for usage)')
   .configureOutput({ writeErr: (s) => process.stderr.write(s) });
 
-program
-  .command('check')
-  .description('run one option\'s check on a duty case')
-  .argument('<option>', 'bushing, rolling or journal')
-  .argument('<case>', 'duty case file (YAML or JSON)')
-  .addOption(formatOption())
-  .addOption(unitsOption())
-  .exitOverride()
-  .action(async (option: string, file: string, raw: { format?: string; units?: string }) => {
-    const out = await runCheck(option, file, outputOptions(raw));
-    process.stdout.write(out + '\n');
-  });
-
-program
-  .command('advise')
-  .description('rank the three options for a duty case, with reasons (the main job)')
-  .argument('<case>', 'duty case file (YAML or JSON)')
-  .addOption(formatOption())
-  .addOption(unitsOption())
-  .option('--explain', 'every rule evaluated with the values it saw, and the calculation sheet')
-  .exitOverride()
-  .action(async (file: string, raw: { format?: string; units?: string; explain?: boolean }) => {
-    const { runAdvise } = await import('./advise.js');
-    const out = await runAdvise(file, { ...outputOptions(raw), explain: raw.explain === true });
-    process.stdout.write(out + '\n');
-  });
+registerCheck(program);
+registerAdvise(program);
 
 try {
   await program.parseAsync(process.argv);
