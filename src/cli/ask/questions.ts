@@ -179,7 +179,8 @@ export const QUESTIONS: readonly Question[] = [
     id: 'maxOuterDiameter', path: ['space', 'maxOuterDiameter'], kind: 'quantity', quantity: 'length', section: 'Space',
     message: 'Radial space: largest housing bore (outer diameter)',
     help: 'Limits the wall of a bushing and the outer ring of a rolling bearing.',
-    default: fromDiameter(2, '80 mm'),
+    // 2.5 × the bore leaves room for a standard series-02 or -03 ball bearing of that bore (ISO 15 proportions, from memory).
+    default: fromDiameter(2.5, '100 mm'),
     check: (value, a) => {
       let od: number, d: number;
       try {

@@ -80,11 +80,11 @@ describe('the question list', () => {
 
   it('derives the space defaults from the diameter in the unit the user gave', () => {
     expect(q('maxLength').default({ diameter: '1.5 in' })).toBe('1.5 in');
-    expect(q('maxOuterDiameter').default({ diameter: '1.5 in' })).toBe('3 in');
-    expect(q('maxOuterDiameter').default({ diameter: '55 mm' })).toBe('110 mm');
+    expect(q('maxOuterDiameter').default({ diameter: '1.5 in' })).toBe('3.75 in');
+    expect(q('maxOuterDiameter').default({ diameter: '55 mm' })).toBe('137.5 mm');
     // A large shaft still gets a housing bore larger than itself by default.
     const a = allDefaults({ title: 'Bottling line star wheel', diameter: '120 mm' });
-    expect(validateCase(toCase(a)).case.space.maxOuterDiameter).toBeCloseTo(0.24, 12);
+    expect(validateCase(toCase(a)).case.space.maxOuterDiameter).toBeCloseTo(0.3, 12);
   });
 });
 

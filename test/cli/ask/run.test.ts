@@ -43,7 +43,7 @@ describe('a full run', () => {
     const text = readFileSync(r.file, 'utf8');
     const loaded = parseCaseText(text, r.file);
     expect(loaded.case.title).toBe('New shaft support (from shaftwise ask)');
-    expect(loaded.case.space.maxOuterDiameter).toBeCloseTo(0.08, 12);
+    expect(loaded.case.space.maxOuterDiameter).toBeCloseTo(0.1, 12);
     // Quantities are kept as the strings typed, in the schema's keys.
     expect(parse(text).shaft).toEqual({ diameter: '40 mm', speed: '300 rpm' });
     expect(text).not.toMatch(/ask-state/);
@@ -54,6 +54,15 @@ describe('a full run', () => {
     expect(s.noted).toEqual([r.file]);
     // The file name and how to resume were said before the first question.
     expect(s.said.some((l) => l.includes('shaftwise-case.yaml') && l.includes('shaftwise ask --resume'))).toBe(true);
+  });
+
+  it('the real advisor (src/cli/advise.ts) accepts the finished case', async () => {
+    const { runAdvise } = await import('../../../src/cli/advise.js');
+    const { prompter } = scripted(['Irrigation pump jackshaft', '30 mm', '', '1450 rpm', '1.2 kN', '', 'light', '', '', '', '', 'grease']);
+    const said: string[] = [];
+    await runAsk({}, { advise: (p) => runAdvise(p, { format: 'text', units: 'SI', explain: false }) }, { prompter, say: (l) => said.push(l), cwd: fresh() });
+    expect(said.at(-1)).toMatch(/^Irrigation pump jackshaft\n/);
+    expect(said.at(-1)).toMatch(/Recommended|No option is feasible/);
   });
 
   it('gives a help line with every question', async () => {
@@ -79,7 +88,7 @@ describe('a full run', () => {
     expect(c.load.radial).toBeCloseTo(450 * 4.4482216, 3);
     expect(c.lubrication.oilGrade).toBe(46);
     expect(c.lubrication.inletTemperature).toBeCloseTo(40, 9);
-    expect(c.space.maxOuterDiameter).toBeCloseTo(2.5 * 0.0254, 12); // default: twice the diameter, in inches
+    expect(c.space.maxOuterDiameter).toBeCloseTo(3.125 * 0.0254, 12); // default: 2.5 × the diameter, in inches
     expect(s.ids()).not.toContain('Shaft speed');
   });
 });
