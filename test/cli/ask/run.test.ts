@@ -228,6 +228,12 @@ describe('files it will not touch', () => {
     expect(s.asked).toEqual([]);
   });
 
+  it('refuses a --save path in a folder that does not exist, before asking anything', async () => {
+    const s = session([], { save: 'no-such-folder/pump.yaml' });
+    await expect(s.run()).rejects.toThrow(/^cannot write the case file .*no-such-folder\/pump\.yaml \(no such directory\); expected a writable path \(choose one with --save FILE\)$/);
+    expect(s.asked).toEqual([]);
+  });
+
   it('refuses a --resume file that is missing, not YAML, or not a mapping', async () => {
     const cwd = fresh();
     await expect(session([], { resume: 'nope.yaml' }, cwd).run()).rejects.toThrow(/--resume nope\.yaml: cannot be read \(no such file\)/);
