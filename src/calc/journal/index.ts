@@ -6,7 +6,8 @@ import type { OilGrade } from '../lubricant.js';
 import { loadTable, lubricants, oilGrade } from '../../data/load.js';
 import { makeMesh } from './mesh.js';
 import { solveReynolds } from './reynolds.js';
-import { DEFAULT_MESH } from './table.js';
+import { DEFAULT_MESH, seedTables } from './table.js';
+import { shippedJournalTables } from '../../data/journal-tables.js';
 import {
   ADVISORY_CHECKS,
   allowableFilm,
@@ -116,6 +117,16 @@ export interface JournalResult {
   points: JournalPointSummary[];
 }
 
+/** Options of checkJournal. */
+export interface JournalOptions {
+  /**
+   * Solve the mid-length pressure profile of the governing point (default true). A sweep
+   * over many points (the selection map) turns it off: it is one direct Reynolds solve,
+   * about 2 ms, and nothing but the report's pressure chart reads it.
+   */
+  pressureProfile?: boolean;
+}
+
 const entry = z.object({ value: z.number().positive(), source: z.string().min(1) });
 const list = z.object({ values: z.array(z.number().positive()).min(1), source: z.string().min(1) });
 const criteriaSchema = z.object({
@@ -178,7 +189,13 @@ const fmt = (v: number, digits = 4): string => {
 };
 
 /** The hydrodynamic journal bearing check. See the module comment. */
-export function checkJournal(c: CaseSI): JournalResult {
+let seeded = false;
+
+export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResult {
+  if (!seeded) {
+    seedTables(shippedJournalTables().tables);
+    seeded = true;
+  }
   const crit = journalCriteria();
   const D = c.shaft.diameter;
   const r = D / 2;
@@ -400,7 +417,7 @@ export function checkJournal(c: CaseSI): JournalResult {
 
   // Pressure profile at mid-length, governing point: one direct solve (about 2 ms).
   const pressureProfile: PressurePoint[] = [];
-  if (g.film && res.eccentricityRatio > 0 && res.eccentricityRatio <= 0.98) {
+  if (opts.pressureProfile !== false && g.film && res.eccentricityRatio > 0 && res.eccentricityRatio <= 0.98) {
     const mesh = makeMesh(DEFAULT_MESH.nTheta, DEFAULT_MESH.nZeta, DEFAULT_MESH.stretch);
     const sol = solveReynolds(res.eccentricityRatio, ld, mesh);
     const scale = res.viscosity * 2 * Math.PI * res.speed * (r / cl) ** 2;

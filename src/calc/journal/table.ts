@@ -174,6 +174,21 @@ export function buildTable(
     prev = sol.p;
     rows.push(performance(sol));
   }
+  return tableFromRows(lengthToDiameter, rows, mesh, performance_now() - t0);
+}
+
+/**
+ * A table from already-solved rows (rows increasing in ε, as buildTable makes them): the
+ * interpolation series are derived here, so a table read back from data/journal-tables.json
+ * behaves exactly as the one just solved.
+ */
+export function tableFromRows(
+  lengthToDiameter: number,
+  rows: readonly DimensionlessPerformance[],
+  mesh: Mesh,
+  buildMs = 0,
+): JournalTable {
+  const eps = Float64Array.from(rows, (r) => r.eccentricity);
   const col = (f: (r: DimensionlessPerformance) => number): Float64Array => Float64Array.from(rows, f);
   const lnSe = col((r) => Math.log(r.sommerfeld * r.eccentricity));
   for (let k = 1; k < rows.length; k++)
@@ -191,7 +206,7 @@ export function buildTable(
     peakAngle: series(eps, col((r) => r.peakAngleDeg)),
     filmEnd: series(eps, col((r) => r.filmEndDeg)),
     rows,
-    buildMs: performance_now() - t0,
+    buildMs,
   };
 }
 
@@ -315,6 +330,19 @@ export function tableFor(lengthToDiameter: number): JournalTable {
   }
   cache.set(key, t);
   return t;
+}
+
+/**
+ * Seed the cache with tables solved ahead of time (data/journal-tables.json, written by
+ * scripts/journal-tables.mjs with this solver at the default mesh), so a run does not pay
+ * 40–90 ms per L/D to solve them again. Seeded tables never replace one already cached.
+ */
+export function seedTables(tables: readonly { lengthToDiameter: number; rows: readonly DimensionlessPerformance[] }[]): void {
+  const mesh = makeMesh(DEFAULT_MESH.nTheta, DEFAULT_MESH.nZeta, DEFAULT_MESH.stretch);
+  for (const t of tables) {
+    const key = Number(quantiseLengthToDiameter(t.lengthToDiameter).toFixed(6));
+    if (!cache.has(key) && cache.size < MAX_CACHED) cache.set(key, tableFromRows(key, t.rows, mesh));
+  }
 }
 
 /** Empty the table cache (for benchmarks). */
