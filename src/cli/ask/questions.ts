@@ -293,8 +293,8 @@ const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
 /**
  * Check an answer. `typed` is text from the prompt; a value read back from a
  * saved file is checked with `fromFile`, which accepts what a case file accepts
- * (a plain number in the internal unit). At the prompt a quantity must carry its
- * unit: a bare "40" for a diameter would silently mean 40 m.
+ * (a plain number in the internal unit). At the prompt a quantity must carry a
+ * number and its unit: a bare "40" for a diameter would silently mean 40 m.
  * A failure message names the field, the value given and what was expected.
  */
 export function checkAnswer(q: Question, given: unknown, a: Answers, fromFile = false): Checked {
@@ -311,9 +311,11 @@ export function checkAnswer(q: Question, given: unknown, a: Answers, fromFile = 
     }
   } else if (q.kind === 'number' && typeof value === 'string' && NUMBER.test(value)) {
     value = Number(value);
-  } else if (q.kind === 'quantity' && typeof value === 'string' && NUMBER.test(value) && !fromFile) {
+  } else if (q.kind === 'quantity' && typeof value === 'string' && !fromFile) {
     const info = KINDS[q.quantity!];
-    return fail(`got "${value}" without a unit; expected ${info.noun} with its unit, such as ${info.examples}`);
+    if (NUMBER.test(value)) return fail(`got "${value}" without a unit; expected ${info.noun} with its unit, such as ${info.examples}`);
+    // The parser reads a lone unit as one of it ("mm" = 1 mm); typed, that is a number lost by editing.
+    if (!/^[-+]?\.?\d/.test(value)) return fail(`got "${value}" without a number; expected ${info.noun} with its unit, such as ${info.examples}`);
   }
   if (q.path) {
     const r = fieldSchema(q.path).safeParse(value);

@@ -120,6 +120,11 @@ describe('checking an answer', () => {
     expect(typed.ok).toBe(false);
     if (!typed.ok) expect(typed.message).toMatch(/shaft\.diameter: got "40" without a unit; expected a length with its unit, such as "40 mm"/);
     expect(checkAnswer(q('diameter'), 0.04, {}, true)).toEqual({ ok: true, value: 0.04 });
+    // A lone unit (what is left after deleting the number) is not read as one of it.
+    const unitOnly = checkAnswer(q('diameter'), 'mm', {});
+    expect(unitOnly.ok).toBe(false);
+    if (!unitOnly.ok) expect(unitOnly.message).toBe('shaft.diameter: got "mm" without a number; expected a length with its unit, such as "40 mm" or "1.5 in"');
+    expect(checkAnswer(q('diameter'), '.5 in', {}).ok).toBe(true);
   });
 
   it('reads plain numbers for starts and priorities, with the schema\'s range', () => {
