@@ -68,6 +68,36 @@ export interface AdviceResult {
   rules: RuleTrace[];
 }
 
+/** The facts the rules read, all computed (what advise's dynamic facts resolve to). */
+export interface RuleFacts {
+  case: CaseSI;
+  duty: ReturnType<typeof dutyFacts>;
+  bushing: BushingResult;
+  rolling: RollingResult;
+  journal: JournalResult;
+  figures: Figures;
+}
+
+/** What a rules run returns: the rules that fired and those that did not, with their condition trees. */
+export interface RuleRun {
+  results: RuleResult[];
+  failureResults: RuleResult[];
+}
+
+/** Options of advise(); without them it runs the three kernels and a fresh json-rules-engine Engine. */
+export interface AdviseOptions {
+  /**
+   * Check results already computed for this very case, used instead of running the kernel
+   * (the selection map evaluates its own journal design at each point).
+   */
+  checks?: Partial<{ bushing: BushingResult; rolling: RollingResult; journal: JournalResult }>;
+  /**
+   * Evaluate the rules with this instead of a fresh Engine (a sweep reuses one Engine over
+   * many points). It must return what Engine.run returns for the same rules and facts.
+   */
+  runRules?: (facts: RuleFacts) => Promise<RuleRun>;
+}
+
 /** Fixed order for ties: the simpler and cheaper support first (common practice). */
 const TIE_ORDER: OptionName[] = ['bushing', 'rolling', 'journal'];
 const NEUTRAL_PRIORITY = 3;
@@ -77,9 +107,8 @@ const NEUTRAL_PRIORITY = 3;
  * the run), evaluate every rule in rules/, gate feasibility on the checks, score and rank.
  * Deterministic: the same case gives the same result, byte for byte.
  */
-export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: LoadedRule[] = loadRules()): Promise<AdviceResult> {
-  const engine = new Engine([], { allowUndefinedFacts: true });
-  const cache: Partial<{ bushing: BushingResult; rolling: RollingResult; journal: JournalResult }> = {};
+export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: LoadedRule[] = loadRules(), opts: AdviseOptions = {}): Promise<AdviceResult> {
+  const cache: Partial<{ bushing: BushingResult; rolling: RollingResult; journal: JournalResult }> = { ...opts.checks };
   const bushing = () => (cache.bushing ??= checkBushing(c));
   const rolling = () => (cache.rolling ??= checkRolling(c));
   const journal = () => (cache.journal ??= checkJournal(c));
@@ -88,15 +117,20 @@ export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: Loaded
     rolling: rollingFigures(rolling(), c),
     journal: journalFigures(journal()),
   });
-  engine.addFact('case', c);
-  engine.addFact('duty', dutyFacts(c));
-  engine.addFact('bushing', () => bushing(), { cache: true });
-  engine.addFact('rolling', () => rolling(), { cache: true });
-  engine.addFact('journal', () => journal(), { cache: true });
-  engine.addFact('figures', () => figures(), { cache: true });
-  rules.forEach((r) => engine.addRule({ name: r.name, conditions: r.conditions as never, event: { type: r.event.type, params: { ...r.event } } }));
-
-  const run = await engine.run();
+  let run: RuleRun;
+  if (opts.runRules) {
+    run = await opts.runRules({ case: c, duty: dutyFacts(c), bushing: bushing(), rolling: rolling(), journal: journal(), figures: figures() });
+  } else {
+    const engine = new Engine([], { allowUndefinedFacts: true });
+    engine.addFact('case', c);
+    engine.addFact('duty', dutyFacts(c));
+    engine.addFact('bushing', () => bushing(), { cache: true });
+    engine.addFact('rolling', () => rolling(), { cache: true });
+    engine.addFact('journal', () => journal(), { cache: true });
+    engine.addFact('figures', () => figures(), { cache: true });
+    rules.forEach((r) => engine.addRule({ name: r.name, conditions: r.conditions as never, event: { type: r.event.type, params: { ...r.event } } }));
+    run = await engine.run();
+  }
   const fired = new Set(run.results.map((r) => r.name));
   const byName = new Map<string, RuleResult>([...run.results, ...run.failureResults].map((r) => [r.name, r]));
   const traces: RuleTrace[] = rules.map((r) => ({

@@ -6,8 +6,7 @@ import type { OilGrade } from '../lubricant.js';
 import { loadTable, lubricants, oilGrade } from '../../data/load.js';
 import { makeMesh } from './mesh.js';
 import { solveReynolds } from './reynolds.js';
-import { DEFAULT_MESH, seedTables } from './table.js';
-import { shippedJournalTables } from '../../data/journal-tables.js';
+import { DEFAULT_MESH } from './table.js';
 import {
   ADVISORY_CHECKS,
   allowableFilm,
@@ -189,13 +188,7 @@ const fmt = (v: number, digits = 4): string => {
 };
 
 /** The hydrodynamic journal bearing check. See the module comment. */
-let seeded = false;
-
 export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResult {
-  if (!seeded) {
-    seedTables(shippedJournalTables().tables);
-    seeded = true;
-  }
   const crit = journalCriteria();
   const D = c.shaft.diameter;
   const r = D / 2;
