@@ -6,7 +6,8 @@ import type { OilGrade } from '../lubricant.js';
 import { loadTable, lubricants, oilGrade } from '../../data/load.js';
 import { makeMesh } from './mesh.js';
 import { solveReynolds } from './reynolds.js';
-import { DEFAULT_MESH } from './table.js';
+import { DEFAULT_MESH, seedTables } from './table.js';
+import { shippedJournalTables } from '../../data/journal-tables.js';
 import {
   ADVISORY_CHECKS,
   allowableFilm,
@@ -188,12 +189,23 @@ const fmt = (v: number, digits = 4): string => {
 };
 
 /** The hydrodynamic journal bearing check. See the module comment. */
+let seeded = false;
+
 export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResult {
+  if (!seeded) {
+    seedTables(shippedJournalTables().tables);
+    seeded = true;
+  }
   const crit = journalCriteria();
   const D = c.shaft.diameter;
+  const solverNote: Assumption = {
+    field: 'journal.solver',
+    value: `mesh ${DEFAULT_MESH.nTheta}×${DEFAULT_MESH.nZeta} (half length), PSOR converged when max |Δp| per sweep ≤ 1e-8·max p; thermal balance to ${THERMAL_TOLERANCE_K} K`,
+    reason: 'convergence criteria of the finite-difference Reynolds solution and the temperature iteration; a solve or balance that does not converge stops the run with an error instead of reporting unconverged numbers',
+  };
   const r = D / 2;
   if (!(D > 0 && Number.isFinite(D))) throw new Error(`journal: shaft diameter must be positive, got ${D} m`);
-  const assumed: Assumption[] = [];
+  const assumed: Assumption[] = [solverNote];
   const warnings: string[] = [];
   const extraChecks: CheckRecord[] = [];
   const supply = c.lubrication.supply;
