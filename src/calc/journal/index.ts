@@ -198,9 +198,14 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
   }
   const crit = journalCriteria();
   const D = c.shaft.diameter;
+  const solverNote: Assumption = {
+    field: 'journal.solver',
+    value: `mesh ${DEFAULT_MESH.nTheta}×${DEFAULT_MESH.nZeta} (half length), PSOR converged when max |Δp| per sweep ≤ 1e-8·max p; thermal balance to ${THERMAL_TOLERANCE_K} K`,
+    reason: 'convergence criteria of the finite-difference Reynolds solution and the temperature iteration; a solve or balance that does not converge stops the run with an error instead of reporting unconverged numbers',
+  };
   const r = D / 2;
   if (!(D > 0 && Number.isFinite(D))) throw new Error(`journal: shaft diameter must be positive, got ${D} m`);
-  const assumed: Assumption[] = [];
+  const assumed: Assumption[] = [solverNote];
   const warnings: string[] = [];
   const extraChecks: CheckRecord[] = [];
   const supply = c.lubrication.supply;
