@@ -78,6 +78,13 @@ export function completeCase(
   if (typeof mat === 'string' && !knownMaterials.includes(mat)) {
     problems.push({ field: 'bushing.material', message: `got "${mat}"; expected one of the materials in data/bushing-materials.json: ${knownMaterials.join(', ')}, or an inline material` });
   }
+  if (typeof mat === 'object') {
+    const lo = mat.wearFactorLow ?? mat.wearFactor;
+    const hi = mat.wearFactorHigh ?? mat.wearFactor;
+    if (!(lo <= mat.wearFactor && mat.wearFactor <= hi)) {
+      problems.push({ field: 'bushing.material', message: 'wear factors out of order; expected wearFactorLow ≤ wearFactor ≤ wearFactorHigh' });
+    }
+  }
   if (file.journal?.radialClearance !== undefined && file.journal.clearanceRatio !== undefined) {
     problems.push({ field: 'journal', message: 'gives both radialClearance and clearanceRatio; expected one of them' });
   }

@@ -10,8 +10,18 @@ import { parseQuantity, QuantityError, type Kind } from './quantity.js';
 
 type Bound = 'positive' | 'nonnegative' | 'any';
 
-/** A quantity field of the given kind; `bound` rejects zero/negative values at the boundary. */
-export function quantity(kind: Kind, bound: Bound = 'positive') {
+/** A plausibility ceiling: beyond it a value is a typing slip, not a machine (value in the internal unit, and how to say it). */
+interface Ceiling {
+  max: number;
+  min?: number;
+  say: string;
+}
+
+/**
+ * A quantity field of the given kind; `bound` rejects zero/negative values at the boundary,
+ * `range` absurd ones (a 5 km shaft, a 10⁹ N load) that would only make the kernels extrapolate.
+ */
+export function quantity(kind: Kind, bound: Bound = 'positive', range?: Ceiling) {
   return z.unknown().transform((v, ctx) => {
     if (v === undefined) {
       ctx.addIssue({ code: 'custom', message: `missing; expected ${kindHint(kind)}` });
@@ -25,6 +35,10 @@ export function quantity(kind: Kind, bound: Bound = 'positive') {
       }
       if (bound === 'nonnegative' && !(n >= 0)) {
         ctx.addIssue({ code: 'custom', message: `got ${show(v)}; expected zero or more` });
+        return z.NEVER;
+      }
+      if (range && (n > range.max || (range.min !== undefined && n < range.min))) {
+        ctx.addIssue({ code: 'custom', message: `got ${show(v)}; expected ${range.say}` });
         return z.NEVER;
       }
       return n;
@@ -85,6 +99,11 @@ const plain = (what: string, min: number, max: number) =>
     .number({ error: (iss) => `got ${describeInput(iss.input)}; expected ${what}` })
     .refine((n) => Number.isFinite(n) && n >= min && n <= max, { error: (iss) => `got ${show(iss.input)}; expected ${what}` });
 
+const FORCE: Ceiling = { max: 1e8, say: 'a force up to 100 MN' };
+// Dimensional wear factors of rubbing materials span about 1e-9 to 1e-3 mm^3/(N*m) (unfilled PTFE at the top).
+const WEAR: Ceiling = { max: 1e-12, say: 'a wear factor up to 1e-3 mm^3/(N*m)' };
+const TEMPERATURE: Ceiling = { min: -60, max: 300, say: 'a temperature from -60 degC to 300 degC' };
+
 export const SHOCKS = ['none', 'light', 'moderate', 'heavy'] as const;
 export const SUPPLIES = ['none', 'grease', 'oil-bath', 'oil-feed'] as const;
 export const CONTAMINATIONS = ['clean', 'normal', 'dirty', 'severe'] as const;
@@ -96,19 +115,19 @@ export const materialSchema = mapping({
   maxPressure: quantity('pressure'),
   maxVelocity: quantity('velocity'),
   maxPV: quantity('pv'),
-  wearFactor: quantity('wearFactor'),
-  wearFactorLow: quantity('wearFactor').optional(),
-  wearFactorHigh: quantity('wearFactor').optional(),
+  wearFactor: quantity('wearFactor', 'positive', WEAR),
+  wearFactorLow: quantity('wearFactor', 'positive', WEAR).optional(),
+  wearFactorHigh: quantity('wearFactor', 'positive', WEAR).optional(),
   friction: plain('a friction coefficient between 0.001 and 1', 0.001, 1),
-  maxTemperature: quantity('temperature', 'any'),
+  maxTemperature: quantity('temperature', 'any', { min: -60, max: 1000, say: 'a temperature limit from -60 degC to 1000 degC' }),
   source: text('where the values come from (datasheet, handbook)'),
 });
 
 const pointSchema = mapping({
   share: plain('a share of running time between 0 and 1', 0, 1),
-  radial: quantity('force'),
-  axial: quantity('force', 'nonnegative').optional(),
-  speed: quantity('speed').optional(),
+  radial: quantity('force', 'positive', FORCE),
+  axial: quantity('force', 'nonnegative', FORCE).optional(),
+  speed: quantity('speed', 'positive', { max: 100000 / 60, say: 'a speed up to 100 000 rpm' }).optional(),
 });
 
 /** Oil as written: "ISO VG 68", "VG 68" or 68. */
@@ -124,33 +143,36 @@ const oilSchema = z.unknown().transform((v, ctx) => {
 export const caseFileSchema = mapping({
   title: text('a title for the case'),
   shaft: mapping({
-    diameter: quantity('length'),
-    speed: quantity('speed').optional(),
-    oscillation: mapping({ angle: quantity('angle'), frequency: quantity('frequency') }).optional(),
+    diameter: quantity('length', 'positive', { max: 5, min: 1e-3, say: 'a shaft diameter from 1 mm to 5 m' }),
+    speed: quantity('speed', 'positive', { max: 100000 / 60, say: 'a speed up to 100 000 rpm' }).optional(),
+    oscillation: mapping({
+      angle: quantity('angle', 'positive', { max: 2 * Math.PI, say: 'a total swing angle up to 360 deg (more is rotation)' }),
+      frequency: quantity('frequency', 'positive', { max: 100, say: 'a frequency up to 100 Hz' }),
+    }).optional(),
   }),
   load: mapping({
-    radial: quantity('force').optional(),
-    axial: quantity('force', 'nonnegative').optional(),
+    radial: quantity('force', 'positive', FORCE).optional(),
+    axial: quantity('force', 'nonnegative', FORCE).optional(),
     shock: choice(SHOCKS).optional(),
   }).optional(),
   duty: z.array(pointSchema, { error: 'expected a list of operating points' }).min(1, { error: 'is empty; expected at least one operating point' }).optional(),
   life: mapping({
-    hours: quantity('time'),
-    wearAllowance: quantity('length').optional(),
+    hours: quantity('time', 'positive', { max: 1e6, say: 'a life target up to 1 000 000 h' }),
+    wearAllowance: quantity('length', 'positive', { max: 0.05, say: 'a wear allowance up to 50 mm' }).optional(),
     reliability: plain('a reliability in percent between 90 and 99.95', 90, 99.95).optional(),
   }),
   space: mapping({
-    maxLength: quantity('length'),
-    maxOuterDiameter: quantity('length'),
+    maxLength: quantity('length', 'positive', { max: 10, say: 'an axial room up to 10 m' }),
+    maxOuterDiameter: quantity('length', 'positive', { max: 10, say: 'a housing bore up to 10 m' }),
   }),
   lubrication: mapping({
     supply: choice(SUPPLIES).optional(),
     oil: oilSchema.optional(),
-    viscosity: quantity('viscosity').optional(),
-    inletTemperature: quantity('temperature', 'any').optional(),
+    viscosity: quantity('viscosity', 'positive', { max: 10, say: 'a viscosity up to 10 Pa*s' }).optional(),
+    inletTemperature: quantity('temperature', 'any', TEMPERATURE).optional(),
   }).optional(),
   environment: mapping({
-    ambient: quantity('temperature', 'any').optional(),
+    ambient: quantity('temperature', 'any', TEMPERATURE).optional(),
     contamination: choice(CONTAMINATIONS).optional(),
     startsPerHour: plain('a number of starts per hour from 0 to 10000', 0, 10000).optional(),
   }).optional(),
@@ -161,22 +183,22 @@ export const caseFileSchema = mapping({
     >,
   ).optional(),
   bushing: mapping({
-    length: quantity('length').optional(),
+    length: quantity('length', 'positive', { max: 10, say: 'a bushing length up to 10 m' }).optional(),
     material: z.union([text('a material id'), materialSchema], {
       error: 'expected a material id from data/bushing-materials.json or an inline material with id, name, maxPressure, maxVelocity, maxPV, wearFactor, friction, maxTemperature, source',
     }).optional(),
   }).optional(),
   rolling: mapping({
     type: choice(['ball', 'roller'] as const).optional(),
-    dynamicRating: quantity('force').optional(),
-    staticRating: quantity('force').optional(),
-    fatigueLimit: quantity('force').optional(),
-    outerDiameter: quantity('length').optional(),
-    width: quantity('length').optional(),
+    dynamicRating: quantity('force', 'positive', FORCE).optional(),
+    staticRating: quantity('force', 'positive', FORCE).optional(),
+    fatigueLimit: quantity('force', 'positive', FORCE).optional(),
+    outerDiameter: quantity('length', 'positive', { max: 10, say: 'a bearing outside diameter up to 10 m' }).optional(),
+    width: quantity('length', 'positive', { max: 10, say: 'a bearing width up to 10 m' }).optional(),
   }).optional(),
   journal: mapping({
-    length: quantity('length').optional(),
-    radialClearance: quantity('length').optional(),
+    length: quantity('length', 'positive', { max: 10, say: 'a bearing length up to 10 m' }).optional(),
+    radialClearance: quantity('length', 'positive', { max: 0.01, say: 'a radial clearance up to 10 mm' }).optional(),
     clearanceRatio: plain('a clearance ratio c/r between 0.0001 and 0.01', 0.0001, 0.01).optional(),
   }).optional(),
 });

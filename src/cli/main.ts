@@ -6,6 +6,7 @@ import { DataError } from '../data/load.js';
 import { EXIT, UsageError } from './errors.js';
 import { registerCheck } from './commands/check.js';
 import { registerAdvise } from './commands/advise.js';
+import { registerAsk } from './ask/index.js';
 
 const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
 
@@ -45,6 +46,9 @@ const program = new Command()
 
 registerCheck(program);
 registerAdvise(program);
+registerAsk(program, {
+  advise: async (file) => (await import('./advise.js')).runAdvise(file, { format: 'text', units: 'SI', explain: false }),
+});
 
 try {
   await program.parseAsync(process.argv);
