@@ -1,4 +1,5 @@
 import { readdirSync, readFileSync } from 'node:fs';
+import { pathToFileURL } from 'node:url';
 import { DataError } from '../data/load.js';
 import { ruleFileSchema, type Rule } from './rule-schema.js';
 
@@ -37,11 +38,21 @@ export interface LoadedRule extends Rule {
 /** A rule file that does not validate: names the file and the rule. Exit code 2. */
 export class RuleFileError extends DataError {}
 
-const rulesDir = new URL('../../rules/', import.meta.url);
+/** rules/ beside the program, or the folder named by SHAFTWISE_RULES_DIR (a team's own rule set). */
+export function rulesDir(): URL {
+  const dir = process.env.SHAFTWISE_RULES_DIR;
+  return dir ? pathToFileURL(dir.endsWith('/') ? dir : `${dir}/`) : new URL('../../rules/', import.meta.url);
+}
 
 /** Load and validate every rules/*.json, in file-name order (so results are deterministic). */
-export function loadRules(dir: URL = rulesDir): LoadedRule[] {
-  const files = readdirSync(dir).filter((f) => f.endsWith('.json')).sort();
+export function loadRules(dir: URL = rulesDir()): LoadedRule[] {
+  let listing: string[];
+  try {
+    listing = readdirSync(dir);
+  } catch (e) {
+    throw new RuleFileError(`rules folder ${dir.pathname}: cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); expected a folder of rule files`);
+  }
+  const files = listing.filter((f) => f.endsWith('.json')).sort();
   const out: LoadedRule[] = [];
   const names = new Map<string, string>();
   for (const f of files) {

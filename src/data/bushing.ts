@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { loadTable } from './load.js';
+import { DataError, loadTable } from './load.js';
 import type { BushingMaterial } from '../case/types.js';
 
 /**
@@ -37,14 +37,15 @@ export interface BushingMaterialRow extends BushingMaterial {
   minWall: number;
 }
 
-let rows: BushingMaterialRow[] | undefined;
+const converted = new WeakMap<object, BushingMaterialRow[]>();
 
 export function bushingMaterials(): BushingMaterialRow[] {
-  if (rows) return rows;
   const t = loadTable('bushing-materials.json', fileSchema);
-  rows = t.materials.map((m) => {
+  const hit = converted.get(t);
+  if (hit) return hit;
+  const rows = t.materials.map((m) => {
     if (!(m.wearFactorLow <= m.wearFactor && m.wearFactor <= m.wearFactorHigh)) {
-      throw new Error(`data/bushing-materials.json: material ${m.id}: wearFactorLow ≤ wearFactor ≤ wearFactorHigh does not hold`);
+      throw new DataError(`data/bushing-materials.json: material ${m.id}: wearFactorLow ≤ wearFactor ≤ wearFactorHigh does not hold; expected them in that order`);
     }
     return {
       ...m,
@@ -56,6 +57,7 @@ export function bushingMaterials(): BushingMaterialRow[] {
       minWall: m.minWall * 1e-3,
     };
   });
+  converted.set(t, rows);
   return rows;
 }
 

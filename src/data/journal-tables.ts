@@ -1,5 +1,5 @@
 import { readFileSync } from 'node:fs';
-import { DataError } from './load.js';
+import { DataError, dataDir } from './load.js';
 import type { DimensionlessPerformance } from '../calc/journal/reynolds.js';
 
 /**
@@ -32,14 +32,16 @@ const FIELDS: (keyof DimensionlessPerformance)[] = [
   'loadTangential',
 ];
 
-let cached: ShippedTables | undefined;
+const cached = new Map<string, ShippedTables>();
 
 export function shippedJournalTables(): ShippedTables {
-  if (cached) return cached;
+  const url = new URL('journal-tables.json', dataDir());
+  const hit = cached.get(url.href);
+  if (hit) return hit;
   const file = 'data/journal-tables.json';
   let t: ShippedTables;
   try {
-    t = JSON.parse(readFileSync(new URL('../../data/journal-tables.json', import.meta.url), 'utf8')) as ShippedTables;
+    t = JSON.parse(readFileSync(url, 'utf8')) as ShippedTables;
   } catch (e) {
     throw new DataError(`${file}: cannot be read as JSON (${(e as Error).message}); regenerate it with node scripts/journal-tables.mjs`);
   }
@@ -56,6 +58,6 @@ export function shippedJournalTables(): ShippedTables {
       }
     });
   });
-  cached = t;
+  cached.set(url.href, t);
   return t;
 }

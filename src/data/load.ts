@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import { pathToFileURL } from 'node:url';
 import { z } from 'zod';
 import type { OilGrade } from '../calc/lubricant.js';
 
@@ -13,16 +14,25 @@ export class DataError extends Error {
   }
 }
 
-const dataDir = new URL('../../data/', import.meta.url);
+/**
+ * The folder of data tables: data/ beside the program, or the folder named by
+ * SHAFTWISE_DATA_DIR (a copy of data/ with a supplier's rows added, say). Read on each
+ * call so a test or a script can point it elsewhere.
+ */
+export function dataDir(): URL {
+  const dir = process.env.SHAFTWISE_DATA_DIR;
+  return dir ? pathToFileURL(dir.endsWith('/') ? dir : `${dir}/`) : new URL('../../data/', import.meta.url);
+}
 const cache = new Map<string, unknown>();
 
 /** Read data/<file> and validate it with schema; cached per file. */
 export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
-  const hit = cache.get(file);
+  const url = new URL(file, dataDir());
+  const hit = cache.get(url.href);
   if (hit !== undefined) return hit as T;
   let raw: unknown;
   try {
-    raw = JSON.parse(readFileSync(new URL(file, dataDir), 'utf8'));
+    raw = JSON.parse(readFileSync(url, 'utf8'));
   } catch (e) {
     throw new DataError(`data/${file}: cannot be read as JSON (${(e as Error).message})`);
   }
@@ -33,7 +43,7 @@ export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
       `data/${file}: field ${issue.path.join('.') || '(root)'}: ${issue.message}`,
     );
   }
-  cache.set(file, parsed.data);
+  cache.set(url.href, parsed.data);
   return parsed.data;
 }
 
