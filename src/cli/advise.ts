@@ -1,16 +1,61 @@
 import { loadCaseFile } from '../case/load.js';
 import { CAUTION, assumptionsBlock, warningsBlock } from '../report/text.js';
+import type { UnitSystem } from '../report/units.js';
 import type { OutputOptions } from './check.js';
+import { UsageError } from './errors.js';
 
-/** Advise on a case file: the three checks, the rules, the ranking. Returns the text to print. */
-export async function runAdvise(file: string, opts: OutputOptions & { explain: boolean }): Promise<string> {
+/** Output formats of `advise`: text and json print; md and html are the design-review note. */
+export const ADVISE_FORMATS = ['text', 'json', 'md', 'html'] as const;
+export type AdviseFormat = (typeof ADVISE_FORMATS)[number];
+
+export interface AdviseOptions {
+  format: AdviseFormat;
+  units: UnitSystem;
+  explain: boolean;
+  /** Write the note to this file instead of printing it (md and html only). */
+  out?: string;
+  /** Replace an existing --out file. */
+  force?: boolean;
+  /** Clock for the note's date (tests); default SOURCE_DATE_EPOCH, else now. */
+  now?: () => Date;
+}
+
+/**
+ * Advise on a case file: the three checks, the rules, the ranking. Returns the text to print
+ * (empty when the note was written to --out). Options are checked before any work is done,
+ * so a bad flag never leaves a file behind.
+ */
+export async function runAdvise(file: string, opts: (OutputOptions | { format: AdviseFormat; units: UnitSystem }) & Omit<AdviseOptions, 'format' | 'units'>): Promise<string> {
+  const format = opts.format as AdviseFormat;
+  const note = format === 'md' || format === 'html';
+  if (!note && opts.out !== undefined) throw new UsageError(`--out: applies to --format md or html (the design-review note); got --format ${format}`);
+  if (opts.force && opts.out === undefined) throw new UsageError('--force: applies only with --out FILE; got --force without --out');
+  if (opts.out !== undefined && opts.out.trim() === '') throw new UsageError('--out: got an empty file name; expected a file path');
   const loaded = loadCaseFile(file);
   const { advise } = await import('../advise/engine.js');
   const a = await advise(loaded.case, loaded.assumed);
-  if (opts.format === 'json') {
+  if (note) {
+    const { renderNote } = await import('../report/note/index.js');
+    const text = await renderNote(loaded, a, format, { units: opts.units, caseFile: file, ...(opts.now ? { now: opts.now } : {}) });
+    if (opts.out === undefined) return text.trimEnd();
+    const { writeFileSafe } = await import('./write-file.js');
+    writeFileSafe(opts.out, text, { force: opts.force === true });
+    return '';
+  }
+  if (format === 'json') {
     const { rules, ...rest } = a;
     return JSON.stringify(opts.explain ? { ...rest, case: loaded.case, rules } : { ...rest, case: loaded.case }, null, 2);
   }
   const { adviceText } = await import('../report/advice-text.js');
   return [loaded.case.title, adviceText(a, opts.units, opts.explain), assumptionsBlock(a.assumed), warningsBlock(a.warnings), CAUTION].filter(Boolean).join('\n\n');
+}
+
+/**
+ * Write the design-review note of a case file to `outPath` (for the questionnaire's last
+ * step, and for scripts). Same rules as `advise --out`: temporary file then rename, an
+ * existing file is kept unless `force`; user errors throw UsageError / CaseError (exit 2).
+ */
+export async function writeNote(casePath: string, outPath: string, format: 'md' | 'html', force: boolean): Promise<void> {
+  if (format !== 'md' && format !== 'html') throw new UsageError(`note format: got "${String(format)}"; expected md or html`);
+  await runAdvise(casePath, { format, units: 'SI', explain: false, out: outPath, force });
 }

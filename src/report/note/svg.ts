@@ -1,0 +1,272 @@
+import { escapeHtml } from './escape.js';
+
+/**
+ * A small SVG line-chart writer for the design-review note: axes with ticks and unit labels
+ * (linear or logarithmic), polylines, dashed limit lines, point markers and a legend.
+ * Series are told apart by dash pattern and marker shape as well as by colour, so the chart
+ * reads in greyscale and on a monochrome printer. Output is plain SVG text with no script,
+ * no external reference and no font file: it renders offline in any browser.
+ */
+
+export interface Axis {
+  /** Quantity name, e.g. "Running time". */
+  label: string;
+  /** Display unit, e.g. "h" (shown in brackets). */
+  unit: string;
+  log?: boolean;
+  /** Fixed range; otherwise taken from the data and the reference lines. */
+  min?: number;
+  max?: number;
+  /** Fixed tick values (linear axes), e.g. every 60° for an angle. */
+  ticks?: number[];
+}
+
+export interface Series {
+  name: string;
+  points: ReadonlyArray<readonly [number, number]>;
+  /** Draw the point markers (default true). */
+  markers?: boolean;
+}
+
+export interface RefLine {
+  /** "x": a vertical line at x = value; "y": a horizontal line at y = value. */
+  axis: 'x' | 'y';
+  value: number;
+  label: string;
+}
+
+export interface ChartSpec {
+  /** Used for element ids; letters, digits and dashes. */
+  id: string;
+  title: string;
+  x: Axis;
+  y: Axis;
+  series: Series[];
+  refs: RefLine[];
+}
+
+/** Line styles in order: colour (distinct in hue and lightness), dash pattern, marker. */
+const STYLES = [
+  { colour: '#1b4f72', dash: '', marker: 'circle' },
+  { colour: '#b9770e', dash: '7 4', marker: 'square' },
+  { colour: '#117a65', dash: '2 3', marker: 'triangle' },
+  { colour: '#7d3c98', dash: '10 3 2 3', marker: 'diamond' },
+  { colour: '#5d6d7e', dash: '4 2', marker: 'cross' },
+  { colour: '#a04000', dash: '1 2', marker: 'circle-open' },
+] as const;
+const REF_COLOUR = '#922b21';
+const REF_DASHES = ['9 4', '3 3', '12 3 3 3'] as const;
+
+const W = 640;
+const H = 340;
+const M = { left: 70, right: 18, top: 34, bottom: 52 };
+const PW = W - M.left - M.right;
+const PH = H - M.top - M.bottom;
+const LEGEND_ROW = 18;
+
+/** Tick values for a linear axis: 1, 2 or 5 × 10^k steps, about `n` of them. */
+export function linearTicks(min: number, max: number, n = 6): number[] {
+  if (!(max > min)) return [min];
+  const raw = (max - min) / n;
+  const mag = 10 ** Math.floor(Math.log10(raw));
+  const step = [1, 2, 5, 10].map((k) => k * mag).find((s) => s >= raw)!;
+  const out: number[] = [];
+  for (let v = Math.ceil(min / step - 1e-9) * step; v <= max + step * 1e-9; v += step) out.push(Math.abs(v) < step * 1e-9 ? 0 : +v.toPrecision(12));
+  return out;
+}
+
+/** Tick values for a log axis: each decade; with fewer than three decades also 2 and 5. */
+export function logTicks(min: number, max: number): { major: number[]; minor: number[] } {
+  const lo = Math.floor(Math.log10(min));
+  const hi = Math.ceil(Math.log10(max));
+  const major: number[] = [];
+  const minor: number[] = [];
+  const few = Math.log10(max / min) <= 2.5;
+  for (let k = lo; k <= hi; k++) {
+    for (let m = 1; m < 10; m++) {
+      const v = +(m * 10 ** k).toPrecision(12);
+      if (v < min * (1 - 1e-9) || v > max * (1 + 1e-9)) continue;
+      if (m === 1 || (few && (m === 2 || m === 5))) major.push(v);
+      else minor.push(v);
+    }
+  }
+  return { major, minor };
+}
+
+/** Whether values spanning [min, max] (all positive) are better on a log axis: more than a decade. */
+export function spansDecades(min: number, max: number): boolean {
+  return min > 0 && max / min >= 10;
+}
+
+function tickText(v: number): string {
+  if (v === 0) return '0';
+  const a = Math.abs(v);
+  if (a >= 1e5 || a < 1e-3) {
+    const e = Math.floor(Math.log10(a));
+    const m = +(v / 10 ** e).toPrecision(3);
+    return m === 1 ? `1e${e}` : `${m}e${e}`;
+  }
+  return String(+v.toPrecision(4));
+}
+
+interface Scale {
+  min: number;
+  max: number;
+  log: boolean;
+  to: (v: number) => number;
+}
+
+function makeScale(axis: Axis, values: number[], length: number, flip: boolean): Scale {
+  const finite = values.filter((v) => Number.isFinite(v) && (!axis.log || v > 0));
+  let min = axis.min ?? Math.min(...finite);
+  let max = axis.max ?? Math.max(...finite);
+  if (!Number.isFinite(min) || !Number.isFinite(max)) [min, max] = axis.log ? [1, 10] : [0, 1];
+  if (axis.log) {
+    if (!(max > min)) [min, max] = [min / 2, min * 2];
+    if (axis.min === undefined) min = 10 ** (Math.floor(Math.log10(min) * 4) / 4);
+    if (axis.max === undefined) max = 10 ** (Math.ceil(Math.log10(max) * 4) / 4);
+  } else {
+    if (!(max > min)) [min, max] = [min - 1, max + 1];
+    if (axis.min === undefined && min > 0 && min < (max - min) * 0.5) min = 0;
+    const pad = (max - min) * 0.05;
+    if (axis.max === undefined) max += pad;
+    if (axis.min === undefined && min !== 0) min -= pad;
+  }
+  const f = axis.log ? Math.log10 : (v: number) => v;
+  const a = f(min);
+  const b = f(max);
+  const to = (v: number) => {
+    const t = (f(v) - a) / (b - a);
+    return flip ? length * (1 - t) : length * t;
+  };
+  return { min, max, log: axis.log === true, to };
+}
+
+const r1 = (v: number) => (Math.round(v * 10) / 10).toString();
+
+function marker(kind: string, x: number, y: number, colour: string): string {
+  const s = 3.6;
+  switch (kind) {
+    case 'circle':
+      return `<circle cx="${r1(x)}" cy="${r1(y)}" r="${s}" fill="${colour}"/>`;
+    case 'circle-open':
+      return `<circle cx="${r1(x)}" cy="${r1(y)}" r="${s}" fill="#fff" stroke="${colour}" stroke-width="1.5"/>`;
+    case 'square':
+      return `<rect x="${r1(x - s)}" y="${r1(y - s)}" width="${2 * s}" height="${2 * s}" fill="#fff" stroke="${colour}" stroke-width="1.5"/>`;
+    case 'triangle':
+      return `<path d="M${r1(x)} ${r1(y - s - 0.8)}L${r1(x + s)} ${r1(y + s)}L${r1(x - s)} ${r1(y + s)}Z" fill="${colour}"/>`;
+    case 'diamond':
+      return `<path d="M${r1(x)} ${r1(y - s - 0.8)}L${r1(x + s + 0.8)} ${r1(y)}L${r1(x)} ${r1(y + s + 0.8)}L${r1(x - s - 0.8)} ${r1(y)}Z" fill="#fff" stroke="${colour}" stroke-width="1.5"/>`;
+    default:
+      return `<path d="M${r1(x - s)} ${r1(y - s)}L${r1(x + s)} ${r1(y + s)}M${r1(x - s)} ${r1(y + s)}L${r1(x + s)} ${r1(y - s)}" stroke="${colour}" stroke-width="1.6"/>`;
+  }
+}
+
+/** Marker positions: about eight per series, so markers mark the line without hiding it. */
+function markerIndices(n: number): number[] {
+  if (n <= 10) return [...Array(n).keys()];
+  const step = (n - 1) / 8;
+  return [...Array(9).keys()].map((k) => Math.round(k * step));
+}
+
+/** Two legend columns when every entry fits in half the plot width (about 6.2 px a character), else one. */
+function legendColumns(spec: ChartSpec): number {
+  const longest = Math.max(0, ...spec.series.map((s) => s.name.length), ...spec.refs.map((r) => r.label.length));
+  return longest * 6.2 + 44 <= PW / 2 ? 2 : 1;
+}
+
+/** The chart as an SVG element (a string). Sizes scale with the page: width 100 %, fixed aspect ratio. */
+export function lineChart(spec: ChartSpec): string {
+  const id = spec.id.replace(/[^a-zA-Z0-9-]/g, '-');
+  const xs = [...spec.series.flatMap((s) => s.points.map((p) => p[0])), ...spec.refs.filter((r) => r.axis === 'x').map((r) => r.value)];
+  const ys = [...spec.series.flatMap((s) => s.points.map((p) => p[1])), ...spec.refs.filter((r) => r.axis === 'y').map((r) => r.value)];
+  const sx = makeScale(spec.x, xs, PW, false);
+  const sy = makeScale(spec.y, ys, PH, true);
+  const X = (v: number) => M.left + sx.to(v);
+  const Y = (v: number) => M.top + sy.to(v);
+  const legendRows = Math.ceil((spec.series.length + spec.refs.length) / legendColumns(spec));
+  const totalH = H + 8 + legendRows * LEGEND_ROW;
+  const out: string[] = [];
+  const title = `${spec.title}`;
+  out.push(
+    `<svg xmlns="http://www.w3.org/2000/svg" class="chart" id="chart-${id}" viewBox="0 0 ${W} ${totalH}" width="100%" role="img" aria-labelledby="chart-${id}-title" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
+    `<title id="chart-${id}-title">${escapeHtml(title)}</title>`,
+    `<defs><clipPath id="clip-${id}"><rect x="${M.left}" y="${M.top}" width="${PW}" height="${PH}"/></clipPath></defs>`,
+    `<rect x="0" y="0" width="${W}" height="${totalH}" fill="#fff"/>`,
+    `<text x="${M.left}" y="20" font-size="14" font-weight="bold" fill="#111">${escapeHtml(title)}</text>`,
+  );
+
+  // Grid and ticks.
+  const grid: string[] = [];
+  const ticks: string[] = [];
+  const xt = sx.log ? logTicks(sx.min, sx.max) : { major: spec.x.ticks ?? linearTicks(sx.min, sx.max), minor: [] as number[] };
+  const yt = sy.log ? logTicks(sy.min, sy.max) : { major: spec.y.ticks ?? linearTicks(sy.min, sy.max, 5), minor: [] as number[] };
+  for (const v of xt.minor) grid.push(`<line x1="${r1(X(v))}" y1="${M.top}" x2="${r1(X(v))}" y2="${M.top + PH}" stroke="#eee"/>`);
+  for (const v of yt.minor) grid.push(`<line x1="${M.left}" y1="${r1(Y(v))}" x2="${M.left + PW}" y2="${r1(Y(v))}" stroke="#eee"/>`);
+  for (const v of xt.major) {
+    grid.push(`<line x1="${r1(X(v))}" y1="${M.top}" x2="${r1(X(v))}" y2="${M.top + PH}" stroke="#d5d5d5"/>`);
+    ticks.push(`<line x1="${r1(X(v))}" y1="${M.top + PH}" x2="${r1(X(v))}" y2="${M.top + PH + 5}" stroke="#333"/>`);
+    ticks.push(`<text x="${r1(X(v))}" y="${M.top + PH + 18}" text-anchor="middle" fill="#222">${tickText(v)}</text>`);
+  }
+  for (const v of yt.major) {
+    grid.push(`<line x1="${M.left}" y1="${r1(Y(v))}" x2="${M.left + PW}" y2="${r1(Y(v))}" stroke="#d5d5d5"/>`);
+    ticks.push(`<line x1="${M.left - 5}" y1="${r1(Y(v))}" x2="${M.left}" y2="${r1(Y(v))}" stroke="#333"/>`);
+    ticks.push(`<text x="${M.left - 8}" y="${r1(Y(v) + 4)}" text-anchor="end" fill="#222">${tickText(v)}</text>`);
+  }
+  out.push(`<g class="grid">${grid.join('')}</g>`);
+  out.push(`<rect x="${M.left}" y="${M.top}" width="${PW}" height="${PH}" fill="none" stroke="#333"/>`);
+  out.push(`<g class="ticks">${ticks.join('')}</g>`);
+  const unit = (a: Axis) => (a.unit ? ` [${escapeHtml(a.unit)}]` : '');
+  out.push(
+    `<text class="axis-label" x="${M.left + PW / 2}" y="${H - 12}" text-anchor="middle" fill="#111">${escapeHtml(spec.x.label)}${unit(spec.x)}${sx.log ? ' (log scale)' : ''}</text>`,
+    `<text class="axis-label" transform="translate(16 ${M.top + PH / 2}) rotate(-90)" text-anchor="middle" fill="#111">${escapeHtml(spec.y.label)}${unit(spec.y)}${sy.log ? ' (log scale)' : ''}</text>`,
+  );
+
+  // Limit lines, then the series, clipped to the plot area.
+  const body: string[] = [];
+  spec.refs.forEach((r, k) => {
+    const dash = REF_DASHES[k % REF_DASHES.length];
+    if (r.axis === 'y') {
+      const y = r1(Y(r.value));
+      body.push(`<line class="ref" x1="${M.left}" y1="${y}" x2="${M.left + PW}" y2="${y}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${dash}"/>`);
+    } else {
+      const x = r1(X(r.value));
+      body.push(`<line class="ref" x1="${x}" y1="${M.top}" x2="${x}" y2="${M.top + PH}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${dash}"/>`);
+    }
+  });
+  spec.series.forEach((s, k) => {
+    const st = STYLES[k % STYLES.length]!;
+    const pts = s.points.filter((p) => Number.isFinite(p[0]) && Number.isFinite(p[1]) && (!sx.log || p[0] > 0) && (!sy.log || p[1] > 0));
+    if (!pts.length) return;
+    const d = pts.map((p, i) => `${i ? 'L' : 'M'}${r1(X(p[0]))} ${r1(Y(p[1]))}`).join('');
+    body.push(`<path class="series" d="${d}" fill="none" stroke="${st.colour}" stroke-width="2.2"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`);
+    if (s.markers !== false) body.push(...markerIndices(pts.length).map((i) => marker(st.marker, X(pts[i]![0]), Y(pts[i]![1]), st.colour)));
+  });
+  out.push(`<g clip-path="url(#clip-${id})">${body.join('')}</g>`);
+
+  // Legend below the plot, in two columns: it never hides a line.
+  const entries: string[] = [];
+  const rows = [
+    ...spec.series.map((s, k) => ({ name: s.name, kind: 'series' as const, k })),
+    ...spec.refs.map((r, k) => ({ name: r.label, kind: 'ref' as const, k })),
+  ];
+  const cols = legendColumns(spec);
+  const colW = PW / cols;
+  rows.forEach((row, i) => {
+    const lx = M.left + (i % cols) * colW;
+    const y = H + 16 + Math.floor(i / cols) * LEGEND_ROW;
+    if (row.kind === 'series') {
+      const st = STYLES[row.k % STYLES.length]!;
+      entries.push(`<line x1="${r1(lx)}" y1="${y - 4}" x2="${r1(lx + 30)}" y2="${y - 4}" stroke="${st.colour}" stroke-width="2.2"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`);
+      if (spec.series[row.k]!.markers !== false) entries.push(marker(st.marker, lx + 15, y - 4, st.colour));
+    } else {
+      entries.push(`<line x1="${r1(lx)}" y1="${y - 4}" x2="${r1(lx + 30)}" y2="${y - 4}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${REF_DASHES[row.k % REF_DASHES.length]}"/>`);
+    }
+    const room = Math.floor((colW - 44) / 6.2);
+    const name = row.name.length > room ? row.name.slice(0, room - 1) + '…' : row.name;
+    entries.push(`<text x="${r1(lx + 36)}" y="${y}" fill="#111" font-size="11.5">${escapeHtml(name)}</text>`);
+  });
+  out.push(`<g class="legend">${entries.join('')}</g>`);
+  out.push('</svg>');
+  return out.join('\n');
+}
