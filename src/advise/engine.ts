@@ -112,11 +112,13 @@ export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: Loaded
   const bushing = () => (cache.bushing ??= checkBushing(c));
   const rolling = () => (cache.rolling ??= checkRolling(c));
   const journal = () => (cache.journal ??= checkJournal(c));
-  const figures = (): Figures => ({
-    bushing: bushingFigures(bushing(), c),
-    rolling: rollingFigures(rolling(), c),
-    journal: journalFigures(journal()),
-  });
+  let figs: Figures | undefined;
+  const figures = (): Figures =>
+    (figs ??= {
+      bushing: bushingFigures(bushing(), c),
+      rolling: rollingFigures(rolling(), c),
+      journal: journalFigures(journal()),
+    });
   let run: RuleRun;
   if (opts.runRules) {
     run = await opts.runRules({ case: c, duty: dutyFacts(c), bushing: bushing(), rolling: rolling(), journal: journal(), figures: figures() });
