@@ -125,6 +125,11 @@ export interface JournalOptions {
    * about 2 ms, and nothing but the report's pressure chart reads it.
    */
   pressureProfile?: boolean;
+  /**
+   * Build the calculation sheet (default true). A sweep turns it off: `sheet` is then
+   * empty; formatting its lines costs more than the design evaluation itself.
+   */
+  sheet?: boolean;
 }
 
 const entry = z.object({ value: z.number().positive(), source: z.string().min(1) });
@@ -431,7 +436,7 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
       pressureProfile.push({ angleDeg: (mesh.theta[i]! * 180) / Math.PI, pressure: sol.p[i * stride]! * scale });
   }
 
-  const sheet = buildSheet(c, chosen, crit, supply);
+  const sheet = opts.sheet === false ? [] : buildSheet(c, chosen, crit, supply);
   const pointsOut: JournalPointSummary[] = chosen.points.map((p) => ({
     share: p.share,
     load: p.load,
@@ -495,11 +500,13 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
 }
 
 /** Throw if any number in the result is NaN or infinite (fail loudly, never report them). */
-function assertFinite(v: unknown, path = 'result'): void {
+function assertFinite(v: unknown, path: () => string = () => 'result'): void {
+  // The path is built only when a number fails: building it for every number cost more
+  // than the check itself (a sweep calls this thousands of times).
   if (typeof v === 'number') {
-    if (!Number.isFinite(v)) throw new Error(`journal: internal error, ${path} is ${v}`);
-  } else if (Array.isArray(v)) v.forEach((x, k) => assertFinite(x, `${path}[${k}]`));
-  else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) assertFinite(x, `${path}.${k}`);
+    if (!Number.isFinite(v)) throw new Error(`journal: internal error, ${path()} is ${v}`);
+  } else if (Array.isArray(v)) v.forEach((x, k) => assertFinite(x, () => `${path()}[${k}]`));
+  else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) assertFinite(x, () => `${path()}.${k}`);
 }
 
 function buildSheet(c: CaseSI, e: DesignEvaluation, crit: JournalCriteria, supply: string): SheetLine[] {
