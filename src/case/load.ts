@@ -49,6 +49,10 @@ export function parseCaseText(text: string, source = '(case)'): LoadedCase {
   if (text.includes('\u0000')) {
     throw new CaseError(source, [{ field: '(file)', message: 'holds binary data; expected a YAML or JSON text file' }]);
   }
+  const depth = bracketDepth(text);
+  if (depth > MAX_DEPTH) {
+    throw new CaseError(source, [{ field: '(file)', message: `nests ${depth} levels deep; expected a case file nesting at most ${MAX_DEPTH} levels` }]);
+  }
   let raw: unknown;
   try {
     // maxAliasCount bounds alias expansion ("billion laughs"); duplicate keys are errors.
@@ -58,6 +62,26 @@ export function parseCaseText(text: string, source = '(case)'): LoadedCase {
     throw new CaseError(source, [{ field: '(file)', message: `is not valid YAML or JSON: ${msg}` }]);
   }
   return validateCase(raw, source);
+}
+
+/** A case nests four or five levels; far deeper is junk that would only exhaust the parser's stack. */
+const MAX_DEPTH = 64;
+
+/** Deepest nesting of [ and { outside quoted strings (a cheap scan before parsing). */
+function bracketDepth(text: string): number {
+  let depth = 0;
+  let max = 0;
+  let quote: string | null = null;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i]!;
+    if (quote) {
+      if (ch === '\\') i++;
+      else if (ch === quote) quote = null;
+    } else if (ch === '"' || ch === "'") quote = ch;
+    else if (ch === '[' || ch === '{') max = Math.max(max, ++depth);
+    else if (ch === ']' || ch === '}') depth = Math.max(0, depth - 1);
+  }
+  return max;
 }
 
 /** Validate an already-parsed case object. Throws CaseError listing every problem. */

@@ -184,9 +184,24 @@ export const caseFileSchema = mapping({
   ).optional(),
   bushing: mapping({
     length: quantity('length', 'positive', { max: 10, say: 'a bushing length up to 10 m' }).optional(),
-    material: z.union([text('a material id'), materialSchema], {
-      error: 'expected a material id from data/bushing-materials.json or an inline material with id, name, maxPressure, maxVelocity, maxPV, wearFactor, friction, maxTemperature, source',
-    }).optional(),
+    // A material id, or an inline row: an inline row's own field problems are reported one by one.
+    material: z
+      .unknown()
+      .transform((v, ctx): string | z.output<typeof materialSchema> => {
+        if (typeof v === 'string' && v.length > 0) return v;
+        if (v !== null && typeof v === 'object' && !Array.isArray(v)) {
+          const r = materialSchema.safeParse(v);
+          if (r.success) return r.data;
+          for (const i of r.error.issues) ctx.addIssue({ code: 'custom', message: i.message, path: i.path as (string | number)[] });
+          return z.NEVER;
+        }
+        ctx.addIssue({
+          code: 'custom',
+          message: `got ${describeInput(v)}; expected a material id from data/bushing-materials.json or an inline material with id, name, maxPressure, maxVelocity, maxPV, wearFactor, friction, maxTemperature, source`,
+        });
+        return z.NEVER;
+      })
+      .optional(),
   }).optional(),
   rolling: mapping({
     type: choice(['ball', 'roller'] as const).optional(),
