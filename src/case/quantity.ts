@@ -87,28 +87,44 @@ export function parseQuantity(value: unknown, kind: Kind): number {
     throw new QuantityError(`got ${describe(value)}; expected ${info.noun} such as ${info.examples}`);
   }
   const { text, scale } = normalise(value, kind);
-  if (/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(text)) return Number(text);
+  if (NUMBER.test(text)) return Number(text);
+  const m = /^([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.+)$/.exec(text);
+  const unreadable = () => new QuantityError(`"${value}" is not a quantity this tool can read; expected ${info.noun} such as ${info.examples}`);
+  if (!m) throw unreadable();
+  const x = Number(m[1]);
+  if (!Number.isFinite(x)) throw new QuantityError(`"${value}" is not a finite number; expected ${info.noun} such as ${info.examples}`);
+  // The unit is converted as "1 <unit>" and the number multiplied after: js-quantities then never
+  // sees extreme or subnormal scalars (it fails on some), and the factor is exact to its table.
+  // Temperatures are affine, so they alone are converted with their value.
   let q: Qty;
   try {
-    q = Qty(text);
+    q = Qty(kind === 'temperature' ? `${x} ${m[2]}` : `1 ${m[2]}`);
   } catch {
-    throw new QuantityError(`"${value}" is not a quantity this tool can read; expected ${info.noun} such as ${info.examples}`);
+    throw unreadable();
   }
-  if (!Number.isFinite(q.scalar)) throw new QuantityError(`"${value}" is not a finite number; expected ${info.noun} such as ${info.examples}`);
-  if (kind === 'viscosity' && q.isCompatible('m^2/s') && !q.isCompatible('Pa*s')) {
-    return q.to('m^2/s').scalar * KINEMATIC_TO_DYNAMIC_DENSITY;
+  try {
+    if (kind === 'viscosity' && q.isCompatible('m^2/s') && !q.isCompatible('Pa*s')) {
+      return x * q.to('m^2/s').scalar * KINEMATIC_TO_DYNAMIC_DENSITY;
+    }
+    if (kind === 'temperature' && !q.units().startsWith('temp') && q.kind() === 'temperature') {
+      throw new QuantityError(`"${value}" is a temperature difference; expected a temperature such as ${info.examples}`);
+    }
+    if (!q.isCompatible(info.unit)) {
+      const got = q.kind() ? `a ${q.kind().replace(/_/g, ' ')}` : `units of ${q.units()}`;
+      throw new QuantityError(`"${value}" is ${got}; expected ${info.noun} such as ${info.examples}`);
+    }
+    let n = kind === 'temperature' ? q.to(info.unit).scalar : x * q.to(info.unit).scalar;
+    n *= scale;
+    if (kind === 'speed') n /= 60; // internal shaft speed: rev/s
+    if (!Number.isFinite(n)) throw new QuantityError(`"${value}" is not a finite number in ${KINDS[kind].label}; expected ${info.noun} such as ${info.examples}`);
+    return n;
+  } catch (e) {
+    if (e instanceof QuantityError) throw e;
+    throw unreadable();
   }
-  if (kind === 'temperature' && !q.units().startsWith('temp') && q.kind() === 'temperature') {
-    throw new QuantityError(`"${value}" is a temperature difference; expected a temperature such as ${info.examples}`);
-  }
-  if (!q.isCompatible(info.unit)) {
-    const got = q.kind() ? `a ${q.kind().replace(/_/g, ' ')}` : `units of ${q.units()}`;
-    throw new QuantityError(`"${value}" is ${got}; expected ${info.noun} such as ${info.examples}`);
-  }
-  let n = q.to(info.unit).scalar * scale;
-  if (kind === 'speed') n /= 60; // internal shaft speed: rev/s
-  return n;
 }
+
+const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
 
 function describe(v: unknown): string {
   if (v === null) return 'null';

@@ -47,6 +47,15 @@ describe('parseQuantity: SI and US customary strings to the internal unit', () =
     expect(() => parseQuantity('3 mm', 'force')).toThrow(/is a length; expected a force/);
   });
 
+  it('reads subnormal and extreme numbers without tripping the unit library (found by the property tests)', () => {
+    expect(parseQuantity('5e-324 kN', 'force')).toBeCloseTo(5e-321, 330);
+    expect(() => parseQuantity('1e400 N', 'force')).toThrow(/not a finite number/);
+  });
+
+  it('refuses a unit without a number', () => {
+    expect(() => parseQuantity('mm', 'length')).toThrow(/not a quantity this tool can read/);
+  });
+
   it('rejects junk, NaN and infinities', () => {
     expect(() => parseQuantity('forty mm', 'length')).toThrow(/not a quantity/);
     expect(() => parseQuantity(Number.NaN, 'length')).toThrow(/finite/);
