@@ -35,7 +35,7 @@ export function withDesign(c: CaseSI, d: JournalDesign): CaseSI {
 
 /** Journal check of a fixed design, without the pressure profile (a sweep never shows it). */
 export function checkDesign(c: CaseSI, d: JournalDesign): JournalResult {
-  return checkJournal(withDesign(c, d), { pressureProfile: false });
+  return checkJournal(withDesign(c, d), { pressureProfile: false, sheet: false });
 }
 
 /** Smallest margin over the limit checks (advisory ones excluded): the design's governing margin. */

@@ -120,7 +120,7 @@ export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOpti
   const nodeDesign: number[][] = nodes.map((i) =>
     nodes.map((j) => {
       const cc = at(i, j);
-      const d = designOf(checkJournal(cc, { pressureProfile: false }), cc);
+      const d = designOf(checkJournal(cc, { pressureProfile: false, sheet: false }), cc);
       const k = keyOf(d);
       if (!seen.has(k)) {
         seen.set(k, designs.length);
