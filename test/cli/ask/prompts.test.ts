@@ -50,7 +50,7 @@ function terminal() {
     },
   });
   // Each prompt pipes into the output and ends the pipe when done; a terminal outlives them.
-  out.end = function () {
+  out.end = function (this: typeof out) {
     return this;
   } as typeof out.end;
   const key = (name: string, extra: Record<string, unknown> = {}) => inp.emit('keypress', null, { name, ...extra });
