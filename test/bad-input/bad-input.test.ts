@@ -1,6 +1,6 @@
 // The bad-input corpus (manifest.json): every entry must end with exit code 2, a message
 // naming the field (or option, file, rule), no stack trace and nothing on stdout.
-import { cpSync, copyFileSync, mkdtempSync, readFileSync } from 'node:fs';
+import { cpSync, copyFileSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -41,4 +41,26 @@ describe(`bad-input corpus (${manifest.length} inputs)`, () => {
       expect(r.stdout).toBe('');
     });
   }
+});
+
+describe('bad input never leaves an output file behind', () => {
+  const caseEntries = manifest.filter((e) => !e.args && !e.rulesDir && !e.dataPatch);
+  for (const e of caseEntries.slice(0, 12)) {
+    it(`${e.file} with --out: exit 2, no note written, no temporary file`, () => {
+      const dir = mkdtempSync(join(tmpdir(), 'shaftwise-out-'));
+      const out = join(dir, 'note.html');
+      const r = runCli(['advise', join(here, e.file), '--format', 'html', '--out', out]);
+      expect(r.code).toBe(2);
+      expect(readdirSync(dir)).toEqual([]);
+    });
+  }
+  it('a bad case does not touch an existing note even with --force', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'shaftwise-out-'));
+    const out = join(dir, 'note.html');
+    writeFileSync(out, 'previous note');
+    const r = runCli(['advise', join(here, 'unit-diameter-kg.yaml'), '--format', 'html', '--out', out, '--force']);
+    expect(r.code).toBe(2);
+    expect(readFileSync(out, 'utf8')).toBe('previous note');
+    expect(readdirSync(dir)).toEqual(['note.html']);
+  });
 });
