@@ -1,0 +1,157 @@
+import type { Assumption, BushingMaterial, CaseSI } from '../case/types.js';
+import type { CheckRecord } from '../calc/check.js';
+import { advise, type AdviceResult } from '../advise/engine.js';
+import { loadRules, type LoadedRule } from '../advise/load-rules.js';
+import { OPTIONS, type OptionName } from '../advise/rule-schema.js';
+import { bushingMaterials } from '../data/bushing.js';
+import { checkDesign, designOf } from './journal-design.js';
+import { ruleRunner } from './rule-runner.js';
+import { referencePoint, scaleCase } from './scale.js';
+
+/**
+ * Sensitivity of the advice to the inputs: each parameter is changed by −25, −10, +10 and
+ * +25 % in turn (the others at the case's values), the case advised again, and for each
+ * option its governing margin read: the smallest margin over the limit checks (advisory
+ * checks excluded) of the design found (bushing: the material chosen, or the nearest miss;
+ * rolling: the bearing chosen, or the nearest miss; journal: the design of its sweep).
+ * A flip is a change of the recommendation.
+ *
+ * Parameters: load (every duty point, radial and axial), speed (every point; an oscillating
+ * shaft's frequency), life target, oil inlet temperature (per cent of its value in °C),
+ * journal radial clearance (about the design found: its length and oil kept, only the
+ * journal check re-run) and bushing wear factor (of the material found, given to the check
+ * as an inline material with its low and high values scaled alike).
+ */
+export const STEPS = [-0.25, -0.1, 0.1, 0.25] as const;
+
+export type ParameterId = 'load' | 'speed' | 'life' | 'inletTemperature' | 'clearance' | 'wearFactor';
+
+export interface GoverningMargin {
+  /** Check id that governs (smallest margin), e.g. "wear-life"; empty when the option has no check. */
+  check: string;
+  margin: number | null;
+}
+
+export interface Variation {
+  step: number;
+  /** The parameter's value used, SI (N, rev/s, h, °C, m, m³/(N·m)). */
+  value: number;
+  recommendation: OptionName | null;
+  flip: boolean;
+  margins: Record<OptionName, GoverningMargin>;
+}
+
+export interface ParameterResult {
+  id: ParameterId;
+  label: string;
+  unit: string;
+  base: number;
+  variations: Variation[];
+  /** Largest change of any option's governing margin over the steps (for sorting the tornado). */
+  swing: number;
+}
+
+export interface SensitivityResult {
+  title: string;
+  recommendation: OptionName | null;
+  margins: Record<OptionName, GoverningMargin>;
+  parameters: ParameterResult[];
+  /** Every flip, in words. */
+  flips: string[];
+  notes: string[];
+}
+
+const minLimit = (checks: readonly CheckRecord[], advisory: readonly string[] = []): GoverningMargin => {
+  let g: GoverningMargin = { check: '', margin: null };
+  for (const k of checks) if (!k.advisory && !advisory.includes(k.id) && (g.margin === null || k.margin < g.margin)) g = { check: k.id, margin: k.margin };
+  return g;
+};
+
+/** Each option's governing margin in an advice. */
+export function governingMargins(a: AdviceResult): Record<OptionName, GoverningMargin> {
+  const pick = (o: OptionName) => a.ranking.find((r) => r.option === o)!.design;
+  const b = a.checks.bushing.materials.find((m) => m.id === pick('bushing')['material']);
+  const r = a.checks.rolling.candidates.find((k) => k.id === pick('rolling')['bearing']);
+  return {
+    bushing: b ? minLimit(b.checks) : { check: '', margin: null },
+    rolling: r ? minLimit(r.checks) : { check: '', margin: null },
+    journal: minLimit(a.checks.journal.checks, a.checks.journal.advisory),
+  };
+}
+
+export async function computeSensitivity(c: CaseSI, assumed: Assumption[], opts: { rules?: LoadedRule[] } = {}): Promise<SensitivityResult> {
+  const rules = opts.rules ?? loadRules();
+  const { run } = ruleRunner(rules);
+  const base = await advise(c, assumed, rules, { runRules: run });
+  const baseMargins = governingMargins(base);
+  const jd = designOf(base.checks.journal, c);
+
+  // The bushing material found (or nearest miss), as an inline row the check takes.
+  const matId = base.ranking.find((r) => r.option === 'bushing')!.design['material'];
+  const named = c.bushing?.material;
+  const material: BushingMaterial | undefined =
+    typeof named === 'object' ? named : bushingMaterials().find((m) => m.id === matId);
+
+  type Param = { id: ParameterId; label: string; unit: string; base: number; make: (s: number) => Promise<AdviceResult> };
+  const adv = (cc: CaseSI, journalOnly = false) =>
+    journalOnly ? advise(c, assumed, rules, { runRules: run, checks: { journal: checkDesign(c, { ...jd, radialClearance: cc.journal!.radialClearance! }) } }) : advise(cc, assumed, rules, { runRules: run });
+  const params: Param[] = [
+    { id: 'load', label: 'Load (every operating point)', unit: 'N', base: referencePoint(c).load, make: (s) => adv(scaleCase(c, 1 + s, 1)) },
+    { id: 'speed', label: c.shaft.oscillation ? 'Speed (oscillation frequency)' : 'Speed (every operating point)', unit: 'rev/s', base: referencePoint(c).speed, make: (s) => adv(scaleCase(c, 1, 1 + s)) },
+    { id: 'life', label: 'Life target', unit: 'h', base: c.life.hours, make: (s) => adv({ ...c, life: { ...c.life, hours: c.life.hours * (1 + s) } }) },
+    {
+      id: 'inletTemperature',
+      label: 'Oil inlet temperature (per cent of °C)',
+      unit: 'degC',
+      base: c.lubrication.inletTemperature,
+      make: (s) => adv({ ...c, lubrication: { ...c.lubrication, inletTemperature: c.lubrication.inletTemperature * (1 + s) } }),
+    },
+    { id: 'clearance', label: 'Journal radial clearance (design found)', unit: 'm', base: jd.radialClearance, make: (s) => adv({ ...c, journal: { radialClearance: jd.radialClearance * (1 + s) } }, true) },
+  ];
+  if (material) {
+    const k = material.wearFactor;
+    params.push({
+      id: 'wearFactor',
+      label: 'Bushing wear factor (material found)',
+      unit: 'm^2/N',
+      base: k,
+      make: (s) => {
+        const m: BushingMaterial = { ...material, wearFactor: k * (1 + s), wearFactorLow: (material.wearFactorLow ?? k / 3) * (1 + s), wearFactorHigh: (material.wearFactorHigh ?? k * 3) * (1 + s) };
+        return adv({ ...c, bushing: { ...c.bushing, material: m } });
+      },
+    });
+  }
+
+  const parameters: ParameterResult[] = [];
+  const flips: string[] = [];
+  for (const p of params) {
+    const variations: Variation[] = [];
+    let swing = 0;
+    for (const s of STEPS) {
+      const a = await p.make(s);
+      const margins = governingMargins(a);
+      for (const o of OPTIONS) {
+        const m0 = baseMargins[o].margin, m1 = margins[o].margin;
+        if (m0 !== null && m1 !== null) swing = Math.max(swing, Math.abs(m1 - m0));
+      }
+      const flip = a.recommendation !== base.recommendation;
+      if (flip) flips.push(`${p.label} ${s > 0 ? '+' : ''}${Math.round(s * 100)} %: ${base.recommendation ?? 'none feasible'} → ${a.recommendation ?? 'none feasible'}`);
+      variations.push({ step: s, value: p.base * (1 + s), recommendation: a.recommendation, flip, margins });
+    }
+    parameters.push({ id: p.id, label: p.label, unit: p.unit, base: p.base, variations, swing });
+  }
+  parameters.sort((x, y) => y.swing - x.swing || params.findIndex((p) => p.id === x.id) - params.findIndex((p) => p.id === y.id));
+  return {
+    title: c.title,
+    recommendation: base.recommendation,
+    margins: baseMargins,
+    parameters,
+    flips,
+    notes: [
+      'Each parameter is changed alone; the others keep the case\'s values. Margins are the smallest limit-check margin of the design found: (limit − value)/limit, positive passes.',
+      'Load, speed, life target and inlet temperature re-run all three checks (the bushing and rolling bearing are re-sized and the journal design sweep re-run).',
+      `Clearance: the journal design found (${jd.label}) with only its radial clearance changed. Wear factor: the bushing material found${material ? ` (${material.name})` : ''}, alone, with its wear factor changed.`,
+      'Inlet temperature is changed by per cent of its value in °C.',
+    ],
+  };
+}
