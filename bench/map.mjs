@@ -1,0 +1,101 @@
+// Selection-map benchmark (run on demand, not part of the test suite). Build first: npm run build
+// Usage: node bench/map.mjs [runs] [case]
+// Prints: whole-process time of a 60×60 map (SVG out) against bare `node -e 0`, per-point
+// costs of each part in-process, and the agreement of the map's winners with full advise()
+// (journal design sweep at every point) on a 12×12 sub-grid.
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { loadCaseFile } from '../dist/case/load.js';
+import { advise } from '../dist/advise/engine.js';
+import { loadRules } from '../dist/advise/load-rules.js';
+import { checkBushing } from '../dist/calc/bushing/index.js';
+import { checkRolling } from '../dist/calc/rolling/index.js';
+import { checkJournal } from '../dist/calc/journal/index.js';
+import { computeMap } from '../dist/explore/map.js';
+import { ruleRunner } from '../dist/explore/rule-runner.js';
+import { checkDesign, designOf } from '../dist/explore/journal-design.js';
+import { scaleCase } from '../dist/explore/scale.js';
+
+const runs = Number(process.argv[2] ?? 5) || 5;
+const file = process.argv[3] ?? 'examples/irrigation-pump-lineshaft.yaml';
+const root = fileURLToPath(new URL('..', import.meta.url));
+const main = join(root, 'dist/bundle/shaftwise.mjs');
+const out = mkdtempSync(join(tmpdir(), 'shaftwise-bench-'));
+
+function median(cmd, args) {
+  const t = [];
+  for (let i = 0; i < runs; i++) {
+    const t0 = process.hrtime.bigint();
+    const r = spawnSync(cmd, args, { cwd: root, stdio: 'ignore' });
+    if (r.status !== 0) throw new Error(`${args.join(' ')} exited ${r.status}`);
+    t.push(Number(process.hrtime.bigint() - t0) / 1e6);
+  }
+  t.sort((a, b) => a - b);
+  return t[Math.floor(t.length / 2)];
+}
+median(process.execPath, ['-e', '0']);
+const bare = median(process.execPath, ['-e', '0']);
+const map60 = median(process.execPath, [main, 'map', file, '--grid', '60', '--out', join(out, 'm.svg'), '--force']);
+const adv = median(process.execPath, [main, 'advise', file]);
+console.log(`== whole process, median of ${runs} ==`);
+console.log(`node -e 0:                 ${bare.toFixed(0)} ms`);
+console.log(`shaftwise advise:          ${adv.toFixed(0)} ms  (${(adv / bare).toFixed(1)}x)`);
+console.log(`shaftwise map --grid 60:   ${map60.toFixed(0)} ms  (${(map60 / bare).toFixed(1)}x; budget 3000 ms)`);
+
+// Per-point costs, in-process, warm.
+const l = loadCaseFile(join(root, file));
+const c = l.case;
+const rules = loadRules();
+const now = () => performance.now();
+const pts = [];
+for (let i = 0; i < 20; i++) for (let j = 0; j < 20; j++) pts.push(scaleCase(c, 0.1 * 100 ** (i / 19), 0.1 * 100 ** (j / 19)));
+const per = (label, f) => {
+  for (const p of pts.slice(0, 50)) f(p);
+  const t = now();
+  for (const p of pts) f(p);
+  console.log(`${label.padEnd(44)} ${(((now() - t) / pts.length) * 1000).toFixed(0).padStart(6)} µs/point`);
+};
+const perAsync = async (label, f) => {
+  for (const p of pts.slice(0, 20)) await f(p);
+  const t = now();
+  for (const p of pts) await f(p);
+  console.log(`${label.padEnd(44)} ${(((now() - t) / pts.length) * 1000).toFixed(0).padStart(6)} µs/point`);
+};
+console.log(`\n== per-point costs over ${pts.length} points (0.1x..10x load and speed) ==`);
+const d = designOf(checkJournal(c), c);
+per('checkBushing', (p) => checkBushing(p));
+per('checkRolling', (p) => checkRolling(p));
+per('checkJournal, full design sweep', (p) => checkJournal(p, { pressureProfile: false, sheet: false }));
+per('checkJournal, one fixed design', (p) => checkDesign(p, d));
+const bs = pts.map((p) => ({ bushing: checkBushing(p), rolling: checkRolling(p), journal: checkDesign(p, d) }));
+let k = 0;
+await perAsync('advise, fresh Engine (checks given)', (p) => advise(p, [], rules, { checks: bs[k++ % bs.length] }));
+const plain = ruleRunner(rules);
+k = 0;
+await perAsync('advise, one Engine reused (checks given)', (p) => advise(p, [], rules, { checks: bs[k++ % bs.length], runRules: plain.run }));
+const memo = ruleRunner(rules, { memo: true });
+k = 0;
+await perAsync('advise, reused Engine + memo (checks given)', (p) => advise(p, [], rules, { checks: bs[k++ % bs.length], runRules: memo.run }));
+console.log(`memo: ${memo.stats.runs} engine runs, ${memo.stats.hits} hits`);
+await perAsync('advise, full (what a naive map would do)', (p) => advise(p, [], rules));
+
+// In-process 60x60 and agreement with full advise on a 12x12 sub-grid.
+let t = now();
+const m = await computeMap(c, l.assumed, { grid: 60 });
+console.log(`\n== computeMap 60x60 in-process (warm tables): ${(now() - t).toFixed(0)} ms, ${m.journal.designs.length} journal designs ==`);
+t = now();
+const m12 = await computeMap(c, l.assumed, { grid: 12 });
+let same = 0;
+const differ = [];
+for (let i = 0; i < 12; i++)
+  for (let j = 0; j < 12; j++) {
+    const a = await advise(scaleCase(c, m12.loads[i] / m12.reference.load, m12.speeds[j] / m12.reference.speed), [], rules);
+    if (a.recommendation === m12.cells[i][j].winner) same++;
+    else differ.push(`${Math.round(m12.loads[i])} N ${Math.round(m12.speeds[j] * 60)} r/min: map ${m12.cells[i][j].winner}, full ${a.recommendation}`);
+  }
+console.log(`agreement with full advise() on 12x12: ${same}/144 cells (${(now() - t).toFixed(0)} ms)`);
+for (const x of differ) console.log(`  differs: ${x}`);
+rmSync(out, { recursive: true, force: true });
