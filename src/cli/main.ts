@@ -7,6 +7,9 @@ import { EXIT, UsageError } from './errors.js';
 import { registerCheck } from './commands/check.js';
 import { registerAdvise } from './commands/advise.js';
 import { registerAsk } from './ask/index.js';
+import { registerMap } from './commands/map.js';
+import { registerSensitivity } from './commands/sensitivity.js';
+import { registerBatch } from './commands/batch.js';
 
 const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
 
@@ -46,8 +49,18 @@ const program = new Command()
 
 registerCheck(program);
 registerAdvise(program);
+registerMap(program);
+registerSensitivity(program);
+registerBatch(program);
 registerAsk(program, {
   advise: async (file) => (await import('./advise.js')).runAdvise(file, { format: 'text', units: 'SI', explain: false }),
+  // At the end of the questionnaire: the HTML note beside the case file, never over an existing one.
+  offerNote: async (file) => {
+    const { writeNote } = await import('./advise.js');
+    const out = file.replace(/\.(ya?ml|json)$/i, '') + '.note.html';
+    await writeNote(file, out, 'html', false);
+    process.stdout.write(`Design-review note written to ${out}\n`);
+  },
 });
 
 try {
