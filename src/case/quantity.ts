@@ -1,4 +1,12 @@
-import Qty from 'js-quantities';
+import { createRequire } from 'node:module';
+import type QtyType from 'js-quantities';
+
+type Qty = QtyType;
+// js-quantities takes ~30 ms to load and ~10 ms more on first use: it is loaded only when a
+// spelling is not in the common-unit table below (synchronously, as parsing is synchronous).
+const requireLib = createRequire(import.meta.url);
+let lib: typeof QtyType | undefined;
+const Qty = (text: string): Qty => (lib ??= requireLib('js-quantities') as typeof QtyType)(text);
 
 /**
  * Quantity parsing at the boundary: "40 mm", "720 lbf", "1500 rpm", "104 degF",
@@ -93,6 +101,13 @@ export function parseQuantity(value: unknown, kind: Kind): number {
   if (!m) throw unreadable();
   const x = Number(m[1]);
   if (!Number.isFinite(x)) throw new QuantityError(`"${value}" is not a finite number; expected ${info.noun} such as ${info.examples}`);
+  const fast = kind === 'temperature' ? undefined : COMMON[kind][m[2]!];
+  if (fast !== undefined) {
+    const n = x * fast * scale;
+    if (!Number.isFinite(n)) throw new QuantityError(`"${value}" is not a finite number in ${KINDS[kind].label}; expected ${info.noun} such as ${info.examples}`);
+    return n;
+  }
+  if (kind === 'temperature' && m[2]! in TEMPERATURES) return TEMPERATURES[m[2]!]!(x);
   // The unit is converted as "1 <unit>" and the number multiplied after: js-quantities then never
   // sees extreme or subnormal scalars (it fails on some), and the factor is exact to its table.
   // Temperatures are affine, so they alone are converted with their value.
@@ -123,6 +138,42 @@ export function parseQuantity(value: unknown, kind: Kind): number {
     throw unreadable();
   }
 }
+
+const IN = 0.0254;
+const LBF = 4.4482216152605;
+const PSI = 6894.757293168;
+const FT_MIN = 0.3048 / 60;
+
+/**
+ * Factors to the internal unit for the spellings people write most, exact by definition
+ * (NIST SP 811, 2008, Appendix B): js-quantities builds its unit tables on first use, which
+ * costs more start-up than the whole calculation. Every factor is checked against
+ * js-quantities in test/case/quantity.test.ts; any other spelling goes to the library.
+ * Keys are as normalise() leaves them (revolutions already in rpm).
+ */
+const COMMON: Record<Exclude<Kind, 'temperature'>, Record<string, number>> = {
+  length: { m: 1, mm: 1e-3, cm: 1e-2, um: 1e-6, in: IN, ft: 0.3048 },
+  force: { N: 1, kN: 1e3, MN: 1e6, lbf: LBF },
+  speed: { rpm: 1 / 60 },
+  velocity: { 'm/s': 1, 'mm/s': 1e-3, 'ft/min': FT_MIN },
+  time: { h: 1, min: 1 / 60, s: 1 / 3600 },
+  viscosity: { 'Pa*s': 1, 'mPa*s': 1e-3, cP: 1e-3, cSt: 1e-6 * KINEMATIC_TO_DYNAMIC_DENSITY, 'mm^2/s': 1e-6 * KINEMATIC_TO_DYNAMIC_DENSITY },
+  pressure: { Pa: 1, kPa: 1e3, MPa: 1e6, GPa: 1e9, bar: 1e5, psi: PSI },
+  pv: { 'Pa*m/s': 1, 'MPa*m/s': 1e6, 'psi*ft/min': PSI * FT_MIN },
+  angle: { rad: 1, deg: Math.PI / 180 },
+  frequency: { Hz: 1, '1/s': 1 },
+  wearFactor: { 'm^2/N': 1, 'm^3/N*m': 1, 'mm^3/N*m': 1e-9, 'in^3*min/lbf*ft*h': (IN ** 3 * 60) / (LBF * 0.3048 * 3600) },
+};
+
+/** Absolute temperatures to °C (exact). */
+const TEMPERATURES: Record<string, (x: number) => number> = {
+  tempC: (x) => x,
+  tempF: (x) => (x - 32) / 1.8,
+  tempK: (x) => x - 273.15,
+};
+
+/** The fast-path table, for the test that checks it against js-quantities. */
+export const COMMON_UNITS = COMMON;
 
 const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
 

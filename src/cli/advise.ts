@@ -1,5 +1,5 @@
 import { loadCaseFile } from '../case/load.js';
-import { CAUTION, assumptionsBlock, warningsBlock } from '../report/text.js';
+import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
 import type { UnitSystem } from '../report/units.js';
 import type { OutputOptions } from './check.js';
 import { UsageError } from './errors.js';
@@ -33,7 +33,9 @@ export async function runAdvise(file: string, opts: (OutputOptions | { format: A
   if (opts.out !== undefined && opts.out.trim() === '') throw new UsageError('--out: got an empty file name; expected a file path');
   const loaded = loadCaseFile(file);
   const { advise } = await import('../advise/engine.js');
-  const a = await advise(loaded.case, loaded.assumed);
+  // The pressure profile (one more Reynolds solve) is drawn in the note and kept in JSON; text has no use for it.
+  const checks = format === 'text' ? { journal: (await import('../calc/journal/index.js')).checkJournal(loaded.case, { pressureProfile: false }) } : {};
+  const a = await advise(loaded.case, loaded.assumed, undefined, { checks });
   if (note) {
     const { renderNote } = await import('../report/note/index.js');
     const text = await renderNote(loaded, a, format, { units: opts.units, caseFile: file, ...(opts.now ? { now: opts.now } : {}) });
@@ -47,6 +49,7 @@ export async function runAdvise(file: string, opts: (OutputOptions | { format: A
     return JSON.stringify(opts.explain ? { ...rest, case: loaded.case, rules } : { ...rest, case: loaded.case }, null, 2);
   }
   const { adviceText } = await import('../report/advice-text.js');
+  await useColour();
   return [loaded.case.title, adviceText(a, opts.units, opts.explain), assumptionsBlock(a.assumed), warningsBlock(a.warnings), CAUTION].filter(Boolean).join('\n\n');
 }
 

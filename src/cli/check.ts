@@ -1,6 +1,6 @@
 import { loadCaseFile, type LoadedCase } from '../case/load.js';
 import type { UnitSystem } from '../report/units.js';
-import { CAUTION, assumptionsBlock, warningsBlock } from '../report/text.js';
+import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
 import { UsageError } from './errors.js';
 
 export type Format = 'text' | 'json';
@@ -27,6 +27,7 @@ export async function runCheck(name: string, file: string, opts: OutputOptions):
     throw new UsageError(`check: got "${name}"; expected one of: ${CHECKS.join(', ')}`);
   }
   const loaded = loadCaseFile(file);
+  if (opts.format === 'text') await useColour();
   const { json, text } = await computeCheck(name as CheckName, loaded, opts);
   return opts.format === 'json' ? JSON.stringify(json, null, 2) : text;
 }

@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 import { readFileSync } from 'node:fs';
 import { Command, CommanderError } from 'commander';
+import { z } from 'zod';
 import { CaseError } from '../case/load.js';
 import { DataError } from '../data/load.js';
 import { EXIT, UsageError } from './errors.js';
@@ -10,6 +11,10 @@ import { registerAsk } from './ask/index.js';
 import { registerMap } from './commands/map.js';
 import { registerSensitivity } from './commands/sensitivity.js';
 import { registerBatch } from './commands/batch.js';
+
+// A one-shot process validates each schema a few times: zod's compiled fast path costs more
+// to build than it saves here, so it is turned off (same results, measured in bench/startup.mjs).
+z.config({ jitless: true });
 
 const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
 

@@ -1,11 +1,34 @@
-import { Chalk } from 'chalk';
 import type { CheckRecord } from '../calc/check.js';
 import type { Assumption } from '../case/types.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 
-/** Colour only on a terminal and never under NO_COLOR; the marks read the same without it. */
-export const paint = new Chalk({ level: process.env.NO_COLOR !== undefined && process.env.NO_COLOR !== '' ? 0 : process.stdout.isTTY ? 1 : 0 });
+/** The few styles the reports use; the marks and words read the same without them. */
+interface Painter {
+  bold: (s: string) => string;
+  green: (s: string) => string;
+  yellow: (s: string) => string;
+  red: { bold: (s: string) => string };
+}
+const plainText = (s: string) => s;
+const PLAIN: Painter = { bold: plainText, green: plainText, yellow: plainText, red: { bold: plainText } };
+
+/** Plain until useColour() finds a terminal; reports call it synchronously either way. */
+export let paint: Painter = PLAIN;
+
+/**
+ * Colour only on a terminal and never under NO_COLOR. chalk is loaded only then, so piped
+ * and scripted runs (and the start-up benchmark) do not pay for it.
+ */
+export async function useColour(stream: { isTTY?: boolean } = process.stdout): Promise<void> {
+  const noColour = process.env.NO_COLOR !== undefined && process.env.NO_COLOR !== '';
+  if (noColour || !stream.isTTY) {
+    paint = PLAIN;
+    return;
+  }
+  const { Chalk } = await import('chalk');
+  paint = new Chalk({ level: 1 });
+}
 
 export const CAUTION =
   'Concept-stage estimate: confirm with the supplier\'s data and by test. Bearing failure can injure people: ' +

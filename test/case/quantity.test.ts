@@ -63,3 +63,27 @@ describe('parseQuantity: SI and US customary strings to the internal unit', () =
     expect(() => parseQuantity(true, 'force')).toThrow(/expected a force/);
   });
 });
+
+describe('the common-unit fast path agrees with js-quantities', () => {
+  it('every factor equals the library conversion to 1e-6 (the library rounds lbf and psi to 7 figures)', async () => {
+    const { COMMON_UNITS, KINDS } = await import('../../src/case/quantity.js');
+    const Qty = (await import('js-quantities')).default;
+    let n = 0;
+    for (const [kind, table] of Object.entries(COMMON_UNITS)) {
+      for (const [unit, factor] of Object.entries(table)) {
+        const target = KINDS[kind as keyof typeof KINDS].unit;
+        let lib: number;
+        if (kind === 'viscosity' && (unit === 'cSt' || unit === 'mm^2/s')) lib = Qty(`1 ${unit}`).to('m^2/s').scalar * 870;
+        else lib = Qty(`1 ${unit}`).to(target).scalar;
+        if (kind === 'speed') lib /= 60; // internal rev/s from rpm
+        expect(Math.abs(factor / lib - 1), `${kind}: ${unit}`).toBeLessThan(1e-6);
+        n++;
+      }
+    }
+    expect(n).toBeGreaterThan(30);
+  });
+  it('absolute temperatures: 104 degF = 40 degC, 313.15 K = 40 degC, as the library gives', () => {
+    expect(parseQuantity('104 degF', 'temperature')).toBeCloseTo(40, 12);
+    expect(parseQuantity('313.15 K', 'temperature')).toBeCloseTo(40, 12);
+  });
+});

@@ -366,6 +366,18 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
       reason: 'ISO VG grades of data/lubricants.json, the one giving the largest film margin within the temperature limit',
     });
 
+  // No oil supply: no design can hold a film, so none is optimised; one representative
+  // geometry (the longest allowed, c/r = 0.001, common practice) shows the numbers.
+  if ((supply === 'none' || supply === 'grease') && (lengths.length > 1 || clearances.length > 1)) {
+    lengths = [Math.max(...lengths)];
+    if (c.journal?.radialClearance === undefined && c.journal?.clearanceRatio === undefined) clearances = [0.001 * r];
+    for (const a of assumed) if (a.value === 'chosen from the sweep') a.value = 'one representative design, no sweep';
+    assumed.push({
+      field: 'journal.design',
+      value: `L = ${fmt(lengths[0]!)} m, c = ${fmt(clearances[0]!)} m`,
+      reason: `with ${supply === 'none' ? 'no lubricant supply' : 'grease'} no design keeps a full film, so the design is not optimised: the longest allowed length and the common-practice clearance ratio 0.001 show the numbers`,
+    });
+  }
   const candidates: Candidate[] = [];
   for (const L of lengths)
     for (const cl of clearances)

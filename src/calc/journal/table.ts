@@ -323,7 +323,8 @@ export function tableFor(lengthToDiameter: number): JournalTable {
   const key = Number(quantiseLengthToDiameter(lengthToDiameter).toFixed(6));
   const hit = cache.get(key);
   if (hit) return hit;
-  const t = buildTable(key);
+  const seeded = seeds.get(key);
+  const t = seeded ? tableFromRows(key, seeded, defaultMesh()) : buildTable(key);
   if (cache.size >= MAX_CACHED) {
     const first = cache.keys().next();
     if (!first.done) cache.delete(first.value);
@@ -338,14 +339,17 @@ export function tableFor(lengthToDiameter: number): JournalTable {
  * 40–90 ms per L/D to solve them again. Seeded tables never replace one already cached.
  */
 export function seedTables(tables: readonly { lengthToDiameter: number; rows: readonly DimensionlessPerformance[] }[]): void {
-  const mesh = makeMesh(DEFAULT_MESH.nTheta, DEFAULT_MESH.nZeta, DEFAULT_MESH.stretch);
-  for (const t of tables) {
-    const key = Number(quantiseLengthToDiameter(t.lengthToDiameter).toFixed(6));
-    if (!cache.has(key) && cache.size < MAX_CACHED) cache.set(key, tableFromRows(key, t.rows, mesh));
-  }
+  // Only the rows are kept; a table is made from them when first asked for (most runs use one or a few L/D).
+  for (const t of tables) seeds.set(Number(quantiseLengthToDiameter(t.lengthToDiameter).toFixed(6)), t.rows);
 }
 
-/** Empty the table cache (for benchmarks). */
+const seeds = new Map<number, readonly DimensionlessPerformance[]>();
+
+let mesh0: Mesh | undefined;
+const defaultMesh = (): Mesh => (mesh0 ??= makeMesh(DEFAULT_MESH.nTheta, DEFAULT_MESH.nZeta, DEFAULT_MESH.stretch));
+
+/** Empty the table cache and the seeds (for benchmarks: the next tables are solved afresh). */
 export function clearTableCache(): void {
   cache.clear();
+  seeds.clear();
 }
