@@ -7,6 +7,7 @@ import type { RollingResult } from '../calc/rolling/types.js';
 import { checkJournal, type JournalResult } from '../calc/journal/index.js';
 import { bushingFigures, dutyFacts, journalFigures, rollingFigures, type Figures, type OptionFigures } from './facts.js';
 import { loadRules, type LoadedRule } from './load-rules.js';
+import { resolvePath } from './path.js';
 import { OPTIONS, type Condition, type OptionName, type leafSchema } from './rule-schema.js';
 import type { z } from 'zod';
 
@@ -123,7 +124,7 @@ export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: Loaded
   if (opts.runRules) {
     run = await opts.runRules({ case: c, duty: dutyFacts(c), bushing: bushing(), rolling: rolling(), journal: journal(), figures: figures() });
   } else {
-    const engine = new Engine([], { allowUndefinedFacts: true });
+    const engine = new Engine([], { allowUndefinedFacts: true, pathResolver: resolvePath });
     engine.addFact('case', c);
     engine.addFact('duty', dutyFacts(c));
     engine.addFact('bushing', () => bushing(), { cache: true });

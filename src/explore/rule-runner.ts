@@ -1,3 +1,4 @@
+import { resolvePath, STEP } from '../advise/path.js';
 import { Engine } from 'json-rules-engine';
 import type { RuleFacts, RuleRun } from '../advise/engine.js';
 import type { LoadedRule } from '../advise/load-rules.js';
@@ -30,17 +31,7 @@ export interface RuleRunner {
   stats: { runs: number; hits: number };
 }
 
-const STEP = /\.([A-Za-z0-9_]+)|\[(\d+)\]/g;
-
-/** Resolve a simple JSONPath ("$.a.b[0]") the way jsonpath-plus does for such paths (wrap: false). */
-export function resolvePath(value: unknown, path: string): unknown {
-  let o: unknown = value;
-  for (const m of path.matchAll(STEP)) {
-    if (o === null || o === undefined || typeof o !== 'object') return undefined;
-    o = (o as Record<string, unknown>)[m[1] ?? m[2]!];
-  }
-  return o;
-}
+export { resolvePath };
 
 interface Leaf {
   fact: string;
