@@ -97,6 +97,8 @@ export interface AdviseOptions {
    * many points). It must return what Engine.run returns for the same rules and facts.
    */
   runRules?: (facts: RuleFacts) => Promise<RuleRun>;
+  /** false: leave `rules` (the per-rule trace for --explain) empty; a sweep has no use for it. */
+  traces?: boolean;
 }
 
 /** Fixed order for ties: the simpler and cheaper support first (common practice). */
@@ -136,7 +138,7 @@ export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: Loaded
   }
   const fired = new Set(run.results.map((r) => r.name));
   const byName = new Map<string, RuleResult>([...run.results, ...run.failureResults].map((r) => [r.name, r]));
-  const traces: RuleTrace[] = rules.map((r) => ({
+  const traces: RuleTrace[] = opts.traces === false ? [] : rules.map((r) => ({
     rule: r.name,
     file: r.file,
     fired: fired.has(r.name),

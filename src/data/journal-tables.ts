@@ -35,9 +35,10 @@ const FIELDS: (keyof DimensionlessPerformance)[] = [
 const cached = new Map<string, ShippedTables>();
 
 export function shippedJournalTables(): ShippedTables {
-  const url = new URL('journal-tables.json', dataDir());
-  const hit = cached.get(url.href);
+  const dir = dataDir();
+  const hit = cached.get(dir.href);
   if (hit) return hit;
+  const url = new URL('journal-tables.json', dir);
   const file = 'data/journal-tables.json';
   let t: ShippedTables;
   try {
@@ -58,6 +59,6 @@ export function shippedJournalTables(): ShippedTables {
       }
     });
   });
-  cached.set(url.href, t);
+  cached.set(dir.href, t);
   return t;
 }

@@ -21,8 +21,13 @@ export class DataError extends Error {
  */
 export function dataDir(): URL {
   const dir = process.env.SHAFTWISE_DATA_DIR;
-  return dir ? pathToFileURL(dir.endsWith('/') ? dir : `${dir}/`) : new URL('../../data/', import.meta.url);
+  if (resolved && resolved.env === dir) return resolved.url;
+  const url = dir ? pathToFileURL(dir.endsWith('/') ? dir : `${dir}/`) : new URL('../../data/', import.meta.url);
+  resolved = { env: dir, url };
+  return url;
 }
+// Sweeps call the loaders thousands of times: the folder is resolved once per setting.
+let resolved: { env: string | undefined; url: URL } | undefined;
 const cache = new Map<string, unknown>();
 
 /**
@@ -32,9 +37,11 @@ const cache = new Map<string, unknown>();
  * someone's own rows and is validated on every read.
  */
 export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
-  const url = new URL(file, dataDir());
-  const hit = cache.get(url.href);
+  const dir = dataDir();
+  const key = `${dir.href}${file}`;
+  const hit = cache.get(key);
   if (hit !== undefined) return hit as T;
+  const url = new URL(file, dir);
   let raw: unknown;
   try {
     raw = JSON.parse(readFileSync(url, 'utf8'));
@@ -42,7 +49,7 @@ export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
     throw new DataError(`data/${file}: cannot be read as JSON (${(e as Error).message})`);
   }
   if (!process.env.SHAFTWISE_DATA_DIR) {
-    cache.set(url.href, raw);
+    cache.set(key, raw);
     return raw as T;
   }
   const parsed = schema.safeParse(raw);
@@ -52,7 +59,7 @@ export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
       `data/${file}: field ${issue.path.join('.') || '(root)'}: ${issue.message}`,
     );
   }
-  cache.set(url.href, parsed.data);
+  cache.set(key, parsed.data);
   return parsed.data;
 }
 

@@ -81,9 +81,10 @@ const LENGTH_STEP = 1e-3;
  * Method: mean pressure, PV and sliding speed against the material's limits; Archard wear at
  * the most loaded line with motion and environment multipliers, summed over the duty points;
  * the shortest length meeting pressure, PV and the wear life; a lumped temperature rise.
- * See ./formulas.ts for each equation and its source.
+ * See ./formulas.ts for each equation and its source. `sheet: false` skips the calculation
+ * sheet's text (sweeps evaluate thousands of points).
  */
-export function checkBushing(c: CaseSI): BushingResult {
+export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): BushingResult {
   const factors = bushingFactors();
   const assumed: Assumption[] = [];
   const warnings: string[] = [];
@@ -136,7 +137,7 @@ export function checkBushing(c: CaseSI): BushingResult {
     feasible: best !== undefined,
     assumed,
     warnings,
-    sheet: shown ? sheetFor(c, shown, points) : [],
+    sheet: shown && opts.sheet !== false ? sheetFor(c, shown, points) : [],
   };
 }
 

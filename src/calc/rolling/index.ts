@@ -41,7 +41,8 @@ export * from './speed.js';
  * dimensions. Sources: ISO 281:2007, ISO 76, ISO 15 (see each module), common
  * practice where said.
  */
-export function checkRolling(c: CaseSI): RollingResult {
+/** `sheet: false` skips the calculation sheet's text (sweeps evaluate thousands of points). */
+export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): RollingResult {
   const assumed: Assumption[] = [];
   const warnings: string[] = [];
   const warn = (w: string): void => {
@@ -223,7 +224,7 @@ export function checkRolling(c: CaseSI): RollingResult {
     equivalentLoad !== null ? requiredDynamicRating(equivalentLoad, meanSpeed, c.life.hours, lifeExponent(leadType), rel.a1) : null;
   if (!(c.life.hours > 0)) warn('no life target (life.hours ≤ 0): the life check is left out');
 
-  const sheet = lead ? sheetFor(lead, ctx, meanSpeed) : [];
+  const sheet = lead && opts.sheet !== false ? sheetFor(lead, ctx, meanSpeed) : [];
   return {
     option: 'rolling',
     equivalentLoad,
