@@ -86,14 +86,15 @@ export function aIso(type: RollingType, kappa: number, eCCuP: number): AIsoResul
 }
 
 /**
- * Fatigue load limit Cu where no supplier value is given, N (common practice / from
- * memory, as listed in /work/shared/reference/published-values.md):
- *   Cu ≈ C0/22 (ball), C0/8.2 (roller) for dm ≤ 100 mm,
- *   times (100/dm)^0.5 for dm > 100 mm (size correction, from memory).
- * C0 basic static load rating, N; dm pitch diameter, m.
+ * Fatigue load limit Cu where no supplier value is given, N (ISO 281:2007 Annex B, from
+ * memory; dm ≤ 100 mm ratios as listed in /work/shared/reference/published-values.md):
+ *   ball:   Cu ≈ C0/22                 for dm ≤ 100 mm, C0/22·(100/dm)^0.5  for dm > 100 mm
+ *   roller: Cu ≈ C0/8.2                for dm ≤ 100 mm, C0/8.2·(100/dm)^0.3 for dm > 100 mm
+ * C0 basic static load rating, N; dm pitch diameter, m (the formula's dm in mm).
  */
 export function estimatedFatigueLimit(type: RollingType, C0: number, dm: number): number {
   const base = type === 'ball' ? C0 / 22 : C0 / 8.2;
   const dmMm = dm * 1000;
-  return dmMm > 100 ? base * Math.sqrt(100 / dmMm) : base;
+  const sizeExponent = type === 'ball' ? 0.5 : 0.3;
+  return dmMm > 100 ? base * Math.pow(100 / dmMm, sizeExponent) : base;
 }

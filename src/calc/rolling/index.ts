@@ -174,8 +174,8 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
   if (specs.some((s) => s.fatigueLimitEstimated)) {
     assumed.push({
       field: 'rolling.fatigueLimit',
-      value: 'Cu = C0/22 (ball), C0/8.2 (roller), × (100/dm)^0.5 above dm = 100 mm',
-      reason: 'no supplier fatigue load limit; the usual approximation is taken (from memory, as in the shared reference)',
+      value: 'Cu = C0/22 (ball), C0/8.2 (roller); above dm = 100 mm × (100/dm)^0.5 (ball), × (100/dm)^0.3 (roller)',
+      reason: 'no supplier fatigue load limit; the approximation of ISO 281:2007 Annex B is taken (from memory)',
     });
   }
 

@@ -107,12 +107,23 @@ describe('rated viscosity ν1 (ISO 281:2007, from memory)', () => {
   });
 });
 
-describe('fatigue load limit estimate (from memory: Cu ≈ C0/22 ball, C0/8.2 roller)', () => {
+describe('fatigue load limit estimate (ISO 281:2007 Annex B, from memory: Cu ≈ C0/22 ball, C0/8.2 roller)', () => {
   it('dm ≤ 100 mm: plain ratios', () => {
     expect(estimatedFatigueLimit('ball', 22000, 0.06)).toBeCloseTo(1000, 9);
     expect(estimatedFatigueLimit('roller', 8200, 0.06)).toBeCloseTo(1000, 9);
   });
   it('dm = 144 mm: times (100/144)^0.5 = 0.8333', () => {
     expect(estimatedFatigueLimit('ball', 22000, 0.144)).toBeCloseTo(1000 / 1.2, 6);
+  });
+  // Source: ISO 281:2007 Annex B, from memory — roller bearings above dm = 100 mm:
+  // Cu = C0/8.2·(100/dm)^0.3. Worked by hand: C0 = 8200 N, dm = 200 mm:
+  // (100/200)^0.3 = 1/2^0.3 = 1/1.231144 = 0.812252 → Cu = 1000 N·0.812252 = 812.252 N
+  // (the ball exponent 0.5 would give 707.107 N).
+  it('roller, dm = 200 mm: times (100/200)^0.3 = 0.812252 → 812.252 N', () => {
+    expect(estimatedFatigueLimit('roller', 8200, 0.2)).toBeCloseTo(812.252, 2);
+  });
+  // Same formula at dm = 144 mm: ln(100/144) = −0.364643, × 0.3 = −0.109393, exp(−0.109393) = 1 − 0.109393 + 0.005983 − 0.000218 + 0.000006 = 0.896378.
+  it('roller, dm = 144 mm: times (100/144)^0.3 = 0.896378 (not the ball factor 0.8333)', () => {
+    expect(estimatedFatigueLimit('roller', 8200, 0.144)).toBeCloseTo(896.378, 2);
   });
 });
