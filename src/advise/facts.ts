@@ -72,7 +72,7 @@ export interface OptionFigures {
   lifeHours: number | null;
   /** Life over the target (null as above). */
   lifeRatio: number | null;
-  /** Friction power at the governing point, W. */
+  /** Time-weighted mean friction power over the duty, W (the same measure for all three). */
   frictionPower: number | null;
   /** Axial length and outside diameter the support takes, m. */
   length: number | null;
@@ -88,15 +88,15 @@ const failing = (checks: CheckRecord[], advisory: string[] = []) =>
 const smallestMargin = (checks: CheckRecord[]) => Math.min(...checks.filter((k) => !k.advisory).map((k) => k.margin));
 
 export function bushingFigures(r: BushingResult, c: CaseSI): OptionFigures {
-  // Best, or the nearest miss: the material with the largest smallest margin.
-  const m = r.materials.find((x) => x.id === r.best) ?? [...r.materials].sort((a, b) => smallestMargin(b.checks) - smallestMargin(a.checks))[0];
+  // Best, or the nearest miss (the check's own choice, so sheet, charts and advice show one material).
+  const m = r.materials.find((x) => x.id === r.shown);
   if (!m) return { feasible: false, design: {}, lifeHours: null, lifeRatio: null, frictionPower: null, length: null, outerDiameter: null, failed: [], why: r.warnings };
   return {
     feasible: r.feasible,
     design: { material: m.id, name: m.name, length: m.length, outerDiameter: m.outerDiameter },
     lifeHours: m.lifeHours,
     lifeRatio: m.lifeHours / c.life.hours,
-    frictionPower: m.frictionPower,
+    frictionPower: m.meanFrictionPower,
     length: m.length,
     outerDiameter: m.outerDiameter,
     failed: r.feasible ? [] : failing(m.checks),
@@ -125,7 +125,7 @@ export function rollingFigures(r: RollingResult, c: CaseSI): OptionFigures {
     length: k.width,
     outerDiameter: k.outerDiameter,
     failed: r.feasible ? [] : failing(k.checks),
-    why: r.feasible ? [] : [...k.exclusions, ...r.warnings],
+    why: r.feasible ? [] : [...k.exclusions, ...failing(k.checks).map((x) => `fails: ${x.label}`)],
   };
 }
 
@@ -136,11 +136,12 @@ export function journalFigures(r: JournalResult): OptionFigures {
     // A full film that holds separates the surfaces: no wear or fatigue life is computed.
     lifeHours: null,
     lifeRatio: null,
-    frictionPower: r.powerLoss,
+    frictionPower: r.points.reduce((sum, p) => sum + p.share * p.powerLoss, 0),
     length: r.length,
     outerDiameter: null,
     failed: r.feasible ? [] : failing(r.checks, r.advisory),
-    why: r.feasible ? [] : r.warnings,
+    // Why it is out: the failing limits (its warnings are cautions, reported apart).
+    why: r.feasible ? [] : failing(r.checks, r.advisory).map((k) => `fails: ${k.label.charAt(0).toLowerCase()}${k.label.slice(1)}`),
   };
 }
 

@@ -6,6 +6,11 @@
  *   sense "max" (value must not exceed limit):     margin = (limit − value) / limit
  *   sense "min" (value must reach at least limit): margin = (value − limit) / limit
  * A margin of 0.25 therefore reads "25 % of the limit to spare".
+ *
+ * Temperatures (unit "degC") are measured from a reference instead of from 0 °C, which would
+ * make the margin depend on the temperature scale: margin = (limit − value)/(limit − T_ref),
+ * the share of the allowed rise left, with T_ref the inlet or ambient temperature the check
+ * names (absolute zero, −273.15 °C, when it names none).
  */
 export interface CheckRecord {
   /** Stable identifier, e.g. "pressure", "pv", "wear-life". */
@@ -40,7 +45,10 @@ export function allLimitsPass(checks: CheckRecord[]): boolean {
   return checks.every((k) => k.pass || k.advisory === true);
 }
 
-/** Build a check record, computing margin and pass from the sense of the limit. */
+/**
+ * Build a check record, computing margin and pass from the sense of the limit; `reference`
+ * is the temperature a "degC" margin is measured from (see above).
+ */
 export function makeCheck(
   id: string,
   label: string,
@@ -49,8 +57,11 @@ export function makeCheck(
   unit: string,
   sense: 'max' | 'min',
   source: string,
+  reference?: number,
 ): CheckRecord {
-  const margin = sense === 'max' ? (limit - value) / limit : (value - limit) / limit;
+  const zero = unit === 'degC' ? (reference ?? -273.15) : 0;
+  const span = limit - zero;
+  const margin = sense === 'max' ? (limit - value) / span : (value - limit) / span;
   const pass = sense === 'max' ? value <= limit : value >= limit;
   return { id, label, value, limit, unit, margin, pass, source, sense };
 }

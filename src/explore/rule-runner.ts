@@ -83,7 +83,9 @@ export function ruleRunner(rules: readonly LoadedRule[], opts: { memo?: boolean 
       const v = walk(fact(facts, l.fact), l.steps);
       const ref = l.value;
       if (l.ref) {
-        k += exact(v) + '~' + exact(walk(fact(facts, l.ref.fact), l.ref.steps)) + '|';
+        // Fact against fact: numbers by the sign of their difference, anything else exactly.
+        const w = walk(fact(facts, l.ref.fact), l.ref.steps);
+        k += typeof v === 'number' && typeof w === 'number' && !Number.isNaN(v) && !Number.isNaN(w) ? (v < w ? '<' : v > w ? '>' : '=') + '|' : exact(v) + '~' + exact(w) + '|';
       } else if (typeof v === 'number' && typeof ref === 'number' && !Number.isNaN(v)) {
         k += (v < ref ? '<' : v > ref ? '>' : '=') + '|';
       } else {

@@ -9,6 +9,7 @@ import {
   peakPressure,
   rotatingSlidingSpeed,
   temperatureRise,
+  wearDepth,
 } from './formulas.js';
 
 /** One material class sized and checked for the case. SI units; lives in hours. */
@@ -47,8 +48,10 @@ export interface BushingMaterialResult {
   /** Steady running temperature estimate, °C. */
   temperature: number;
   frictionCoefficient: number;
-  /** Frictional power at the governing point, W. */
+  /** Frictional power at the governing point (largest F·V), W. */
   frictionPower: number;
+  /** Time-weighted mean frictional power over the duty, Σ share·f·F·V, W. */
+  meanFrictionPower: number;
   feasible: boolean;
   checks: CheckRecord[];
   source: string;
@@ -58,6 +61,8 @@ export interface BushingResult {
   option: 'bushing';
   materials: BushingMaterialResult[];
   best: string | null;
+  /** The material the sheet, charts and advice show: the best, or the nearest miss when none is feasible. */
+  shown: string | null;
   /** Why the best was chosen, or why none fits. */
   bestReason: string;
   feasible: boolean;
@@ -121,18 +126,19 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
   let bestReason: string;
   if (feasible.length) {
     // Most robust: the largest smallest margin over the governing checks; ties keep data order.
-    const score = (m: BushingMaterialResult) => Math.min(...m.checks.filter((k) => !k.advisory).map((k) => k.margin));
-    best = feasible.reduce((a, b) => (score(b) > score(a) ? b : a));
-    bestReason = `${best.name} at ${num(best.length * 1000, 3)} mm long has the largest smallest margin (${(score(best) * 100).toFixed(0)} %) of the ${feasible.length} material(s) that pass every check`;
+    best = feasible.reduce((a, b) => (smallestMargin(b) > smallestMargin(a) ? b : a));
+    bestReason = `${best.name} at ${num(best.length * 1000, 3)} mm long has the largest smallest margin (${(smallestMargin(best) * 100).toFixed(0)} %) of the ${feasible.length} material(s) that pass every check`;
   } else {
     bestReason = `no material passes every check: ${whyNone(materials)}`;
     warnings.push(bestReason);
   }
-  const shown = best ?? materials[0];
+  // The material shown when none is feasible: the nearest miss, by the same largest-smallest-margin rule.
+  const shown = best ?? materials.reduce<BushingMaterialResult | undefined>((a, b) => (a === undefined || smallestMargin(b) > smallestMargin(a) ? b : a), undefined);
   return {
     option: 'bushing',
     materials,
     best: best?.id ?? null,
+    shown: shown?.id ?? null,
     bestReason,
     feasible: best !== undefined,
     assumed,
@@ -159,9 +165,9 @@ function checkMaterial(
   const Fmax = Math.max(...points.map((p) => p.F));
   const FVmax = Math.max(...points.map((p) => p.F * p.V));
   const Vmax = Math.max(...points.map((p) => p.V));
-  // Wear rate at unit length, m/h × m: Σ share·f_m·f_e·k·(4F/(πD))·V·3600
+  // Wear depth per hour of a bushing of unit length (so ÷ L gives m/h): Σ share·f_m·f_e·k·p_peak(L = 1)·V·3600 s
   const wearRateTimesL = (k: number) =>
-    points.reduce((s, p) => s + p.share * fMotion * fEnv * k * ((4 * p.F) / (Math.PI * D)) * p.V * HOUR, 0);
+    points.reduce((s, p) => s + p.share * wearDepth(k, peakPressure(p.F, D, 1), p.V, HOUR, fMotion, fEnv), 0);
   const minLengthBy = {
     pressure: Fmax / (D * m.maxPressure),
     pv: FVmax / (D * m.maxPV),
@@ -202,7 +208,7 @@ function checkMaterial(
     makeCheck('pv', 'PV', pv, m.maxPV, 'Pa*m/s', 'max', src),
     makeCheck('wear-life', 'Hours to wear through the allowance (typical wear factor)', life(m.wearFactor), T, 'h', 'min', wearSrc),
     // Advisory: the one-node heat model is crude; PV is the published thermal criterion.
-    advisory(makeCheck('temperature', 'Running temperature (lumped estimate, advisory)', temperature, m.maxTemperature, 'degC', 'max', `${src}; heat model: ${factors.heat.source}`)),
+    advisory(makeCheck('temperature', 'Running temperature (lumped estimate, advisory)', temperature, m.maxTemperature, 'degC', 'max', `${src}; heat model: ${factors.heat.source}; margin: share of the allowed rise above ambient`, c.environment.ambient)),
     makeCheck('axial-space', 'Length within the axial space', length, c.space.maxLength, 'm', 'max', 'the case (space.maxLength)'),
     makeCheck('radial-space', 'Outer diameter within the housing bore', outerDiameter, c.space.maxOuterDiameter, 'm', 'max', 'the case (space.maxOuterDiameter); wall thickness common practice'),
     // Length/diameter is advice (edge loading, misalignment), not a limit.
@@ -238,10 +244,16 @@ function checkMaterial(
     temperature,
     frictionCoefficient: m.friction,
     frictionPower: Q,
+    meanFrictionPower: points.reduce((sum, p) => sum + p.share * frictionHeat(m.friction, p.F, p.V), 0),
     feasible,
     checks,
     source: src,
   };
+}
+
+/** Smallest margin over the limit checks (advice left out): the robustness of a material's design. */
+function smallestMargin(m: BushingMaterialResult): number {
+  return Math.min(...m.checks.filter((k) => !k.advisory).map((k) => k.margin));
 }
 
 function whyNone(ms: BushingMaterialResult[]): string {
@@ -256,8 +268,9 @@ function sheetFor(c: CaseSI, m: BushingMaterialResult, points: Point[]): SheetLi
   const g = points.reduce((a, b) => (b.F * b.V > a.F * a.V ? b : a));
   const Fmax = Math.max(...points.map((p) => p.F));
   const hb = 'The Tribology Handbook 2nd ed. 1995, A4-A5';
+  const of = ` (${m.name}, ${num(L * 1000, 3)} mm long)`;
   const lines: SheetLine[] = [
-    { label: 'Mean pressure P', formula: 'P = F/(D·L)', substituted: `P = ${num(Fmax)} N / (${num(D)} m · ${num(L)} m)`, value: m.pressure, unit: 'Pa', source: hb },
+    { label: `Mean pressure P${of}`, formula: 'P = F/(D·L)', substituted: `P = ${num(Fmax)} N / (${num(D)} m · ${num(L)} m)`, value: m.pressure, unit: 'Pa', source: hb },
     { label: 'Peak pressure p_peak', formula: 'p_peak = 4F/(π·D·L)', substituted: `p_peak = 4·${num(Fmax)} N / (π·${num(D)} m · ${num(L)} m)`, value: m.peakPressure, unit: 'Pa', source: hb },
     c.shaft.oscillation
       ? { label: 'Mean sliding speed V', formula: 'V = θ·D·f', substituted: `V = ${num(c.shaft.oscillation.angle)} rad · ${num(D)} m · ${num(c.shaft.oscillation.frequency)} Hz`, value: m.velocity, unit: 'm/s', source: 'kinematics of oscillation' }
