@@ -3,22 +3,39 @@ import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 import { checksTable, heading, mark, paint } from './text.js';
 
+const KIND = { ball: 'deep-groove ball', roller: 'cylindrical roller' } as const;
+const P_TEXT = { ball: '3', roller: '10/3' } as const;
+
 /** The rolling-bearing check for a person: candidates with lives, then each candidate's checks. */
 export function rollingText(r: RollingResult, units: UnitSystem): string {
   const out: string[] = [heading('Rolling-element bearing (ISO 281, ISO 76, ISO 15)')];
-  out.push(
-    `Equivalent dynamic load ${fmt(r.equivalentLoad, 'N', units)} at ${fmt(r.equivalentSpeed, 'rev/s', units)}; ` +
-      `basic dynamic rating needed for the life target ${fmt(r.requiredDynamicRating, 'N', units)}.`,
-  );
+  const types = new Set(r.candidates.map((k) => k.type));
+  const needed = r.requiredDynamicRatingFor
+    ? `basic dynamic rating needed for the life target ${fmt(r.requiredDynamicRating, 'N', units)} (for a ${KIND[r.requiredDynamicRatingFor.type]} bearing, p = ${P_TEXT[r.requiredDynamicRatingFor.type]}${types.size > 1 ? '; each candidate\'s own in the column "C needed"' : ''})`
+    : `basic dynamic rating needed for the life target ${fmt(r.requiredDynamicRating, 'N', units)}`;
+  out.push(`Equivalent dynamic load ${fmt(r.equivalentLoad, 'N', units)} at ${fmt(r.equivalentSpeed, 'rev/s', units)}; ${needed}.`);
+  if (types.size > 1) {
+    // Both types listed: the need per type (P, and so C needed, can differ between ball sizes under axial load).
+    for (const t of ['ball', 'roller'] as const) {
+      const ofType = r.candidates.filter((k) => k.type === t && k.requiredDynamicRating !== null);
+      if (!ofType.length) continue;
+      const vals = ofType.map((k) => k.requiredDynamicRating!);
+      const lo = Math.min(...vals);
+      const hi = Math.max(...vals);
+      const range = hi - lo <= 1e-9 * hi ? fmt(lo, 'N', units) : `${fmt(lo, 'N', units)} to ${fmt(hi, 'N', units)}`;
+      out.push(`  ${KIND[t]} bearings (p = ${P_TEXT[t]}): basic dynamic rating needed ${range}.`);
+    }
+  }
   if (r.candidates.length) {
     out.push(
       table(
-        ['', 'bearing', 'd × D × B', 'C', 'C0', 'rating', 'L10h', 'a_ISO', 'κ', 'L10mh', 's0', 'n·dm', 'friction'],
+        ['', 'bearing', 'd × D × B', 'C', 'C needed', 'C0', 'rating', 'L10h', 'a_ISO', 'κ', 'L10mh', 's0', 'n·dm', 'friction'],
         r.candidates.map((k) => [
           mark(k.feasible),
           k.id,
           `${fmt(k.bore, 'm', units)} × ${k.outerDiameter === null ? '—' : fmt(k.outerDiameter, 'm', units)} × ${k.width === null ? '—' : fmt(k.width, 'm', units)}`,
           fmt(k.dynamicRating, 'N', units),
+          k.requiredDynamicRating === null ? '—' : fmt(k.requiredDynamicRating, 'N', units),
           fmt(k.staticRating, 'N', units),
           k.ratingSource,
           fmt(k.L10h, 'h', units),
@@ -36,7 +53,7 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
   }
   const best = r.candidates.find((k) => k.id === r.best);
   out.push(paint.bold(best ? `Best: ${best.designation} (${best.id}), the smallest meeting life, static safety, speed and space.` : 'None: no candidate meets life, static safety, speed and space.'));
-  out.push('Ratings marked "estimated" come from boundary dimensions by the ISO 281 / ISO 76 formulas; a supplier\'s rating replaces them.');
+  out.push('Ratings marked "estimated" come from boundary dimensions by the ISO 281 / ISO 76 formulas; a supplier\'s rating replaces them. "C needed": the basic dynamic rating each candidate needs for the life target with a1 (a_ISO taken as 1), from its own P and p; "friction": friction power, time mean over the duty.');
   for (const k of r.candidates) {
     out.push(`\n${paint.bold(k.designation)} (${k.id}) — X = ${k.X}, Y = ${k.Y}, P = ${fmt(k.equivalentLoad, 'N', units)}, P0 = ${fmt(k.staticEquivalentLoad, 'N', units)}, ν = ${(k.viscosity * 1e6).toPrecision(3)} mm²/s at ${fmt(k.temperature, 'degC', units)}`);
     if (k.exclusions.length) out.push(k.exclusions.map((e) => `  ruled out: ${e}`).join('\n'));

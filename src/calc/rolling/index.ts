@@ -230,6 +230,7 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     equivalentLoad,
     equivalentSpeed: meanSpeed,
     requiredDynamicRating: requiredC,
+    requiredDynamicRatingFor: requiredC !== null ? { type: leadType, p: lifeExponent(leadType) } : null,
     candidates,
     best: best ? best.id : null,
     feasible: best !== null,
@@ -412,6 +413,7 @@ function evaluate(s: CandidateSpec, x: EvalContext): RollingCandidate {
     sumM += q.t * M;
     sumW += q.t * frictionPower(M, q.n);
   }
+  // Time means over the duty (weights ti): the torque Σ ti·Mi/Σ ti and the power Σ ti·Mi·2π·ni/Σ ti.
   const torque = sumT > 0 ? sumM / sumT : 0;
   const power = sumT > 0 ? sumW / sumT : 0;
   let relub: number | null = null;
@@ -496,6 +498,7 @@ function evaluate(s: CandidateSpec, x: EvalContext): RollingCandidate {
     ndm,
     frictionTorque: torque,
     frictionPower: power,
+    requiredDynamicRating: requiredDynamicRating(P, n, c.life.hours, p, x.a1),
     relubricationHours: relub,
     temperature: x.temperature,
     viscosity: x.viscosity,
@@ -547,50 +550,115 @@ function caseViscosity(
   return kinematicViscosity(oil, tC) * 1e-6;
 }
 
+/** Largest number of operating points written out term by term on the sheet; more are summed in words. */
+const SHEET_TERMS_MAX = 4;
+
+/**
+ * The calculation sheet of one candidate. Each line's `substituted` ends in an expression
+ * (numbers, or a function of named arguments) whose value is the line's `value`: reports
+ * print `substituted = value unit`.
+ */
 function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
   const lines: SheetLine[] = [];
+  const p = lifeExponent(k.type);
   const pTxt = k.type === 'ball' ? '3' : '10/3';
-  const heavy = x.points.reduce((a, b) => (b.Fr + b.Fa > a.Fr + a.Fa ? b : a), x.points[0]!);
-  lines.push({
-    label: `Dynamic equivalent load P (${k.designation})`,
-    formula: x.points.length > 1 ? 'P = (Σ Pi^p·ni·ti / Σ ni·ti)^(1/p), Pi = f_d·(X·Fr + Y·Fa)' : 'P = f_d·(X·Fr + Y·Fa)',
-    substituted:
-      x.points.length > 1
-        ? `P over ${x.points.length} operating points, p = ${pTxt}, f_d = ${x.serviceFactor}`
-        : `P = ${x.serviceFactor}·(${fmt(k.X)}·${fmt(heavy.Fr)} N + ${fmt(k.Y)}·${fmt(heavy.Fa)} N)`,
-    value: k.equivalentLoad,
-    unit: 'N',
-    source: 'ISO 281:2007 (X, Y table; variable load); service factor common practice',
-  });
+  const mu = x.f.friction.find((q) => q.type === k.type)!.mu;
+  // Per-point loads as evaluate() works them: Pi without f_d (friction), f_d·Pi (life).
+  const per = x.points.map((q) => ({ ...q, P: dynamicEquivalentLoad(k.type, q.Fr, q.Fa, k.staticRating, x.f.xyDeepGrooveBall).P }));
+  const many = per.length > SHEET_TERMS_MAX;
+  const sumT = per.reduce((acc, q) => acc + Math.max(0, q.t), 0);
+  const byRevolutions = per.some((q) => q.n > 0 && q.t > 0);
+  if (per.length > 1) {
+    const w = (q: (typeof per)[number]): string => (byRevolutions ? `${fmt(q.n * 60)}·${fmt(q.t)}` : fmt(q.t));
+    const num = many
+      ? `Σ over ${per.length} points of Pi^${pTxt}·${byRevolutions ? 'ni·ti' : 'ti'}`
+      : per.map((q) => `${fmt(x.serviceFactor * q.P)}^${pTxt}·${w(q)}`).join(' + ');
+    const den = many ? (byRevolutions ? 'Σ ni·ti' : 'Σ ti') : per.map(w).join(' + ');
+    lines.push({
+      label: `Dynamic equivalent load P (${k.designation})`,
+      formula: `P = (Σ Pi^p·${byRevolutions ? 'ni·ti / Σ ni·ti' : 'ti / Σ ti'})^(1/p), Pi = f_d·(X·Fr + Y·Fa), p = ${pTxt}, f_d = ${x.serviceFactor}${byRevolutions ? ', n in r/min' : ''}`,
+      substituted: `P = [(${num})/(${den})]^(1/${pTxt})`,
+      value: k.equivalentLoad,
+      unit: 'N',
+      source: 'ISO 281:2007 (X, Y table; variable load); service factor common practice',
+    });
+  } else {
+    const q = x.points[0];
+    const X = q ? fmt(k.X) : '0';
+    lines.push({
+      label: `Dynamic equivalent load P (${k.designation})`,
+      formula: 'P = f_d·(X·Fr + Y·Fa)',
+      substituted: q ? `P = ${x.serviceFactor}·(${X}·${fmt(q.Fr)} N + ${fmt(k.Y)}·${fmt(q.Fa)} N)` : 'P = 0',
+      value: k.equivalentLoad,
+      unit: 'N',
+      source: 'ISO 281:2007 (X, Y table); service factor common practice',
+    });
+  }
   if (k.L10 !== null) {
     lines.push({ label: 'Basic rating life L10', formula: 'L10 = (C/P)^p', substituted: `L10 = (${fmt(k.dynamicRating)} N / ${fmt(k.equivalentLoad)} N)^${pTxt}`, value: k.L10, unit: '10^6 rev', source: 'ISO 281:2007' });
   }
   if (k.L10h !== null && k.L10 !== null) {
     lines.push({ label: 'Basic rating life L10h', formula: 'L10h = 10^6·L10/(60·n)', substituted: `L10h = 10^6·${fmt(k.L10)}/(60·${fmt(n * 60)} r/min)`, value: k.L10h, unit: 'h', source: 'ISO 281:2007' });
   }
+  if (k.requiredDynamicRating !== null && x.c.life.hours > 0) {
+    lines.push({
+      label: `Basic dynamic rating needed for the life target (${KIND[k.type]}, p = ${pTxt})`,
+      formula: 'C_req = P·(L_req/a1)^(1/p), L_req = 60·n·h/10^6 (n in r/min)',
+      substituted: `C_req = ${fmt(k.equivalentLoad)} N·(60·${fmt(n * 60)} r/min·${fmt(x.c.life.hours)} h/10^6/${fmt(k.a1)})^(1/${pTxt})`,
+      value: k.requiredDynamicRating,
+      unit: 'N',
+      source: 'ISO 281:2007, from L10 = (C/P)^p with a1 (a_ISO taken as 1)',
+    });
+  }
   if (k.ratedViscosity !== null && k.kappa !== null) {
     const rpm = n * 60;
     lines.push({
       label: 'Rated viscosity ν1',
       formula: rpm < 1000 ? 'ν1 = 45000·n^-0.83·dm^-0.5 (mm²/s, r/min, mm)' : 'ν1 = 4500·n^-0.5·dm^-0.5 (mm²/s, r/min, mm)',
-      substituted: `${rpm < 1000 ? '45000' : '4500'}·${fmt(rpm)}^${rpm < 1000 ? '-0.83' : '-0.5'}·${fmt(k.pitchDiameter * 1000)}^-0.5 mm²/s`,
+      substituted: `ν1 = ${rpm < 1000 ? '45000' : '4500'}·${fmt(rpm)}^${rpm < 1000 ? '-0.83' : '-0.5'}·${fmt(k.pitchDiameter * 1000)}^-0.5 mm²/s`,
       value: k.ratedViscosity,
       unit: 'm^2/s',
       source: 'ISO 281:2007 (from memory)',
     });
-    lines.push({ label: 'Viscosity ratio κ', formula: 'κ = ν/ν1', substituted: `κ = ${fmt(k.viscosity * 1e6)} / ${fmt(k.ratedViscosity * 1e6)} mm²/s at ${fmt(k.temperature)} °C`, value: k.kappa, unit: '1', source: 'ISO 281:2007' });
+    lines.push({
+      label: 'Viscosity ratio κ',
+      formula: 'κ = ν/ν1, ν at the operating temperature',
+      substituted: `κ = ν(${fmt(k.temperature)} °C)/ν1 = ${fmt(k.viscosity * 1e6)} mm²/s / ${fmt(k.ratedViscosity * 1e6)} mm²/s`,
+      value: k.kappa,
+      unit: '1',
+      source: 'ISO 281:2007',
+    });
   }
   if (k.aISO !== null) {
+    const eCCuP = (x.cont.eC * k.fatigueLimit) / k.equivalentLoad;
+    lines.push({
+      label: 'Contamination and fatigue-limit term e_C·Cu/P',
+      formula: 'e_C·Cu/P',
+      substituted: `${fmt(x.cont.eC)}·${fmt(k.fatigueLimit)} N/${fmt(k.equivalentLoad)} N`,
+      value: eCCuP,
+      unit: '1',
+      source: `ISO 281:2007 (from memory); e_C for "${x.cont.level}" (${x.cont.source})`,
+    });
+    const kappaUsed = Math.min(4, Math.max(0.1, k.kappa ?? 0));
+    const args = `a_ISO(κ = ${fmt(kappaUsed)}, e_C·Cu/P = ${fmt(eCCuP)})`;
     lines.push({
       label: 'Life modification factor a_ISO',
-      formula: k.type === 'ball' ? 'a_ISO = 0.1·[1 − (2.5671 − y/κ^z)^0.83·(e_C·Cu/P)^(1/3)]^-9.3' : 'a_ISO = 0.1·[1 − (1.5859 − y/κ^z)·(e_C·Cu/P)^0.4]^-9.185',
-      substituted: `κ = ${fmt(Math.min(4, Math.max(0.1, k.kappa ?? 0)))}, e_C·Cu/P = ${fmt(x.cont.eC)}·${fmt(k.fatigueLimit)} N/${fmt(k.equivalentLoad)} N`,
+      formula: `${k.type === 'ball' ? 'a_ISO = 0.1·[1 − (2.5671 − y/κ^z)^0.83·(e_C·Cu/P)^(1/3)]^-9.3' : 'a_ISO = 0.1·[1 − (1.5859 − y/κ^z)·(e_C·Cu/P)^0.4]^-9.185'}, y and z per κ band, κ held to 0.1–4, a_ISO ≤ 50`,
+      substituted: k.aISO >= 50 ? `min(50, ${args})` : args,
       value: k.aISO,
       unit: '1',
       source: 'ISO 281:2007 (from memory)',
     });
   }
-  lines.push({ label: 'Reliability factor a1', formula: 'a1 = 0.95·[ln(100/R)/ln(100/90)]^(2/3) + 0.05', substituted: `R = ${fmt(x.c.life.reliability)} %`, value: k.a1, unit: '1', source: 'ISO 281:2007' });
+  const Rused = reliabilityFactor(finiteOr(x.c.life.reliability, 90)).reliabilityUsed;
+  lines.push({
+    label: 'Reliability factor a1',
+    formula: 'a1 = 0.95·[ln(100/R)/ln(100/90)]^(2/3) + 0.05, R in %',
+    substituted: `a1 = 0.95·[ln(100/${fmt(Rused)})/ln(100/90)]^(2/3) + 0.05`,
+    value: k.a1,
+    unit: '1',
+    source: 'ISO 281:2007',
+  });
   if (k.L10mh !== null && k.L10h !== null && k.aISO !== null) {
     lines.push({ label: 'Modified rating life L10mh', formula: 'L10mh = a1·a_ISO·L10h', substituted: `L10mh = ${fmt(k.a1)}·${fmt(k.aISO)}·${fmt(k.L10h)} h`, value: k.L10mh, unit: 'h', source: 'ISO 281:2007' });
   }
@@ -604,14 +672,44 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
       source: 'ISO 76 (from memory)',
     });
   }
-  lines.push({ label: 'Speed factor n·dm', formula: 'n·dm (r/min × mm)', substituted: `${fmt(x.maxSpeed * 60)} r/min × ${fmt(k.pitchDiameter * 1000)} mm`, value: k.ndm, unit: 'mm*r/min', source: 'common practice' });
-  lines.push({ label: 'Friction torque M', formula: 'M = μ·P·d/2', substituted: `M = ${x.f.friction.find((q) => q.type === k.type)!.mu}·P·${fmt(k.bore)} m/2 (time mean over the points)`, value: k.frictionTorque, unit: 'N*m', source: 'common practice (from memory)' });
-  lines.push({ label: 'Friction power', formula: 'N_R = M·2π·n', substituted: 'time mean over the points', value: k.frictionPower, unit: 'W', source: 'mechanics' });
+  lines.push({ label: 'Speed factor n·dm', formula: 'n·dm (highest point speed, r/min × mm)', substituted: `${fmt(x.maxSpeed * 60)} r/min × ${fmt(k.pitchDiameter * 1000)} mm`, value: k.ndm, unit: 'mm*r/min', source: 'common practice' });
+  // Friction: M = μ·Pi·d/2 per point (Pi without f_d), time means over the duty.
+  const pBar = sumT > 0 ? per.reduce((acc, q) => acc + Math.max(0, q.t) * Math.max(0, q.P), 0) / sumT : 0;
+  lines.push({
+    label: per.length > 1 ? 'Friction torque M (time mean over the duty)' : 'Friction torque M',
+    formula: per.length > 1 ? 'M = μ·P̄·d/2, P̄ = Σ ti·Pi/Σ ti, Pi = X·Fr + Y·Fa (without f_d)' : 'M = μ·P·d/2, P = X·Fr + Y·Fa (without f_d)',
+    substituted: `M = ${mu}·${fmt(pBar)} N·${fmt(k.bore)} m/2`,
+    value: k.frictionTorque,
+    unit: 'N*m',
+    source: 'common practice (from memory)',
+  });
+  const Mi = (q: (typeof per)[number]): number => frictionTorque(mu, q.P, k.bore);
+  let powerTxt: string;
+  if (per.length <= 1) {
+    const q = per[0];
+    powerTxt = q ? `N_R = ${fmt(Mi(q))} N·m·2π·${fmt(Math.max(0, q.n))} rev/s` : 'N_R = 0';
+  } else if (many) {
+    powerTxt = `N_R = (Σ over ${per.length} points of ti·Mi·2π·ni)/(Σ ti)`;
+  } else {
+    powerTxt = `N_R = (${per.map((q) => `${fmt(q.t)}·${fmt(Mi(q))} N·m·2π·${fmt(Math.max(0, q.n))} rev/s`).join(' + ')})/(${per.map((q) => fmt(q.t)).join(' + ')})`;
+  }
+  lines.push({
+    label: per.length > 1 ? 'Friction power N_R (time mean over the duty)' : 'Friction power N_R',
+    formula: per.length > 1 ? 'N_R = Σ ti·Mi·2π·ni/Σ ti, Mi = μ·Pi·d/2' : 'N_R = M·2π·n',
+    substituted: powerTxt,
+    value: k.frictionPower,
+    unit: 'W',
+    source: 'mechanics',
+  });
   if (k.relubricationHours !== null) {
+    const kf = x.f.relubrication.find((q) => q.type === k.type)!.kf;
+    const rpm = x.maxSpeed * 60;
+    const dMm = k.bore * 1000;
+    const core = `${kf}·[14·10^6/(${fmt(rpm)}·√${fmt(dMm)}) − 4·${fmt(dMm)}]${k.temperature > 70 ? `·0.5^((${fmt(k.temperature)} − 70)/15)` : ''}`;
     lines.push({
       label: x.sealed ? 'Grease life (sealed bearing)' : 'Grease relubrication interval',
-      formula: 't_f = k_f·[14·10^6/(n·√d) − 4·d]·0.5^((T − 70)/15 if T > 70)',
-      substituted: `n = ${fmt(x.maxSpeed * 60)} r/min, d = ${fmt(k.bore * 1000)} mm, T = ${fmt(k.temperature)} °C`,
+      formula: 't_f = k_f·[14·10^6/(n·√d) − 4·d]·0.5^((T − 70)/15 if T > 70), n highest speed in r/min, d bore in mm, T in °C; no positive interval gives 0',
+      substituted: `t_f = ${k.relubricationHours === 0 ? `max(0, ${core})` : core}`,
       value: k.relubricationHours,
       unit: 'h',
       source: 'bearing-maker technical guide (seen, as in the shared reference)',

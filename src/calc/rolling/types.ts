@@ -58,9 +58,20 @@ export interface RollingCandidate {
   s0: number | null;
   /** Speed factor at the highest point speed, mm·r/min. */
   ndm: number;
-  /** Time-weighted mean friction torque, N·m, and friction power, W. */
+  /** Friction torque, N·m: time-weighted mean over the duty's operating points, Σ ti·Mi/Σ ti. */
   frictionTorque: number;
+  /**
+   * Friction power, W: time-weighted mean over the duty's operating points,
+   * Σ ti·(Mi·2π·ni)/Σ ti — the mean heat a running bearing gives off, comparable with the
+   * journal's `meanPowerLoss` (not the power at the heaviest point, nor M̄·2π·n̄).
+   */
   frictionPower: number;
+  /**
+   * Basic dynamic rating this candidate needs for the life target with a1 (a_ISO taken as
+   * 1), N, from its own P and life exponent p (3 ball, 10/3 roller); null with no rotation
+   * or no target.
+   */
+  requiredDynamicRating: number | null;
   /** Grease relubrication interval (grease life for a sealed bearing), hours; null on oil or with no rotation. */
   relubricationHours: number | null;
   /** Estimated operating temperature, °C. */
@@ -85,6 +96,12 @@ export interface RollingResult {
   equivalentSpeed: number;
   /** Basic dynamic rating needed for the life target with a1 (a_ISO taken as 1), N; null with no rotation or no target. */
   requiredDynamicRating: number | null;
+  /**
+   * Bearing type and life exponent p that `requiredDynamicRating` was worked for: the best
+   * candidate's (else the first candidate's; a deep-groove ball bearing when there is no
+   * candidate); null when `requiredDynamicRating` is null. Each candidate carries its own.
+   */
+  requiredDynamicRatingFor: { type: RollingType; p: number } | null;
   candidates: RollingCandidate[];
   best: string | null;
   feasible: boolean;
