@@ -20,6 +20,7 @@ export function journalText(r: JournalResult, units: UnitSystem): string {
         ['Attitude angle φ', `${r.attitudeAngle.toFixed(1)}°`],
         ['Friction coefficient f (Petroff)', `${r.frictionCoefficient.toPrecision(3)} (${r.petroffFrictionCoefficient.toPrecision(3)})`],
         ['Friction torque, power loss', `${fmt(r.frictionTorque, 'N*m', units)}, ${fmt(r.powerLoss, 'W', units)}`],
+        ...(r.points.length > 1 ? [['Power loss, time mean over the duty', fmt(r.meanPowerLoss, 'W', units)]] : []),
         ['Oil flow in, side leakage', `${fmt(r.flow, 'm^3/s', units)}, ${fmt(r.sideFlow, 'm^3/s', units)}`],
         ['Unit load W/(L·D), peak film pressure', `${fmt(r.unitLoad, 'Pa', units)}, ${fmt(r.peakPressure, 'Pa', units)} at ${r.peakPressureAngle.toFixed(0)}°`],
         ['Effective, maximum temperature', `${fmt(r.effectiveTemperature, 'degC', units)}, ${fmt(r.maxTemperature, 'degC', units)}`],

@@ -91,6 +91,16 @@ export interface DesignEvaluation {
   passesCore: boolean;
 }
 
+/**
+ * The film criterion in words, from the criteria data (e.g. "5 µm + 0.00004·D"):
+ * h_base in µm, k_D as a plain number.
+ */
+export function allowableFilmText(crit: JournalCriteria): string {
+  const base = Number((crit.minFilmBase * 1e6).toPrecision(4));
+  const perD = Number(crit.minFilmPerDiameter.toPrecision(4));
+  return `${base} µm + ${perD}·D`;
+}
+
 /** Allowable minimum film thickness, m: h_allow = h_base + k_D·D (Trumpler 1966, from memory). */
 export function allowableFilm(diameter: number, crit: JournalCriteria): number {
   return crit.minFilmBase + crit.minFilmPerDiameter * diameter;
@@ -283,20 +293,25 @@ export const ADVISORY_CHECKS: readonly string[] = ['unit-load', 'light-load', 'f
 
 /**
  * The design checks of a chosen evaluation. `designLoad` is the same design evaluated at
- * the design load factor (for the advisory film check); `supply` the case's supply.
+ * the design load factor (for the advisory film check); `supply` the case's supply;
+ * `inletTemperature` (°C) the reference of the temperature margin (the share of the allowed
+ * rise above the inlet left; from absolute zero when not given, see check.ts).
  */
 export function designChecks(
   e: DesignEvaluation,
   designLoad: DesignEvaluation | undefined,
   supply: 'none' | 'grease' | 'oil-bath' | 'oil-feed',
   crit: JournalCriteria,
+  inletTemperature?: number,
 ): CheckRecord[] {
   const g = e.governing;
   const s = crit.sources;
+  // An inlet at or above the limit leaves no rise to share out: the margin then falls back to absolute zero.
+  const tRef = inletTemperature !== undefined && Number.isFinite(inletTemperature) && inletTemperature < crit.maxTemperature ? inletTemperature : undefined;
   const checks: CheckRecord[] = [
     makeCheck(
       'min-film',
-      'Minimum film thickness h0 at the governing point against the allowable h0 = 5 µm + 0.00004·D',
+      `Minimum film thickness h0 at the governing point against the allowable h0 = ${allowableFilmText(crit)}`,
       g.result.minFilmThickness,
       g.allowableFilm,
       'm',
@@ -310,7 +325,10 @@ export function designChecks(
       crit.maxTemperature,
       'degC',
       'max',
-      s['maxTemperature'] ?? '',
+      tRef !== undefined
+        ? `${s['maxTemperature'] ?? ''}; margin: share of the allowed rise above the inlet temperature (${Number(tRef.toPrecision(4))} °C)`
+        : `${s['maxTemperature'] ?? ''}; margin measured from absolute zero (the inlet temperature is not below the limit)`,
+      tRef,
     ),
     makeCheck(
       'start-unit-load',

@@ -11,6 +11,7 @@ import { shippedJournalTables } from '../../data/journal-tables.js';
 import {
   ADVISORY_CHECKS,
   allowableFilm,
+  allowableFilmText,
   designChecks,
   evaluateDesign,
   sweepDesigns,
@@ -88,7 +89,14 @@ export interface JournalResult {
   frictionCoefficient: number;
   petroffFrictionCoefficient: number;
   frictionTorque: number;
+  /** Power loss at the governing point, W. */
   powerLoss: number;
+  /**
+   * Share-weighted mean power loss over the operating points, W: Σ share·powerLoss/Σ share
+   * over `points` (0 at points without a film) — a time mean over the duty, like the
+   * rolling candidate's `frictionPower`.
+   */
+  meanPowerLoss: number;
   /** Flow drawn in at the maximum film thickness, m³/s. */
   flow: number;
   /** Side leakage, m³/s. */
@@ -392,7 +400,7 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
   const designLoad: DesignEvaluation | undefined = noLubricant
     ? undefined
     : evaluateDesign(D, chosen.candidate, points, tIn, startLoad, crit, crit.designLoadFactor);
-  const checks = [...designChecks(chosen, designLoad, supply, crit), ...extraChecks];
+  const checks = [...designChecks(chosen, designLoad, supply, crit, tIn), ...extraChecks];
   const advisory = [...ADVISORY_CHECKS];
   const feasible = checks.every((k) => k.pass || advisory.includes(k.id));
 
@@ -486,6 +494,7 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     petroffFrictionCoefficient: res.petroffFrictionCoefficient,
     frictionTorque: res.frictionTorque,
     powerLoss: res.powerLoss,
+    meanPowerLoss: meanPowerLoss(pointsOut),
     flow: res.flow,
     sideFlow: res.sideFlow,
     peakPressure: res.peakPressure,
@@ -509,6 +518,18 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
   };
   assertFinite(out);
   return out;
+}
+
+/** Share-weighted mean of the points' power loss, W (0 when no point has a share). */
+function meanPowerLoss(points: readonly { share: number; powerLoss: number }[]): number {
+  let sumShare = 0;
+  let sumPower = 0;
+  for (const p of points) {
+    const w = Number.isFinite(p.share) ? Math.max(0, p.share) : 0;
+    sumShare += w;
+    sumPower += w * p.powerLoss;
+  }
+  return sumShare > 0 ? sumPower / sumShare : 0;
 }
 
 /** Throw if any number in the result is NaN or infinite (fail loudly, never report them). */
@@ -545,7 +566,7 @@ function buildSheet(c: CaseSI, e: DesignEvaluation, crit: JournalCriteria, suppl
     lines.push({
       label: 'Minimum film thickness h0',
       formula: 'no rotation or no lubricant: h0 = 0',
-      substituted: `N = ${fmt(N)} rev/s${supply === 'none' ? ', supply none' : ''}`,
+      substituted: `N = ${fmt(N)} rev/s${supply === 'none' ? ', supply none' : ''}: h0 = 0`,
       value: 0,
       unit: 'm',
       source: 'common practice',
@@ -559,8 +580,11 @@ function buildSheet(c: CaseSI, e: DesignEvaluation, crit: JournalCriteria, suppl
   lines.push(
     {
       label: 'Viscosity μ',
-      formula: e.candidate.fluid.kind === 'oil' ? 'μ = ν(T_eff)·ρ(T_eff), Walther (ASTM D341)' : 'μ given',
-      substituted: `${e.candidate.oil} at ${fmt(res.effectiveTemperature)} °C (${thermal})`,
+      formula: e.candidate.fluid.kind === 'oil' ? `μ = ν(T_eff)·ρ(T_eff), Walther (ASTM D341); ${thermal}` : 'μ given',
+      substituted:
+        e.candidate.fluid.kind === 'oil'
+          ? `μ(${e.candidate.oil}, T_eff = ${fmt(res.effectiveTemperature)} °C)`
+          : `μ = ${fmt(res.viscosity)} Pa·s`,
       value: res.viscosity,
       unit: 'Pa*s',
       source: e.candidate.fluid.kind === 'oil' ? 'ASTM D341 (Walther form, from memory)' : 'case',
@@ -575,8 +599,8 @@ function buildSheet(c: CaseSI, e: DesignEvaluation, crit: JournalCriteria, suppl
     },
     {
       label: 'Eccentricity ratio ε',
-      formula: 'S(ε, L/D) = S, finite-difference Reynolds solution (table, interpolated)',
-      substituted: `L/D = ${fmt(L / D)}, S = ${fmt(res.sommerfeld)}`,
+      formula: 'ε such that S(ε, L/D) = S, finite-difference Reynolds solution (table, interpolated)',
+      substituted: `ε(L/D = ${fmt(L / D)}, S = ${fmt(res.sommerfeld)})`,
       value: res.eccentricityRatio,
       unit: '1',
       source: RB,
@@ -591,7 +615,7 @@ function buildSheet(c: CaseSI, e: DesignEvaluation, crit: JournalCriteria, suppl
     },
     {
       label: 'Allowable minimum film h_allow',
-      formula: 'h_allow = 5 µm + 0.00004·D',
+      formula: `h_allow = ${allowableFilmText(crit)}`,
       substituted: `h_allow = ${fmt(crit.minFilmBase)} m + ${fmt(crit.minFilmPerDiameter)} · ${fmt(D)} m`,
       value: g.allowableFilm,
       unit: 'm',
@@ -599,16 +623,16 @@ function buildSheet(c: CaseSI, e: DesignEvaluation, crit: JournalCriteria, suppl
     },
     {
       label: 'Attitude angle φ',
-      formula: 'φ(ε, L/D) from the Reynolds solution',
-      substituted: `ε = ${fmt(res.eccentricityRatio)}`,
+      formula: 'φ(ε, L/D) from the Reynolds solution (table, interpolated)',
+      substituted: `φ(ε = ${fmt(res.eccentricityRatio)}, L/D = ${fmt(L / D)})`,
       value: res.attitudeDeg,
       unit: 'deg',
       source: RB,
     },
     {
       label: 'Friction coefficient f',
-      formula: 'f = (c/r)·[2π²S/√(1−ε²) + (ε/2)·sin φ]',
-      substituted: `f = (${fmt(cl)}/${fmt(r)}) · [2π² · ${fmt(res.sommerfeld)}/√(1 − ${fmt(res.eccentricityRatio)}²) + (${fmt(res.eccentricityRatio)}/2)·sin ${fmt(res.attitudeDeg)}°]`,
+      formula: 'f = (c/r)·[(r/c)f], friction variable (r/c)f = 2π²S/√(1−ε²) + (ε/2)·sin φ at the table nodes, interpolated at ε',
+      substituted: `f = (${fmt(cl)} m/${fmt(r)} m) · ${fmt(res.point.frictionVariable)}`,
       value: res.frictionCoefficient,
       unit: '1',
       source: RB,
@@ -686,5 +710,19 @@ function buildSheet(c: CaseSI, e: DesignEvaluation, crit: JournalCriteria, suppl
       source: RB,
     },
   );
+  if (e.points.length > 1) {
+    const terms =
+      e.points.length <= 4
+        ? `H̄ = (${e.points.map((p) => `${fmt(p.share)} · ${fmt(p.result.powerLoss)} W`).join(' + ')})/(${e.points.map((p) => fmt(p.share)).join(' + ')})`
+        : `H̄ = (Σ over ${e.points.length} points of share·H)/(Σ share)`;
+    lines.push({
+      label: 'Mean power loss over the duty',
+      formula: 'H̄ = Σ share·H/Σ share over the operating points (H = 0 without a film)',
+      substituted: terms,
+      value: meanPowerLoss(e.points.map((p) => ({ share: p.share, powerLoss: p.result.powerLoss }))),
+      unit: 'W',
+      source: 'definition (time mean)',
+    });
+  }
   return lines;
 }

@@ -1,0 +1,110 @@
+/**
+ * checkJournal on an invented two-point duty (a line-shaft steady bearing of our own): the
+ * calculation sheet prints `substituted = value unit`, so each line's expression must be the
+ * value it is printed with; the temperature margin is the share of the allowed rise above
+ * the inlet (check.ts convention); the film criterion text comes from the criteria data; the
+ * mean power loss is the share-weighted mean of the points (definition of a time mean).
+ */
+import { describe, expect, it } from 'vitest';
+import type { CaseSI } from '../../../src/case/types.js';
+import { allowableFilmText, checkJournal, journalCriteria } from '../../../src/calc/journal/index.js';
+
+function steady(over: Partial<CaseSI> = {}): CaseSI {
+  return {
+    title: 'line-shaft steady bearing, two-speed duty (invented)',
+    shaft: { diameter: 0.06, speed: 1450 / 60 },
+    load: { radial: 2500, axial: 0, shock: 'light' },
+    life: { hours: 40000, wearAllowance: 0.0002, reliability: 90 },
+    space: { maxLength: 0.07, maxOuterDiameter: 0.1 },
+    lubrication: { supply: 'oil-feed', inletTemperature: 40 },
+    environment: { ambient: 30, contamination: 'normal', startsPerHour: 2 },
+    priorities: { cost: 3, friction: 3, maintenance: 3, noise: 3, precision: 3 },
+    duty: [
+      { share: 0.6, radial: 2000, axial: 0, speed: 1450 / 60 },
+      { share: 0.4, radial: 4000, axial: 0, speed: 960 / 60 },
+    ],
+    ...over,
+  };
+}
+
+/** Value of a numerical sheet expression (after its last "="), or null for a function of named arguments. */
+function evaluate(expr: string): number | null {
+  const t = expr.trim();
+  if (/^[^\s=(]+\(.*\)$/.test(t)) return null; // "ε(L/D = 0.7, S = 0.39)"
+  let e = t.slice(t.lastIndexOf('=') + 1);
+  e = e
+    .replace(/J\/\(kg·K\)|kg\/m³|m³\/s|Pa·s|N·m|rev\/s|°C|\bPa\b|\bK\b|\bN\b|\bm\b|\bW\b/g, '')
+    .replace(/−/g, '-')
+    .replace(/½/g, '0.5')
+    .replace(/²/g, '**2')
+    .replace(/·/g, '*')
+    .replace(/(\d)\s*π/g, '$1*Math.PI')
+    .replace(/π/g, 'Math.PI');
+  if (/[A-Za-z_κεφΣνμ]/.test(e.replace(/Math\.PI/g, '').replace(/\d\.?\d*e[+-]?\d+/g, '1'))) return null;
+  const v = Function(`"use strict"; return (${e});`)() as unknown;
+  return typeof v === 'number' && Number.isFinite(v) ? v : null;
+}
+
+describe('journal calculation sheet: each substituted expression is the value it is printed with', () => {
+  const r = checkJournal(steady());
+  it('numerical lines evaluate to their value within 1 % (four-figure numbers); the rest are functions of their arguments', () => {
+    let numerical = 0;
+    for (const l of r.sheet) {
+      const v = evaluate(l.substituted);
+      if (v === null) {
+        expect(l.substituted.trim().endsWith(')'), `${l.label}: "${l.substituted}"`).toBe(true);
+        continue;
+      }
+      numerical++;
+      expect(Math.abs(v - l.value) / Math.max(Math.abs(l.value), 1e-30), `${l.label}: "${l.substituted}" = ${v}, value ${l.value}`).toBeLessThan(0.01);
+    }
+    expect(numerical).toBeGreaterThanOrEqual(12);
+  });
+  it('the attitude angle line is written as φ(ε, L/D), not "ε = …" beside an angle', () => {
+    const phi = r.sheet.find((l) => l.label === 'Attitude angle φ')!;
+    expect(phi.substituted).toMatch(/^φ\(ε = [\d.]+, L\/D = [\d.]+\)$/);
+    expect(phi.value).toBe(r.attitudeAngle);
+  });
+});
+
+describe('film criterion text from the criteria data', () => {
+  it('label and sheet formula carry h_base and k_D of data/journal-criteria.json', () => {
+    const crit = journalCriteria();
+    expect(allowableFilmText(crit)).toBe('5 µm + 0.00004·D'); // the shipped values, 5.0e-6 m and 4.0e-5
+    expect(allowableFilmText({ ...crit, minFilmBase: 8e-6, minFilmPerDiameter: 5e-5 })).toBe('8 µm + 0.00005·D');
+    const r = checkJournal(steady());
+    expect(r.checks.find((k) => k.id === 'min-film')!.label).toContain(allowableFilmText(crit));
+    expect(r.sheet.find((l) => l.label.startsWith('Allowable minimum film'))!.formula).toBe(`h_allow = ${allowableFilmText(crit)}`);
+  });
+});
+
+describe('max-temperature margin: share of the allowed rise above the inlet', () => {
+  it('margin = (T_limit − T_max)/(T_limit − T_in), and the source says so', () => {
+    const r = checkJournal(steady());
+    const k = r.checks.find((x) => x.id === 'max-temperature')!;
+    expect(k.margin).toBeCloseTo((k.limit - k.value) / (k.limit - 40), 12);
+    expect(k.source).toContain('margin: share of the allowed rise above the inlet temperature');
+  });
+  it('inlet 30 °C: measured from 30 °C, not from absolute zero', () => {
+    const cool = checkJournal(steady({ lubrication: { supply: 'oil-feed', inletTemperature: 30, oilGrade: 68 } }));
+    const k = cool.checks.find((x) => x.id === 'max-temperature')!;
+    expect(k.margin).toBeCloseTo((k.limit - k.value) / (k.limit - 30), 12);
+    // measured from absolute zero it would be several times smaller: (121 − T)/(121 + 273.15)
+    expect(k.margin).toBeGreaterThan(((k.limit - k.value) / (k.limit + 273.15)) * 3);
+  });
+});
+
+describe('mean power loss over the duty', () => {
+  it('is Σ share·powerLoss/Σ share over points, and lies between the points', () => {
+    const r = checkJournal(steady());
+    const expected = r.points.reduce((s, p) => s + p.share * p.powerLoss, 0) / r.points.reduce((s, p) => s + p.share, 0);
+    expect(r.meanPowerLoss).toBeCloseTo(expected, 9);
+    const losses = r.points.map((p) => p.powerLoss);
+    expect(r.meanPowerLoss).toBeGreaterThan(Math.min(...losses));
+    expect(r.meanPowerLoss).toBeLessThan(Math.max(...losses));
+  });
+  it('single point: equals the governing power loss', () => {
+    const r = checkJournal(steady({ duty: undefined }));
+    expect(r.meanPowerLoss).toBeCloseTo(r.powerLoss, 9);
+  });
+});
