@@ -136,7 +136,7 @@ export function journalFigures(r: JournalResult): OptionFigures {
     // A full film that holds separates the surfaces: no wear or fatigue life is computed.
     lifeHours: null,
     lifeRatio: null,
-    frictionPower: r.points.reduce((sum, p) => sum + p.share * p.powerLoss, 0),
+    frictionPower: r.meanPowerLoss,
     length: r.length,
     outerDiameter: null,
     failed: r.feasible ? [] : failing(r.checks, r.advisory),

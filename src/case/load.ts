@@ -1,6 +1,7 @@
 import { readFileSync, statSync } from 'node:fs';
 import { parse as parseYaml, YAMLParseError } from 'yaml';
 import { caseFileSchema } from './schema.js';
+import { KINEMATIC_TO_DYNAMIC_DENSITY } from './quantity.js';
 import { completeCase, type Problem } from './defaults.js';
 import type { Assumption, CaseSI } from './types.js';
 import { lubricants } from '../data/load.js';
@@ -101,5 +102,13 @@ export function validateCase(raw: unknown, source = '(case)'): LoadedCase {
   const materials = bushingMaterials().map((m) => m.id);
   const done = completeCase(parsed.data, grades, materials);
   if (done.problems.length) throw new CaseError(source, done.problems);
+  const visc = (raw as { lubrication?: { viscosity?: unknown } }).lubrication?.viscosity;
+  if (typeof visc === 'string' && /St\b|m\^?2\/s/.test(visc)) {
+    done.assumed.push({
+      field: 'lubrication.viscosity',
+      value: `${visc} read as ${+(done.case.lubrication.viscosity! * 1000).toPrecision(4)} mPa*s`,
+      reason: `a kinematic viscosity is made dynamic with a density of ${KINEMATIC_TO_DYNAMIC_DENSITY} kg/m^3 (typical mineral oil near 40 degC, from memory); give Pa*s to avoid it`,
+    });
+  }
   return { case: done.case, assumed: done.assumed, given: raw };
 }

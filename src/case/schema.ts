@@ -169,7 +169,7 @@ export const caseFileSchema = mapping({
     supply: choice(SUPPLIES).optional(),
     oil: oilSchema.optional(),
     viscosity: quantity('viscosity', 'positive', { max: 10, say: 'a viscosity up to 10 Pa*s' }).optional(),
-    inletTemperature: quantity('temperature', 'any', TEMPERATURE).optional(),
+    inletTemperature: quantity('temperature', 'any', { min: -30, max: 150, say: 'an oil inlet temperature from -30 degC to 150 degC (mineral oils)' }).optional(),
   }).optional(),
   environment: mapping({
     ambient: quantity('temperature', 'any', TEMPERATURE).optional(),

@@ -30,6 +30,11 @@ export function dataDir(): URL {
 let resolved: { env: string | undefined; url: URL } | undefined;
 const cache = new Map<string, unknown>();
 
+/** A table's name in messages: data/<file>, or the full path when SHAFTWISE_DATA_DIR points elsewhere. */
+function shownPath(file: string): string {
+  return process.env.SHAFTWISE_DATA_DIR ? `${process.env.SHAFTWISE_DATA_DIR.replace(/\/$/, '')}/${file} (SHAFTWISE_DATA_DIR)` : `data/${file}`;
+}
+
 /**
  * Read data/<file> and validate it with schema; cached per file. The tables shipped in data/
  * are validated by the test suite (test/data/shipped-tables.test.ts) and trusted at run time,
@@ -46,7 +51,7 @@ export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
   try {
     raw = JSON.parse(readFileSync(url, 'utf8'));
   } catch (e) {
-    throw new DataError(`data/${file}: cannot be read as JSON (${(e as Error).message})`);
+    throw new DataError(`${shownPath(file)}: cannot be read as JSON (${(e as Error).message})`);
   }
   if (!process.env.SHAFTWISE_DATA_DIR) {
     cache.set(key, raw);
@@ -56,7 +61,7 @@ export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
     throw new DataError(
-      `data/${file}: field ${issue.path.join('.') || '(root)'}: ${issue.message}`,
+      `${shownPath(file)}: field ${issue.path.join('.') || '(root)'}: ${issue.message}`,
     );
   }
   cache.set(key, parsed.data);

@@ -23,6 +23,8 @@ import { referencePoint, scaleCase } from './scale.js';
  * as an inline material with its low and high values scaled alike).
  */
 export const STEPS = [-0.25, -0.1, 0.1, 0.25] as const;
+/** Span the inlet-temperature steps are shares of, K (shaftwise choice: ±4 K and ±10 K). */
+export const INLET_SPAN = 40;
 
 export type ParameterId = 'load' | 'speed' | 'life' | 'inletTemperature' | 'clearance' | 'wearFactor';
 
@@ -101,10 +103,12 @@ export async function computeSensitivity(c: CaseSI, assumed: Assumption[], opts:
     { id: 'life', label: 'Life target', unit: 'h', base: c.life.hours, make: (s) => adv({ ...c, life: { ...c.life, hours: c.life.hours * (1 + s) } }) },
     {
       id: 'inletTemperature',
-      label: 'Oil inlet temperature (per cent of °C)',
+      // A percentage of a Celsius value means nothing (0 °C would never move, −5 °C moves the
+      // wrong way): the step is that share of a fixed 40 K span, so ±4 K and ±10 K.
+      label: `Oil inlet temperature (±10 % / ±25 % of ${INLET_SPAN} K)`,
       unit: 'degC',
       base: c.lubrication.inletTemperature,
-      make: (s) => adv({ ...c, lubrication: { ...c.lubrication, inletTemperature: c.lubrication.inletTemperature * (1 + s) } }),
+      make: (s) => adv({ ...c, lubrication: { ...c.lubrication, inletTemperature: c.lubrication.inletTemperature + s * INLET_SPAN } }),
     },
     { id: 'clearance', label: 'Journal radial clearance (design found)', unit: 'm', base: jd.radialClearance, make: (s) => adv({ ...c, journal: { radialClearance: jd.radialClearance * (1 + s) } }, true) },
   ];

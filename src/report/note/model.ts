@@ -98,13 +98,16 @@ function dutyRows(loaded: LoadedCase, u: UnitSystem): Cell[][] {
   flatten(loaded.case, '', si);
   flatten(loaded.given, '', given);
   const rows: Cell[][] = [];
+  // Keys the SI case holds under another name than the case file.
+  const givenAs: Record<string, string> = { 'lubrication.oilGrade': 'lubrication.oil' };
   for (const [path, v] of si) {
     if (path === 'title') continue;
-    const g = given.get(path);
+    const g = given.get(path) ?? (givenAs[path] ? given.get(givenAs[path]) : undefined);
     rows.push([path, g === undefined ? '(default)' : String(g), siText(path, v, u)]);
   }
   // Fields the user wrote that the SI case holds under another shape (e.g. "oil: ISO VG 68").
-  for (const [path, g] of given) if (!si.has(path) && path !== 'title') rows.push([path, String(g), 'read as described under Assumptions']);
+  const renamed = new Set(Object.values(givenAs));
+  for (const [path, g] of given) if (!si.has(path) && path !== 'title' && !renamed.has(path)) rows.push([path, String(g), 'read as described under Assumptions']);
   return rows;
 }
 
