@@ -3,6 +3,12 @@ import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 import { checksTable, heading, mark, paint } from './text.js';
 
+/** A temperature estimate more than twice the allowed rise above ambient (the model is linear and one-node). */
+function outOfRange(m: BushingResult['materials'][number]): boolean {
+  const k = m.checks.find((x) => x.id === 'temperature');
+  return k !== undefined && k.margin < -1;
+}
+
 /** The plain-bushing check for a person: a summary over materials, then each material's checks. */
 export function bushingText(r: BushingResult, units: UnitSystem): string {
   const out: string[] = [heading('Plain bushing (boundary lubricated)')];
@@ -17,10 +23,13 @@ export function bushingText(r: BushingResult, units: UnitSystem): string {
         fmt(m.pressure, 'Pa', units),
         fmt(m.pv, 'Pa*m/s', units),
         `${fmt(m.lifeBand.short, 'h', units, 2)} / ${fmt(m.lifeBand.typical, 'h', units, 2)} / ${fmt(m.lifeBand.long, 'h', units, 2)}`,
-        fmt(m.temperature, 'degC', units),
+        outOfRange(m) ? `${fmt(m.temperature, 'degC', units)} *` : fmt(m.temperature, 'degC', units),
       ]),
     ),
   );
+  if (r.materials.some(outOfRange)) {
+    out.push('* beyond twice the allowed rise: the one-node temperature model is out of its range there; read it as "far too hot", not as a figure.');
+  }
   out.push(r.best ? paint.bold(`Best: ${r.bestReason}.`) : paint.bold(`None: ${r.bestReason}.`));
   out.push('Life band: hours to wear through the allowance at the high, typical and low published wear factor.');
   for (const m of r.materials) {

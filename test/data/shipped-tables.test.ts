@@ -28,7 +28,9 @@ describe('shipped data tables', () => {
   it('rolling-boundary-dimensions.json and rolling-factors.json', async () => {
     const { boundaryDimensions, rollingFactors } = await import('../../src/data/rolling.js');
     expect(Object.keys(boundaryDimensions()).length).toBeGreaterThan(0);
-    expect(rollingFactors()).toBeTruthy();
+    const f = rollingFactors();
+    expect(f.xyDeepGrooveBall.rows.length).toBeGreaterThanOrEqual(9); // ISO 281 table, nine Fa/C0 rows
+    expect(f.serviceFactors.map((x) => x.shock)).toEqual(['none', 'light', 'moderate', 'heavy']);
   });
   it('journal-criteria.json and journal-tables.json', async () => {
     const { journalCriteria } = await import('../../src/calc/journal/index.js');
