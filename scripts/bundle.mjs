@@ -12,6 +12,8 @@ await build({
   input: 'dist/cli/main.js',
   platform: 'node',
   external: [/^node:/],
+  // json-rules-engine's default JSONPath resolver is never used (see scripts/jsonpath-stub.mjs).
+  resolve: { alias: { 'jsonpath-plus': new URL('./jsonpath-stub.mjs', import.meta.url).pathname } },
   logLevel: 'warn',
   output: {
     dir: 'dist/bundle',
