@@ -69,3 +69,19 @@ describe('checkBushing', () => {
     expect(hard.bestReason).toMatch(/no material passes every check/);
   });
 });
+
+describe('bushing calculation sheet', () => {
+  it('names the material shown and every numerical line evaluates to its value within 1 % (four-figure numbers)', async () => {
+    const { evaluate } = await import('../../helpers/sheet.js');
+    const r = checkBushing(pumpCase());
+    expect(r.sheet[0]!.label).toContain(r.materials.find((m) => m.id === r.shown)!.name);
+    let numerical = 0;
+    for (const l of r.sheet) {
+      const v = evaluate(l.substituted.replace(/m\^2\/N/g, '').replace(/m\/s/g, '').replace(/\bs\b/g, '').replace(/rad|Hz/g, ''));
+      if (v === null) continue;
+      numerical++;
+      expect(Math.abs(v / l.value - 1), `${l.label}: ${l.substituted}`).toBeLessThan(0.01);
+    }
+    expect(numerical).toBeGreaterThanOrEqual(5);
+  });
+});

@@ -6,6 +6,7 @@
  * mean power loss is the share-weighted mean of the points (definition of a time mean).
  */
 import { describe, expect, it } from 'vitest';
+import { evaluate } from '../../helpers/sheet.js';
 import type { CaseSI } from '../../../src/case/types.js';
 import { allowableFilmText, checkJournal, journalCriteria } from '../../../src/calc/journal/index.js';
 
@@ -27,23 +28,6 @@ function steady(over: Partial<CaseSI> = {}): CaseSI {
   };
 }
 
-/** Value of a numerical sheet expression (after its last "="), or null for a function of named arguments. */
-function evaluate(expr: string): number | null {
-  const t = expr.trim();
-  if (/^[^\s=(]+\(.*\)$/.test(t)) return null; // "ε(L/D = 0.7, S = 0.39)"
-  let e = t.slice(t.lastIndexOf('=') + 1);
-  e = e
-    .replace(/J\/\(kg·K\)|kg\/m³|m³\/s|Pa·s|N·m|rev\/s|°C|\bPa\b|\bK\b|\bN\b|\bm\b|\bW\b/g, '')
-    .replace(/−/g, '-')
-    .replace(/½/g, '0.5')
-    .replace(/²/g, '**2')
-    .replace(/·/g, '*')
-    .replace(/(\d)\s*π/g, '$1*Math.PI')
-    .replace(/π/g, 'Math.PI');
-  if (/[A-Za-z_κεφΣνμ]/.test(e.replace(/Math\.PI/g, '').replace(/\d\.?\d*e[+-]?\d+/g, '1'))) return null;
-  const v = Function(`"use strict"; return (${e});`)() as unknown;
-  return typeof v === 'number' && Number.isFinite(v) ? v : null;
-}
 
 describe('journal calculation sheet: each substituted expression is the value it is printed with', () => {
   const r = checkJournal(steady());

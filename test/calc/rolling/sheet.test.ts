@@ -4,6 +4,7 @@
 // Also: the required dynamic rating names its bearing type and p. Invented case (a
 // tumbling-drum idler of our own), no published answers.
 import { describe, expect, it } from 'vitest';
+import { evaluate } from '../../helpers/sheet.js';
 import type { CaseSI } from '../../../src/case/types.js';
 import { checkRolling, lifeExponent, requiredDynamicRating } from '../../../src/calc/rolling/index.js';
 
@@ -25,30 +26,6 @@ function drumIdler(over: Partial<CaseSI> = {}): CaseSI {
   };
 }
 
-/**
- * Value of a purely numerical expression as the sheet writes it (·, ×, ^, π, √, ln, units),
- * or null when it holds a named function or symbol (e.g. "a_ISO(κ = …)").
- */
-function evaluate(expr: string): number | null {
-  if (/^[^\s=(]+\(.*\)$/.test(expr.trim()) || /^min\(/.test(expr.trim())) return null; // "a_ISO(κ = …)"
-  let e = expr.slice(expr.lastIndexOf('=') + 1); // the expression after the last "="
-  e = e
-    .replace(/N·m|r\/min|rev\/s|mm²\/s|m³\/s|°C|\bmm\b|\bN\b|\bm\b|\bh\b|\bW\b/g, '')
-    .replace(/−/g, '-')
-    .replace(/[·×]/g, '*')
-    .replace(/\^/g, '**')
-    .replace(/(\d)\s*π/g, '$1*Math.PI')
-    .replace(/π/g, 'Math.PI')
-    .replace(/√\s*([\d.e+-]+)/g, 'Math.sqrt($1)')
-    .replace(/\bln\(/g, 'Math.log(')
-    .replace(/\[/g, '(')
-    .replace(/\]/g, ')')
-    .replace(/(\d)\s*\*\*\s*-([\d.]+)/g, '$1**(-$2)');
-  if (/[A-Za-z_κεφΣνμ]/.test(e.replace(/Math\.(PI|sqrt|log)/g, ''))) return null;
-  // eslint-disable-next-line @typescript-eslint/no-implied-eval
-  const v = Function(`"use strict"; return (${e});`)() as unknown;
-  return typeof v === 'number' && Number.isFinite(v) ? v : null;
-}
 
 describe('rolling calculation sheet: each substituted expression is the value it is printed with', () => {
   const r = checkRolling(drumIdler());
