@@ -379,7 +379,8 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
   if ((supply === 'none' || supply === 'grease') && (lengths.length > 1 || clearances.length > 1)) {
     lengths = [Math.max(...lengths)];
     if (c.journal?.radialClearance === undefined && c.journal?.clearanceRatio === undefined) clearances = [0.001 * r];
-    for (const a of assumed) if (a.value === 'chosen from the sweep') a.value = 'one representative design, no sweep';
+    // The sweep's own assumptions no longer apply; the one below replaces them.
+    for (let k = assumed.length - 1; k >= 0; k--) if (assumed[k]!.value === 'chosen from the sweep') assumed.splice(k, 1);
     assumed.push({
       field: 'journal.design',
       value: `L = ${fmt(lengths[0]!)} m, c = ${fmt(clearances[0]!)} m`,
