@@ -192,7 +192,9 @@ export function evaluateDesign(
   const maxT = Math.max(...results.map((r) => r.result.maxTemperature));
   const startUnitLoad = startLoad / (candidate.length * diameter);
   const filmMargin = results[gi]!.filmMargin;
-  const temperatureMargin = (crit.maxTemperature - maxT) / crit.maxTemperature;
+  // Share of the allowed rise above the inlet left (the check-record convention for temperatures, check.ts).
+  const allowedRise = crit.maxTemperature - inletTemperature;
+  const temperatureMargin = allowedRise > 0 ? (crit.maxTemperature - maxT) / allowedRise : (crit.maxTemperature - maxT) / (crit.maxTemperature + 273.15);
   const startMargin = (crit.maxStartUnitLoad - startUnitLoad) / crit.maxStartUnitLoad;
   return {
     candidate,
