@@ -562,6 +562,10 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
   const lines: SheetLine[] = [];
   const p = lifeExponent(k.type);
   const pTxt = k.type === 'ball' ? '3' : '10/3';
+  /** 1/p written as a plain fraction: "1/10/3" would read as 1/30. */
+  const invTxt = k.type === 'ball' ? '1/3' : '3/10';
+  /** p as an exponent: "^10/3" would read as (…^10)/3. */
+  const powTxt = k.type === 'ball' ? '3' : '(10/3)';
   const mu = x.f.friction.find((q) => q.type === k.type)!.mu;
   // Per-point loads as evaluate() works them: Pi without f_d (friction), f_d·Pi (life).
   const per = x.points.map((q) => ({ ...q, P: dynamicEquivalentLoad(k.type, q.Fr, q.Fa, k.staticRating, x.f.xyDeepGrooveBall).P }));
@@ -571,13 +575,13 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
   if (per.length > 1) {
     const w = (q: (typeof per)[number]): string => (byRevolutions ? `${fmt(q.n * 60)}·${fmt(q.t)}` : fmt(q.t));
     const num = many
-      ? `Σ over ${per.length} points of Pi^${pTxt}·${byRevolutions ? 'ni·ti' : 'ti'}`
-      : per.map((q) => `${fmt(x.serviceFactor * q.P)}^${pTxt}·${w(q)}`).join(' + ');
+      ? `Σ over ${per.length} points of Pi^${powTxt}·${byRevolutions ? 'ni·ti' : 'ti'}`
+      : per.map((q) => `${fmt(x.serviceFactor * q.P)}^${powTxt}·${w(q)}`).join(' + ');
     const den = many ? (byRevolutions ? 'Σ ni·ti' : 'Σ ti') : per.map(w).join(' + ');
     lines.push({
       label: `Dynamic equivalent load P (${k.designation})`,
       formula: `P = (Σ Pi^p·${byRevolutions ? 'ni·ti / Σ ni·ti' : 'ti / Σ ti'})^(1/p), Pi = f_d·(X·Fr + Y·Fa), p = ${pTxt}, f_d = ${x.serviceFactor}${byRevolutions ? ', n in r/min' : ''}`,
-      substituted: `P = [(${num})/(${den})]^(1/${pTxt})`,
+      substituted: `P = [(${num})/(${den})]^(${invTxt})`,
       value: k.equivalentLoad,
       unit: 'N',
       source: 'ISO 281:2007 (X, Y table; variable load); service factor common practice',
@@ -595,7 +599,7 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
     });
   }
   if (k.L10 !== null) {
-    lines.push({ label: 'Basic rating life L10', formula: 'L10 = (C/P)^p', substituted: `L10 = (${fmt(k.dynamicRating)} N / ${fmt(k.equivalentLoad)} N)^${pTxt}`, value: k.L10, unit: '10^6 rev', source: 'ISO 281:2007' });
+    lines.push({ label: 'Basic rating life L10', formula: 'L10 = (C/P)^p', substituted: `L10 = (${fmt(k.dynamicRating)} N / ${fmt(k.equivalentLoad)} N)^${powTxt}`, value: k.L10, unit: '10^6 rev', source: 'ISO 281:2007' });
   }
   if (k.L10h !== null && k.L10 !== null) {
     lines.push({ label: 'Basic rating life L10h', formula: 'L10h = 10^6·L10/(60·n)', substituted: `L10h = 10^6·${fmt(k.L10)}/(60·${fmt(n * 60)} r/min)`, value: k.L10h, unit: 'h', source: 'ISO 281:2007' });
@@ -604,7 +608,7 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
     lines.push({
       label: `Basic dynamic rating needed for the life target (${KIND[k.type]}, p = ${pTxt})`,
       formula: 'C_req = P·(L_req/a1)^(1/p), L_req = 60·n·h/10^6 (n in r/min)',
-      substituted: `C_req = ${fmt(k.equivalentLoad)} N·(60·${fmt(n * 60)} r/min·${fmt(x.c.life.hours)} h/10^6/${fmt(k.a1)})^(1/${pTxt})`,
+      substituted: `C_req = ${fmt(k.equivalentLoad)} N·(60·${fmt(n * 60)} r/min·${fmt(x.c.life.hours)} h/10^6/${fmt(k.a1)})^(${invTxt})`,
       value: k.requiredDynamicRating,
       unit: 'N',
       source: 'ISO 281:2007, from L10 = (C/P)^p with a1 (a_ISO taken as 1)',
