@@ -3,7 +3,7 @@
 // Prints: whole-process time of a 60×60 map (SVG out) against bare `node -e 0`, per-point
 // costs of each part in-process, and the agreement of the map's winners with full advise()
 // (journal design sweep at every point) on a 12×12 sub-grid.
-import { spawnSync } from 'node:child_process';
+import { interleaved } from './lib.mjs';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -25,22 +25,19 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 const main = join(root, 'dist/bundle/shaftwise.mjs');
 const out = mkdtempSync(join(tmpdir(), 'shaftwise-bench-'));
 
-function median(cmd, args) {
-  const t = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = process.hrtime.bigint();
-    const r = spawnSync(cmd, args, { cwd: root, stdio: 'ignore' });
-    if (r.status !== 0) throw new Error(`${args.join(' ')} exited ${r.status}`);
-    t.push(Number(process.hrtime.bigint() - t0) / 1e6);
-  }
-  t.sort((a, b) => a - b);
-  return t[Math.floor(t.length / 2)];
-}
-median(process.execPath, ['-e', '0']);
-const bare = median(process.execPath, ['-e', '0']);
-const map60 = median(process.execPath, [main, 'map', file, '--grid', '60', '--out', join(out, 'm.svg'), '--force']);
-const adv = median(process.execPath, [main, 'advise', file]);
-console.log(`== whole process, median of ${runs} ==`);
+const w = interleaved(
+  [
+    { name: 'bare', args: ['-e', '0'] },
+    { name: 'map', args: [main, 'map', file, '--grid', '60', '--out', join(out, 'm.svg'), '--force'] },
+    { name: 'advise', args: [main, 'advise', file] },
+  ],
+  runs,
+  root,
+);
+const bare = w.bare.median;
+const map60 = w.map.median;
+const adv = w.advise.median;
+console.log(`== whole process, median of ${runs} interleaved rounds ==`);
 console.log(`node -e 0:                 ${bare.toFixed(0)} ms`);
 console.log(`shaftwise advise:          ${adv.toFixed(0)} ms  (${(adv / bare).toFixed(1)}x)`);
 console.log(`shaftwise map --grid 60:   ${map60.toFixed(0)} ms  (${(map60 / bare).toFixed(1)}x; budget 3000 ms)`);
