@@ -110,6 +110,8 @@ export interface JournalResult {
   maxTemperature: number;
   viscosity: number;
   oil: string;
+  /** ISO VG grade of the design's oil (null with a fixed viscosity). */
+  oilGrade: number | null;
   feasible: boolean;
   checks: CheckRecord[];
   /** Ids of checks that inform but do not decide `feasible`. */
@@ -506,6 +508,7 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     maxTemperature: chosen.maxTemperature,
     viscosity: res.viscosity,
     oil: chosen.candidate.oil,
+    oilGrade: chosen.candidate.grade ?? null,
     feasible,
     checks,
     advisory,

@@ -114,20 +114,19 @@ export function rollingLifeChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
   };
 }
 
-/** The lubricant of the chosen journal design, rebuilt from the case and the oil label. */
-function journalFluid(c: CaseSI, oil: string): Fluid | null {
+/** The lubricant of the chosen journal design, as the check reports it (its grade, or the case's fixed viscosity). */
+function journalFluid(c: CaseSI, grade: number | null): Fluid | null {
   const crit = journalCriteria();
   if (c.lubrication.viscosity !== undefined) return { kind: 'fixed', viscosity: c.lubrication.viscosity, density: crit.fixedDensity, specificHeat: crit.fixedSpecificHeat };
-  const g = /ISO VG (\d+)/.exec(oil);
-  const grade = g ? oilGrade(Number(g[1])) : undefined;
-  return grade ? { kind: 'oil', oil: grade } : null;
+  const row = grade === null ? undefined : oilGrade(grade);
+  return row ? { kind: 'oil', oil: row } : null;
 }
 
 export function journalSpeedCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): NoteChart[] {
   const j = a.checks.journal;
   const ids = ['journal-film', 'journal-temperature'];
   const gov = j.points[j.governingPoint];
-  const fluid = journalFluid(c, j.oil);
+  const fluid = journalFluid(c, j.oilGrade);
   if (!gov || !gov.film || !fluid) {
     const why = 'No hydrodynamic film at the operating point (no rotation or no lubricant): no speed charts.';
     return ids.map((id) => ({ id, spec: null, caption: why }));
