@@ -17,3 +17,21 @@ export function pumpCase(over: Record<string, unknown> = {}): CaseSI {
   };
   return validateCase({ ...base, ...over }).case;
 }
+
+/**
+ * An SI case for the journal tests, in an invented scenario: the steady bearing of an
+ * irrigation canal lift pump's line shaft, fed with pumped oil. Override any part.
+ */
+export function lineShaftCase(over: Partial<CaseSI> = {}): CaseSI {
+  return {
+    title: 'Irrigation canal lift pump, line-shaft steady bearing (invented)',
+    shaft: { diameter: 0.06, speed: 1450 / 60 },
+    load: { radial: 2500, axial: 0, shock: 'light' },
+    life: { hours: 40000, wearAllowance: 0.0002, reliability: 90 },
+    space: { maxLength: 0.07, maxOuterDiameter: 0.1 },
+    lubrication: { supply: 'oil-feed', inletTemperature: 40 },
+    environment: { ambient: 30, contamination: 'normal', startsPerHour: 2 },
+    priorities: { cost: 3, friction: 3, maintenance: 3, noise: 3, precision: 3 },
+    ...over,
+  };
+}

@@ -6,29 +6,9 @@
  * for the limits, common practice for supply and motion) — no hard-coded answers.
  */
 import { describe, expect, it } from 'vitest';
-import type { CaseSI } from '../../../src/case/types.js';
 import { checkJournal } from '../../../src/calc/journal/index.js';
-
-function lineShaft(over: Partial<CaseSI> = {}): CaseSI {
-  return {
-    title: 'Irrigation canal lift pump, line-shaft steady bearing (invented)',
-    shaft: { diameter: 0.06, speed: 1450 / 60 },
-    load: { radial: 2500, axial: 0, shock: 'light' },
-    life: { hours: 40000, wearAllowance: 0.0002, reliability: 90 },
-    space: { maxLength: 0.07, maxOuterDiameter: 0.1 },
-    lubrication: { supply: 'oil-feed', inletTemperature: 40 },
-    environment: { ambient: 30, contamination: 'normal', startsPerHour: 2 },
-    priorities: { cost: 3, friction: 3, maintenance: 3, noise: 3, precision: 3 },
-    ...over,
-  };
-}
-
-function allFinite(v: unknown): boolean {
-  if (typeof v === 'number') return Number.isFinite(v);
-  if (Array.isArray(v)) return v.every(allFinite);
-  if (v && typeof v === 'object') return Object.values(v).every(allFinite);
-  return true;
-}
+import { lineShaftCase } from '../../helpers/case.js';
+import { allFinite } from '../../helpers/finite.js';
 
 const CONTRACT_KEYS = [
   'option', 'length', 'radialClearance', 'lengthToDiameter', 'sommerfeld', 'eccentricityRatio',
@@ -38,7 +18,7 @@ const CONTRACT_KEYS = [
 ];
 
 describe('checkJournal — line-shaft steady bearing, oil feed', () => {
-  const r = checkJournal(lineShaft());
+  const r = checkJournal(lineShaftCase());
 
   it('returns every contract key, finite numbers only', () => {
     for (const k of CONTRACT_KEYS) expect(r).toHaveProperty(k);
@@ -93,7 +73,7 @@ describe('checkJournal — line-shaft steady bearing, oil feed', () => {
 
 describe('checkJournal — supplies that cannot keep a full film (common practice)', () => {
   it('supply none: not feasible, with a failing supply check and zero film', () => {
-    const r = checkJournal(lineShaft({ lubrication: { supply: 'none', inletTemperature: 30 } }));
+    const r = checkJournal(lineShaftCase({ lubrication: { supply: 'none', inletTemperature: 30 } }));
     expect(r.feasible).toBe(false);
     expect(r.checks.find((c) => c.id === 'supply')?.pass).toBe(false);
     expect(r.minFilmThickness).toBe(0);
@@ -101,7 +81,7 @@ describe('checkJournal — supplies that cannot keep a full film (common practic
   });
 
   it('grease: not feasible; the base-oil numbers are still computed and flagged as an upper bound', () => {
-    const r = checkJournal(lineShaft({ lubrication: { supply: 'grease', inletTemperature: 40 } }));
+    const r = checkJournal(lineShaftCase({ lubrication: { supply: 'grease', inletTemperature: 40 } }));
     expect(r.feasible).toBe(false);
     expect(r.checks.find((c) => c.id === 'supply')?.pass).toBe(false);
     expect(r.oil).toMatch(/grease base oil/);
@@ -114,7 +94,7 @@ describe('checkJournal — oscillating shaft (equivalent rotational speed, duty.
   it('a slow swing of the same shaft gives a film far below the allowable, and says reversal passes through zero', () => {
     // A gate-drive shaft on the same canal (invented): ±10° swing every 12 s.
     const r = checkJournal(
-      lineShaft({ shaft: { diameter: 0.06, oscillation: { angle: (20 * Math.PI) / 180, frequency: 1 / 12 } } }),
+      lineShaftCase({ shaft: { diameter: 0.06, oscillation: { angle: (20 * Math.PI) / 180, frequency: 1 / 12 } } }),
     );
     expect(r.feasible).toBe(false);
     // "Far below": under a quarter of the allowable even with the sweep choosing the thickest-film design.
@@ -129,7 +109,7 @@ describe('checkJournal — oscillating shaft (equivalent rotational speed, duty.
 describe('checkJournal — given geometry and fixed viscosity', () => {
   it('reports exactly that geometry and viscosity, with no sweep over grades', () => {
     const r = checkJournal(
-      lineShaft({
+      lineShaftCase({
         lubrication: { supply: 'oil-feed', inletTemperature: 40, viscosity: 0.03 },
         journal: { length: 0.045, clearanceRatio: 0.0011 },
       }),
@@ -148,7 +128,7 @@ describe('checkJournal — given geometry and fixed viscosity', () => {
 describe('checkJournal — duty spectrum', () => {
   it('headline figures are those of the point with the smallest film margin', () => {
     const r = checkJournal(
-      lineShaft({
+      lineShaftCase({
         lubrication: { supply: 'oil-feed', inletTemperature: 40, oilGrade: 68 },
         duty: [
           { share: 0.6, radial: 2000, axial: 0, speed: 1450 / 60 },
@@ -168,7 +148,7 @@ describe('checkJournal — duty spectrum', () => {
   });
 
   it('an unknown oil grade is a clear error naming the field', () => {
-    expect(() => checkJournal(lineShaft({ lubrication: { supply: 'oil-feed', inletTemperature: 40, oilGrade: 55 } }))).toThrow(
+    expect(() => checkJournal(lineShaftCase({ lubrication: { supply: 'oil-feed', inletTemperature: 40, oilGrade: 55 } }))).toThrow(
       /oilGrade ISO VG 55/,
     );
   });
@@ -177,7 +157,7 @@ describe('checkJournal — duty spectrum', () => {
 describe('checkJournal — lightly loaded', () => {
   it('warns of whirl when the eccentricity ratio stays below 0.2 (common practice)', () => {
     const r = checkJournal(
-      lineShaft({
+      lineShaftCase({
         load: { radial: 150, axial: 0, shock: 'none' },
         lubrication: { supply: 'oil-feed', inletTemperature: 40, oilGrade: 68 },
         journal: { length: 0.06, clearanceRatio: 0.001 },

@@ -7,25 +7,20 @@
  */
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../helpers/sheet.js';
+import { lineShaftCase } from '../../helpers/case.js';
 import type { CaseSI } from '../../../src/case/types.js';
 import { allowableFilmText, checkJournal, journalCriteria } from '../../../src/calc/journal/index.js';
 
+/** The line-shaft case with a two-speed duty. */
 function steady(over: Partial<CaseSI> = {}): CaseSI {
-  return {
+  return lineShaftCase({
     title: 'line-shaft steady bearing, two-speed duty (invented)',
-    shaft: { diameter: 0.06, speed: 1450 / 60 },
-    load: { radial: 2500, axial: 0, shock: 'light' },
-    life: { hours: 40000, wearAllowance: 0.0002, reliability: 90 },
-    space: { maxLength: 0.07, maxOuterDiameter: 0.1 },
-    lubrication: { supply: 'oil-feed', inletTemperature: 40 },
-    environment: { ambient: 30, contamination: 'normal', startsPerHour: 2 },
-    priorities: { cost: 3, friction: 3, maintenance: 3, noise: 3, precision: 3 },
     duty: [
       { share: 0.6, radial: 2000, axial: 0, speed: 1450 / 60 },
       { share: 0.4, radial: 4000, axial: 0, speed: 960 / 60 },
     ],
     ...over,
-  };
+  });
 }
 
 

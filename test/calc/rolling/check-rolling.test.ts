@@ -4,6 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import type { CaseSI } from '../../../src/case/types.js';
 import { checkRolling } from '../../../src/calc/rolling/index.js';
+import { allFinite } from '../../helpers/finite.js';
 
 /** Head shaft of a carton conveyor on a packaging line (invented): 35 mm shaft, 180 r/min. */
 function conveyorShaft(over: Partial<CaseSI> = {}): CaseSI {
@@ -18,14 +19,6 @@ function conveyorShaft(over: Partial<CaseSI> = {}): CaseSI {
     priorities: { cost: 3, friction: 3, maintenance: 3, noise: 3, precision: 3 },
     ...over,
   };
-}
-
-/** Every number anywhere in the result is finite (null allowed). */
-function allFinite(x: unknown): boolean {
-  if (typeof x === 'number') return Number.isFinite(x);
-  if (Array.isArray(x)) return x.every(allFinite);
-  if (x && typeof x === 'object') return Object.values(x).every(allFinite);
-  return true;
 }
 
 describe('carton conveyor head shaft', () => {
