@@ -12,5 +12,6 @@ export function table(head: string[], rows: string[][], indent = '  '): string {
 }
 
 // Width ignores ANSI colour codes so coloured and plain output line up alike.
+// eslint-disable-next-line no-control-regex -- ANSI escape codes start with ESC
 const strip = (s: string) => s.replace(/\u001b\[[0-9;]*m/g, '');
 const len = (s: string) => [...strip(s)].length;

@@ -39,6 +39,7 @@ describe('shaftwise check bushing', () => {
   it('prints a table a person can read without colour, with units and the caution', () => {
     const r = runCli(['check', 'bushing', DEMO]);
     expect(r.code).toBe(0);
+    // eslint-disable-next-line no-control-regex -- ANSI escape codes start with ESC
     expect(r.stdout).not.toMatch(/\u001b\[/);
     expect(r.stdout).toMatch(/FAIL|ok {2}/);
     expect(r.stdout).toMatch(/MPa·m\/s/);

@@ -16,12 +16,23 @@ function parseCsv(text: string): string[][] {
   for (let k = 0; k < text.length; k++) {
     const ch = text[k]!;
     if (q) {
-      if (ch === '"' && text[k + 1] === '"') (f += '"'), k++;
+      if (ch === '"' && text[k + 1] === '"') {
+        f += '"';
+        k++;
+      }
       else if (ch === '"') q = false;
       else f += ch;
     } else if (ch === '"') q = true;
-    else if (ch === ',') row.push(f), (f = '');
-    else if (ch === '\r' && text[k + 1] === '\n') row.push(f), rows.push(row), (row = []), (f = ''), k++;
+    else if (ch === ',') {
+      row.push(f);
+      f = '';
+    } else if (ch === '\r' && text[k + 1] === '\n') {
+      row.push(f);
+      rows.push(row);
+      row = [];
+      f = '';
+      k++;
+    }
     else f += ch;
   }
   return rows;

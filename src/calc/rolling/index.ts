@@ -560,7 +560,6 @@ const SHEET_TERMS_MAX = 4;
  */
 function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
   const lines: SheetLine[] = [];
-  const p = lifeExponent(k.type);
   const pTxt = k.type === 'ball' ? '3' : '10/3';
   /** 1/p written as a plain fraction: "1/10/3" would read as 1/30. */
   const invTxt = k.type === 'ball' ? '1/3' : '3/10';

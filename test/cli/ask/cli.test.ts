@@ -76,6 +76,7 @@ function onTerminal(cwd: string, args: string[], keys: string[]): Promise<{ code
     child.on('error', reject);
     child.on('close', (code) => {
       clearInterval(timer);
+      // eslint-disable-next-line no-control-regex -- ANSI escape codes start with ESC
       resolve({ code, screen: screen.replace(/\u001b\[[0-9;?]*[a-zA-Z]/g, '') });
     });
   });
