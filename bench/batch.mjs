@@ -16,7 +16,10 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 const main = join(root, 'dist/bundle/shaftwise.mjs');
 const src = join(root, 'examples/batch');
 const dir = mkdtempSync(join(tmpdir(), 'shaftwise-batch-'));
-const bases = readdirSync(src).filter((f) => f.endsWith('.yaml')).sort().map((f) => parse(readFileSync(join(src, f), 'utf8')));
+const bases = readdirSync(src)
+  .filter((f) => f.endsWith('.yaml'))
+  .sort()
+  .map((f) => parse(readFileSync(join(src, f), 'utf8')));
 
 // Scale a quantity string "9 kN" by k, keeping its unit.
 const scale = (q, k) => q.replace(/^([\d.]+)/, (n) => String(+(Number(n) * k).toPrecision(4)));
@@ -50,6 +53,8 @@ const batch = w.batch.median;
 const rows = readFileSync(out, 'utf8').trim().split('\r\n').length - 1;
 console.log(`node -e 0:                       ${bare.toFixed(0)} ms (median of ${runs} interleaved rounds)`);
 console.log(`shaftwise advise (one case):     ${one.toFixed(0)} ms (${(one / bare).toFixed(1)}x node)`);
-console.log(`shaftwise batch (${count} cases):     ${batch.toFixed(0)} ms (${(batch / bare).toFixed(1)}x node, ${(batch / one).toFixed(1)}x one advise; budget 10x), ${rows} rows`);
+console.log(
+  `shaftwise batch (${count} cases):     ${batch.toFixed(0)} ms (${(batch / bare).toFixed(1)}x node, ${(batch / one).toFixed(1)}x one advise; budget 10x), ${rows} rows`,
+);
 console.log(`per case: ${((batch - one) / (count - 1)).toFixed(1)} ms`);
 rmSync(dir, { recursive: true, force: true });

@@ -5,8 +5,13 @@
 import { makeMesh } from '../dist/calc/journal/mesh.js';
 import { solveReynolds, performance as perf, defaultOmega } from '../dist/calc/journal/reynolds.js';
 import {
-  buildTable, clearTableCache, tableFor, pointAtEccentricity, eccentricityFromSommerfeld,
-  DEFAULT_MESH, TABLE_ECCENTRICITIES,
+  buildTable,
+  clearTableCache,
+  tableFor,
+  pointAtEccentricity,
+  eccentricityFromSommerfeld,
+  DEFAULT_MESH,
+  TABLE_ECCENTRICITIES,
 } from '../dist/calc/journal/table.js';
 import { operatingPoint } from '../dist/calc/journal/operating-point.js';
 import { oilGrade } from '../dist/data/load.js';
@@ -19,7 +24,13 @@ const pct = (a, b) => ((a / b - 1) * 100).toFixed(2).padStart(6) + '%';
 
 // 1. Grid convergence.
 console.log('\n== Grid convergence (reference 576×64, a = 0.5, tol 1e-10) ==');
-const meshes = [[48, 6], [72, 8], [96, 12], [144, 16], [192, 24]];
+const meshes = [
+  [48, 6],
+  [72, 8],
+  [96, 12],
+  [144, 16],
+  [192, 24],
+];
 for (const ld of [1, 0.5, 0.25]) {
   for (const eps of quick ? [0.8] : [0.1, 0.8, 0.97]) {
     const ref = perf(solveReynolds(eps, ld, makeMesh(576, 64, 0.5), { tol: 1e-10, maxIter: 100000 }));
@@ -36,7 +47,8 @@ for (const ld of [1, 0.5, 0.25]) {
       const p = perf(sol);
       console.log(
         `  ${(nt + '×' + nz).padEnd(8)} ${p.sommerfeld.toPrecision(5).padStart(9)} ${p.attitudeDeg.toFixed(2).padStart(8)}  ` +
-          KEYS.map((k) => pct(p[k], ref[k])).join(' ') + `   ${String(sol.iterations).padStart(5)}  ${ms.toFixed(2)} ms`,
+          KEYS.map((k) => pct(p[k], ref[k])).join(' ') +
+          `   ${String(sol.iterations).padStart(5)}  ${ms.toFixed(2)} ms`,
       );
     }
   }
@@ -46,10 +58,13 @@ for (const ld of [1, 0.5, 0.25]) {
 console.log('\n== Over-relaxation scan, default mesh ==');
 const dm = makeMesh(DEFAULT_MESH.nTheta, DEFAULT_MESH.nZeta, DEFAULT_MESH.stretch);
 console.log(`default ω = ${defaultOmega(dm, 1).toFixed(3)}`);
-for (const ld of [1, 0.25]) for (const eps of [0.1, 0.6, 0.97]) {
-  const row = [1.6, 1.7, 1.8, 1.85, 1.9, 1.95].map((w) => `${w}:${solveReynolds(eps, ld, dm, { omega: w }).iterations}`);
-  console.log(`  L/D ${ld} ε ${eps}: default ${solveReynolds(eps, ld, dm).iterations} sweeps; ` + row.join('  '));
-}
+for (const ld of [1, 0.25])
+  for (const eps of [0.1, 0.6, 0.97]) {
+    const row = [1.6, 1.7, 1.8, 1.85, 1.9, 1.95].map(
+      (w) => `${w}:${solveReynolds(eps, ld, dm, { omega: w }).iterations}`,
+    );
+    console.log(`  L/D ${ld} ε ${eps}: default ${solveReynolds(eps, ld, dm).iterations} sweeps; ` + row.join('  '));
+  }
 
 // 3. Table build time (cold cache) and interpolation error against direct solves midway between rows.
 console.log(`\n== Table build (${TABLE_ECCENTRICITIES.length} ε rows, default mesh) and interpolation error ==`);
@@ -87,25 +102,36 @@ let iters = 0;
 const t1 = now();
 for (let k = 0; k < n; k++) {
   const r = operatingPoint(table, {
-    geometry, load: 500 + (k % 200) * 100, speed: 5 + (k % 37), fluid: { kind: 'oil', oil }, inletTemperature: 40,
+    geometry,
+    load: 500 + (k % 200) * 100,
+    speed: 5 + (k % 37),
+    fluid: { kind: 'oil', oil },
+    inletTemperature: 40,
   });
   iters += r.thermalIterations;
 }
 const perPoint = (now() - t1) / n;
 console.log(`  table build (cold, first L/D): ${buildMs.toFixed(1)} ms`);
-console.log(`  per point: ${(perPoint * 1000).toFixed(1)} µs (mean ${(iters / n).toFixed(1)} viscosity evaluations), n = ${n}`);
-console.log(`  amortised with the build over ${n} points: ${((buildMs + perPoint * n) / n * 1000).toFixed(1)} µs`);
+console.log(
+  `  per point: ${(perPoint * 1000).toFixed(1)} µs (mean ${(iters / n).toFixed(1)} viscosity evaluations), n = ${n}`,
+);
+console.log(`  amortised with the build over ${n} points: ${(((buildMs + perPoint * n) / n) * 1000).toFixed(1)} µs`);
 // Direct-solve load matching, for comparison: bisection on ε with one Reynolds solve per step.
 {
   const target = perf(solveReynolds(0.6, 0.8, dm)).sommerfeld;
   const tt = now();
-  let lo = 0.01, hi = 0.98, steps = 0;
+  let lo = 0.01,
+    hi = 0.98,
+    steps = 0;
   while (hi - lo > 1e-4) {
     const mid = 0.5 * (lo + hi);
-    if (perf(solveReynolds(mid, 0.8, dm)).sommerfeld > target) lo = mid; else hi = mid;
+    if (perf(solveReynolds(mid, 0.8, dm)).sommerfeld > target) lo = mid;
+    else hi = mid;
     steps++;
   }
-  console.log(`  direct solves instead (isothermal, bisection to Δε 1e-4): ${(now() - tt).toFixed(1)} ms, ${steps} solves`);
+  console.log(
+    `  direct solves instead (isothermal, bisection to Δε 1e-4): ${(now() - tt).toFixed(1)} ms, ${steps} solves`,
+  );
 }
 
 // 5. A 60×60 load–speed map at one geometry (the later selection-map feature).
@@ -114,12 +140,13 @@ console.log(`  amortised with the build over ${n} points: ${((buildMs + perPoint
   const tt = now();
   const t = tableFor(0.8);
   let count = 0;
-  for (let i = 0; i < 60; i++) for (let j = 0; j < 60; j++) {
-    const load = 100 * Math.pow(10, (3 * i) / 59); // 100 N .. 100 kN
-    const speed = 0.5 * Math.pow(10, (2.5 * j) / 59); // 0.5 .. 158 rev/s
-    operatingPoint(t, { geometry, load, speed, fluid: { kind: 'oil', oil }, inletTemperature: 40 });
-    count++;
-  }
+  for (let i = 0; i < 60; i++)
+    for (let j = 0; j < 60; j++) {
+      const load = 100 * Math.pow(10, (3 * i) / 59); // 100 N .. 100 kN
+      const speed = 0.5 * Math.pow(10, (2.5 * j) / 59); // 0.5 .. 158 rev/s
+      operatingPoint(t, { geometry, load, speed, fluid: { kind: 'oil', oil }, inletTemperature: 40 });
+      count++;
+    }
   console.log(`\n== 60×60 load–speed map, one L/D, cold table: ${(now() - tt).toFixed(0)} ms for ${count} points ==`);
 }
 
@@ -142,5 +169,7 @@ console.log(`  amortised with the build over ${n} points: ${((buildMs + perPoint
   const cold = now() - tt;
   tt = now();
   checkJournal(c);
-  console.log(`\n== checkJournal, ${r.sweep.length}-design sweep: cold ${cold.toFixed(0)} ms (tables built), warm ${(now() - tt).toFixed(0)} ms ==`);
+  console.log(
+    `\n== checkJournal, ${r.sweep.length}-design sweep: cold ${cold.toFixed(0)} ms (tables built), warm ${(now() - tt).toFixed(0)} ms ==`,
+  );
 }

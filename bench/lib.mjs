@@ -21,5 +21,7 @@ export function interleaved(commands, runs, cwd) {
   for (const c of commands) once(c.args, { cwd, ok: c.ok });
   const times = commands.map(() => []);
   for (let i = 0; i < runs; i++) commands.forEach((c, k) => times[k].push(once(c.args, { cwd, ok: c.ok })));
-  return Object.fromEntries(commands.map((c, k) => [c.name, { median: median(times[k]), fastest: Math.min(...times[k]), all: times[k] }]));
+  return Object.fromEntries(
+    commands.map((c, k) => [c.name, { median: median(times[k]), fastest: Math.min(...times[k]), all: times[k] }]),
+  );
 }

@@ -48,7 +48,8 @@ const c = l.case;
 const rules = loadRules();
 const now = () => performance.now();
 const pts = [];
-for (let i = 0; i < 20; i++) for (let j = 0; j < 20; j++) pts.push(scaleCase(c, 0.1 * 100 ** (i / 19), 0.1 * 100 ** (j / 19)));
+for (let i = 0; i < 20; i++)
+  for (let j = 0; j < 20; j++) pts.push(scaleCase(c, 0.1 * 100 ** (i / 19), 0.1 * 100 ** (j / 19)));
 const per = (label, f) => {
   for (const p of pts.slice(0, 50)) f(p);
   const t = now();
@@ -72,26 +73,39 @@ let k = 0;
 await perAsync('advise, fresh Engine (checks given)', (p) => advise(p, [], rules, { checks: bs[k++ % bs.length] }));
 const plain = ruleRunner(rules);
 k = 0;
-await perAsync('advise, one Engine reused (checks given)', (p) => advise(p, [], rules, { checks: bs[k++ % bs.length], runRules: plain.run }));
+await perAsync('advise, one Engine reused (checks given)', (p) =>
+  advise(p, [], rules, { checks: bs[k++ % bs.length], runRules: plain.run }),
+);
 const memo = ruleRunner(rules, { memo: true });
 k = 0;
-await perAsync('advise, reused Engine + memo (checks given)', (p) => advise(p, [], rules, { checks: bs[k++ % bs.length], runRules: memo.run }));
+await perAsync('advise, reused Engine + memo (checks given)', (p) =>
+  advise(p, [], rules, { checks: bs[k++ % bs.length], runRules: memo.run }),
+);
 console.log(`memo: ${memo.stats.runs} engine runs, ${memo.stats.hits} hits`);
 await perAsync('advise, full (what a naive map would do)', (p) => advise(p, [], rules));
 
 // In-process 60x60 and agreement with full advise on a 12x12 sub-grid.
 let t = now();
 const m = await computeMap(c, l.assumed, { grid: 60 });
-console.log(`\n== computeMap 60x60 in-process (warm tables): ${(now() - t).toFixed(0)} ms, ${m.journal.designs.length} journal designs ==`);
+console.log(
+  `\n== computeMap 60x60 in-process (warm tables): ${(now() - t).toFixed(0)} ms, ${m.journal.designs.length} journal designs ==`,
+);
 t = now();
 const m12 = await computeMap(c, l.assumed, { grid: 12 });
 let same = 0;
 const differ = [];
 for (let i = 0; i < 12; i++)
   for (let j = 0; j < 12; j++) {
-    const a = await advise(scaleCase(c, m12.loads[i] / m12.reference.load, m12.speeds[j] / m12.reference.speed), [], rules);
+    const a = await advise(
+      scaleCase(c, m12.loads[i] / m12.reference.load, m12.speeds[j] / m12.reference.speed),
+      [],
+      rules,
+    );
     if (a.recommendation === m12.cells[i][j].winner) same++;
-    else differ.push(`${Math.round(m12.loads[i])} N ${Math.round(m12.speeds[j] * 60)} r/min: map ${m12.cells[i][j].winner}, full ${a.recommendation}`);
+    else
+      differ.push(
+        `${Math.round(m12.loads[i])} N ${Math.round(m12.speeds[j] * 60)} r/min: map ${m12.cells[i][j].winner}, full ${a.recommendation}`,
+      );
   }
 console.log(`agreement with full advise() on 12x12: ${same}/144 cells (${(now() - t).toFixed(0)} ms)`);
 for (const x of differ) console.log(`  differs: ${x}`);

@@ -21,7 +21,9 @@ const t = interleaved(
 );
 const bare = t.bare.median;
 const cmd = t.cmd.median;
-console.log(`node -e 0: ${bare.toFixed(1)} ms median, ${t.bare.fastest.toFixed(1)} ms fastest (${runs} runs, interleaved)`);
+console.log(
+  `node -e 0: ${bare.toFixed(1)} ms median, ${t.bare.fastest.toFixed(1)} ms fastest (${runs} runs, interleaved)`,
+);
 console.log(`shaftwise ${args.join(' ')}: ${cmd.toFixed(1)} ms median, ${t.cmd.fastest.toFixed(1)} ms fastest`);
 // The fastest runs are the least disturbed by other load on the machine; both ratios are printed.
 console.log(`ratio: ${(cmd / bare).toFixed(2)}x (medians), ${(t.cmd.fastest / t.bare.fastest).toFixed(2)}x (fastest)`);

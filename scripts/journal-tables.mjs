@@ -12,12 +12,16 @@ const sig = (x) => (typeof x === 'number' ? Number(x.toPrecision(12)) : x);
 const t0 = performance.now();
 const tables = lds.map((ld) => {
   const t = buildTable(ld);
-  return { lengthToDiameter: ld, rows: t.rows.map((r) => Object.fromEntries(Object.entries(r).map(([k, v]) => [k, sig(v)]))) };
+  return {
+    lengthToDiameter: ld,
+    rows: t.rows.map((r) => Object.fromEntries(Object.entries(r).map(([k, v]) => [k, sig(v)]))),
+  };
 });
 const out = {
   description:
     'Dimensionless performance of a full 360-degree plain journal bearing (Reynolds equation, Swift-Stieber film rupture, oil admitted at the maximum film line), one table per L/D over the eccentricity rows. Variables as in Raimondi & Boyd (1958).',
-  source: 'computed: shaftwise finite-difference solver (src/calc/journal/reynolds.ts) at the default mesh, by scripts/journal-tables.mjs',
+  source:
+    'computed: shaftwise finite-difference solver (src/calc/journal/reynolds.ts) at the default mesh, by scripts/journal-tables.mjs',
   mesh: DEFAULT_MESH,
   eccentricities: TABLE_ECCENTRICITIES,
   tables,

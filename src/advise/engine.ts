@@ -5,7 +5,14 @@ import { checkBushing, type BushingResult } from '../calc/bushing/index.js';
 import { checkRolling } from '../calc/rolling/index.js';
 import type { RollingResult } from '../calc/rolling/types.js';
 import { checkJournal, type JournalResult } from '../calc/journal/index.js';
-import { bushingFigures, dutyFacts, journalFigures, rollingFigures, type Figures, type OptionFigures } from './facts.js';
+import {
+  bushingFigures,
+  dutyFacts,
+  journalFigures,
+  rollingFigures,
+  type Figures,
+  type OptionFigures,
+} from './facts.js';
 import { loadRules, type LoadedRule } from './load-rules.js';
 import { resolvePath } from './path.js';
 import { OPTIONS, type Condition, type OptionName, type leafSchema } from './rule-schema.js';
@@ -29,7 +36,13 @@ export interface RankedOption {
   score: number;
   feasible: boolean;
   design: OptionFigures['design'];
-  figures: { lifeHours: number | null; lifeRatio: number | null; frictionPower: number | null; length: number | null; outerDiameter: number | null };
+  figures: {
+    lifeHours: number | null;
+    lifeRatio: number | null;
+    frictionPower: number | null;
+    length: number | null;
+    outerDiameter: number | null;
+  };
   reasons: Reason[];
   /** Limit checks that fail, for an option excluded by its check. */
   failed: CheckRecord[];
@@ -110,7 +123,12 @@ const NEUTRAL_PRIORITY = 3;
  * the run), evaluate every rule in rules/, gate feasibility on the checks, score and rank.
  * Deterministic: the same case gives the same result, byte for byte.
  */
-export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: LoadedRule[] = loadRules(), opts: AdviseOptions = {}): Promise<AdviceResult> {
+export async function advise(
+  c: CaseSI,
+  caseAssumed: Assumption[],
+  rules: LoadedRule[] = loadRules(),
+  opts: AdviseOptions = {},
+): Promise<AdviceResult> {
   const cache: Partial<{ bushing: BushingResult; rolling: RollingResult; journal: JournalResult }> = { ...opts.checks };
   const bushing = () => (cache.bushing ??= checkBushing(c));
   const rolling = () => (cache.rolling ??= checkRolling(c));
@@ -124,7 +142,14 @@ export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: Loaded
     });
   let run: RuleRun;
   if (opts.runRules) {
-    run = await opts.runRules({ case: c, duty: dutyFacts(c), bushing: bushing(), rolling: rolling(), journal: journal(), figures: figures() });
+    run = await opts.runRules({
+      case: c,
+      duty: dutyFacts(c),
+      bushing: bushing(),
+      rolling: rolling(),
+      journal: journal(),
+      figures: figures(),
+    });
   } else {
     const engine = new Engine([], { allowUndefinedFacts: true, pathResolver: resolvePath });
     engine.addFact('case', c);
@@ -133,18 +158,27 @@ export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: Loaded
     engine.addFact('rolling', () => rolling(), { cache: true });
     engine.addFact('journal', () => journal(), { cache: true });
     engine.addFact('figures', () => figures(), { cache: true });
-    rules.forEach((r) => engine.addRule({ name: r.name, conditions: r.conditions as never, event: { type: r.event.type, params: { ...r.event } } }));
+    rules.forEach((r) =>
+      engine.addRule({
+        name: r.name,
+        conditions: r.conditions as never,
+        event: { type: r.event.type, params: { ...r.event } },
+      }),
+    );
     run = await engine.run();
   }
   const fired = new Set(run.results.map((r) => r.name));
   const byName = new Map<string, RuleResult>([...run.results, ...run.failureResults].map((r) => [r.name, r]));
-  const traces: RuleTrace[] = opts.traces === false ? [] : rules.map((r) => ({
-    rule: r.name,
-    file: r.file,
-    fired: fired.has(r.name),
-    event: r.event,
-    conditions: flatten(byName.get(r.name)?.conditions as unknown as Condition | undefined),
-  }));
+  const traces: RuleTrace[] =
+    opts.traces === false
+      ? []
+      : rules.map((r) => ({
+          rule: r.name,
+          file: r.file,
+          fired: fired.has(r.name),
+          event: r.event,
+          conditions: flatten(byName.get(r.name)?.conditions as unknown as Condition | undefined),
+        }));
 
   const fig = figures();
   const checks = { bushing: bushing(), rolling: rolling(), journal: journal() };
@@ -161,7 +195,14 @@ export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: Loaded
         continue;
       }
       const weight = r.event.priority ? c.priorities[r.event.priority] / NEUTRAL_PRIORITY : 1;
-      const reason: Reason = { rule: r.name, points: round2(r.event.points * weight), basePoints: r.event.points, weight: round2(weight), because: r.because, file: r.file };
+      const reason: Reason = {
+        rule: r.name,
+        points: round2(r.event.points * weight),
+        basePoints: r.event.points,
+        weight: round2(weight),
+        because: r.because,
+        file: r.file,
+      };
       if (r.event.priority) reason.priority = r.event.priority;
       reasons.push(reason);
     }
@@ -171,13 +212,24 @@ export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: Loaded
       score: round2(reasons.reduce((s, x) => s + x.points, 0)),
       feasible: excluded.length === 0,
       design: f.design,
-      figures: { lifeHours: f.lifeHours, lifeRatio: f.lifeRatio, frictionPower: f.frictionPower, length: f.length, outerDiameter: f.outerDiameter },
+      figures: {
+        lifeHours: f.lifeHours,
+        lifeRatio: f.lifeRatio,
+        frictionPower: f.frictionPower,
+        length: f.length,
+        outerDiameter: f.outerDiameter,
+      },
       reasons,
       failed: f.failed,
       excluded: dedupe(excluded),
     };
   });
-  ranking.sort((a, b) => Number(b.feasible) - Number(a.feasible) || b.score - a.score || TIE_ORDER.indexOf(a.option) - TIE_ORDER.indexOf(b.option));
+  ranking.sort(
+    (a, b) =>
+      Number(b.feasible) - Number(a.feasible) ||
+      b.score - a.score ||
+      TIE_ORDER.indexOf(a.option) - TIE_ORDER.indexOf(b.option),
+  );
   ranking.forEach((r, i) => (r.rank = i + 1));
 
   let tieBreak: string | null = null;
@@ -187,7 +239,11 @@ export async function advise(c: CaseSI, caseAssumed: Assumption[], rules: Loaded
     tieBreak = `${tied.map((r) => r.option).join(' and ')} tie on ${top.score} points; the tie is broken by the fixed order bushing, rolling, journal (the simpler and cheaper support first)`;
   }
   const recommendation = top.feasible ? top.option : null;
-  const warnings = dedupe([...checks.bushing.warnings.map((w) => `bushing: ${w}`), ...checks.rolling.warnings.map((w) => `rolling: ${w}`), ...checks.journal.warnings.map((w) => `journal: ${w}`)]);
+  const warnings = dedupe([
+    ...checks.bushing.warnings.map((w) => `bushing: ${w}`),
+    ...checks.rolling.warnings.map((w) => `rolling: ${w}`),
+    ...checks.journal.warnings.map((w) => `journal: ${w}`),
+  ]);
   return {
     recommendation,
     ranking,
@@ -228,12 +284,16 @@ function suggestions(c: CaseSI, checks: AdviceResult['checks'], fig: Figures): s
   }
   if (!fig.rolling.feasible) {
     const why = fig.rolling.failed.map((k) => k.label.toLowerCase());
-    out.push(`rolling: ${why.length ? `fails on ${why.join(', ')}` : fig.rolling.why[0] ?? 'no candidate fits'}; more radial room (a larger housing bore) admits a larger series, or give a supplier's bearing with higher ratings`);
+    out.push(
+      `rolling: ${why.length ? `fails on ${why.join(', ')}` : (fig.rolling.why[0] ?? 'no candidate fits')}; more radial room (a larger housing bore) admits a larger series, or give a supplier's bearing with higher ratings`,
+    );
   }
   if (c.lubrication.supply === 'none' || c.lubrication.supply === 'grease') {
     out.push('journal: an oil supply (oil bath, or pumped and filtered oil) is needed for a full film');
   } else if (!fig.journal.feasible) {
-    out.push(`journal: fails on ${fig.journal.failed.map((k) => k.label.toLowerCase()).join(', ') || 'its criteria'}; more length, a higher speed or a more viscous oil thickens the film`);
+    out.push(
+      `journal: fails on ${fig.journal.failed.map((k) => k.label.toLowerCase()).join(', ') || 'its criteria'}; more length, a higher speed or a more viscous oil thickens the film`,
+    );
   }
   return out;
 }

@@ -90,7 +90,18 @@ const smallestMargin = (checks: CheckRecord[]) => Math.min(...checks.filter((k) 
 export function bushingFigures(r: BushingResult, c: CaseSI): OptionFigures {
   // Best, or the nearest miss (the check's own choice, so sheet, charts and advice show one material).
   const m = r.materials.find((x) => x.id === r.shown);
-  if (!m) return { feasible: false, design: {}, lifeHours: null, lifeRatio: null, frictionPower: null, length: null, outerDiameter: null, failed: [], why: r.warnings };
+  if (!m)
+    return {
+      feasible: false,
+      design: {},
+      lifeHours: null,
+      lifeRatio: null,
+      frictionPower: null,
+      length: null,
+      outerDiameter: null,
+      failed: [],
+      why: r.warnings,
+    };
   return {
     feasible: r.feasible,
     design: { material: m.id, name: m.name, length: m.length, outerDiameter: m.outerDiameter },
@@ -105,8 +116,21 @@ export function bushingFigures(r: BushingResult, c: CaseSI): OptionFigures {
 }
 
 export function rollingFigures(r: RollingResult, c: CaseSI): OptionFigures {
-  const k = r.candidates.find((x) => x.id === r.best) ?? [...r.candidates].sort((a, b) => smallestMargin(b.checks) - smallestMargin(a.checks))[0];
-  if (!k) return { feasible: false, design: {}, lifeHours: null, lifeRatio: null, frictionPower: null, length: null, outerDiameter: null, failed: [], why: r.warnings };
+  const k =
+    r.candidates.find((x) => x.id === r.best) ??
+    [...r.candidates].sort((a, b) => smallestMargin(b.checks) - smallestMargin(a.checks))[0];
+  if (!k)
+    return {
+      feasible: false,
+      design: {},
+      lifeHours: null,
+      lifeRatio: null,
+      frictionPower: null,
+      length: null,
+      outerDiameter: null,
+      failed: [],
+      why: r.warnings,
+    };
   const life = k.L10mh ?? k.L10h;
   return {
     feasible: r.feasible,
@@ -141,7 +165,9 @@ export function journalFigures(r: JournalResult): OptionFigures {
     outerDiameter: null,
     failed: r.feasible ? [] : failing(r.checks, r.advisory),
     // Why it is out: the failing limits (its warnings are cautions, reported apart).
-    why: r.feasible ? [] : failing(r.checks, r.advisory).map((k) => `fails: ${k.label.charAt(0).toLowerCase()}${k.label.slice(1)}`),
+    why: r.feasible
+      ? []
+      : failing(r.checks, r.advisory).map((k) => `fails: ${k.label.charAt(0).toLowerCase()}${k.label.slice(1)}`),
   };
 }
 

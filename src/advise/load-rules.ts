@@ -23,7 +23,14 @@ function deepest(issue: Issue): Issue {
       const d = deepest(inner);
       const full = { ...d, path: [...issue.path, ...d.path] };
       // Prefer deeper paths; among equals, prefer a specific message over "unknown key".
-      if (!best || full.path.length > best.path.length || (full.path.length === best.path.length && best.code === 'unrecognized_keys' && full.code !== 'unrecognized_keys')) best = full;
+      if (
+        !best ||
+        full.path.length > best.path.length ||
+        (full.path.length === best.path.length &&
+          best.code === 'unrecognized_keys' &&
+          full.code !== 'unrecognized_keys')
+      )
+        best = full;
     }
   }
   return best ?? issue;
@@ -50,7 +57,9 @@ export function loadRules(dir: URL = rulesDir()): LoadedRule[] {
   try {
     listing = readdirSync(dir);
   } catch (e) {
-    throw new RuleFileError(`rules folder ${dir.pathname}: cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); expected a folder of rule files`);
+    throw new RuleFileError(
+      `rules folder ${dir.pathname}: cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); expected a folder of rule files`,
+    );
   }
   const files = listing.filter((f) => f.endsWith('.json')).sort();
   const out: LoadedRule[] = [];
@@ -70,11 +79,16 @@ export function loadRules(dir: URL = rulesDir()): LoadedRule[] {
       const ruleName =
         idx !== undefined ? ((raw as { rules?: { name?: unknown }[] }).rules?.[idx]?.name ?? `#${idx + 1}`) : undefined;
       const where = ruleName !== undefined ? `rule ${JSON.stringify(ruleName)}, ` : '';
-      throw new RuleFileError(`${label}: ${where}field ${issue.path.slice(idx !== undefined ? 2 : 0).join('.') || '(file)'}: ${issue.message}`);
+      throw new RuleFileError(
+        `${label}: ${where}field ${issue.path.slice(idx !== undefined ? 2 : 0).join('.') || '(file)'}: ${issue.message}`,
+      );
     }
     for (const r of parsed.data.rules) {
       const seen = names.get(r.name);
-      if (seen) throw new RuleFileError(`${label}: rule "${r.name}": the name is already used in ${seen}; expected unique rule names`);
+      if (seen)
+        throw new RuleFileError(
+          `${label}: rule "${r.name}": the name is already used in ${seen}; expected unique rule names`,
+        );
       names.set(r.name, label);
       out.push({ ...r, file: label, concern: parsed.data.concern });
     }

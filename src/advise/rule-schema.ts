@@ -27,23 +27,29 @@ const OPERATORS = [
 ] as const;
 
 const scalar = z.union([z.number(), z.string(), z.boolean(), z.null()]);
-const factRef = z.strictObject({ fact: z.enum(FACTS), path: z.string().regex(/^\$(\.[A-Za-z0-9_]+|\[\d+\])*$/).optional() });
+const factRef = z.strictObject({
+  fact: z.enum(FACTS),
+  path: z
+    .string()
+    .regex(/^\$(\.[A-Za-z0-9_]+|\[\d+\])*$/)
+    .optional(),
+});
 
 export const leafSchema = z.strictObject({
   fact: z.enum(FACTS, { error: (iss) => `fact ${JSON.stringify(iss.input)} is not one of: ${FACTS.join(', ')}` }),
   path: z
     .string()
-    .regex(/^\$(\.[A-Za-z0-9_]+|\[\d+\])*$/, { error: 'path must be a simple JSONPath such as "$.feasible" or "$.speedRpm"' })
+    .regex(/^\$(\.[A-Za-z0-9_]+|\[\d+\])*$/, {
+      error: 'path must be a simple JSONPath such as "$.feasible" or "$.speedRpm"',
+    })
     .optional(),
-  operator: z.enum(OPERATORS, { error: (iss) => `operator ${JSON.stringify(iss.input)} is not one of: ${OPERATORS.join(', ')}` }),
+  operator: z.enum(OPERATORS, {
+    error: (iss) => `operator ${JSON.stringify(iss.input)} is not one of: ${OPERATORS.join(', ')}`,
+  }),
   value: z.union([scalar, z.array(scalar), factRef]),
 });
 
-export type Condition =
-  | z.infer<typeof leafSchema>
-  | { all: Condition[] }
-  | { any: Condition[] }
-  | { not: Condition };
+export type Condition = z.infer<typeof leafSchema> | { all: Condition[] } | { any: Condition[] } | { not: Condition };
 
 export const conditionSchema: z.ZodType<Condition> = z.lazy(() =>
   z.union([
@@ -69,7 +75,12 @@ export const ruleSchema = z.strictObject({
     z.strictObject({
       type: z.literal('score'),
       option: z.enum(OPTIONS),
-      points: z.number().int().min(-10).max(10).refine((n) => n !== 0, { error: 'points must not be 0' }),
+      points: z
+        .number()
+        .int()
+        .min(-10)
+        .max(10)
+        .refine((n) => n !== 0, { error: 'points must not be 0' }),
       priority: z.enum(PRIORITIES).optional(),
     }),
     z.strictObject({ type: z.literal('exclude'), option: z.enum(OPTIONS) }),

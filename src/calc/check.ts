@@ -37,7 +37,18 @@ export interface CheckRecord {
 /** Mark a check as advice: it is reported but does not gate feasibility. */
 export function advisory(k: CheckRecord): CheckRecord {
   // Written out field by field: one fixed object shape is several times faster than a spread in sweeps.
-  return { id: k.id, label: k.label, value: k.value, limit: k.limit, unit: k.unit, margin: k.margin, pass: k.pass, source: k.source, sense: k.sense, advisory: true };
+  return {
+    id: k.id,
+    label: k.label,
+    value: k.value,
+    limit: k.limit,
+    unit: k.unit,
+    margin: k.margin,
+    pass: k.pass,
+    source: k.source,
+    sense: k.sense,
+    advisory: true,
+  };
 }
 
 /** True when every check that is a limit (not advice) passes. */

@@ -17,7 +17,11 @@ export interface Problem {
 export const DEFAULTS = {
   axial: { value: 0, reason: 'no axial load given' },
   shock: { value: 'none' as const, reason: 'no shock level given' },
-  wearAllowance: { value: 0.25e-3, reason: 'no wear allowance given; 0.25 mm radial is a neutral starting figure, replace it with what the machine tolerates' },
+  wearAllowance: {
+    value: 0.25e-3,
+    reason:
+      'no wear allowance given; 0.25 mm radial is a neutral starting figure, replace it with what the machine tolerates',
+  },
   reliability: { value: 90, reason: 'basic rating life reliability (ISO 281)' },
   supply: { value: 'none' as const, reason: 'no lubricant supply named: the worst case is assumed' },
   inletTemperature: { value: 40, reason: 'no oil inlet temperature given (40 °C, the ISO VG reference temperature)' },
@@ -50,15 +54,29 @@ export function completeCase(
   if (shaft.speed !== undefined && shaft.oscillation !== undefined) {
     problems.push({ field: 'shaft', message: 'gives both speed and oscillation; expected one of them' });
   }
-  if (shaft.speed === undefined && shaft.oscillation === undefined && !(hasDuty && file.duty!.every((p) => p.speed !== undefined))) {
-    problems.push({ field: 'shaft.speed', message: 'missing; expected a speed such as "1500 rpm", or shaft.oscillation, or a speed on every duty point' });
+  if (
+    shaft.speed === undefined &&
+    shaft.oscillation === undefined &&
+    !(hasDuty && file.duty!.every((p) => p.speed !== undefined))
+  ) {
+    problems.push({
+      field: 'shaft.speed',
+      message: 'missing; expected a speed such as "1500 rpm", or shaft.oscillation, or a speed on every duty point',
+    });
   }
   if (shaft.oscillation && hasDuty && file.duty!.some((p) => p.speed !== undefined)) {
-    problems.push({ field: 'duty', message: 'operating points give speeds but the shaft oscillates; expected no speed on the points of an oscillating shaft' });
+    problems.push({
+      field: 'duty',
+      message:
+        'operating points give speeds but the shaft oscillates; expected no speed on the points of an oscillating shaft',
+    });
   }
   const radial = file.load?.radial;
   if (radial === undefined && !hasDuty) {
-    problems.push({ field: 'load.radial', message: 'missing; expected a force such as "3.2 kN" or "720 lbf" (or a duty list)' });
+    problems.push({
+      field: 'load.radial',
+      message: 'missing; expected a force such as "3.2 kN" or "720 lbf" (or a duty list)',
+    });
   }
   if (hasDuty) {
     const sum = file.duty!.reduce((s, p) => s + p.share, 0);
@@ -72,17 +90,26 @@ export function completeCase(
     problems.push({ field: 'lubrication', message: 'gives both oil and viscosity; expected one of them' });
   }
   if (lub.oil !== undefined && !knownGrades.includes(lub.oil)) {
-    problems.push({ field: 'lubrication.oil', message: `got ISO VG ${lub.oil}; expected one of the grades in data/lubricants.json: ${knownGrades.map((g) => `VG ${g}`).join(', ')}` });
+    problems.push({
+      field: 'lubrication.oil',
+      message: `got ISO VG ${lub.oil}; expected one of the grades in data/lubricants.json: ${knownGrades.map((g) => `VG ${g}`).join(', ')}`,
+    });
   }
   const mat = file.bushing?.material;
   if (typeof mat === 'string' && !knownMaterials.includes(mat)) {
-    problems.push({ field: 'bushing.material', message: `got "${mat}"; expected one of the materials in data/bushing-materials.json: ${knownMaterials.join(', ')}, or an inline material` });
+    problems.push({
+      field: 'bushing.material',
+      message: `got "${mat}"; expected one of the materials in data/bushing-materials.json: ${knownMaterials.join(', ')}, or an inline material`,
+    });
   }
   if (typeof mat === 'object') {
     const lo = mat.wearFactorLow ?? mat.wearFactor;
     const hi = mat.wearFactorHigh ?? mat.wearFactor;
     if (!(lo <= mat.wearFactor && mat.wearFactor <= hi)) {
-      problems.push({ field: 'bushing.material', message: 'wear factors out of order; expected wearFactorLow ≤ wearFactor ≤ wearFactorHigh' });
+      problems.push({
+        field: 'bushing.material',
+        message: 'wear factors out of order; expected wearFactorLow ≤ wearFactor ≤ wearFactorHigh',
+      });
     }
   }
   if (file.journal?.radialClearance !== undefined && file.journal.clearanceRatio !== undefined) {
@@ -90,11 +117,17 @@ export function completeCase(
   }
   const r = file.rolling;
   if (r && (r.dynamicRating === undefined) !== (r.staticRating === undefined)) {
-    problems.push({ field: 'rolling', message: 'gives only one of dynamicRating and staticRating; expected both supplier ratings or neither' });
+    problems.push({
+      field: 'rolling',
+      message: 'gives only one of dynamicRating and staticRating; expected both supplier ratings or neither',
+    });
   }
   const d = shaft.diameter;
   if (file.space.maxOuterDiameter <= d) {
-    problems.push({ field: 'space.maxOuterDiameter', message: `got ${fmtMm(file.space.maxOuterDiameter)}, not more than the shaft diameter ${fmtMm(d)}; expected a housing bore larger than the shaft` });
+    problems.push({
+      field: 'space.maxOuterDiameter',
+      message: `got ${fmtMm(file.space.maxOuterDiameter)}, not more than the shaft diameter ${fmtMm(d)}; expected a housing bore larger than the shaft`,
+    });
   }
 
   const priorities = {} as Record<Priority, number>;
@@ -118,7 +151,12 @@ export function completeCase(
     space: { ...file.space },
     lubrication: {
       supply: take('lubrication.supply', lub.supply, DEFAULTS.supply),
-      inletTemperature: take('lubrication.inletTemperature', lub.inletTemperature, DEFAULTS.inletTemperature, '40 degC'),
+      inletTemperature: take(
+        'lubrication.inletTemperature',
+        lub.inletTemperature,
+        DEFAULTS.inletTemperature,
+        '40 degC',
+      ),
     },
     environment: {
       ambient: take('environment.ambient', file.environment?.ambient, DEFAULTS.ambient, '25 degC'),
@@ -128,13 +166,21 @@ export function completeCase(
     priorities,
   };
   if (radial === undefined && hasDuty) {
-    assumed.push({ field: 'load.radial', value: `${c.load.radial} N`, reason: 'taken as the largest radial load of the duty points' });
+    assumed.push({
+      field: 'load.radial',
+      value: `${c.load.radial} N`,
+      reason: 'taken as the largest radial load of the duty points',
+    });
   }
   if (shaft.speed !== undefined) c.shaft.speed = shaft.speed;
   if (shaft.oscillation) c.shaft.oscillation = { ...shaft.oscillation };
   if (file.duty) {
     c.duty = file.duty.map((p) => {
-      const point: CaseSI['duty'] extends (infer T)[] | undefined ? T : never = { share: p.share, radial: p.radial, axial: p.axial ?? 0 };
+      const point: CaseSI['duty'] extends (infer T)[] | undefined ? T : never = {
+        share: p.share,
+        radial: p.radial,
+        axial: p.axial ?? 0,
+      };
       if (p.speed !== undefined) point.speed = p.speed;
       return point;
     });

@@ -33,14 +33,20 @@ export function loadCaseFile(path: string): LoadedCase {
   let text: string;
   try {
     const st = statSync(path);
-    if (st.isDirectory()) throw new CaseError(path, [{ field: '(file)', message: 'is a directory; expected a YAML or JSON case file' }]);
-    if (st.size > MAX_BYTES) throw new CaseError(path, [{ field: '(file)', message: `is ${st.size} bytes; expected a case file under ${MAX_BYTES} bytes` }]);
+    if (st.isDirectory())
+      throw new CaseError(path, [{ field: '(file)', message: 'is a directory; expected a YAML or JSON case file' }]);
+    if (st.size > MAX_BYTES)
+      throw new CaseError(path, [
+        { field: '(file)', message: `is ${st.size} bytes; expected a case file under ${MAX_BYTES} bytes` },
+      ]);
     text = readFileSync(path, 'utf8');
   } catch (e) {
     if (e instanceof CaseError) throw e;
     const code = (e as NodeJS.ErrnoException).code;
     const why = code === 'ENOENT' ? 'no such file' : code === 'EACCES' ? 'permission denied' : (e as Error).message;
-    throw new CaseError(path, [{ field: '(file)', message: `cannot be read (${why}); expected a YAML or JSON case file` }]);
+    throw new CaseError(path, [
+      { field: '(file)', message: `cannot be read (${why}); expected a YAML or JSON case file` },
+    ]);
   }
   return parseCaseText(text, path);
 }
@@ -52,7 +58,12 @@ export function parseCaseText(text: string, source = '(case)'): LoadedCase {
   }
   const depth = bracketDepth(text);
   if (depth > MAX_DEPTH) {
-    throw new CaseError(source, [{ field: '(file)', message: `nests ${depth} levels deep; expected a case file nesting at most ${MAX_DEPTH} levels` }]);
+    throw new CaseError(source, [
+      {
+        field: '(file)',
+        message: `nests ${depth} levels deep; expected a case file nesting at most ${MAX_DEPTH} levels`,
+      },
+    ]);
   }
   let raw: unknown;
   try {
@@ -88,12 +99,19 @@ function bracketDepth(text: string): number {
 /** Validate an already-parsed case object. Throws CaseError listing every problem. */
 export function validateCase(raw: unknown, source = '(case)'): LoadedCase {
   if (raw === null || typeof raw !== 'object' || Array.isArray(raw)) {
-    throw new CaseError(source, [{ field: '(file)', message: `holds ${raw === null || raw === undefined ? 'nothing' : Array.isArray(raw) ? 'a list' : `a ${typeof raw}`}; expected a mapping with title, shaft, load, life, space…` }]);
+    throw new CaseError(source, [
+      {
+        field: '(file)',
+        message: `holds ${raw === null || raw === undefined ? 'nothing' : Array.isArray(raw) ? 'a list' : `a ${typeof raw}`}; expected a mapping with title, shaft, load, life, space…`,
+      },
+    ]);
   }
   const parsed = caseFileSchema.safeParse(raw);
   if (!parsed.success) {
     const problems = parsed.error.issues.map((i) => ({
-      field: i.path.length ? i.path.map((p, k) => (typeof p === 'number' ? `[${p}]` : k ? `.${String(p)}` : String(p))).join('') : '(file)',
+      field: i.path.length
+        ? i.path.map((p, k) => (typeof p === 'number' ? `[${p}]` : k ? `.${String(p)}` : String(p))).join('')
+        : '(file)',
       message: i.message,
     }));
     throw new CaseError(source, problems);

@@ -50,10 +50,20 @@ export const KINDS: Record<Kind, KindInfo> = {
   temperature: { unit: 'tempC', label: 'degC', examples: '"40 degC" or "104 degF"', noun: 'a temperature' },
   viscosity: { unit: 'Pa*s', label: 'Pa*s', examples: '"0.03 Pa*s" or "68 cSt"', noun: 'a viscosity' },
   pressure: { unit: 'Pa', label: 'Pa', examples: '"2 MPa" or "300 psi"', noun: 'a pressure' },
-  pv: { unit: 'Pa*m/s', label: 'Pa*m/s', examples: '"1.75 MPa*m/s" or "50000 psi*ft/min"', noun: 'a PV value (pressure × sliding speed)' },
+  pv: {
+    unit: 'Pa*m/s',
+    label: 'Pa*m/s',
+    examples: '"1.75 MPa*m/s" or "50000 psi*ft/min"',
+    noun: 'a PV value (pressure × sliding speed)',
+  },
   angle: { unit: 'rad', label: 'rad', examples: '"60 deg"', noun: 'an angle' },
   frequency: { unit: 'Hz', label: 'Hz', examples: '"0.5 Hz"', noun: 'a frequency' },
-  wearFactor: { unit: 'm^2/N', label: 'm^3/(N*m)', examples: '"5e-7 mm^3/(N*m)"', noun: 'a wear factor (volume per load per sliding distance)' },
+  wearFactor: {
+    unit: 'm^2/N',
+    label: 'm^3/(N*m)',
+    examples: '"5e-7 mm^3/(N*m)"',
+    noun: 'a wear factor (volume per load per sliding distance)',
+  },
 };
 
 /** Density used to turn a kinematic viscosity into a dynamic one when a case gives cSt, kg/m³ (from memory: typical mineral oil near 40 °C). */
@@ -63,13 +73,20 @@ export class QuantityError extends Error {}
 
 /** Rewrite the spellings js-quantities lacks into ones it knows. */
 function normalise(text: string, kind: Kind): { text: string; scale: number } {
-  let t = text.trim().replace(/·/g, '*').replace(/\s*\*\s*/g, '*').replace(/\s*\/\s*/g, '/');
+  let t = text
+    .trim()
+    .replace(/·/g, '*')
+    .replace(/\s*\*\s*/g, '*')
+    .replace(/\s*\/\s*/g, '/');
   let scale = 1;
   // Everything after a "/" is a denominator for js-quantities, so "(N*m)" after "/" loses its brackets.
   t = t.replace(/\/\(([^()]*)\)/g, '/$1');
   t = t.replace(/°\s*C\b/g, 'degC').replace(/°\s*F\b/g, 'degF');
   if (kind === 'temperature') {
-    t = t.replace(/\bdegC\b|\bcelsius\b|\bC$/, 'tempC').replace(/\bdegF\b|\bfahrenheit\b|\bF$/, 'tempF').replace(/\bK$|\bdegK\b|\bkelvin\b/, 'tempK');
+    t = t
+      .replace(/\bdegC\b|\bcelsius\b|\bC$/, 'tempC')
+      .replace(/\bdegF\b|\bfahrenheit\b|\bF$/, 'tempF')
+      .replace(/\bK$|\bdegK\b|\bkelvin\b/, 'tempK');
   }
   // Revolutions: js-quantities knows rpm only.
   if (/\b(rev|r)\/s$|\brps$/.test(t)) {
@@ -88,7 +105,10 @@ function normalise(text: string, kind: Kind): { text: string; scale: number } {
 export function parseQuantity(value: unknown, kind: Kind): number {
   const info = KINDS[kind];
   if (typeof value === 'number') {
-    if (!Number.isFinite(value)) throw new QuantityError(`got ${String(value)}; expected a finite number or ${info.noun} such as ${info.examples}`);
+    if (!Number.isFinite(value))
+      throw new QuantityError(
+        `got ${String(value)}; expected a finite number or ${info.noun} such as ${info.examples}`,
+      );
     return value;
   }
   if (typeof value !== 'string') {
@@ -97,14 +117,21 @@ export function parseQuantity(value: unknown, kind: Kind): number {
   const { text, scale } = normalise(value, kind);
   if (NUMBER.test(text)) return Number(text);
   const m = /^([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.+)$/.exec(text);
-  const unreadable = () => new QuantityError(`"${value}" is not a quantity this tool can read; expected ${info.noun} such as ${info.examples}`);
+  const unreadable = () =>
+    new QuantityError(
+      `"${value}" is not a quantity this tool can read; expected ${info.noun} such as ${info.examples}`,
+    );
   if (!m) throw unreadable();
   const x = Number(m[1]);
-  if (!Number.isFinite(x)) throw new QuantityError(`"${value}" is not a finite number; expected ${info.noun} such as ${info.examples}`);
+  if (!Number.isFinite(x))
+    throw new QuantityError(`"${value}" is not a finite number; expected ${info.noun} such as ${info.examples}`);
   const fast = kind === 'temperature' ? undefined : COMMON[kind][m[2]!];
   if (fast !== undefined) {
     const n = x * fast * scale;
-    if (!Number.isFinite(n)) throw new QuantityError(`"${value}" is not a finite number in ${KINDS[kind].label}; expected ${info.noun} such as ${info.examples}`);
+    if (!Number.isFinite(n))
+      throw new QuantityError(
+        `"${value}" is not a finite number in ${KINDS[kind].label}; expected ${info.noun} such as ${info.examples}`,
+      );
     return n;
   }
   if (kind === 'temperature' && m[2]! in TEMPERATURES) return TEMPERATURES[m[2]!]!(x);
@@ -122,7 +149,9 @@ export function parseQuantity(value: unknown, kind: Kind): number {
       return x * q.to('m^2/s').scalar * KINEMATIC_TO_DYNAMIC_DENSITY;
     }
     if (kind === 'temperature' && !q.units().startsWith('temp') && q.kind() === 'temperature') {
-      throw new QuantityError(`"${value}" is a temperature difference; expected a temperature such as ${info.examples}`);
+      throw new QuantityError(
+        `"${value}" is a temperature difference; expected a temperature such as ${info.examples}`,
+      );
     }
     if (!q.isCompatible(info.unit)) {
       const got = q.kind() ? `a ${q.kind().replace(/_/g, ' ')}` : `units of ${q.units()}`;
@@ -131,7 +160,10 @@ export function parseQuantity(value: unknown, kind: Kind): number {
     let n = kind === 'temperature' ? q.to(info.unit).scalar : x * q.to(info.unit).scalar;
     n *= scale;
     if (kind === 'speed') n /= 60; // internal shaft speed: rev/s
-    if (!Number.isFinite(n)) throw new QuantityError(`"${value}" is not a finite number in ${KINDS[kind].label}; expected ${info.noun} such as ${info.examples}`);
+    if (!Number.isFinite(n))
+      throw new QuantityError(
+        `"${value}" is not a finite number in ${KINDS[kind].label}; expected ${info.noun} such as ${info.examples}`,
+      );
     return n;
   } catch (e) {
     if (e instanceof QuantityError) throw e;
@@ -157,12 +189,23 @@ const COMMON: Record<Exclude<Kind, 'temperature'>, Record<string, number>> = {
   speed: { rpm: 1 / 60 },
   velocity: { 'm/s': 1, 'mm/s': 1e-3, 'ft/min': FT_MIN },
   time: { h: 1, min: 1 / 60, s: 1 / 3600 },
-  viscosity: { 'Pa*s': 1, 'mPa*s': 1e-3, cP: 1e-3, cSt: 1e-6 * KINEMATIC_TO_DYNAMIC_DENSITY, 'mm^2/s': 1e-6 * KINEMATIC_TO_DYNAMIC_DENSITY },
+  viscosity: {
+    'Pa*s': 1,
+    'mPa*s': 1e-3,
+    cP: 1e-3,
+    cSt: 1e-6 * KINEMATIC_TO_DYNAMIC_DENSITY,
+    'mm^2/s': 1e-6 * KINEMATIC_TO_DYNAMIC_DENSITY,
+  },
   pressure: { Pa: 1, kPa: 1e3, MPa: 1e6, GPa: 1e9, bar: 1e5, psi: PSI },
   pv: { 'Pa*m/s': 1, 'MPa*m/s': 1e6, 'psi*ft/min': PSI * FT_MIN },
   angle: { rad: 1, deg: Math.PI / 180 },
   frequency: { Hz: 1, '1/s': 1 },
-  wearFactor: { 'm^2/N': 1, 'm^3/N*m': 1, 'mm^3/N*m': 1e-9, 'in^3*min/lbf*ft*h': (IN ** 3 * 60) / (LBF * 0.3048 * 3600) },
+  wearFactor: {
+    'm^2/N': 1,
+    'm^3/N*m': 1,
+    'mm^3/N*m': 1e-9,
+    'in^3*min/lbf*ft*h': (IN ** 3 * 60) / (LBF * 0.3048 * 3600),
+  },
 };
 
 /** Absolute temperatures to °C (exact). */

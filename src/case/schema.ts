@@ -92,12 +92,16 @@ function describeInput(v: unknown): string {
 }
 
 const text = (what: string) =>
-  z.string({ error: (iss) => `got ${describeInput(iss.input)}; expected ${what}` }).min(1, { error: `is empty; expected ${what}` });
+  z
+    .string({ error: (iss) => `got ${describeInput(iss.input)}; expected ${what}` })
+    .min(1, { error: `is empty; expected ${what}` });
 
 const plain = (what: string, min: number, max: number) =>
   z
     .number({ error: (iss) => `got ${describeInput(iss.input)}; expected ${what}` })
-    .refine((n) => Number.isFinite(n) && n >= min && n <= max, { error: (iss) => `got ${show(iss.input)}; expected ${what}` });
+    .refine((n) => Number.isFinite(n) && n >= min && n <= max, {
+      error: (iss) => `got ${show(iss.input)}; expected ${what}`,
+    });
 
 const FORCE: Ceiling = { max: 1e8, say: 'a force up to 100 MN' };
 // Dimensional wear factors of rubbing materials span about 1e-9 to 1e-3 mm^3/(N*m) (unfilled PTFE at the top).
@@ -119,7 +123,11 @@ export const materialSchema = mapping({
   wearFactorLow: quantity('wearFactor', 'positive', WEAR).optional(),
   wearFactorHigh: quantity('wearFactor', 'positive', WEAR).optional(),
   friction: plain('a friction coefficient between 0.001 and 1', 0.001, 1),
-  maxTemperature: quantity('temperature', 'any', { min: -60, max: 1000, say: 'a temperature limit from -60 degC to 1000 degC' }),
+  maxTemperature: quantity('temperature', 'any', {
+    min: -60,
+    max: 1000,
+    say: 'a temperature limit from -60 degC to 1000 degC',
+  }),
   source: text('where the values come from (datasheet, handbook)'),
 });
 
@@ -132,9 +140,17 @@ const pointSchema = mapping({
 
 /** Oil as written: "ISO VG 68", "VG 68" or 68. */
 const oilSchema = z.unknown().transform((v, ctx) => {
-  const m = typeof v === 'number' ? [String(v), String(v)] : typeof v === 'string' ? /^\s*(?:ISO\s*)?(?:VG\s*)?(\d+)\s*$/i.exec(v) : null;
+  const m =
+    typeof v === 'number'
+      ? [String(v), String(v)]
+      : typeof v === 'string'
+        ? /^\s*(?:ISO\s*)?(?:VG\s*)?(\d+)\s*$/i.exec(v)
+        : null;
   if (!m) {
-    ctx.addIssue({ code: 'custom', message: `got ${describeInput(v)}; expected an ISO viscosity grade such as "ISO VG 68"` });
+    ctx.addIssue({
+      code: 'custom',
+      message: `got ${describeInput(v)}; expected an ISO viscosity grade such as "ISO VG 68"`,
+    });
     return z.NEVER;
   }
   return Number(m[1]);
@@ -146,7 +162,10 @@ export const caseFileSchema = mapping({
     diameter: quantity('length', 'positive', { max: 5, min: 1e-3, say: 'a shaft diameter from 1 mm to 5 m' }),
     speed: quantity('speed', 'positive', { max: 100000 / 60, say: 'a speed up to 100 000 rpm' }).optional(),
     oscillation: mapping({
-      angle: quantity('angle', 'positive', { max: 2 * Math.PI, say: 'a total swing angle up to 360 deg (more is rotation)' }),
+      angle: quantity('angle', 'positive', {
+        max: 2 * Math.PI,
+        say: 'a total swing angle up to 360 deg (more is rotation)',
+      }),
       frequency: quantity('frequency', 'positive', { max: 100, say: 'a frequency up to 100 Hz' }),
     }).optional(),
   }),
@@ -155,7 +174,10 @@ export const caseFileSchema = mapping({
     axial: quantity('force', 'nonnegative', FORCE).optional(),
     shock: choice(SHOCKS).optional(),
   }).optional(),
-  duty: z.array(pointSchema, { error: 'expected a list of operating points' }).min(1, { error: 'is empty; expected at least one operating point' }).optional(),
+  duty: z
+    .array(pointSchema, { error: 'expected a list of operating points' })
+    .min(1, { error: 'is empty; expected at least one operating point' })
+    .optional(),
   life: mapping({
     hours: quantity('time', 'positive', { max: 1e6, say: 'a life target up to 1 000 000 h' }),
     wearAllowance: quantity('length', 'positive', { max: 0.05, say: 'a wear allowance up to 50 mm' }).optional(),
@@ -169,7 +191,11 @@ export const caseFileSchema = mapping({
     supply: choice(SUPPLIES).optional(),
     oil: oilSchema.optional(),
     viscosity: quantity('viscosity', 'positive', { max: 10, say: 'a viscosity up to 10 Pa*s' }).optional(),
-    inletTemperature: quantity('temperature', 'any', { min: -30, max: 150, say: 'an oil inlet temperature from -30 degC to 150 degC (mineral oils)' }).optional(),
+    inletTemperature: quantity('temperature', 'any', {
+      min: -30,
+      max: 150,
+      say: 'an oil inlet temperature from -30 degC to 150 degC (mineral oils)',
+    }).optional(),
   }).optional(),
   environment: mapping({
     ambient: quantity('temperature', 'any', TEMPERATURE).optional(),
@@ -177,10 +203,9 @@ export const caseFileSchema = mapping({
     startsPerHour: plain('a number of starts per hour from 0 to 10000', 0, 10000).optional(),
   }).optional(),
   priorities: mapping(
-    Object.fromEntries(PRIORITIES.map((p) => [p, plain('a priority from 1 (unimportant) to 5 (essential)', 1, 5).optional()])) as Record<
-      (typeof PRIORITIES)[number],
-      z.ZodOptional<ReturnType<typeof plain>>
-    >,
+    Object.fromEntries(
+      PRIORITIES.map((p) => [p, plain('a priority from 1 (unimportant) to 5 (essential)', 1, 5).optional()]),
+    ) as Record<(typeof PRIORITIES)[number], z.ZodOptional<ReturnType<typeof plain>>>,
   ).optional(),
   bushing: mapping({
     length: quantity('length', 'positive', { max: 10, say: 'a bushing length up to 10 m' }).optional(),
@@ -192,7 +217,8 @@ export const caseFileSchema = mapping({
         if (v !== null && typeof v === 'object' && !Array.isArray(v)) {
           const r = materialSchema.safeParse(v);
           if (r.success) return r.data;
-          for (const i of r.error.issues) ctx.addIssue({ code: 'custom', message: i.message, path: i.path as (string | number)[] });
+          for (const i of r.error.issues)
+            ctx.addIssue({ code: 'custom', message: i.message, path: i.path as (string | number)[] });
           return z.NEVER;
         }
         ctx.addIssue({

@@ -25,20 +25,33 @@ export interface AdviseOptions {
  * (empty when the note was written to --out). Options are checked before any work is done,
  * so a bad flag never leaves a file behind.
  */
-export async function runAdvise(file: string, opts: (OutputOptions | { format: AdviseFormat; units: UnitSystem }) & Omit<AdviseOptions, 'format' | 'units'>): Promise<string> {
+export async function runAdvise(
+  file: string,
+  opts: (OutputOptions | { format: AdviseFormat; units: UnitSystem }) & Omit<AdviseOptions, 'format' | 'units'>,
+): Promise<string> {
   const format = opts.format as AdviseFormat;
   const note = format === 'md' || format === 'html';
-  if (!note && opts.out !== undefined) throw new UsageError(`--out: applies to --format md or html (the design-review note); got --format ${format}`);
-  if (opts.force && opts.out === undefined) throw new UsageError('--force: applies only with --out FILE; got --force without --out');
-  if (opts.out !== undefined && opts.out.trim() === '') throw new UsageError('--out: got an empty file name; expected a file path');
+  if (!note && opts.out !== undefined)
+    throw new UsageError(`--out: applies to --format md or html (the design-review note); got --format ${format}`);
+  if (opts.force && opts.out === undefined)
+    throw new UsageError('--force: applies only with --out FILE; got --force without --out');
+  if (opts.out !== undefined && opts.out.trim() === '')
+    throw new UsageError('--out: got an empty file name; expected a file path');
   const loaded = loadCaseFile(file);
   const { advise } = await import('../advise/engine.js');
   // The pressure profile (one more Reynolds solve) is drawn in the note and kept in JSON; text has no use for it.
-  const checks = format === 'text' ? { journal: (await import('../calc/journal/index.js')).checkJournal(loaded.case, { pressureProfile: false }) } : {};
+  const checks =
+    format === 'text'
+      ? { journal: (await import('../calc/journal/index.js')).checkJournal(loaded.case, { pressureProfile: false }) }
+      : {};
   const a = await advise(loaded.case, loaded.assumed, undefined, { checks });
   if (note) {
     const { renderNote } = await import('../report/note/index.js');
-    const text = await renderNote(loaded, a, format, { units: opts.units, caseFile: file, ...(opts.now ? { now: opts.now } : {}) });
+    const text = await renderNote(loaded, a, format, {
+      units: opts.units,
+      caseFile: file,
+      ...(opts.now ? { now: opts.now } : {}),
+    });
     if (opts.out === undefined) return text.trimEnd();
     const { writeFileSafe } = await import('./write-file.js');
     writeFileSafe(opts.out, text, { force: opts.force === true });
@@ -46,11 +59,23 @@ export async function runAdvise(file: string, opts: (OutputOptions | { format: A
   }
   if (format === 'json') {
     const { rules, ...rest } = a;
-    return JSON.stringify(opts.explain ? { ...rest, case: loaded.case, rules } : { ...rest, case: loaded.case }, null, 2);
+    return JSON.stringify(
+      opts.explain ? { ...rest, case: loaded.case, rules } : { ...rest, case: loaded.case },
+      null,
+      2,
+    );
   }
   const { adviceText } = await import('../report/advice-text.js');
   await useColour();
-  return [loaded.case.title, adviceText(a, opts.units, opts.explain), assumptionsBlock(a.assumed), warningsBlock(a.warnings), CAUTION].filter(Boolean).join('\n\n');
+  return [
+    loaded.case.title,
+    adviceText(a, opts.units, opts.explain),
+    assumptionsBlock(a.assumed),
+    warningsBlock(a.warnings),
+    CAUTION,
+  ]
+    .filter(Boolean)
+    .join('\n\n');
 }
 
 /**
@@ -58,7 +83,13 @@ export async function runAdvise(file: string, opts: (OutputOptions | { format: A
  * step, and for scripts). Same rules as `advise --out`: temporary file then rename, an
  * existing file is kept unless `force`; user errors throw UsageError / CaseError (exit 2).
  */
-export async function writeNote(casePath: string, outPath: string, format: 'md' | 'html', force: boolean): Promise<void> {
-  if (format !== 'md' && format !== 'html') throw new UsageError(`note format: got "${String(format)}"; expected md or html`);
+export async function writeNote(
+  casePath: string,
+  outPath: string,
+  format: 'md' | 'html',
+  force: boolean,
+): Promise<void> {
+  if (format !== 'md' && format !== 'html')
+    throw new UsageError(`note format: got "${String(format)}"; expected md or html`);
   await runAdvise(casePath, { format, units: 'SI', explain: false, out: outPath, force });
 }

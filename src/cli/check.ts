@@ -13,9 +13,13 @@ export const CHECKS = ['bushing', 'rolling', 'journal'] as const;
 export type CheckName = (typeof CHECKS)[number];
 
 /** Parse --format / --units values into the options object, or a UsageError naming the flag. */
-export function outputOptions(raw: { format?: string; units?: string }, formats: readonly string[] = ['text', 'json']): OutputOptions {
+export function outputOptions(
+  raw: { format?: string; units?: string },
+  formats: readonly string[] = ['text', 'json'],
+): OutputOptions {
   const format = raw.format ?? 'text';
-  if (!formats.includes(format)) throw new UsageError(`--format: got "${format}"; expected one of: ${formats.join(', ')}`);
+  if (!formats.includes(format))
+    throw new UsageError(`--format: got "${format}"; expected one of: ${formats.join(', ')}`);
   const u = (raw.units ?? 'SI').toUpperCase();
   if (u !== 'SI' && u !== 'US') throw new UsageError(`--units: got "${raw.units}"; expected SI or US`);
   return { format: format as Format, units: u };
@@ -32,18 +36,16 @@ export async function runCheck(name: string, file: string, opts: OutputOptions):
   return opts.format === 'json' ? JSON.stringify(json, null, 2) : text;
 }
 
-async function computeCheck(name: CheckName, loaded: LoadedCase, opts: OutputOptions): Promise<{ json: unknown; text: string }> {
+async function computeCheck(
+  name: CheckName,
+  loaded: LoadedCase,
+  opts: OutputOptions,
+): Promise<{ json: unknown; text: string }> {
   const c = loaded.case;
   const wrap = (r: { option: string; assumed: LoadedCase['assumed']; warnings: string[] }, body: string) => {
     const { option, assumed, ...rest } = r;
     const json = { option, case: c, assumed: [...loaded.assumed, ...assumed], ...rest };
-    const text = [
-      `${c.title}`,
-      body,
-      assumptionsBlock(json.assumed),
-      warningsBlock(r.warnings),
-      CAUTION,
-    ]
+    const text = [`${c.title}`, body, assumptionsBlock(json.assumed), warningsBlock(r.warnings), CAUTION]
       .filter(Boolean)
       .join('\n\n');
     return { json, text };

@@ -32,7 +32,11 @@ function fail(e: unknown): never {
     process.exit(EXIT.badInput);
   }
   if (e instanceof CommanderError) {
-    process.exit(e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help' ? EXIT.ok : EXIT.badInput);
+    process.exit(
+      e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help'
+        ? EXIT.ok
+        : EXIT.badInput,
+    );
   }
   process.stderr.write(
     `shaftwise: internal defect (${(e as Error)?.message ?? String(e)}). This is a bug, not your input: please report it with the case file and the command` +
@@ -45,7 +49,9 @@ function fail(e: unknown): never {
 
 const program = new Command()
   .name('shaftwise')
-  .description('Choose how a shaft is supported: plain bushing, rolling bearing or oil-film journal bearing.\nConcept-stage estimates: confirm with supplier data and testing.')
+  .description(
+    'Choose how a shaft is supported: plain bushing, rolling bearing or oil-film journal bearing.\nConcept-stage estimates: confirm with supplier data and testing.',
+  )
   .version(pkg.version, '-V, --version', 'print the version')
   .option('--debug', 'print the full trace of an internal defect')
   .exitOverride()
@@ -58,7 +64,8 @@ registerMap(program);
 registerSensitivity(program);
 registerBatch(program);
 registerAsk(program, {
-  advise: async (file) => (await import('./advise.js')).runAdvise(file, { format: 'text', units: 'SI', explain: false }),
+  advise: async (file) =>
+    (await import('./advise.js')).runAdvise(file, { format: 'text', units: 'SI', explain: false }),
   // At the end of the questionnaire: the HTML note beside the case file, never over an existing one.
   offerNote: async (file) => {
     const { writeNote } = await import('./advise.js');

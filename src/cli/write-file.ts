@@ -23,9 +23,12 @@ export interface WriteOptions {
 export function writeFileSafe(target: string, data: string, opts: WriteOptions): void {
   const option = opts.option ?? '--out';
   const existing = statOrNull(target);
-  if (existing?.isDirectory()) throw new UsageError(`${option}: got "${target}", which is a directory; expected a file path`);
+  if (existing?.isDirectory())
+    throw new UsageError(`${option}: got "${target}", which is a directory; expected a file path`);
   if (existing && !opts.force) {
-    throw new UsageError(`${option}: "${target}" already exists and was left untouched; pass --force to replace it, or choose another file`);
+    throw new UsageError(
+      `${option}: "${target}" already exists and was left untouched; pass --force to replace it, or choose another file`,
+    );
   }
   const dir = dirname(target);
   const tmp = join(dir, `.${basename(target)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
@@ -44,7 +47,12 @@ export function writeFileSafe(target: string, data: string, opts: WriteOptions):
         // A file system without hard links (some network and FAT mounts): fall back to a
         // rename after a last look, which narrows but cannot close the race.
         const code = (le as NodeJS.ErrnoException).code;
-        if (code === 'EEXIST' || !['EPERM', 'ENOTSUP', 'EOPNOTSUPP', 'ENOSYS', 'EXDEV'].includes(code ?? '') || statOrNull(target)) throw le;
+        if (
+          code === 'EEXIST' ||
+          !['EPERM', 'ENOTSUP', 'EOPNOTSUPP', 'ENOSYS', 'EXDEV'].includes(code ?? '') ||
+          statOrNull(target)
+        )
+          throw le;
         renameSync(tmp, target);
       }
       rmSync(tmp, { force: true });
@@ -58,7 +66,9 @@ export function writeFileSafe(target: string, data: string, opts: WriteOptions):
       }
     }
     rmSync(tmp, { force: true });
-    throw new UsageError(`${option}: cannot write "${target}" (${reason(e as NodeJS.ErrnoException, dir)}); expected a writable file path in an existing directory`);
+    throw new UsageError(
+      `${option}: cannot write "${target}" (${reason(e as NodeJS.ErrnoException, dir)}); expected a writable file path in an existing directory`,
+    );
   }
 }
 

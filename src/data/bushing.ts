@@ -45,7 +45,9 @@ export function bushingMaterials(): BushingMaterialRow[] {
   if (hit) return hit;
   const rows = t.materials.map((m) => {
     if (!(m.wearFactorLow <= m.wearFactor && m.wearFactor <= m.wearFactorHigh)) {
-      throw new DataError(`data/bushing-materials.json: material ${m.id}: wearFactorLow ≤ wearFactor ≤ wearFactorHigh does not hold; expected them in that order`);
+      throw new DataError(
+        `data/bushing-materials.json: material ${m.id}: wearFactorLow ≤ wearFactor ≤ wearFactorHigh does not hold; expected them in that order`,
+      );
     }
     return {
       ...m,

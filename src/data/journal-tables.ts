@@ -44,7 +44,9 @@ export function shippedJournalTables(): ShippedTables {
   try {
     t = JSON.parse(readFileSync(url, 'utf8')) as ShippedTables;
   } catch (e) {
-    throw new DataError(`${file}: cannot be read as JSON (${(e as Error).message}); regenerate it with node scripts/journal-tables.mjs`);
+    throw new DataError(
+      `${file}: cannot be read as JSON (${(e as Error).message}); regenerate it with node scripts/journal-tables.mjs`,
+    );
   }
   if (!Array.isArray(t?.tables)) throw new DataError(`${file}: field tables: expected a list of tables`);
   t.tables.forEach((tab, i) => {
@@ -54,7 +56,9 @@ export function shippedJournalTables(): ShippedTables {
     tab.rows.forEach((r, k) => {
       for (const f of FIELDS) {
         if (typeof r[f] !== 'number' || !Number.isFinite(r[f])) {
-          throw new DataError(`${file}: tables[${i}].rows[${k}].${f}: got ${JSON.stringify(r[f])}; expected a finite number`);
+          throw new DataError(
+            `${file}: tables[${i}].rows[${k}].${f}: got ${JSON.stringify(r[f])}; expected a finite number`,
+          );
         }
       }
     });

@@ -32,7 +32,9 @@ const cache = new Map<string, unknown>();
 
 /** A table's name in messages: data/<file>, or the full path when SHAFTWISE_DATA_DIR points elsewhere. */
 function shownPath(file: string): string {
-  return process.env.SHAFTWISE_DATA_DIR ? `${process.env.SHAFTWISE_DATA_DIR.replace(/\/$/, '')}/${file} (SHAFTWISE_DATA_DIR)` : `data/${file}`;
+  return process.env.SHAFTWISE_DATA_DIR
+    ? `${process.env.SHAFTWISE_DATA_DIR.replace(/\/$/, '')}/${file} (SHAFTWISE_DATA_DIR)`
+    : `data/${file}`;
 }
 
 /**
@@ -60,9 +62,7 @@ export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
   const parsed = schema.safeParse(raw);
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
-    throw new DataError(
-      `${shownPath(file)}: field ${issue.path.join('.') || '(root)'}: ${issue.message}`,
-    );
+    throw new DataError(`${shownPath(file)}: field ${issue.path.join('.') || '(root)'}: ${issue.message}`);
   }
   cache.set(key, parsed.data);
   return parsed.data;

@@ -15,17 +15,19 @@ const source = z.string().min(1);
 const shock = z.enum(['none', 'light', 'moderate', 'heavy']);
 const bearingType = z.enum(['ball', 'roller']);
 
-export const boundaryRowSchema = z.object({
-  id: z.string().min(1),
-  type: bearingType,
-  kind: z.string().min(1),
-  series: z.string().min(1),
-  designation: z.string().min(1),
-  bore_mm: positive,
-  outerDiameter_mm: positive,
-  width_mm: positive,
-  source,
-}).refine((r) => r.outerDiameter_mm > r.bore_mm, { message: 'outerDiameter_mm must exceed bore_mm' });
+export const boundaryRowSchema = z
+  .object({
+    id: z.string().min(1),
+    type: bearingType,
+    kind: z.string().min(1),
+    series: z.string().min(1),
+    designation: z.string().min(1),
+    bore_mm: positive,
+    outerDiameter_mm: positive,
+    width_mm: positive,
+    source,
+  })
+  .refine((r) => r.outerDiameter_mm > r.bore_mm, { message: 'outerDiameter_mm must exceed bore_mm' });
 export type BoundaryRow = z.infer<typeof boundaryRowSchema>;
 
 const boundaryTableSchema = z.object({
@@ -61,16 +63,18 @@ const factorsSchema = z.object({
   xyDeepGrooveBall: xyTableSchema,
   serviceFactors: z.array(z.object({ shock, serviceFactor: positive, source })).length(4),
   staticSafety: z.array(z.object({ shock, guidance: z.string(), ball: positive, roller: positive, source })).length(4),
-  contamination: z.array(
-    z.object({
-      level: z.enum(['clean', 'normal', 'dirty', 'severe']),
-      isoLevel: z.string(),
-      low: nonNegative,
-      high: positive,
-      eC: nonNegative,
-      source,
-    }),
-  ).length(4),
+  contamination: z
+    .array(
+      z.object({
+        level: z.enum(['clean', 'normal', 'dirty', 'severe']),
+        isoLevel: z.string(),
+        low: nonNegative,
+        high: positive,
+        eC: nonNegative,
+        source,
+      }),
+    )
+    .length(4),
   speedLimits: z.array(
     z.object({ type: bearingType, supply: z.enum(['grease', 'oil-bath', 'oil-feed']), ndm: positive, source }),
   ),

@@ -37,7 +37,8 @@ export function logTicks(min: number, max: number): { value: number; major: bool
 export function parseRange(option: string, text: string, kind: Kind, example: string): [number, number] {
   const expected = `expected MIN..MAX with units, e.g. "${example}", with 0 < MIN < MAX`;
   const parts = text.split('..');
-  if (parts.length !== 2 || !parts[0]!.trim() || !parts[1]!.trim()) throw new UsageError(`${option}: got "${text}"; ${expected}`);
+  if (parts.length !== 2 || !parts[0]!.trim() || !parts[1]!.trim())
+    throw new UsageError(`${option}: got "${text}"; ${expected}`);
   const ends = parts.map((p) => {
     try {
       return parseQuantity(p.trim(), kind);

@@ -53,11 +53,19 @@ function designText(a: AdviceResult): string {
   }
 }
 
-export async function adviseFile(path: string, name: string, rules: LoadedRule[], run: ReturnType<typeof ruleRunner>['run']): Promise<BatchRow> {
+export async function adviseFile(
+  path: string,
+  name: string,
+  rules: LoadedRule[],
+  run: ReturnType<typeof ruleRunner>['run'],
+): Promise<BatchRow> {
   try {
     const loaded = loadCaseFile(path);
     const c = loaded.case;
-    const a = await advise(c, loaded.assumed, rules, { checks: { journal: checkJournal(c, { pressureProfile: false, sheet: false }) }, runRules: run });
+    const a = await advise(c, loaded.assumed, rules, {
+      checks: { journal: checkJournal(c, { pressureProfile: false, sheet: false }) },
+      runRules: run,
+    });
     const top = a.ranking[0]!;
     const f = (o: (typeof OPTIONS)[number]) => a.ranking.find((r) => r.option === o)!.feasible;
     return {
@@ -73,13 +81,28 @@ export async function adviseFile(path: string, name: string, rules: LoadedRule[]
     };
   } catch (e) {
     const error =
-      e instanceof CaseError ? e.problems.map((p) => `${p.field}: ${p.message}`).join('; ') : `internal defect: ${(e as Error)?.message ?? String(e)}`;
-    return { file: name, title: '', result: 'error', recommendation: '', score: null, lifeHours: null, design: '', feasible: { bushing: null, rolling: null, journal: null }, error };
+      e instanceof CaseError
+        ? e.problems.map((p) => `${p.field}: ${p.message}`).join('; ')
+        : `internal defect: ${(e as Error)?.message ?? String(e)}`;
+    return {
+      file: name,
+      title: '',
+      result: 'error',
+      recommendation: '',
+      score: null,
+      lifeHours: null,
+      design: '',
+      feasible: { bushing: null, rolling: null, journal: null },
+      error,
+    };
   }
 }
 
 /** Advise every case file in `dir`; `onProgress` after each file. */
-export async function runBatch(dir: string, opts: { rules?: LoadedRule[]; onProgress?: (done: number, total: number) => void } = {}): Promise<BatchRow[]> {
+export async function runBatch(
+  dir: string,
+  opts: { rules?: LoadedRule[]; onProgress?: (done: number, total: number) => void } = {},
+): Promise<BatchRow[]> {
   const rules = opts.rules ?? loadRules();
   const { run } = ruleRunner(rules);
   const files = caseFiles(dir);

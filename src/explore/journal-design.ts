@@ -19,8 +19,15 @@ const um = (m: number) => `${+(m * 1e6).toPrecision(3)} µm`;
 
 /** The design a journal check found (or the one the case fixed). */
 export function designOf(r: JournalResult, c: CaseSI): JournalDesign {
-  const d: JournalDesign = { length: r.length, radialClearance: r.radialClearance, label: `L ${mm(r.length)}, c ${um(r.radialClearance)}, ${r.oil}` };
-  const sweptOil = c.lubrication.viscosity === undefined && c.lubrication.oilGrade === undefined && (c.lubrication.supply === 'oil-bath' || c.lubrication.supply === 'oil-feed');
+  const d: JournalDesign = {
+    length: r.length,
+    radialClearance: r.radialClearance,
+    label: `L ${mm(r.length)}, c ${um(r.radialClearance)}, ${r.oil}`,
+  };
+  const sweptOil =
+    c.lubrication.viscosity === undefined &&
+    c.lubrication.oilGrade === undefined &&
+    (c.lubrication.supply === 'oil-bath' || c.lubrication.supply === 'oil-feed');
   const g = /^ISO VG (\d+)$/.exec(r.oil);
   if (sweptOil && g) d.grade = Number(g[1]);
   return d;
@@ -41,7 +48,8 @@ export function checkDesign(c: CaseSI, d: JournalDesign): JournalResult {
 /** Smallest margin over the limit checks (advisory ones excluded): the design's governing margin. */
 export function governingMargin(r: JournalResult): { id: string; margin: number } {
   let best = { id: '', margin: Infinity };
-  for (const k of r.checks) if (!r.advisory.includes(k.id) && k.margin < best.margin) best = { id: k.id, margin: k.margin };
+  for (const k of r.checks)
+    if (!r.advisory.includes(k.id) && k.margin < best.margin) best = { id: k.id, margin: k.margin };
   return best;
 }
 

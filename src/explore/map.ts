@@ -105,7 +105,9 @@ export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOpti
   const rules = opts.rules ?? loadRules();
   const ref = referencePoint(c);
   if (!(ref.load > 0) || !(ref.speed > 0)) {
-    throw new Error('map: the case needs a positive load and speed at its governing point to centre the map (give --load and --speed)');
+    throw new Error(
+      'map: the case needs a positive load and speed at its governing point to centre the map (give --load and --speed)',
+    );
   }
   const load = opts.load ?? [ref.load / 10, ref.load * 10];
   const speed = opts.speed ?? [ref.speed / 10, ref.speed * 10];
@@ -145,8 +147,15 @@ export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOpti
       const bj = bracket(nodes, j);
       const ids = [nodeDesign[nearest(nodes, i, bi)]![nearest(nodes, j, bj)]!];
       const cc = at(i, j);
-      const journal = bestOf(cc, ids.map((k) => designs[k]!)).result;
-      const a = await advise(cc, [], rules, { checks: { bushing: checkBushing(cc, { sheet: false }), rolling: checkRolling(cc, { sheet: false }), journal }, runRules: runner.run, traces: false });
+      const journal = bestOf(
+        cc,
+        ids.map((k) => designs[k]!),
+      ).result;
+      const a = await advise(cc, [], rules, {
+        checks: { bushing: checkBushing(cc, { sheet: false }), rolling: checkRolling(cc, { sheet: false }), journal },
+        runRules: runner.run,
+        traces: false,
+      });
       row.push(summary(a));
     }
     cells.push(row);
@@ -156,12 +165,15 @@ export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOpti
   const notes = [
     `Axes: radial load and speed of the governing point (largest radial load ${fmtN(ref.load)}, highest speed ${fmtRpm(ref.speed)} of the case); log scales.`,
     ref.spectrum
-      ? 'Duty spectrum: every operating point\'s load and speed is scaled by the cell\'s factor relative to the governing point; shares are kept.'
+      ? "Duty spectrum: every operating point's load and speed is scaled by the cell's factor relative to the governing point; shares are kept."
       : 'Single operating point: the cell is the case at that load and speed.',
     'Kept from the case: shaft diameter, space, lubrication, environment, life target and priorities. Axial load is scaled with the radial load.',
     `Journal bearing: full design sweep at ${nodes.length} × ${nodes.length} coarse nodes; each cell evaluates the design of its nearest node, so the journal region may be slightly smaller than a fresh design at every cell would give.`,
   ];
-  if (c.shaft.oscillation) notes.push('Oscillating shaft: speed is the equivalent rotational speed θ·f/π; the frequency is scaled, the swing kept.');
+  if (c.shaft.oscillation)
+    notes.push(
+      'Oscillating shaft: speed is the equivalent rotational speed θ·f/π; the frequency is scaled, the swing kept.',
+    );
   return {
     title: c.title,
     loads,

@@ -40,7 +40,8 @@ interface Leaf {
 }
 
 /** A path split into its steps once ("$.a[0]" → ["a", "0"]), so each key costs no regex. */
-const stepsOf = (path: string | undefined): string[] => (path === undefined ? [] : [...path.matchAll(STEP)].map((m) => m[1] ?? m[2]!));
+const stepsOf = (path: string | undefined): string[] =>
+  path === undefined ? [] : [...path.matchAll(STEP)].map((m) => m[1] ?? m[2]!);
 const walk = (v: unknown, steps: readonly string[]): unknown => {
   let o = v;
   for (const s of steps) {
@@ -63,16 +64,31 @@ function leaves(c: Condition, out: Leaf[]): Leaf[] {
 }
 
 const fact = (facts: RuleFacts, name: string): unknown => (facts as unknown as Record<string, unknown>)[name];
-const exact = (v: unknown): string => (v === undefined ? 'u' : typeof v === 'number' && !Number.isFinite(v) ? `n${v}` : JSON.stringify(v));
+const exact = (v: unknown): string =>
+  v === undefined ? 'u' : typeof v === 'number' && !Number.isFinite(v) ? `n${v}` : JSON.stringify(v);
 
 export function ruleRunner(rules: readonly LoadedRule[], opts: { memo?: boolean } = {}): RuleRunner {
   const engine = new Engine([], { allowUndefinedFacts: true, pathResolver: resolvePath });
-  rules.forEach((r) => engine.addRule({ name: r.name, conditions: r.conditions as never, event: { type: r.event.type, params: { ...r.event } } }));
+  rules.forEach((r) =>
+    engine.addRule({
+      name: r.name,
+      conditions: r.conditions as never,
+      event: { type: r.event.type, params: { ...r.event } },
+    }),
+  );
   const all = rules
     .flatMap((r) => leaves(r.conditions as Condition, []))
     .map((l) => {
-      const ref = l.value !== null && typeof l.value === 'object' && !Array.isArray(l.value) ? (l.value as { fact: string; path?: string }) : undefined;
-      return { fact: l.fact, steps: stepsOf(l.path), value: l.value, ref: ref && { fact: ref.fact, steps: stepsOf(ref.path) } };
+      const ref =
+        l.value !== null && typeof l.value === 'object' && !Array.isArray(l.value)
+          ? (l.value as { fact: string; path?: string })
+          : undefined;
+      return {
+        fact: l.fact,
+        steps: stepsOf(l.path),
+        value: l.value,
+        ref: ref && { fact: ref.fact, steps: stepsOf(ref.path) },
+      };
     });
   const stored = new Map<string, RuleRun>();
   const stats = { runs: 0, hits: 0 };
@@ -85,7 +101,10 @@ export function ruleRunner(rules: readonly LoadedRule[], opts: { memo?: boolean 
       if (l.ref) {
         // Fact against fact: numbers by the sign of their difference, anything else exactly.
         const w = walk(fact(facts, l.ref.fact), l.ref.steps);
-        k += typeof v === 'number' && typeof w === 'number' && !Number.isNaN(v) && !Number.isNaN(w) ? (v < w ? '<' : v > w ? '>' : '=') + '|' : exact(v) + '~' + exact(w) + '|';
+        k +=
+          typeof v === 'number' && typeof w === 'number' && !Number.isNaN(v) && !Number.isNaN(w)
+            ? (v < w ? '<' : v > w ? '>' : '=') + '|'
+            : exact(v) + '~' + exact(w) + '|';
       } else if (typeof v === 'number' && typeof ref === 'number' && !Number.isNaN(v)) {
         k += (v < ref ? '<' : v > ref ? '>' : '=') + '|';
       } else {

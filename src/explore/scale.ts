@@ -37,7 +37,8 @@ export function scaleCase(c: CaseSI, loadFactor: number, speedFactor: number): C
     load: { ...c.load, radial: c.load.radial * loadFactor, axial: c.load.axial * loadFactor },
   };
   if (c.shaft.speed !== undefined) out.shaft.speed = c.shaft.speed * speedFactor;
-  if (c.shaft.oscillation) out.shaft.oscillation = { ...c.shaft.oscillation, frequency: c.shaft.oscillation.frequency * speedFactor };
+  if (c.shaft.oscillation)
+    out.shaft.oscillation = { ...c.shaft.oscillation, frequency: c.shaft.oscillation.frequency * speedFactor };
   if (c.duty) {
     out.duty = c.duty.map((p) => {
       const q = { ...p, radial: p.radial * loadFactor, axial: p.axial * loadFactor };

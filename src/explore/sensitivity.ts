@@ -65,7 +65,9 @@ export interface SensitivityResult {
 
 const minLimit = (checks: readonly CheckRecord[], advisory: readonly string[] = []): GoverningMargin => {
   let g: GoverningMargin = { check: '', margin: null };
-  for (const k of checks) if (!k.advisory && !advisory.includes(k.id) && (g.margin === null || k.margin < g.margin)) g = { check: k.id, margin: k.margin };
+  for (const k of checks)
+    if (!k.advisory && !advisory.includes(k.id) && (g.margin === null || k.margin < g.margin))
+      g = { check: k.id, margin: k.margin };
   return g;
 };
 
@@ -81,7 +83,11 @@ export function governingMargins(a: AdviceResult): Record<OptionName, GoverningM
   };
 }
 
-export async function computeSensitivity(c: CaseSI, assumed: Assumption[], opts: { rules?: LoadedRule[] } = {}): Promise<SensitivityResult> {
+export async function computeSensitivity(
+  c: CaseSI,
+  assumed: Assumption[],
+  opts: { rules?: LoadedRule[] } = {},
+): Promise<SensitivityResult> {
   const rules = opts.rules ?? loadRules();
   const { run } = ruleRunner(rules);
   const base = await advise(c, assumed, rules, { runRules: run });
@@ -94,13 +100,42 @@ export async function computeSensitivity(c: CaseSI, assumed: Assumption[], opts:
   const material: BushingMaterial | undefined =
     typeof named === 'object' ? named : bushingMaterials().find((m) => m.id === matId);
 
-  type Param = { id: ParameterId; label: string; unit: string; base: number; make: (s: number) => Promise<AdviceResult> };
+  type Param = {
+    id: ParameterId;
+    label: string;
+    unit: string;
+    base: number;
+    make: (s: number) => Promise<AdviceResult>;
+  };
   const adv = (cc: CaseSI, journalOnly = false) =>
-    journalOnly ? advise(c, assumed, rules, { runRules: run, checks: { journal: checkDesign(c, { ...jd, radialClearance: cc.journal!.radialClearance! }) } }) : advise(cc, assumed, rules, { runRules: run });
+    journalOnly
+      ? advise(c, assumed, rules, {
+          runRules: run,
+          checks: { journal: checkDesign(c, { ...jd, radialClearance: cc.journal!.radialClearance! }) },
+        })
+      : advise(cc, assumed, rules, { runRules: run });
   const params: Param[] = [
-    { id: 'load', label: 'Load (every operating point)', unit: 'N', base: referencePoint(c).load, make: (s) => adv(scaleCase(c, 1 + s, 1)) },
-    { id: 'speed', label: c.shaft.oscillation ? 'Speed (oscillation frequency)' : 'Speed (every operating point)', unit: 'rev/s', base: referencePoint(c).speed, make: (s) => adv(scaleCase(c, 1, 1 + s)) },
-    { id: 'life', label: 'Life target', unit: 'h', base: c.life.hours, make: (s) => adv({ ...c, life: { ...c.life, hours: c.life.hours * (1 + s) } }) },
+    {
+      id: 'load',
+      label: 'Load (every operating point)',
+      unit: 'N',
+      base: referencePoint(c).load,
+      make: (s) => adv(scaleCase(c, 1 + s, 1)),
+    },
+    {
+      id: 'speed',
+      label: c.shaft.oscillation ? 'Speed (oscillation frequency)' : 'Speed (every operating point)',
+      unit: 'rev/s',
+      base: referencePoint(c).speed,
+      make: (s) => adv(scaleCase(c, 1, 1 + s)),
+    },
+    {
+      id: 'life',
+      label: 'Life target',
+      unit: 'h',
+      base: c.life.hours,
+      make: (s) => adv({ ...c, life: { ...c.life, hours: c.life.hours * (1 + s) } }),
+    },
     {
       id: 'inletTemperature',
       // A percentage of a Celsius value means nothing (0 °C would never move, −5 °C moves the
@@ -108,9 +143,19 @@ export async function computeSensitivity(c: CaseSI, assumed: Assumption[], opts:
       label: `Oil inlet temperature (±10 % / ±25 % of ${INLET_SPAN} K)`,
       unit: 'degC',
       base: c.lubrication.inletTemperature,
-      make: (s) => adv({ ...c, lubrication: { ...c.lubrication, inletTemperature: c.lubrication.inletTemperature + s * INLET_SPAN } }),
+      make: (s) =>
+        adv({
+          ...c,
+          lubrication: { ...c.lubrication, inletTemperature: c.lubrication.inletTemperature + s * INLET_SPAN },
+        }),
     },
-    { id: 'clearance', label: 'Journal radial clearance (design found)', unit: 'm', base: jd.radialClearance, make: (s) => adv({ ...c, journal: { radialClearance: jd.radialClearance * (1 + s) } }, true) },
+    {
+      id: 'clearance',
+      label: 'Journal radial clearance (design found)',
+      unit: 'm',
+      base: jd.radialClearance,
+      make: (s) => adv({ ...c, journal: { radialClearance: jd.radialClearance * (1 + s) } }, true),
+    },
   ];
   if (material) {
     const k = material.wearFactor;
@@ -120,7 +165,12 @@ export async function computeSensitivity(c: CaseSI, assumed: Assumption[], opts:
       unit: 'm^2/N',
       base: k,
       make: (s) => {
-        const m: BushingMaterial = { ...material, wearFactor: k * (1 + s), wearFactorLow: (material.wearFactorLow ?? k / 3) * (1 + s), wearFactorHigh: (material.wearFactorHigh ?? k * 3) * (1 + s) };
+        const m: BushingMaterial = {
+          ...material,
+          wearFactor: k * (1 + s),
+          wearFactorLow: (material.wearFactorLow ?? k / 3) * (1 + s),
+          wearFactorHigh: (material.wearFactorHigh ?? k * 3) * (1 + s),
+        };
         return adv({ ...c, bushing: { ...c.bushing, material: m } });
       },
     });
@@ -135,16 +185,22 @@ export async function computeSensitivity(c: CaseSI, assumed: Assumption[], opts:
       const a = await p.make(s);
       const margins = governingMargins(a);
       for (const o of OPTIONS) {
-        const m0 = baseMargins[o].margin, m1 = margins[o].margin;
+        const m0 = baseMargins[o].margin,
+          m1 = margins[o].margin;
         if (m0 !== null && m1 !== null) swing = Math.max(swing, Math.abs(m1 - m0));
       }
       const flip = a.recommendation !== base.recommendation;
-      if (flip) flips.push(`${p.label} ${s > 0 ? '+' : ''}${Math.round(s * 100)} %: ${base.recommendation ?? 'none feasible'} → ${a.recommendation ?? 'none feasible'}`);
+      if (flip)
+        flips.push(
+          `${p.label} ${s > 0 ? '+' : ''}${Math.round(s * 100)} %: ${base.recommendation ?? 'none feasible'} → ${a.recommendation ?? 'none feasible'}`,
+        );
       variations.push({ step: s, value: p.base * (1 + s), recommendation: a.recommendation, flip, margins });
     }
     parameters.push({ id: p.id, label: p.label, unit: p.unit, base: p.base, variations, swing });
   }
-  parameters.sort((x, y) => y.swing - x.swing || params.findIndex((p) => p.id === x.id) - params.findIndex((p) => p.id === y.id));
+  parameters.sort(
+    (x, y) => y.swing - x.swing || params.findIndex((p) => p.id === x.id) - params.findIndex((p) => p.id === y.id),
+  );
   return {
     title: c.title,
     recommendation: base.recommendation,
@@ -152,7 +208,7 @@ export async function computeSensitivity(c: CaseSI, assumed: Assumption[], opts:
     parameters,
     flips,
     notes: [
-      'Each parameter is changed alone; the others keep the case\'s values. Margins are the smallest limit-check margin of the design found: (limit − value)/limit, positive passes.',
+      "Each parameter is changed alone; the others keep the case's values. Margins are the smallest limit-check margin of the design found: (limit − value)/limit, positive passes.",
       'Load, speed, life target and inlet temperature re-run all three checks (the bushing and rolling bearing are re-sized and the journal design sweep re-run).',
       `Clearance: the journal design found (${jd.label}) with only its radial clearance changed. Wear factor: the bushing material found${material ? ` (${material.name})` : ''}, alone, with its wear factor changed.`,
       'Inlet temperature is changed by per cent of its value in °C.',

@@ -13,7 +13,9 @@ function designLine(r: RankedOption, units: UnitSystem): string {
     case 'bushing':
       return d.material ? `${d.name} (${d.material}), ${mm('length')} long, OD ${mm('outerDiameter')}` : 'no material';
     case 'rolling':
-      return d.bearing ? `${d.designation} (${d.bearing}), ${mm('bore')} × ${mm('outerDiameter')} × ${mm('width')}, C ${fmt(d.dynamicRating as number, 'N', units)} (${d.ratingSource})` : 'no candidate';
+      return d.bearing
+        ? `${d.designation} (${d.bearing}), ${mm('bore')} × ${mm('outerDiameter')} × ${mm('width')}, C ${fmt(d.dynamicRating as number, 'N', units)} (${d.ratingSource})`
+        : 'no candidate';
     case 'journal':
       return `${mm('length')} long (L/D ${(d.lengthToDiameter as number).toFixed(2)}), radial clearance ${fmt(d.radialClearance as number, 'm', units)}, ${d.oil}`;
   }
@@ -47,8 +49,14 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
     out.push(`\n${paint.bold(`${r.rank}. ${NAMES[r.option]}`)} — ${designLine(r, units)}`);
     const pro = r.reasons.filter((x) => x.points > 0);
     const con = r.reasons.filter((x) => x.points < 0);
-    for (const x of pro) out.push(`  + ${x.points.toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`);
-    for (const x of con) out.push(`  − ${Math.abs(x.points).toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`);
+    for (const x of pro)
+      out.push(
+        `  + ${x.points.toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`,
+      );
+    for (const x of con)
+      out.push(
+        `  − ${Math.abs(x.points).toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`,
+      );
     if (!r.feasible) {
       for (const e of r.excluded) out.push(`  excluded: ${e}`);
       if (r.failed.length) out.push(checksTable(r.failed, units));
@@ -58,7 +66,9 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
     out.push('\nWhat would make an option feasible:');
     for (const s of a.toMakeFeasible) out.push(`  - ${s}`);
   }
-  out.push('\nScores are the sum of rule points (rules/*.json, common practice), weighted by the case priorities (priority/3); the checks decide feasibility.');
+  out.push(
+    '\nScores are the sum of rule points (rules/*.json, common practice), weighted by the case priorities (priority/3); the checks decide feasibility.',
+  );
   if (explain) out.push(explainText(a, units));
   return out.join('\n');
 }
@@ -72,9 +82,14 @@ export function explainText(a: AdviceResult, units: UnitSystem): string {
       a.rules.map((r) => [
         r.fired ? 'yes' : 'no',
         `${r.rule} (${r.file.replace('rules/', '')})`,
-        r.event.type === 'exclude' ? `exclude ${r.event.option}` : `${r.event.points > 0 ? '+' : ''}${r.event.points} ${r.event.option}${r.event.priority ? ` ×${r.event.priority}` : ''}`,
+        r.event.type === 'exclude'
+          ? `exclude ${r.event.option}`
+          : `${r.event.points > 0 ? '+' : ''}${r.event.points} ${r.event.option}${r.event.priority ? ` ×${r.event.priority}` : ''}`,
         r.conditions
-          .map((c) => `${c.fact}${c.path ? c.path.slice(1) : ''} ${c.operator} ${JSON.stringify(c.value)} [saw ${c.factResult === undefined ? 'not evaluated' : shorten(JSON.stringify(c.factResult), 24)}${c.result === undefined ? '' : c.result ? ': true' : ': false'}]`)
+          .map(
+            (c) =>
+              `${c.fact}${c.path ? c.path.slice(1) : ''} ${c.operator} ${JSON.stringify(c.value)} [saw ${c.factResult === undefined ? 'not evaluated' : shorten(JSON.stringify(c.factResult), 24)}${c.result === undefined ? '' : c.result ? ': true' : ': false'}]`,
+          )
           .join('; '),
       ]),
     ),
@@ -87,7 +102,10 @@ export function explainText(a: AdviceResult, units: UnitSystem): string {
   ];
   for (const [name, lines] of sheets) {
     out.push(`\n${paint.bold(name)}`);
-    for (const l of lines) out.push(`  ${l.label}: ${l.formula}\n      ${l.substituted} = ${fmt(l.value, l.unit, units, 4)}   [${l.source}]`);
+    for (const l of lines)
+      out.push(
+        `  ${l.label}: ${l.formula}\n      ${l.substituted} = ${fmt(l.value, l.unit, units, 4)}   [${l.source}]`,
+      );
   }
   return out.join('\n');
 }

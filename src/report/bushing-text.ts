@@ -28,13 +28,19 @@ export function bushingText(r: BushingResult, units: UnitSystem): string {
     ),
   );
   if (r.materials.some(outOfRange)) {
-    out.push('* beyond twice the allowed rise: the one-node temperature model is out of its range there; read it as "far too hot", not as a figure.');
+    out.push(
+      '* beyond twice the allowed rise: the one-node temperature model is out of its range there; read it as "far too hot", not as a figure.',
+    );
   }
   out.push(r.best ? paint.bold(`Best: ${r.bestReason}.`) : paint.bold(`None: ${r.bestReason}.`));
   out.push('Life band: hours to wear through the allowance at the high, typical and low published wear factor.');
   for (const m of r.materials) {
     const lengthNote =
-      m.lengthChosen === 'case' ? 'length from the case' : m.lengthChosen === 'space-limited' ? 'length limited by the axial space' : 'shortest length meeting the limits';
+      m.lengthChosen === 'case'
+        ? 'length from the case'
+        : m.lengthChosen === 'space-limited'
+          ? 'length limited by the axial space'
+          : 'shortest length meeting the limits';
     out.push(
       `\n${paint.bold(m.name)} (${m.id}) — ${fmt(m.length, 'm', units)} long (${lengthNote}; shortest meeting pressure, PV and wear life: ${fmt(m.minLength, 'm', units)}), ` +
         `wear after the life target ${fmt(m.wearDepth, 'm', units)} (peak pressure; ${fmt(m.wearDepthMeanPressure, 'm', units)} at mean pressure), ` +

@@ -16,23 +16,42 @@ export function journalText(r: JournalResult, units: UnitSystem): string {
       [
         ['Sommerfeld number S', r.sommerfeld.toPrecision(3)],
         ['Eccentricity ratio ε', r.eccentricityRatio.toFixed(3)],
-        ['Minimum film thickness h0', `${fmt(r.minFilmThickness * 1e-0, 'm', units, 3)} (allowable ${fmt(r.allowableFilmThickness, 'm', units, 3)})`],
+        [
+          'Minimum film thickness h0',
+          `${fmt(r.minFilmThickness * 1, 'm', units, 3)} (allowable ${fmt(r.allowableFilmThickness, 'm', units, 3)})`,
+        ],
         ['Attitude angle φ', `${r.attitudeAngle.toFixed(1)}°`],
-        ['Friction coefficient f (Petroff)', `${r.frictionCoefficient.toPrecision(3)} (${r.petroffFrictionCoefficient.toPrecision(3)})`],
+        [
+          'Friction coefficient f (Petroff)',
+          `${r.frictionCoefficient.toPrecision(3)} (${r.petroffFrictionCoefficient.toPrecision(3)})`,
+        ],
         ['Friction torque, power loss', `${fmt(r.frictionTorque, 'N*m', units)}, ${fmt(r.powerLoss, 'W', units)}`],
         ...(r.points.length > 1 ? [['Power loss, time mean over the duty', fmt(r.meanPowerLoss, 'W', units)]] : []),
         ['Oil flow in, side leakage', `${fmt(r.flow, 'm^3/s', units)}, ${fmt(r.sideFlow, 'm^3/s', units)}`],
-        ['Unit load W/(L·D), peak film pressure', `${fmt(r.unitLoad, 'Pa', units)}, ${fmt(r.peakPressure, 'Pa', units)} at ${r.peakPressureAngle.toFixed(0)}°`],
-        ['Effective, maximum temperature', `${fmt(r.effectiveTemperature, 'degC', units)}, ${fmt(r.maxTemperature, 'degC', units)}`],
+        [
+          'Unit load W/(L·D), peak film pressure',
+          `${fmt(r.unitLoad, 'Pa', units)}, ${fmt(r.peakPressure, 'Pa', units)} at ${r.peakPressureAngle.toFixed(0)}°`,
+        ],
+        [
+          'Effective, maximum temperature',
+          `${fmt(r.effectiveTemperature, 'degC', units)}, ${fmt(r.maxTemperature, 'degC', units)}`,
+        ],
         ['Viscosity at effective temperature', fmt(r.viscosity, 'Pa*s', units)],
       ],
     ),
   );
   out.push(paint.bold(r.feasible ? 'Feasible: every limit check passes.' : 'Not feasible: see the failing checks.'));
-  out.push(checksTable(r.checks.map((k) => (r.advisory.includes(k.id) ? { ...k, advisory: true } : k)), units));
+  out.push(
+    checksTable(
+      r.checks.map((k) => (r.advisory.includes(k.id) ? { ...k, advisory: true } : k)),
+      units,
+    ),
+  );
   if (r.sweep.length > 1) {
     const rows = [...r.sweep].sort((a, b) => b.filmMargin - a.filmMargin).slice(0, 12);
-    out.push(`\nDesign sweep (${r.sweep.length} designs; the ${rows.length} with the largest film margin; * = chosen):`);
+    out.push(
+      `\nDesign sweep (${r.sweep.length} designs; the ${rows.length} with the largest film margin; * = chosen):`,
+    );
     out.push(
       table(
         ['', 'L', 'c', 'oil', 'ε', 'h0', 'film margin', 'T max', 'power'],

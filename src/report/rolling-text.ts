@@ -13,7 +13,9 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
   const needed = r.requiredDynamicRatingFor
     ? `basic dynamic rating needed for the life target ${fmt(r.requiredDynamicRating, 'N', units)} (for a ${KIND[r.requiredDynamicRatingFor.type]} bearing, p = ${P_TEXT[r.requiredDynamicRatingFor.type]}${types.size > 1 ? '; each candidate\'s own in the column "C needed"' : ''})`
     : `basic dynamic rating needed for the life target ${fmt(r.requiredDynamicRating, 'N', units)}`;
-  out.push(`Equivalent dynamic load ${fmt(r.equivalentLoad, 'N', units)} at ${fmt(r.equivalentSpeed, 'rev/s', units)}; ${needed}.`);
+  out.push(
+    `Equivalent dynamic load ${fmt(r.equivalentLoad, 'N', units)} at ${fmt(r.equivalentSpeed, 'rev/s', units)}; ${needed}.`,
+  );
   if (types.size > 1) {
     // Both types listed: the need per type (P, and so C needed, can differ between ball sizes under axial load).
     for (const t of ['ball', 'roller'] as const) {
@@ -29,7 +31,22 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
   if (r.candidates.length) {
     out.push(
       table(
-        ['', 'bearing', 'd × D × B', 'C', 'C needed', 'C0', 'rating', 'L10h', 'a_ISO', 'κ', 'L10mh', 's0', 'n·dm', 'friction'],
+        [
+          '',
+          'bearing',
+          'd × D × B',
+          'C',
+          'C needed',
+          'C0',
+          'rating',
+          'L10h',
+          'a_ISO',
+          'κ',
+          'L10mh',
+          's0',
+          'n·dm',
+          'friction',
+        ],
         r.candidates.map((k) => [
           mark(k.feasible),
           k.id,
@@ -52,10 +69,20 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
     out.push('No candidate: see the warnings.');
   }
   const best = r.candidates.find((k) => k.id === r.best);
-  out.push(paint.bold(best ? `Best: ${best.designation} (${best.id}), the smallest meeting life, static safety, speed and space.` : 'None: no candidate meets life, static safety, speed and space.'));
-  out.push('Ratings marked "estimated" come from boundary dimensions by the ISO 281 / ISO 76 formulas; a supplier\'s rating replaces them. "C needed": the basic dynamic rating each candidate needs for the life target with a1 (a_ISO taken as 1), from its own P and p; "friction": friction power, time mean over the duty.');
+  out.push(
+    paint.bold(
+      best
+        ? `Best: ${best.designation} (${best.id}), the smallest meeting life, static safety, speed and space.`
+        : 'None: no candidate meets life, static safety, speed and space.',
+    ),
+  );
+  out.push(
+    'Ratings marked "estimated" come from boundary dimensions by the ISO 281 / ISO 76 formulas; a supplier\'s rating replaces them. "C needed": the basic dynamic rating each candidate needs for the life target with a1 (a_ISO taken as 1), from its own P and p; "friction": friction power, time mean over the duty.',
+  );
   for (const k of r.candidates) {
-    out.push(`\n${paint.bold(k.designation)} (${k.id}) — X = ${k.X}, Y = ${k.Y}, P = ${fmt(k.equivalentLoad, 'N', units)}, P0 = ${fmt(k.staticEquivalentLoad, 'N', units)}, ν = ${(k.viscosity * 1e6).toPrecision(3)} mm²/s at ${fmt(k.temperature, 'degC', units)}`);
+    out.push(
+      `\n${paint.bold(k.designation)} (${k.id}) — X = ${k.X}, Y = ${k.Y}, P = ${fmt(k.equivalentLoad, 'N', units)}, P0 = ${fmt(k.staticEquivalentLoad, 'N', units)}, ν = ${(k.viscosity * 1e6).toPrecision(3)} mm²/s at ${fmt(k.temperature, 'degC', units)}`,
+    );
     if (k.exclusions.length) out.push(k.exclusions.map((e) => `  ruled out: ${e}`).join('\n'));
     out.push(checksTable(k.checks, units));
   }

@@ -1,7 +1,9 @@
 /** A plain-text table: columns padded to their widest cell; numbers right-aligned. */
 export function table(head: string[], rows: string[][], indent = '  '): string {
   const widths = head.map((h, i) => Math.max(len(h), ...rows.map((r) => len(r[i] ?? ''))));
-  const numeric = head.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+(e[-+]?\d+)?( .*)?$|^—$/.test(strip(r[i] ?? ''))));
+  const numeric = head.map(
+    (_, i) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+(e[-+]?\d+)?( .*)?$|^—$/.test(strip(r[i] ?? ''))),
+  );
   const line = (cells: string[]) =>
     indent +
     cells

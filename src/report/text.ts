@@ -31,7 +31,7 @@ export async function useColour(stream: { isTTY?: boolean } = process.stdout): P
 }
 
 export const CAUTION =
-  'Concept-stage estimate: confirm with the supplier\'s data and by test. Bearing failure can injure people: ' +
+  "Concept-stage estimate: confirm with the supplier's data and by test. Bearing failure can injure people: " +
   'follow local codes, standards and licensed engineering practice.';
 
 export const mark = (pass: boolean, advice = false): string =>
@@ -52,7 +52,9 @@ export function checksTable(checks: CheckRecord[], units: UnitSystem, rowSource?
       fmt(k.value, k.unit, units),
       `${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, units)}`,
       `${k.margin >= 0 ? '+' : ''}${(k.margin * 100).toFixed(0)} %`,
-      rowSource && k.source.startsWith(rowSource) ? 'material data, below' + (k.source.length > rowSource.length ? ' + heat model' : '') : shorten(k.source, 48),
+      rowSource && k.source.startsWith(rowSource)
+        ? 'material data, below' + (k.source.length > rowSource.length ? ' + heat model' : '')
+        : shorten(k.source, 48),
     ]),
   );
 }

@@ -17,7 +17,7 @@ const scale = (unit: string, k: number): Display => ({ unit, to: (x) => x * k })
 
 const TABLE: Record<string, { SI: Display; US: Display }> = {
   m: { SI: scale('mm', 1e3), US: scale('in', 1 / 0.0254) },
-  'um': { SI: scale('µm', 1e6), US: scale('in', 1 / 0.0254) },
+  um: { SI: scale('µm', 1e6), US: scale('in', 1 / 0.0254) },
   N: { SI: scale('kN', 1e-3), US: scale('lbf', 1 / 4.4482216152605) },
   Pa: { SI: scale('MPa', 1e-6), US: scale('psi', 1 / 6894.757293168) },
   'm/s': { SI: same('m/s'), US: scale('ft/min', 60 / 0.3048) },

@@ -69,18 +69,53 @@ describe('rule files', () => {
   function dirWith(files: Record<string, unknown>): URL {
     const d = mkdtempSync(join(tmpdir(), 'shaftwise-rules-'));
     mkdirSync(d, { recursive: true });
-    for (const [name, body] of Object.entries(files)) writeFileSync(join(d, name), typeof body === 'string' ? body : JSON.stringify(body));
+    for (const [name, body] of Object.entries(files))
+      writeFileSync(join(d, name), typeof body === 'string' ? body : JSON.stringify(body));
     return pathToFileURL(d + '/');
   }
-  const good = { name: 'ok-rule', because: 'A sentence a reviewer can read.', source: 'common practice', conditions: { all: [{ fact: 'duty', path: '$.speedRpm', operator: 'greaterThan', value: 10 }] }, event: { type: 'score', option: 'rolling', points: 1 } };
+  const good = {
+    name: 'ok-rule',
+    because: 'A sentence a reviewer can read.',
+    source: 'common practice',
+    conditions: { all: [{ fact: 'duty', path: '$.speedRpm', operator: 'greaterThan', value: 10 }] },
+    event: { type: 'score', option: 'rolling', points: 1 },
+  };
 
   const bad: [string, unknown, RegExp][] = [
     ['not JSON', '{ "concern": ', /rules\/x\.json: not valid JSON/],
-    ['unknown fact', { concern: 'c', description: 'd', rules: [{ ...good, conditions: { all: [{ fact: 'weather', operator: 'equal', value: 1 }] } }] }, /rules\/x\.json: rule "ok-rule", field conditions.*fact "weather" is not one of/],
-    ['unknown operator', { concern: 'c', description: 'd', rules: [{ ...good, conditions: { all: [{ fact: 'duty', path: '$.speedRpm', operator: 'bigger', value: 1 }] } }] }, /rule "ok-rule".*operator "bigger" is not one of/],
-    ['zero points', { concern: 'c', description: 'd', rules: [{ ...good, event: { type: 'score', option: 'rolling', points: 0 } }] }, /rule "ok-rule", field event.points: points must not be 0/],
-    ['unknown option', { concern: 'c', description: 'd', rules: [{ ...good, event: { type: 'exclude', option: 'magnetic' } }] }, /rule "ok-rule", field event.option/],
-    ['missing because', { concern: 'c', description: 'd', rules: [{ ...good, because: undefined }] }, /rule "ok-rule", field because/],
+    [
+      'unknown fact',
+      {
+        concern: 'c',
+        description: 'd',
+        rules: [{ ...good, conditions: { all: [{ fact: 'weather', operator: 'equal', value: 1 }] } }],
+      },
+      /rules\/x\.json: rule "ok-rule", field conditions.*fact "weather" is not one of/,
+    ],
+    [
+      'unknown operator',
+      {
+        concern: 'c',
+        description: 'd',
+        rules: [{ ...good, conditions: { all: [{ fact: 'duty', path: '$.speedRpm', operator: 'bigger', value: 1 }] } }],
+      },
+      /rule "ok-rule".*operator "bigger" is not one of/,
+    ],
+    [
+      'zero points',
+      { concern: 'c', description: 'd', rules: [{ ...good, event: { type: 'score', option: 'rolling', points: 0 } }] },
+      /rule "ok-rule", field event.points: points must not be 0/,
+    ],
+    [
+      'unknown option',
+      { concern: 'c', description: 'd', rules: [{ ...good, event: { type: 'exclude', option: 'magnetic' } }] },
+      /rule "ok-rule", field event.option/,
+    ],
+    [
+      'missing because',
+      { concern: 'c', description: 'd', rules: [{ ...good, because: undefined }] },
+      /rule "ok-rule", field because/,
+    ],
   ];
   for (const [name, body, message] of bad) {
     it(`a bad rule file (${name}) names the file and the rule`, () => {
@@ -90,7 +125,9 @@ describe('rule files', () => {
   }
   it('a rule name used twice is refused, naming both files', () => {
     const f = { concern: 'c', description: 'd', rules: [good] };
-    expect(() => loadRules(dirWith({ 'a.json': f, 'b.json': f }))).toThrow(/rules\/b\.json: rule "ok-rule": the name is already used in rules\/a\.json/);
+    expect(() => loadRules(dirWith({ 'a.json': f, 'b.json': f }))).toThrow(
+      /rules\/b\.json: rule "ok-rule": the name is already used in rules\/a\.json/,
+    );
   });
 });
 
@@ -103,7 +140,9 @@ describe('shaftwise advise (built CLI)', () => {
     expect(a.stdout).toBe(b.stdout);
     const j = JSON.parse(a.stdout);
     for (const k of ['recommendation', 'ranking', 'checks', 'assumed', 'warnings']) expect(j).toHaveProperty(k);
-    for (const r of j.ranking) for (const k of ['option', 'rank', 'score', 'feasible', 'design', 'figures', 'reasons', 'failed']) expect(r).toHaveProperty(k);
+    for (const r of j.ranking)
+      for (const k of ['option', 'rank', 'score', 'feasible', 'design', 'figures', 'reasons', 'failed'])
+        expect(r).toHaveProperty(k);
     expect(Object.keys(j.checks).sort()).toEqual(['bushing', 'journal', 'rolling']);
     expect(j.checks.rolling.option).toBe('rolling');
   });

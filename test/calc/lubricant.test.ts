@@ -5,7 +5,13 @@
  * (from memory, VI about 95–100).
  */
 import { describe, expect, it } from 'vitest';
-import { density, dynamicViscosity, kinematicViscosity, waltherConstants, waltherViscosity } from '../../src/calc/lubricant.js';
+import {
+  density,
+  dynamicViscosity,
+  kinematicViscosity,
+  waltherConstants,
+  waltherViscosity,
+} from '../../src/calc/lubricant.js';
 import { lubricants, oilGrade } from '../../src/data/load.js';
 
 const W = (nu: number) => Math.log10(Math.log10(nu + 0.7));

@@ -28,7 +28,14 @@ describe('case loading', () => {
     expect(c.load.radial / (450 * 4.4482216152605)).toBeCloseTo(1, 6); // js-quantities: lbf to 7 figures
     expect(c.space.maxOuterDiameter).toBeCloseTo(0.0635, 12);
     const fields = assumed.map((a) => a.field);
-    for (const f of ['load.axial', 'load.shock', 'life.wearAllowance', 'lubrication.supply', 'environment.contamination', 'priorities.cost']) {
+    for (const f of [
+      'load.axial',
+      'load.shock',
+      'life.wearAllowance',
+      'lubrication.supply',
+      'environment.contamination',
+      'priorities.cost',
+    ]) {
       expect(fields).toContain(f);
     }
     expect(c.load.axial).toBe(0);
@@ -36,7 +43,13 @@ describe('case loading', () => {
   });
 
   it('gives the same SI case whether written in SI or US units', () => {
-    const si = parseCaseText(good.replace('1.25 in', '31.75 mm').replace('450 lbf', `${450 * 4.4482216152605} N`).replace('2 in', '50.8 mm').replace('2.5 in', '63.5 mm')).case;
+    const si = parseCaseText(
+      good
+        .replace('1.25 in', '31.75 mm')
+        .replace('450 lbf', `${450 * 4.4482216152605} N`)
+        .replace('2 in', '50.8 mm')
+        .replace('2.5 in', '63.5 mm'),
+    ).case;
     const us = parseCaseText(good).case;
     expect(si.shaft.diameter).toBeCloseTo(us.shaft.diameter, 12);
     expect(si.load.radial / us.load.radial).toBeCloseTo(1, 6);
@@ -93,7 +106,13 @@ bushing: { material: unobtainium }
   });
 
   it('refuses a YAML alias bomb instead of expanding it', () => {
-    const bomb = ['a: &a [x,x,x,x,x,x,x,x,x]', ...Array.from({ length: 8 }, (_, i) => `${'bcdefghi'[i]}: &${'bcdefghi'[i]} [${Array(9).fill(`*${'abcdefgh'[i]}`).join(',')}]`)].join('\n');
+    const bomb = [
+      'a: &a [x,x,x,x,x,x,x,x,x]',
+      ...Array.from(
+        { length: 8 },
+        (_, i) => `${'bcdefghi'[i]}: &${'bcdefghi'[i]} [${Array(9).fill(`*${'abcdefgh'[i]}`).join(',')}]`,
+      ),
+    ].join('\n');
     expect(problems(bomb)[0]).toMatch(/^\(file\): is not valid YAML or JSON/);
   });
 
@@ -105,7 +124,17 @@ bushing: { material: unobtainium }
       life: { hours: '2000 h' },
       space: { maxLength: '30 mm', maxOuterDiameter: '40 mm' },
       bushing: {
-        material: { id: 'shop-bronze', name: 'Shop bronze', maxPressure: '10 MPa', maxVelocity: '1 m/s', maxPV: '1 MPa*m/s', wearFactor: '1e-7 mm^3/(N*m)', friction: 0.1, maxTemperature: '90 degC', source: 'supplier sheet' },
+        material: {
+          id: 'shop-bronze',
+          name: 'Shop bronze',
+          maxPressure: '10 MPa',
+          maxVelocity: '1 m/s',
+          maxPV: '1 MPa*m/s',
+          wearFactor: '1e-7 mm^3/(N*m)',
+          friction: 0.1,
+          maxTemperature: '90 degC',
+          source: 'supplier sheet',
+        },
       },
     });
     const m = c.bushing!.material as { maxPV: number; wearFactor: number };

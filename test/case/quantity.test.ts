@@ -23,7 +23,7 @@ describe('parseQuantity: SI and US customary strings to the internal unit', () =
     ['5e-7 mm^3/(N*m)', 'wearFactor', 5e-16],
     ['60 deg', 'angle', Math.PI / 3],
     ['0.5 Hz', 'frequency', 0.5],
-    ['400 ft/min', 'velocity', 400 * 0.3048 / 60],
+    ['400 ft/min', 'velocity', (400 * 0.3048) / 60],
   ];
   for (const [text, kind, expected] of cases) {
     it(`${text} → ${expected} (${kind})`, () => {
@@ -73,7 +73,8 @@ describe('the common-unit fast path agrees with js-quantities', () => {
       for (const [unit, factor] of Object.entries(table)) {
         const target = KINDS[kind as keyof typeof KINDS].unit;
         let lib: number;
-        if (kind === 'viscosity' && (unit === 'cSt' || unit === 'mm^2/s')) lib = Qty(`1 ${unit}`).to('m^2/s').scalar * 870;
+        if (kind === 'viscosity' && (unit === 'cSt' || unit === 'mm^2/s'))
+          lib = Qty(`1 ${unit}`).to('m^2/s').scalar * 870;
         else lib = Qty(`1 ${unit}`).to(target).scalar;
         if (kind === 'speed') lib /= 60; // internal rev/s from rpm
         expect(Math.abs(factor / lib - 1), `${kind}: ${unit}`).toBeLessThan(1e-6);

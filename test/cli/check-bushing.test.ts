@@ -25,13 +25,32 @@ describe('shaftwise check bushing', () => {
     expect('best' in j).toBe(true);
     expect(j.materials.length).toBeGreaterThanOrEqual(10);
     for (const m of j.materials) {
-      for (const k of ['id', 'name', 'length', 'pressure', 'peakPressure', 'velocity', 'pv', 'factors', 'wearFactor', 'wearDepth', 'lifeHours', 'lifeBand', 'minLength', 'temperature', 'feasible', 'checks']) {
+      for (const k of [
+        'id',
+        'name',
+        'length',
+        'pressure',
+        'peakPressure',
+        'velocity',
+        'pv',
+        'factors',
+        'wearFactor',
+        'wearDepth',
+        'lifeHours',
+        'lifeBand',
+        'minLength',
+        'temperature',
+        'feasible',
+        'checks',
+      ]) {
         expect(m, k).toHaveProperty(k);
       }
       expect(Object.keys(m.factors).sort()).toEqual(['environment', 'motion']);
       expect(Object.keys(m.lifeBand).sort()).toEqual(['long', 'short', 'typical']);
       for (const c of m.checks) {
-        expect(Object.keys(c)).toEqual(expect.arrayContaining(['id', 'label', 'value', 'limit', 'unit', 'margin', 'pass', 'source']));
+        expect(Object.keys(c)).toEqual(
+          expect.arrayContaining(['id', 'label', 'value', 'limit', 'unit', 'margin', 'pass', 'source']),
+        );
       }
     }
   });
@@ -60,16 +79,34 @@ describe('shaftwise check bushing', () => {
   const bad: [string, string[] | string, RegExp][] = [
     ['missing file', ['check', 'bushing', join(ROOT, 'no-such-case.yaml')], /cannot be read \(no such file\)/],
     ['not YAML', 'title: [unclosed\n', /is not valid YAML or JSON/],
-    ['wrong unit kind', 'title: t\nshaft: {diameter: 40 kg, speed: 100 rpm}\nload: {radial: 1 kN}\nlife: {hours: 100 h}\nspace: {maxLength: 40 mm, maxOuterDiameter: 60 mm}\n', /shaft\.diameter: "40 kg" is a mass; expected a length/],
-    ['negative load', 'title: t\nshaft: {diameter: 40 mm, speed: 100 rpm}\nload: {radial: -1 kN}\nlife: {hours: 100 h}\nspace: {maxLength: 40 mm, maxOuterDiameter: 60 mm}\n', /load\.radial: got "-1 kN"; expected a value greater than zero/],
-    ['unknown key', 'title: t\nshaft: {diameter: 40 mm, speed: 100 rpm}\nload: {radial: 1 kN}\nlife: {hours: 100 h}\nspace: {maxLength: 40 mm, maxOuterDiameter: 60 mm}\ncolour: blue\n', /unknown key "colour"/],
+    [
+      'wrong unit kind',
+      'title: t\nshaft: {diameter: 40 kg, speed: 100 rpm}\nload: {radial: 1 kN}\nlife: {hours: 100 h}\nspace: {maxLength: 40 mm, maxOuterDiameter: 60 mm}\n',
+      /shaft\.diameter: "40 kg" is a mass; expected a length/,
+    ],
+    [
+      'negative load',
+      'title: t\nshaft: {diameter: 40 mm, speed: 100 rpm}\nload: {radial: -1 kN}\nlife: {hours: 100 h}\nspace: {maxLength: 40 mm, maxOuterDiameter: 60 mm}\n',
+      /load\.radial: got "-1 kN"; expected a value greater than zero/,
+    ],
+    [
+      'unknown key',
+      'title: t\nshaft: {diameter: 40 mm, speed: 100 rpm}\nload: {radial: 1 kN}\nlife: {hours: 100 h}\nspace: {maxLength: 40 mm, maxOuterDiameter: 60 mm}\ncolour: blue\n',
+      /unknown key "colour"/,
+    ],
     ['unknown option', ['check', 'bushing', DEMO, '--formt', 'json'], /unknown option '--formt'/],
-    ['bad format value', ['check', 'bushing', DEMO, '--format', 'xml'], /--format: got "xml"; expected one of: text, json/],
+    [
+      'bad format value',
+      ['check', 'bushing', DEMO, '--format', 'xml'],
+      /--format: got "xml"; expected one of: text, json/,
+    ],
     ['unknown check', ['check', 'gearbox', DEMO], /check: got "gearbox"; expected one of: bushing, rolling, journal/],
   ];
   for (const [name, input, message] of bad) {
     it(`bad input: ${name} → exit 2, message, no trace`, () => {
-      const args = Array.isArray(input) ? input : ['check', 'bushing', caseFile(`${name.replace(/ /g, '-')}.yaml`, input)];
+      const args = Array.isArray(input)
+        ? input
+        : ['check', 'bushing', caseFile(`${name.replace(/ /g, '-')}.yaml`, input)];
       const r = runCli(args);
       expect(r.code).toBe(2);
       expect(r.stderr).toMatch(message);

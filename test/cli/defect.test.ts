@@ -22,7 +22,9 @@ describe('internal defects', () => {
     const r = runCli(args, { env });
     expect(r.code).toBe(70);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
-    expect(r.stderr).toMatch(/internal defect .*please report it with the case file and the command; run again with --debug/);
+    expect(r.stderr).toMatch(
+      /internal defect .*please report it with the case file and the command; run again with --debug/,
+    );
     expect(r.stderr).not.toMatch(STACK);
     expect(r.stdout).toBe('');
   });

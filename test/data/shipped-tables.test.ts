@@ -43,10 +43,12 @@ describe('shipped data tables', () => {
     for (const f of readdirSync(shipped).filter((x) => x.endsWith('.json'))) {
       const t = JSON.parse(readFileSync(shipped + f, 'utf8'));
       const lists = Object.values(t).filter(Array.isArray) as unknown[][];
-      for (const list of lists) for (const row of list) if (row && typeof row === 'object' && !Array.isArray(row)) {
-        if (f === 'journal-tables.json') continue; // computed rows: one source for the file
-        expect(row, `${f}`).toHaveProperty('source');
-      }
+      for (const list of lists)
+        for (const row of list)
+          if (row && typeof row === 'object' && !Array.isArray(row)) {
+            if (f === 'journal-tables.json') continue; // computed rows: one source for the file
+            expect(row, `${f}`).toHaveProperty('source');
+          }
       expect(JSON.stringify(t), f).toMatch(/"source"/);
     }
   });

@@ -12,15 +12,16 @@ const batchDir = join(ROOT, 'examples/batch');
 /** Split a CSV (RFC 4180, CRLF) into rows of fields. */
 function parseCsv(text: string): string[][] {
   const rows: string[][] = [];
-  let row: string[] = [], f = '', q = false;
+  let row: string[] = [],
+    f = '',
+    q = false;
   for (let k = 0; k < text.length; k++) {
     const ch = text[k]!;
     if (q) {
       if (ch === '"' && text[k + 1] === '"') {
         f += '"';
         k++;
-      }
-      else if (ch === '"') q = false;
+      } else if (ch === '"') q = false;
       else f += ch;
     } else if (ch === '"') q = true;
     else if (ch === ',') {
@@ -32,8 +33,7 @@ function parseCsv(text: string): string[][] {
       row = [];
       f = '';
       k++;
-    }
-    else f += ch;
+    } else f += ch;
   }
   return rows;
 }
@@ -42,15 +42,37 @@ describe('shaftwise batch', () => {
   it('survives a broken file: its error on its row, the other rows complete, exit 1', () => {
     const d = tmp();
     for (const f of readdirSync(batchDir)) copyFileSync(join(batchDir, f), join(d, f));
-    writeFileSync(join(d, '00-broken.yaml'), 'title: "Broken, on purpose"\nshaft: { diameter: 40 parsecs, speed: 100 rpm }\n');
+    writeFileSync(
+      join(d, '00-broken.yaml'),
+      'title: "Broken, on purpose"\nshaft: { diameter: 40 parsecs, speed: 100 rpm }\n',
+    );
     writeFileSync(join(d, 'notes.txt'), 'not a case file');
     const out = join(d, 'summary.csv');
     const r = runCli(['batch', d, '--out', out]);
     expect(r.code).toBe(1);
     expect(r.stderr).not.toMatch(STACK);
     const rows = parseCsv(readFileSync(out, 'utf8'));
-    expect(rows[0]).toEqual(['file', 'title', 'result', 'recommendation', 'score', 'life_h', 'design', 'bushing_feasible', 'rolling_feasible', 'journal_feasible', 'error']);
-    expect(rows.map((x) => x[0])).toEqual(['file', '00-broken.yaml', '01-intake-screen-drum.yaml', '02-booster-line-shaft.yaml', '03-sluice-gate-pivot.yaml', '04-fan-jackshaft.yaml']);
+    expect(rows[0]).toEqual([
+      'file',
+      'title',
+      'result',
+      'recommendation',
+      'score',
+      'life_h',
+      'design',
+      'bushing_feasible',
+      'rolling_feasible',
+      'journal_feasible',
+      'error',
+    ]);
+    expect(rows.map((x) => x[0])).toEqual([
+      'file',
+      '00-broken.yaml',
+      '01-intake-screen-drum.yaml',
+      '02-booster-line-shaft.yaml',
+      '03-sluice-gate-pivot.yaml',
+      '04-fan-jackshaft.yaml',
+    ]);
     const broken = rows[1]!;
     expect(broken[2]).toBe('error');
     expect(broken[10]).toMatch(/shaft\.diameter/);

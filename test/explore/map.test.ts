@@ -27,14 +27,20 @@ describe('selection map on an oil-fed line shaft with a long life target', async
   it('the journal bearing wins at high speed and high load', () => {
     // Speeds from 1500 r/min up, loads from 2 kN to 5 kN (the upper part of the journal's
     // feasible band: above it the start-up unit load limit ends it).
-    const hi = m.loads.map((x, i) => [x, i] as const).filter(([x]) => x >= 2000 && x <= 5000).map(([, i]) => i);
+    const hi = m.loads
+      .map((x, i) => [x, i] as const)
+      .filter(([x]) => x >= 2000 && x <= 5000)
+      .map(([, i]) => i);
     expect(hi.length).toBeGreaterThanOrEqual(2);
-    for (const i of hi) for (let j = col(1500); j < 12; j++) expect(m.cells[i]![j]!.winner, `load ${m.loads[i]} N, ${m.speeds[j]! * 60} r/min`).toBe('journal');
+    for (const i of hi)
+      for (let j = col(1500); j < 12; j++)
+        expect(m.cells[i]![j]!.winner, `load ${m.loads[i]} N, ${m.speeds[j]! * 60} r/min`).toBe('journal');
   });
 
   it('the bushing wins at the lowest speeds', () => {
     // 3 and 6 r/min, 280 N to 7 kN (at 200 N and 6 r/min the journal's score edges ahead).
-    for (let i = 1; i < 11; i++) for (const j of [0, 1]) expect(m.cells[i]![j]!.winner, `load ${m.loads[i]} N, column ${j}`).toBe('bushing');
+    for (let i = 1; i < 11; i++)
+      for (const j of [0, 1]) expect(m.cells[i]![j]!.winner, `load ${m.loads[i]} N, column ${j}`).toBe('bushing');
     expect(m.cells[0]![0]!.winner).toBe('bushing');
   });
 
@@ -55,7 +61,9 @@ describe('selection map on an oil-fed line shaft with a long life target', async
 
   it('text map: legend, units on both axes, the case marked', () => {
     const t = mapText(m);
-    expect(t).toContain('Legend: B bushing wins, R rolling bearing wins, J journal bearing wins, . none feasible, @ the case');
+    expect(t).toContain(
+      'Legend: B bushing wins, R rolling bearing wins, J journal bearing wins, . none feasible, @ the case',
+    );
     expect(t).toMatch(/\d kN \|/);
     expect(t).toContain('r/min');
     expect(t).toContain('@');
@@ -80,7 +88,12 @@ describe('map helpers', () => {
   });
 
   it('scaling a duty spectrum scales every point and keeps the shares', () => {
-    const c = pumpCase({ duty: [{ share: 0.6, radial: '1 kN', speed: '300 rpm' }, { share: 0.4, radial: '2 kN', speed: '100 rpm' }] });
+    const c = pumpCase({
+      duty: [
+        { share: 0.6, radial: '1 kN', speed: '300 rpm' },
+        { share: 0.4, radial: '2 kN', speed: '100 rpm' },
+      ],
+    });
     const s = scaleCase(c, 2, 0.5);
     expect(s.duty!.map((p) => [p.share, p.radial, p.speed])).toEqual([
       [0.6, 2000, 2.5],

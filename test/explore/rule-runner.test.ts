@@ -8,7 +8,13 @@ import { scaleCase } from '../../src/explore/scale.js';
 import { oilFedLineShaft, pivot } from './cases.js';
 import { pumpCase } from '../helpers/case.js';
 
-const strip = (a: Awaited<ReturnType<typeof advise>>) => ({ recommendation: a.recommendation, ranking: a.ranking, tieBreak: a.tieBreak, toMakeFeasible: a.toMakeFeasible, warnings: a.warnings });
+const strip = (a: Awaited<ReturnType<typeof advise>>) => ({
+  recommendation: a.recommendation,
+  ranking: a.ranking,
+  tieBreak: a.tieBreak,
+  toMakeFeasible: a.toMakeFeasible,
+  warnings: a.warnings,
+});
 
 describe('rule runner', () => {
   it('resolves the simple paths the rule schema admits', () => {

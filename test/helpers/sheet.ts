@@ -9,7 +9,10 @@ export function evaluate(expr: string): number | null {
   if (/^[^\s=(]+\(.*\)$/.test(t) || /^min\(/.test(t)) return null;
   let e = t.slice(t.lastIndexOf('=') + 1);
   e = e
-    .replace(/J\/\(kg·K\)|kg\/m³|mm²\/s|m³\/s|Pa·s|N·m|r\/min|rev\/s|°C|\bmm\b|\bPa\b|\bK\b|\bN\b|\bm\b|\bh\b|\bW\b/g, '')
+    .replace(
+      /J\/\(kg·K\)|kg\/m³|mm²\/s|m³\/s|Pa·s|N·m|r\/min|rev\/s|°C|\bmm\b|\bPa\b|\bK\b|\bN\b|\bm\b|\bh\b|\bW\b/g,
+      '',
+    )
     .replace(/−/g, '-')
     .replace(/½/g, '0.5')
     .replace(/²/g, '**2')

@@ -79,7 +79,12 @@ describe("Petroff's law (Petroff 1883; Hamrock, Schmid & Jacobson 2004)", () => 
   });
   it('torque T = 4π²μNr³L/c equals f·W·r with f = 2π²(μN/P)(r/c), P = W/(2rL)', () => {
     // An invented geometry: 45 mm journal, 30 mm long, 40 µm clearance, 0.02 Pa·s, 25 rev/s, 1.8 kN.
-    const mu = 0.02, n = 25, r = 0.0225, L = 0.03, c = 40e-6, W = 1800;
+    const mu = 0.02,
+      n = 25,
+      r = 0.0225,
+      L = 0.03,
+      c = 40e-6,
+      W = 1800;
     const P = W / (2 * r * L);
     expect(petroffTorque(mu, n, r, L, c)).toBeCloseTo(petroffFriction(mu, n, P, r, c) * W * r, 10);
   });

@@ -45,7 +45,16 @@ type Row = {
   origin: string;
 };
 
-const row = (eps: number, S: number, phi: number, f: number, Q: number, QsQ: number, PPmax: number, origin: string): Row => ({
+const row = (
+  eps: number,
+  S: number,
+  phi: number,
+  f: number,
+  Q: number,
+  QsQ: number,
+  PPmax: number,
+  origin: string,
+): Row => ({
   eps,
   S,
   phi,

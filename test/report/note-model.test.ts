@@ -26,7 +26,16 @@ describe('note model', () => {
   });
   it('has its sections in order, one per option in rank order', () => {
     const n = buildNote(loaded, a, { units: 'SI', now: clock });
-    expect(n.sections.map((s) => s.id)).toEqual(['duty', 'assumptions', 'recommendation', ...a.ranking.map((r) => `option-${r.option}`), 'sheet', 'methods', 'cautions', 'signoff']);
+    expect(n.sections.map((s) => s.id)).toEqual([
+      'duty',
+      'assumptions',
+      'recommendation',
+      ...a.ranking.map((r) => `option-${r.option}`),
+      'sheet',
+      'methods',
+      'cautions',
+      'signoff',
+    ]);
   });
   it('US units change the displayed figures, not the content', () => {
     const si = buildNote(loaded, a, { units: 'SI', now: clock });
@@ -41,20 +50,31 @@ describe('note charts', () => {
   const charts = noteCharts(a, loaded.case, 'SI');
   const chart = (id: string) => charts.find((c) => c.id === id)!.spec!;
   it('draws all five charts for the demo case, every point finite', () => {
-    expect(charts.map((c) => c.id)).toEqual(['bushing-wear', 'rolling-life', 'journal-film', 'journal-temperature', 'journal-pressure']);
+    expect(charts.map((c) => c.id)).toEqual([
+      'bushing-wear',
+      'rolling-life',
+      'journal-film',
+      'journal-temperature',
+      'journal-pressure',
+    ]);
     for (const c of charts) {
       expect(c.spec, c.id).not.toBeNull();
-      for (const s of c.spec!.series) for (const p of s.points) expect(p.every(Number.isFinite), `${c.id} ${s.name}`).toBe(true);
+      for (const s of c.spec!.series)
+        for (const p of s.points) expect(p.every(Number.isFinite), `${c.id} ${s.name}`).toBe(true);
     }
   });
-  it('bushing wear reaches the check\'s depth at the life target (linear in time)', () => {
-    const m = a.checks.bushing.materials.find((x) => x.id === a.ranking.find((r) => r.option === 'bushing')!.design['material'])!;
+  it("bushing wear reaches the check's depth at the life target (linear in time)", () => {
+    const m = a.checks.bushing.materials.find(
+      (x) => x.id === a.ranking.find((r) => r.option === 'bushing')!.design['material'],
+    )!;
     const s = chart('bushing-wear').series[2]!; // low wear factor: stays inside the plot to 1.5 × target
     const T = loaded.case.life.hours;
-    const at = s.points.find((p) => Math.abs(p[0] - T) < 1e-6 * T) ?? s.points.reduce((x, y) => (Math.abs(y[0] - T) < Math.abs(x[0] - T) ? y : x));
+    const at =
+      s.points.find((p) => Math.abs(p[0] - T) < 1e-6 * T) ??
+      s.points.reduce((x, y) => (Math.abs(y[0] - T) < Math.abs(x[0] - T) ? y : x));
     expect(at[1]).toBeCloseTo((m.wearDepthBand.low * 1e6 * at[0]) / T, 6);
   });
-  it('rolling life passes through the chosen candidate\'s L10h at the operating load', () => {
+  it("rolling life passes through the chosen candidate's L10h at the operating load", () => {
     const best = a.checks.rolling.candidates.find((k) => k.id === a.checks.rolling.best)!;
     const s = chart('rolling-life').series[0]!;
     const p = s.points.find((q) => Math.abs(q[0] - best.equivalentLoad / 1000) < 1e-6 * best.equivalentLoad)!;
@@ -74,10 +94,13 @@ describe('note charts', () => {
     expect(near[1] / (j.minFilmThickness * 1e6)).toBeGreaterThan(0.8);
     expect(near[1] / (j.minFilmThickness * 1e6)).toBeLessThan(1.25);
   });
-  it('the pressure chart is the kernel\'s pressure profile', () => {
+  it("the pressure chart is the kernel's pressure profile", () => {
     const s = chart('journal-pressure').series[0]!;
     expect(s.points.length).toBe(a.checks.journal.pressureProfile.length);
-    expect(Math.max(...s.points.map((p) => p[1]))).toBeCloseTo(Math.max(...a.checks.journal.pressureProfile.map((p) => p.pressure)) / 1e6, 6); // display values carry 9 significant figures
+    expect(Math.max(...s.points.map((p) => p[1]))).toBeCloseTo(
+      Math.max(...a.checks.journal.pressureProfile.map((p) => p.pressure)) / 1e6,
+      6,
+    ); // display values carry 9 significant figures
   });
 });
 
@@ -88,7 +111,22 @@ describe('svg and escaping', () => {
     expect(logTicks(1, 100).major).toEqual([1, 2, 5, 10, 20, 50, 100]);
   });
   it('escapes series names and titles in the SVG', () => {
-    const svg = lineChart({ id: 'x', title: '<i>t</i>', x: { label: 'a', unit: 'h' }, y: { label: 'b', unit: 'mm' }, series: [{ name: 'a & <b>', points: [[0, 1], [1, 2]] }], refs: [] });
+    const svg = lineChart({
+      id: 'x',
+      title: '<i>t</i>',
+      x: { label: 'a', unit: 'h' },
+      y: { label: 'b', unit: 'mm' },
+      series: [
+        {
+          name: 'a & <b>',
+          points: [
+            [0, 1],
+            [1, 2],
+          ],
+        },
+      ],
+      refs: [],
+    });
     expect(svg).not.toMatch(/<i>|<b>/);
     expect(svg).toContain('&lt;i&gt;t&lt;/i&gt;');
     expect(svg).toContain('a &amp; &lt;b&gt;');

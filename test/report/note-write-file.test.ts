@@ -32,7 +32,9 @@ describe('writeFileSafe', () => {
     writeFileSync(f, 'previous note');
     failWrite.on = true;
     expect(() => writeFileSafe(f, 'new note', { force: true })).toThrow(UsageError);
-    expect(() => writeFileSafe(f, 'new note', { force: true })).toThrow(`--out: cannot write "${f}" (no space left on the device)`);
+    expect(() => writeFileSafe(f, 'new note', { force: true })).toThrow(
+      `--out: cannot write "${f}" (no space left on the device)`,
+    );
     expect(readFileSync(f, 'utf8')).toBe('previous note');
     expect(readdirSync(dir)).toEqual(['note.html']);
   });

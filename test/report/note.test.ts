@@ -66,12 +66,15 @@ describe('advise --format md', () => {
       if (!/^\| (---:?|---) \|/.test(lines[i]!)) continue;
       const n = cells(lines[i - 1]!);
       expect(cells(lines[i]!)).toBe(n);
-      for (let k = i + 1; k < lines.length && lines[k]!.startsWith('|'); k++) expect(cells(lines[k]!), lines[k]).toBe(n);
+      for (let k = i + 1; k < lines.length && lines[k]!.startsWith('|'); k++)
+        expect(cells(lines[k]!), lines[k]).toBe(n);
     }
   });
   it('shows each check with value, limit, margin, result and source, and the sheet with substituted values', () => {
     expect(r.stdout).toContain('| check | value | limit | margin | result | source of the limit |');
-    expect(r.stdout).toMatch(/\| Hours to wear through the allowance \(typical wear factor\) \| 2572 h \| ≥ 20000 h \| -87 % \| FAIL \|/);
+    expect(r.stdout).toMatch(
+      /\| Hours to wear through the allowance \(typical wear factor\) \| 2572 h \| ≥ 20000 h \| -87 % \| FAIL \|/,
+    );
     expect(r.stdout).toContain('P = 5000 N / (0.04 m · 0.06 m)');
     expect(r.stdout).toContain('| shaft.diameter | 40 mm | 40 mm (0.04 m) |');
     expect(r.stdout).toContain('| life.reliability | (default) | 90 % |');
@@ -99,7 +102,8 @@ describe('advise --format html', () => {
     expect(html).toContain('<time datetime="2024-03-05">');
     for (const s of SECTIONS) expect(html, s).toMatch(new RegExp(`<h[23]>(\\d\\. )?${s}`));
     for (const w of CAUTION_WORDS) expect(html).toContain(w.replace("'", '&#39;'));
-    for (const id of ['bushing-wear', 'rolling-life', 'journal-film', 'journal-temperature', 'journal-pressure']) expect(html, id).toContain(`<svg xmlns="http://www.w3.org/2000/svg" class="chart" id="chart-${id}"`);
+    for (const id of ['bushing-wear', 'rolling-life', 'journal-film', 'journal-temperature', 'journal-pressure'])
+      expect(html, id).toContain(`<svg xmlns="http://www.w3.org/2000/svg" class="chart" id="chart-${id}"`);
     expect(html).toMatch(/@page \{ margin:/);
     expect(html).toMatch(/@media print \{[^]*break-inside: avoid/);
     expect(html).toMatch(/<table class="signoff">[^]*Prepared[^]*Checked[^]*Approved/);
@@ -117,8 +121,12 @@ describe('advise --format html', () => {
     expect(e.stdout).not.toContain('<script>');
     expect(e.stdout).not.toContain('<b>Shop');
     expect(e.stdout).not.toContain('<sheet>');
-    expect(e.stdout).toContain('<title>Design-review note: &lt;script&gt;alert(1)&lt;/script&gt; &amp; &quot;x&quot;</title>');
-    expect(e.stdout).toContain('<h1>Design-review note: &lt;script&gt;alert(1)&lt;/script&gt; &amp; &quot;x&quot;</h1>');
+    expect(e.stdout).toContain(
+      '<title>Design-review note: &lt;script&gt;alert(1)&lt;/script&gt; &amp; &quot;x&quot;</title>',
+    );
+    expect(e.stdout).toContain(
+      '<h1>Design-review note: &lt;script&gt;alert(1)&lt;/script&gt; &amp; &quot;x&quot;</h1>',
+    );
     expect(e.stdout).toContain('&lt;b&gt;Shop&lt;/b&gt; bronze &amp; co');
     expect(e.stdout).toContain('supplier &lt;sheet&gt; 7');
   });
@@ -156,29 +164,38 @@ describe('advise --out: safe writing', () => {
     expect(r.stderr).toContain(`--out: got "${dir}", which is a directory; expected a file path`);
   });
   const root = process.getuid?.() === 0;
-  it.skipIf(root)(`a read-only directory: exit 2, the previous file intact, no temporary file${root ? ' (skipped: running as root, which may write into a read-only directory; the same path is covered in note-write-file.test.ts by an injected write failure)' : ''}`, () => {
-    const ro = join(dir, 'read-only');
-    mkdirSync(ro);
-    const f = join(ro, 'note.html');
-    writeFileSync(f, 'previous');
-    chmodSync(ro, 0o555);
-    try {
-      const r = runCli(['advise', DEMO, '--format', 'html', '--out', f, '--force']);
-      expect(r.code).toBe(2);
-      expect(r.stderr).toContain('permission denied');
-      expect(readFileSync(f, 'utf8')).toBe('previous');
-      expect(readdirSync(ro)).toEqual(['note.html']);
-    } finally {
-      chmodSync(ro, 0o755);
-    }
-  });
+  it.skipIf(root)(
+    `a read-only directory: exit 2, the previous file intact, no temporary file${root ? ' (skipped: running as root, which may write into a read-only directory; the same path is covered in note-write-file.test.ts by an injected write failure)' : ''}`,
+    () => {
+      const ro = join(dir, 'read-only');
+      mkdirSync(ro);
+      const f = join(ro, 'note.html');
+      writeFileSync(f, 'previous');
+      chmodSync(ro, 0o555);
+      try {
+        const r = runCli(['advise', DEMO, '--format', 'html', '--out', f, '--force']);
+        expect(r.code).toBe(2);
+        expect(r.stderr).toContain('permission denied');
+        expect(readFileSync(f, 'utf8')).toBe('previous');
+        expect(readdirSync(ro)).toEqual(['note.html']);
+      } finally {
+        chmodSync(ro, 0o755);
+      }
+    },
+  );
 });
 
 describe('advise: bad options', () => {
   it.each([
     [['--format', 'pdf'], '--format: got "pdf"; expected one of: text, json, md, html'],
-    [['--out', join(dir, 'x.txt')], '--out: applies to --format md or html (the design-review note); got --format text'],
-    [['--format', 'json', '--out', join(dir, 'x.json')], '--out: applies to --format md or html (the design-review note); got --format json'],
+    [
+      ['--out', join(dir, 'x.txt')],
+      '--out: applies to --format md or html (the design-review note); got --format text',
+    ],
+    [
+      ['--format', 'json', '--out', join(dir, 'x.json')],
+      '--out: applies to --format md or html (the design-review note); got --format json',
+    ],
     [['--format', 'md', '--force'], '--force: applies only with --out FILE; got --force without --out'],
   ])('%j: exit 2 with one message', (args, msg) => {
     const r = runCli(['advise', DEMO, ...args]);

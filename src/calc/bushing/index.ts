@@ -100,7 +100,8 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
     F: p.radial,
     V: osc ? oscillatingSlidingSpeed(D, osc.angle, osc.frequency) : rotatingSlidingSpeed(D, p.speed ?? 0),
   }));
-  if (points.some((p) => p.V === 0)) warnings.push('an operating point has zero speed: no sliding, no wear at that point');
+  if (points.some((p) => p.V === 0))
+    warnings.push('an operating point has zero speed: no sliding, no wear at that point');
   if (c.load.axial > 0 || (c.duty ?? []).some((p) => p.axial > 0)) {
     warnings.push('axial load is not carried by a plain bushing: add a thrust washer or shoulder (not checked here)');
   }
@@ -109,10 +110,20 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
   const fm = factors.motion.find((m) => m.key === motionKey)!;
   const fe = factors.environment.find((m) => m.key === c.environment.contamination)!;
   assumed.push({ field: 'bushing.motionFactor', value: String(fm.value), reason: `${fm.note} (${fm.source})` });
-  assumed.push({ field: 'bushing.environmentFactor', value: String(fe.value), reason: `${c.environment.contamination}: ${fe.note} (${fe.source})` });
-  assumed.push({ field: 'bushing.heat', value: `h = ${factors.heat.dissipation} W/(m^2*K), A = ${factors.heat.areaFactor}·π·D·L`, reason: `${factors.heat.note} (${factors.heat.source})` });
+  assumed.push({
+    field: 'bushing.environmentFactor',
+    value: String(fe.value),
+    reason: `${c.environment.contamination}: ${fe.note} (${fe.source})`,
+  });
+  assumed.push({
+    field: 'bushing.heat',
+    value: `h = ${factors.heat.dissipation} W/(m^2*K), A = ${factors.heat.areaFactor}·π·D·L`,
+    reason: `${factors.heat.note} (${factors.heat.source})`,
+  });
   if (c.lubrication.supply !== 'none') {
-    warnings.push(`the case offers ${c.lubrication.supply} lubrication; the bushing figures are for boundary (rubbing) lubrication, which is conservative where a lubricant reaches the bore`);
+    warnings.push(
+      `the case offers ${c.lubrication.supply} lubrication; the bushing figures are for boundary (rubbing) lubrication, which is conservative where a lubricant reaches the bore`,
+    );
   }
 
   const all = bushingMaterials();
@@ -133,7 +144,12 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
     warnings.push(bestReason);
   }
   // The material shown when none is feasible: the nearest miss, by the same largest-smallest-margin rule.
-  const shown = best ?? materials.reduce<BushingMaterialResult | undefined>((a, b) => (a === undefined || smallestMargin(b) > smallestMargin(a) ? b : a), undefined);
+  const shown =
+    best ??
+    materials.reduce<BushingMaterialResult | undefined>(
+      (a, b) => (a === undefined || smallestMargin(b) > smallestMargin(a) ? b : a),
+      undefined,
+    );
   return {
     option: 'bushing',
     materials,
@@ -197,7 +213,8 @@ function checkMaterial(
   const wearDepthTyp = rate(m.wearFactor) * T;
   const governing = points.reduce((a, b) => (b.F * b.V > a.F * a.V ? b : a));
   const Q = frictionHeat(m.friction, governing.F, governing.V);
-  const temperature = c.environment.ambient + temperatureRise(Q, factors.heat.dissipation, factors.heat.areaFactor, D, length);
+  const temperature =
+    c.environment.ambient + temperatureRise(Q, factors.heat.dissipation, factors.heat.areaFactor, D, length);
   const src = m.source;
   const wearSrc = `Archard wear law, The Tribology Handbook 2nd ed. 1995, A5; wear factor: ${src}`;
   const lOverD = length / D;
@@ -206,11 +223,46 @@ function checkMaterial(
     makeCheck('pressure', 'Mean pressure P = F/(D·L)', pressure, m.maxPressure, 'Pa', 'max', src),
     makeCheck('velocity', 'Sliding speed V', Vmax, m.maxVelocity, 'm/s', 'max', src),
     makeCheck('pv', 'PV', pv, m.maxPV, 'Pa*m/s', 'max', src),
-    makeCheck('wear-life', 'Hours to wear through the allowance (typical wear factor)', life(m.wearFactor), T, 'h', 'min', wearSrc),
+    makeCheck(
+      'wear-life',
+      'Hours to wear through the allowance (typical wear factor)',
+      life(m.wearFactor),
+      T,
+      'h',
+      'min',
+      wearSrc,
+    ),
     // Advisory: the one-node heat model is crude; PV is the published thermal criterion.
-    advisory(makeCheck('temperature', 'Running temperature (lumped estimate, advisory)', temperature, m.maxTemperature, 'degC', 'max', `${src}; heat model: ${factors.heat.source}; margin: share of the allowed rise above ambient`, c.environment.ambient)),
-    makeCheck('axial-space', 'Length within the axial space', length, c.space.maxLength, 'm', 'max', 'the case (space.maxLength)'),
-    makeCheck('radial-space', 'Outer diameter within the housing bore', outerDiameter, c.space.maxOuterDiameter, 'm', 'max', 'the case (space.maxOuterDiameter); wall thickness common practice'),
+    advisory(
+      makeCheck(
+        'temperature',
+        'Running temperature (lumped estimate, advisory)',
+        temperature,
+        m.maxTemperature,
+        'degC',
+        'max',
+        `${src}; heat model: ${factors.heat.source}; margin: share of the allowed rise above ambient`,
+        c.environment.ambient,
+      ),
+    ),
+    makeCheck(
+      'axial-space',
+      'Length within the axial space',
+      length,
+      c.space.maxLength,
+      'm',
+      'max',
+      'the case (space.maxLength)',
+    ),
+    makeCheck(
+      'radial-space',
+      'Outer diameter within the housing bore',
+      outerDiameter,
+      c.space.maxOuterDiameter,
+      'm',
+      'max',
+      'the case (space.maxOuterDiameter); wall thickness common practice',
+    ),
     // Length/diameter is advice (edge loading, misalignment), not a limit.
     advisory(
       lOverD < 1
@@ -258,7 +310,8 @@ function smallestMargin(m: BushingMaterialResult): number {
 
 function whyNone(ms: BushingMaterialResult[]): string {
   const count = new Map<string, number>();
-  for (const m of ms) for (const k of m.checks) if (!k.pass && !k.advisory) count.set(k.label, (count.get(k.label) ?? 0) + 1);
+  for (const m of ms)
+    for (const k of m.checks) if (!k.pass && !k.advisory) count.set(k.label, (count.get(k.label) ?? 0) + 1);
   return [...count.entries()].map(([label, n]) => `${label} fails for ${n} of ${ms.length}`).join('; ');
 }
 
@@ -270,24 +323,74 @@ function sheetFor(c: CaseSI, m: BushingMaterialResult, points: Point[]): SheetLi
   const hb = 'The Tribology Handbook 2nd ed. 1995, A4-A5';
   const of = ` (${m.name}, ${num(L * 1000, 3)} mm long)`;
   const lines: SheetLine[] = [
-    { label: `Mean pressure P${of}`, formula: 'P = F/(D·L)', substituted: `P = ${num(Fmax)} N / (${num(D)} m · ${num(L)} m)`, value: m.pressure, unit: 'Pa', source: hb },
-    { label: 'Peak pressure p_peak', formula: 'p_peak = 4F/(π·D·L)', substituted: `p_peak = 4·${num(Fmax)} N / (π·${num(D)} m · ${num(L)} m)`, value: m.peakPressure, unit: 'Pa', source: hb },
+    {
+      label: `Mean pressure P${of}`,
+      formula: 'P = F/(D·L)',
+      substituted: `P = ${num(Fmax)} N / (${num(D)} m · ${num(L)} m)`,
+      value: m.pressure,
+      unit: 'Pa',
+      source: hb,
+    },
+    {
+      label: 'Peak pressure p_peak',
+      formula: 'p_peak = 4F/(π·D·L)',
+      substituted: `p_peak = 4·${num(Fmax)} N / (π·${num(D)} m · ${num(L)} m)`,
+      value: m.peakPressure,
+      unit: 'Pa',
+      source: hb,
+    },
     c.shaft.oscillation
-      ? { label: 'Mean sliding speed V', formula: 'V = θ·D·f', substituted: `V = ${num(c.shaft.oscillation.angle)} rad · ${num(D)} m · ${num(c.shaft.oscillation.frequency)} Hz`, value: m.velocity, unit: 'm/s', source: 'kinematics of oscillation' }
-      : { label: 'Sliding speed V', formula: 'V = π·D·N', substituted: `V = π·${num(D)} m · ${num(m.velocity / (Math.PI * D))} rev/s`, value: m.velocity, unit: 'm/s', source: hb },
-    { label: 'PV', formula: 'PV = F·V/(D·L), largest over the duty', substituted: `PV = ${num(g.F)} N · ${num(g.V)} m/s / (${num(D)} m · ${num(L)} m)`, value: m.pv, unit: 'Pa*m/s', source: hb },
+      ? {
+          label: 'Mean sliding speed V',
+          formula: 'V = θ·D·f',
+          substituted: `V = ${num(c.shaft.oscillation.angle)} rad · ${num(D)} m · ${num(c.shaft.oscillation.frequency)} Hz`,
+          value: m.velocity,
+          unit: 'm/s',
+          source: 'kinematics of oscillation',
+        }
+      : {
+          label: 'Sliding speed V',
+          formula: 'V = π·D·N',
+          substituted: `V = π·${num(D)} m · ${num(m.velocity / (Math.PI * D))} rev/s`,
+          value: m.velocity,
+          unit: 'm/s',
+          source: hb,
+        },
+    {
+      label: 'PV',
+      formula: 'PV = F·V/(D·L), largest over the duty',
+      substituted: `PV = ${num(g.F)} N · ${num(g.V)} m/s / (${num(D)} m · ${num(L)} m)`,
+      value: m.pv,
+      unit: 'Pa*m/s',
+      source: hb,
+    },
     {
       label: 'Wear depth at life target',
       formula: 'h = Σ share·f_m·f_e·k·p_peak·V·t',
-      substituted: points.length === 1
-        ? `h = ${m.factors.motion}·${m.factors.environment}·${num(m.wearFactor)} m^2/N · ${num(m.peakPressure)} Pa · ${num(m.velocity)} m/s · ${num(c.life.hours * HOUR)} s`
-        : `h = Σ over ${points.length} duty points, ${m.factors.motion}·${m.factors.environment}·${num(m.wearFactor)} m^2/N · p_peak,i · V_i · share_i · ${num(c.life.hours * HOUR)} s`,
+      substituted:
+        points.length === 1
+          ? `h = ${m.factors.motion}·${m.factors.environment}·${num(m.wearFactor)} m^2/N · ${num(m.peakPressure)} Pa · ${num(m.velocity)} m/s · ${num(c.life.hours * HOUR)} s`
+          : `h = Σ over ${points.length} duty points, ${m.factors.motion}·${m.factors.environment}·${num(m.wearFactor)} m^2/N · p_peak,i · V_i · share_i · ${num(c.life.hours * HOUR)} s`,
       value: m.wearDepth,
       unit: 'm',
       source: 'Archard 1953; The Tribology Handbook 2nd ed. 1995, A5',
     },
-    { label: 'Wear life', formula: 't = allowance / (h/T)', substituted: `t = ${num(c.life.wearAllowance)} m / (${num(m.wearDepth)} m / ${num(c.life.hours)} h)`, value: m.lifeHours, unit: 'h', source: 'Archard 1953' },
-    { label: 'Frictional heat Q', formula: 'Q = f·F·V', substituted: `Q = ${m.frictionCoefficient} · ${num(g.F)} N · ${num(g.V)} m/s`, value: m.frictionPower, unit: 'W', source: hb },
+    {
+      label: 'Wear life',
+      formula: 't = allowance / (h/T)',
+      substituted: `t = ${num(c.life.wearAllowance)} m / (${num(m.wearDepth)} m / ${num(c.life.hours)} h)`,
+      value: m.lifeHours,
+      unit: 'h',
+      source: 'Archard 1953',
+    },
+    {
+      label: 'Frictional heat Q',
+      formula: 'Q = f·F·V',
+      substituted: `Q = ${m.frictionCoefficient} · ${num(g.F)} N · ${num(g.V)} m/s`,
+      value: m.frictionPower,
+      unit: 'W',
+      source: hb,
+    },
   ];
   return lines;
 }

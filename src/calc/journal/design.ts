@@ -194,7 +194,10 @@ export function evaluateDesign(
   const filmMargin = results[gi]!.filmMargin;
   // Share of the allowed rise above the inlet left (the check-record convention for temperatures, check.ts).
   const allowedRise = crit.maxTemperature - inletTemperature;
-  const temperatureMargin = allowedRise > 0 ? (crit.maxTemperature - maxT) / allowedRise : (crit.maxTemperature - maxT) / (crit.maxTemperature + 273.15);
+  const temperatureMargin =
+    allowedRise > 0
+      ? (crit.maxTemperature - maxT) / allowedRise
+      : (crit.maxTemperature - maxT) / (crit.maxTemperature + 273.15);
   const startMargin = (crit.maxStartUnitLoad - startUnitLoad) / crit.maxStartUnitLoad;
   return {
     candidate,
@@ -309,7 +312,10 @@ export function designChecks(
   const g = e.governing;
   const s = crit.sources;
   // An inlet at or above the limit leaves no rise to share out: the margin then falls back to absolute zero.
-  const tRef = inletTemperature !== undefined && Number.isFinite(inletTemperature) && inletTemperature < crit.maxTemperature ? inletTemperature : undefined;
+  const tRef =
+    inletTemperature !== undefined && Number.isFinite(inletTemperature) && inletTemperature < crit.maxTemperature
+      ? inletTemperature
+      : undefined;
   const checks: CheckRecord[] = [
     makeCheck(
       'min-film',

@@ -216,7 +216,8 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
   const solverNote: Assumption = {
     field: 'journal.solver',
     value: `mesh ${DEFAULT_MESH.nTheta}×${DEFAULT_MESH.nZeta} (half length), PSOR converged when max |Δp| per sweep ≤ 1e-8·max p; thermal balance to ${THERMAL_TOLERANCE_K} K`,
-    reason: 'convergence criteria of the finite-difference Reynolds solution and the temperature iteration; a solve or balance that does not converge stops the run with an error instead of reporting unconverged numbers',
+    reason:
+      'convergence criteria of the finite-difference Reynolds solution and the temperature iteration; a solve or balance that does not converge stops the run with an error instead of reporting unconverged numbers',
   };
   const r = D / 2;
   if (!(D > 0 && Number.isFinite(D))) throw new Error(`journal: shaft diameter must be positive, got ${D} m`);
@@ -233,7 +234,8 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     assumed.push({
       field: 'load.axial',
       value: 'not carried',
-      reason: 'a plain journal bearing carries radial load only; the axial load needs a thrust face or bearing (common practice)',
+      reason:
+        'a plain journal bearing carries radial load only; the axial load needs a thrust face or bearing (common practice)',
     });
   if (c.shaft.oscillation && !c.shaft.speed) {
     warnings.push(
@@ -252,7 +254,9 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     );
   }
   if (points.some((p) => !(p.speed > 0)))
-    warnings.push('At least one operating point has zero speed: no hydrodynamic film forms there (film thickness taken as zero).');
+    warnings.push(
+      'At least one operating point has zero speed: no hydrodynamic film forms there (film thickness taken as zero).',
+    );
   const startLoad = Math.max(c.load.radial, ...points.map((p) => p.load));
 
   // Lubricant options.
@@ -344,7 +348,8 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     lengths = crit.lengthToDiameter.map((k) => k * D).filter((L) => L <= maxL * (1 + 1e-9));
     const ldMax = Math.max(...crit.lengthToDiameter);
     const ldMin = Math.min(...crit.lengthToDiameter);
-    if (maxL < ldMax * D && maxL >= ldMin * D && !lengths.some((L) => Math.abs(L - maxL) < 1e-9 * D)) lengths.push(maxL);
+    if (maxL < ldMax * D && maxL >= ldMin * D && !lengths.some((L) => Math.abs(L - maxL) < 1e-9 * D))
+      lengths.push(maxL);
     if (lengths.length === 0) {
       lengths = [maxL];
       warnings.push(
@@ -373,7 +378,8 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     assumed.push({
       field: 'lubrication.oilGrade',
       value: 'chosen from the sweep',
-      reason: 'ISO VG grades of data/lubricants.json, the one giving the largest film margin within the temperature limit',
+      reason:
+        'ISO VG grades of data/lubricants.json, the one giving the largest film margin within the temperature limit',
     });
 
   // No oil supply: no design can hold a film, so none is optimised; one representative
@@ -382,7 +388,8 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     lengths = [Math.max(...lengths)];
     if (c.journal?.radialClearance === undefined && c.journal?.clearanceRatio === undefined) clearances = [0.001 * r];
     // The sweep's own assumptions no longer apply; the one below replaces them.
-    for (let k = assumed.length - 1; k >= 0; k--) if (assumed[k]!.value === 'chosen from the sweep') assumed.splice(k, 1);
+    for (let k = assumed.length - 1; k >= 0; k--)
+      if (assumed[k]!.value === 'chosen from the sweep') assumed.splice(k, 1);
     assumed.push({
       field: 'journal.design',
       value: `L = ${fmt(lengths[0]!)} m, c = ${fmt(clearances[0]!)} m`,
@@ -635,7 +642,8 @@ function buildSheet(c: CaseSI, e: DesignEvaluation, crit: JournalCriteria, suppl
     },
     {
       label: 'Friction coefficient f',
-      formula: 'f = (c/r)·[(r/c)f], friction variable (r/c)f = 2π²S/√(1−ε²) + (ε/2)·sin φ at the table nodes, interpolated at ε',
+      formula:
+        'f = (c/r)·[(r/c)f], friction variable (r/c)f = 2π²S/√(1−ε²) + (ε/2)·sin φ at the table nodes, interpolated at ε',
       substituted: `f = (${fmt(cl)} m/${fmt(r)} m) · ${fmt(res.point.frictionVariable)}`,
       value: res.frictionCoefficient,
       unit: '1',

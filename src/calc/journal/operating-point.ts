@@ -1,6 +1,11 @@
 import { density, dynamicViscosity, type OilGrade } from '../lubricant.js';
 import { petroffFriction } from './closed-forms.js';
-import { eccentricityFromSommerfeld, pointAtEccentricity, type DimensionlessPoint, type JournalTable } from './table.js';
+import {
+  eccentricityFromSommerfeld,
+  pointAtEccentricity,
+  type DimensionlessPoint,
+  type JournalTable,
+} from './table.js';
 
 /**
  * Operating point of a plain full journal bearing: load matching (the eccentricity
@@ -130,7 +135,8 @@ export function matchLoad(
 ): OperatingResult {
   const { geometry: g, load: w, speed: n } = input;
   validate(input);
-  if (!(mu > 0 && Number.isFinite(mu))) throw new Error(`journal: viscosity must be positive and finite, got ${mu} Pa·s`);
+  if (!(mu > 0 && Number.isFinite(mu)))
+    throw new Error(`journal: viscosity must be positive and finite, got ${mu} Pa·s`);
   const r = g.diameter / 2;
   const c = g.radialClearance;
   const unitLoad = w / (g.length * g.diameter);
@@ -142,7 +148,8 @@ export function matchLoad(
   const power = torque * 2 * Math.PI * n;
   const flow = pt.flowVariable * r * c * n * g.length;
   const sideFlow = pt.sideFlowRatio * flow;
-  const rise = (4 * Math.PI * unitLoad * pt.frictionVariable) / (rho * cp * pt.flowVariable * (1 - 0.5 * pt.sideFlowRatio));
+  const rise =
+    (4 * Math.PI * unitLoad * pt.frictionVariable) / (rho * cp * pt.flowVariable * (1 - 0.5 * pt.sideFlowRatio));
   return {
     load: w,
     speed: n,
@@ -204,7 +211,9 @@ export function operatingPoint(table: JournalTable, input: OperatingInput): Oper
   const gOf = (res: OperatingResult, t: number): number => res.effectiveTemperature - t;
 
   if (!(tIn < THERMAL_CEILING_C))
-    throw new Error(`journal: inlet temperature ${tIn} °C is at or above the ${THERMAL_CEILING_C} °C ceiling of the thermal balance`);
+    throw new Error(
+      `journal: inlet temperature ${tIn} °C is at or above the ${THERMAL_CEILING_C} °C ceiling of the thermal balance`,
+    );
   let a = tIn;
   let ra = evalAt(a);
   let ga = gOf(ra, a);

@@ -43,8 +43,8 @@ export const DEFAULT_MESH = { nTheta: 96, nZeta: 12, stretch: 0.5 } as const;
  * tabulated row of Raimondi & Boyd) is inside the table.
  */
 export const TABLE_ECCENTRICITIES: readonly number[] = [
-  0.01, 0.03, 0.06, 0.1, 0.15, 0.2, 0.25, 0.3, 0.35, 0.4, 0.45, 0.5, 0.55, 0.6, 0.65, 0.7, 0.75, 0.8,
-  0.83, 0.86, 0.88, 0.9, 0.915, 0.93, 0.94, 0.95, 0.96, 0.967, 0.974, 0.98,
+  0.01, 0.03, 0.06, 0.1, 0.15, 0.2, 0.25, 0.3, 0.35, 0.4, 0.45, 0.5, 0.55, 0.6, 0.65, 0.7, 0.75, 0.8, 0.83, 0.86, 0.88,
+  0.9, 0.915, 0.93, 0.94, 0.95, 0.96, 0.967, 0.974, 0.98,
 ];
 
 /** One interpolated row: the dimensionless state of the bearing at ε. */
@@ -199,12 +199,30 @@ export function tableFromRows(
     mesh,
     eps,
     lnSe: series(eps, lnSe),
-    attitude: series(eps, col((r) => r.attitudeDeg)),
-    flow: series(eps, col((r) => r.flowVariable)),
-    sideRatio: series(eps, col((r) => r.sideFlowRatio)),
-    pressureRatio: series(eps, col((r) => r.pressureRatio)),
-    peakAngle: series(eps, col((r) => r.peakAngleDeg)),
-    filmEnd: series(eps, col((r) => r.filmEndDeg)),
+    attitude: series(
+      eps,
+      col((r) => r.attitudeDeg),
+    ),
+    flow: series(
+      eps,
+      col((r) => r.flowVariable),
+    ),
+    sideRatio: series(
+      eps,
+      col((r) => r.sideFlowRatio),
+    ),
+    pressureRatio: series(
+      eps,
+      col((r) => r.pressureRatio),
+    ),
+    peakAngle: series(
+      eps,
+      col((r) => r.peakAngleDeg),
+    ),
+    filmEnd: series(
+      eps,
+      col((r) => r.filmEndDeg),
+    ),
     rows,
     buildMs,
   };
@@ -338,7 +356,9 @@ export function tableFor(lengthToDiameter: number): JournalTable {
  * scripts/journal-tables.mjs with this solver at the default mesh), so a run does not pay
  * 40–90 ms per L/D to solve them again. Seeded tables never replace one already cached.
  */
-export function seedTables(tables: readonly { lengthToDiameter: number; rows: readonly DimensionlessPerformance[] }[]): void {
+export function seedTables(
+  tables: readonly { lengthToDiameter: number; rows: readonly DimensionlessPerformance[] }[],
+): void {
   // Only the rows are kept; a table is made from them when first asked for (most runs use one or a few L/D).
   for (const t of tables) seeds.set(Number(quantiseLengthToDiameter(t.lengthToDiameter).toFixed(6)), t.rows);
 }

@@ -23,14 +23,31 @@ export function ratedViscosity(n: number, dm: number): number | null {
   if (!(n > 0) || !(dm > 0)) return null;
   const rpm = n * 60;
   const dmMm = dm * 1000;
-  const nu1 = rpm < 1000 ? 45000 * Math.pow(rpm, -0.83) * Math.pow(dmMm, -0.5) : 4500 * Math.pow(rpm, -0.5) * Math.pow(dmMm, -0.5);
+  const nu1 =
+    rpm < 1000
+      ? 45000 * Math.pow(rpm, -0.83) * Math.pow(dmMm, -0.5)
+      : 4500 * Math.pow(rpm, -0.5) * Math.pow(dmMm, -0.5);
   return nu1 * 1e-6;
 }
 
 /** Constants of the a_ISO formulas [1]: x; and (y, z) for κ in [0.1, 0.4), [0.4, 1), [1, 4]. */
 export const AISO_CONSTANTS = {
-  ball: { x: 2.5671, inner: 0.83, load: 1 / 3, outer: -9.3, y: [2.2649, 1.9987, 1.9987], z: [0.054381, 0.19087, 0.071739] },
-  roller: { x: 1.5859, inner: 1, load: 0.4, outer: -9.185, y: [1.3993, 1.2348, 1.2348], z: [0.054381, 0.19087, 0.071739] },
+  ball: {
+    x: 2.5671,
+    inner: 0.83,
+    load: 1 / 3,
+    outer: -9.3,
+    y: [2.2649, 1.9987, 1.9987],
+    z: [0.054381, 0.19087, 0.071739],
+  },
+  roller: {
+    x: 1.5859,
+    inner: 1,
+    load: 0.4,
+    outer: -9.185,
+    y: [1.3993, 1.2348, 1.2348],
+    z: [0.054381, 0.19087, 0.071739],
+  },
 } as const;
 
 export const AISO_CAP = 50;

@@ -42,10 +42,17 @@ export interface DynamicLoadResult {
  * row the bearing is excluded: nothing is extrapolated.
  */
 export function deepGrooveBallLoad(Fr: number, Fa: number, C0: number, table: XYTable): DynamicLoadResult {
-  if (!(Fa > 0)) return { P: Fr, X: table.xBelowE, Y: table.yBelowE, e: null, faC0: 0, range: 'inside', exclusion: null };
+  if (!(Fa > 0))
+    return { P: Fr, X: table.xBelowE, Y: table.yBelowE, e: null, faC0: 0, range: 'inside', exclusion: null };
   const faC0 = Fa / C0;
-  const eI = interpolate(table.rows.map((r) => ({ x: r.faC0, y: r.e })), faC0);
-  const yI = interpolate(table.rows.map((r) => ({ x: r.faC0, y: r.Y })), faC0);
+  const eI = interpolate(
+    table.rows.map((r) => ({ x: r.faC0, y: r.e })),
+    faC0,
+  );
+  const yI = interpolate(
+    table.rows.map((r) => ({ x: r.faC0, y: r.Y })),
+    faC0,
+  );
   const e = eI.value;
   const range = eI.range;
   const exclusion =
@@ -65,12 +72,20 @@ export function deepGrooveBallLoad(Fr: number, Fa: number, C0: number, table: XY
  */
 export function cylindricalRollerLoad(Fr: number, Fa: number): DynamicLoadResult {
   const exclusion =
-    Fa > 0 ? `axial load ${Fa.toFixed(0)} N: a radial cylindrical roller bearing (ribs on one ring) takes no axial load` : null;
+    Fa > 0
+      ? `axial load ${Fa.toFixed(0)} N: a radial cylindrical roller bearing (ribs on one ring) takes no axial load`
+      : null;
   return { P: Fr, X: 1, Y: 0, e: null, faC0: null, range: 'inside', exclusion };
 }
 
 /** Dynamic equivalent load by bearing type (see the two kernels above). */
-export function dynamicEquivalentLoad(type: RollingType, Fr: number, Fa: number, C0: number, table: XYTable): DynamicLoadResult {
+export function dynamicEquivalentLoad(
+  type: RollingType,
+  Fr: number,
+  Fa: number,
+  C0: number,
+  table: XYTable,
+): DynamicLoadResult {
   return type === 'ball' ? deepGrooveBallLoad(Fr, Fa, C0, table) : cylindricalRollerLoad(Fr, Fa);
 }
 
@@ -99,7 +114,10 @@ export interface SpectrumPoint {
  * speed by time. When no point turns (Σ ni·ti = 0) the loads are weighted by time
  * instead and `byRevolutions` is false (lives are then not defined anyway).
  */
-export function spectrumMean(points: ReadonlyArray<SpectrumPoint>, p: number): { P: number; n: number; byRevolutions: boolean } {
+export function spectrumMean(
+  points: ReadonlyArray<SpectrumPoint>,
+  p: number,
+): { P: number; n: number; byRevolutions: boolean } {
   let sumT = 0;
   let sumNT = 0;
   let sumPNT = 0;

@@ -7,7 +7,14 @@ import { boundaryDimensions, rollingFactors, type BoundaryRow, type RollingFacto
 import { aIso, estimatedFatigueLimit, ratedViscosity, KAPPA_MIN } from './aiso.js';
 import { dynamicEquivalentLoad, spectrumMean, staticEquivalentLoad } from './equivalent-load.js';
 import { estimateBallGeometry, estimateRollerGeometry } from './geometry.js';
-import { basicRatingLife, lifeExponent, lifeHours, reliabilityFactor, requiredDynamicRating, type RollingType } from './life.js';
+import {
+  basicRatingLife,
+  lifeExponent,
+  lifeHours,
+  reliabilityFactor,
+  requiredDynamicRating,
+  type RollingType,
+} from './life.js';
 import { ballDynamicRating, ballStaticRating, rollerDynamicRating, rollerStaticRating } from './ratings.js';
 import { criticalSwingAngle, frictionPower, frictionTorque, relubricationInterval, speedFactor } from './speed.js';
 import type { RollingCandidate, RollingResult } from './types.js';
@@ -70,10 +77,14 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     assumed.push({
       field: 'shaft.oscillation',
       value: `equivalent rotational speed ${fmt(meanSpeed * 60)} r/min`,
-      reason: 'for life, an oscillating shaft is taken as rotating at n = θ·f/π, the speed that turns the same angle per second (common practice)',
+      reason:
+        'for life, an oscillating shaft is taken as rotating at n = θ·f/π, the speed that turns the same angle per second (common practice)',
     });
   }
-  if (!(meanSpeed > 0)) warn('the shaft does not turn (mean speed 0): rating lives, viscosity ratio and speed checks do not apply; only static safety is checked');
+  if (!(meanSpeed > 0))
+    warn(
+      'the shaft does not turn (mean speed 0): rating lives, viscosity ratio and speed checks do not apply; only static safety is checked',
+    );
 
   // --- shock and service factor -------------------------------------------------
   const sf = f.serviceFactors.find((s) => s.shock === c.load.shock) ?? f.serviceFactors[0]!;
@@ -92,7 +103,8 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     assumed.push({
       field: 'lubrication.supply',
       value: 'sealed-for-life grease',
-      reason: 'a rolling bearing needs at least grease; with no supply a sealed, greased-for-life bearing is the practical reading, and its grease life is checked against the life target (common practice)',
+      reason:
+        'a rolling bearing needs at least grease; with no supply a sealed, greased-for-life bearing is the practical reading, and its grease life is checked against the life target (common practice)',
     });
   }
   const speedSupply: 'grease' | 'oil-bath' | 'oil-feed' = supply === 'none' ? 'grease' : supply;
@@ -118,12 +130,15 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
   });
   const rel = reliabilityFactor(finiteOr(c.life.reliability, 90));
   if (rel.clamped) {
-    warn(`reliability ${c.life.reliability} % is outside the a1 formula's range 90–99.95 % (ISO 281:2007): ${rel.reliabilityUsed} % is used`);
+    warn(
+      `reliability ${c.life.reliability} % is outside the a1 formula's range 90–99.95 % (ISO 281:2007): ${rel.reliabilityUsed} % is used`,
+    );
   }
   assumed.push({
     field: 'life.criterion',
     value: 'L10mh = a1·a_ISO·L10h ≥ life target',
-    reason: 'a candidate meets the life target on the modified rating life of ISO 281:2007, which counts lubrication and contamination; the required dynamic rating is the basic rating with a1 only (a_ISO = 1)',
+    reason:
+      'a candidate meets the life target on the modified rating life of ISO 281:2007, which counts lubrication and contamination; the required dynamic rating is the basic rating with a1 only (a_ISO = 1)',
   });
 
   // --- candidate list -------------------------------------------------------------------
@@ -136,14 +151,18 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
   if (!(d > 0) || !Number.isFinite(d)) {
     warn(`shaft diameter ${d} m is not a positive number: no bearing can be chosen`);
   } else if (sameBore.length === 0) {
-    warn(`shaft diameter ${fmt(d * 1000)} mm is not a standard bore in the ISO 15 table; nearest bores: ${nearestBores(rows, d * 1000).join(' and ')} mm`);
+    warn(
+      `shaft diameter ${fmt(d * 1000)} mm is not a standard bore in the ISO 15 table; nearest bores: ${nearestBores(rows, d * 1000).join(' and ')} mm`,
+    );
   }
 
   if (supplierC !== undefined || supplierC0 !== undefined) {
     if (supplierC !== undefined && supplierC0 !== undefined && supplierC > 0 && supplierC0 > 0 && d > 0) {
       specs.push(supplierSpec(c, supplierC, supplierC0, sameBore, f, assumed, warn));
     } else {
-      warn('a supplier bearing needs both a positive dynamic rating C and static rating C0; the supplier values given are not used');
+      warn(
+        'a supplier bearing needs both a positive dynamic rating C and static rating C0; the supplier values given are not used',
+      );
     }
   }
   let spaceExcluded = 0;
@@ -163,7 +182,8 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     }
     specs.push(estimatedSpec(r, f));
   }
-  if (spaceExcluded > 0) warn(`${spaceExcluded} ISO 15 size(s) of this bore excluded by the space available: ${spaceReasons.join('; ')}`);
+  if (spaceExcluded > 0)
+    warn(`${spaceExcluded} ISO 15 size(s) of this bore excluded by the space available: ${spaceReasons.join('; ')}`);
   if (specs.some((s) => s.ratingSource === 'estimated')) {
     assumed.push({
       field: 'rolling.ratings',
@@ -180,7 +200,21 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
   }
 
   // --- evaluate ------------------------------------------------------------------------
-  const ctx: EvalContext = { c, f, points: rawPoints, maxSpeed, serviceFactor: sf.serviceFactor, s0Row, cont, a1: rel.a1, sealed, speedSupply, temperature, viscosity, warn };
+  const ctx: EvalContext = {
+    c,
+    f,
+    points: rawPoints,
+    maxSpeed,
+    serviceFactor: sf.serviceFactor,
+    s0Row,
+    cont,
+    a1: rel.a1,
+    sealed,
+    speedSupply,
+    temperature,
+    viscosity,
+    warn,
+  };
   const candidates = specs.map((s) => evaluate(s, ctx));
 
   const feasibleOnes = candidates
@@ -194,9 +228,15 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     );
   const best = feasibleOnes[0] ?? null;
   if (!best) {
-    if (candidates.length === 0) warn('no rolling bearing candidate: none of the ISO 15 sizes of this bore fits, and no supplier bearing is given');
+    if (candidates.length === 0)
+      warn(
+        'no rolling bearing candidate: none of the ISO 15 sizes of this bore fits, and no supplier bearing is given',
+      );
     for (const k of candidates) {
-      const why = [...k.exclusions, ...k.checks.filter((x) => !x.pass).map((x) => `${x.label}: ${fmt(x.value)} against ${fmt(x.limit)} ${x.unit}`)];
+      const why = [
+        ...k.exclusions,
+        ...k.checks.filter((x) => !x.pass).map((x) => `${x.label}: ${fmt(x.value)} against ${fmt(x.limit)} ${x.unit}`),
+      ];
       warn(`${k.designation} not suitable: ${why.join('; ')}`);
     }
   }
@@ -217,11 +257,14 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     assumed.push({
       field: 'equivalentLoad',
       value: `${fmt(equivalentLoad)} N`,
-      reason: 'no candidate to read X and Y from: the upper bound of P over the deep-groove ball X/Y table is given (X = 1 when Fa/Fr ≤ 0.19, else the larger of Fr and 0.56·Fr + 2.30·Fa)',
+      reason:
+        'no candidate to read X and Y from: the upper bound of P over the deep-groove ball X/Y table is given (X = 1 when Fa/Fr ≤ 0.19, else the larger of Fr and 0.56·Fr + 2.30·Fa)',
     });
   }
   const requiredC =
-    equivalentLoad !== null ? requiredDynamicRating(equivalentLoad, meanSpeed, c.life.hours, lifeExponent(leadType), rel.a1) : null;
+    equivalentLoad !== null
+      ? requiredDynamicRating(equivalentLoad, meanSpeed, c.life.hours, lifeExponent(leadType), rel.a1)
+      : null;
   if (!(c.life.hours > 0)) warn('no life target (life.hours ≤ 0): the life check is left out');
 
   const sheet = lead && opts.sheet !== false ? sheetFor(lead, ctx, meanSpeed) : [];
@@ -282,7 +325,18 @@ function estimatedSpec(r: BoundaryRow, f: RollingFactors): CandidateSpec {
   const d = r.bore_mm / 1000;
   const D = r.outerDiameter_mm / 1000;
   const B = r.width_mm / 1000;
-  const base = { id: r.id, type: r.type, kind: r.kind, series: r.series, designation: r.designation, bore: d, outerDiameter: D, width: B, ratingSource: 'estimated' as const, fatigueLimitEstimated: true };
+  const base = {
+    id: r.id,
+    type: r.type,
+    kind: r.kind,
+    series: r.series,
+    designation: r.designation,
+    bore: d,
+    outerDiameter: D,
+    width: B,
+    ratingSource: 'estimated' as const,
+    fatigueLimitEstimated: true,
+  };
   if (r.type === 'ball') {
     const g = estimateBallGeometry(d, D, f.geometryEstimate);
     const C = ballDynamicRating(g, f.ratingFactors.fcBall).value;
@@ -307,7 +361,11 @@ function supplierSpec(
   const d = c.shaft.diameter;
   const type: RollingType = c.rolling?.type ?? 'ball';
   if (c.rolling?.type === undefined) {
-    assumed.push({ field: 'rolling.type', value: 'ball', reason: 'the supplier bearing has no type given: a deep-groove ball bearing is taken' });
+    assumed.push({
+      field: 'rolling.type',
+      value: 'ball',
+      reason: 'the supplier bearing has no type given: a deep-groove ball bearing is taken',
+    });
   }
   const row = sameBore.filter((r) => r.type === type).sort((a, b) => a.outerDiameter_mm - b.outerDiameter_mm)[0];
   let D: number | null = c.rolling?.outerDiameter ?? null;
@@ -322,10 +380,16 @@ function supplierSpec(
     });
   }
   const Dgeom = D ?? 2 * d;
-  if (D === null) warn('supplier bearing outside diameter not given and no ISO 15 row of its bore: pitch diameter taken as 1.5·d and the space check on D is left out');
-  if (B === null) warn('supplier bearing width not given and no ISO 15 row of its bore: the space check on width is left out');
+  if (D === null)
+    warn(
+      'supplier bearing outside diameter not given and no ISO 15 row of its bore: pitch diameter taken as 1.5·d and the space check on D is left out',
+    );
+  if (B === null)
+    warn('supplier bearing width not given and no ISO 15 row of its bore: the space check on width is left out');
   if (type === 'ball' && C0 > 1.2 * C) {
-    warn(`supplier ratings C0/C = ${fmt(C0 / C)}: unusual for a deep-groove ball bearing, whose C0 is normally below C (common practice); check the datasheet and the bearing type`);
+    warn(
+      `supplier ratings C0/C = ${fmt(C0 / C)}: unusual for a deep-groove ball bearing, whose C0 is normally below C (common practice); check the datasheet and the bearing type`,
+    );
   }
   const g =
     type === 'ball'
@@ -368,12 +432,17 @@ function evaluate(s: CandidateSpec, x: EvalContext): RollingCandidate {
     const r = dynamicEquivalentLoad(s.type, q.Fr, q.Fa, s.C0, f.xyDeepGrooveBall);
     if (r.exclusion && !exclusions.includes(r.exclusion)) exclusions.push(r.exclusion);
     if (r.range === 'below' && r.faC0 !== null && r.faC0 > 0 && r.Y > 0) {
-      x.warn(`${s.designation}: Fa/C0 = ${r.faC0.toFixed(4)} is below the first row of the ISO 281 X/Y table (0.014); e and Y of that row are used (Y would be somewhat larger): not extrapolated`);
+      x.warn(
+        `${s.designation}: Fa/C0 = ${r.faC0.toFixed(4)} is below the first row of the ISO 281 X/Y table (0.014); e and Y of that row are used (Y would be somewhat larger): not extrapolated`,
+      );
     }
     return { ...r, Pf: x.serviceFactor * r.P, n: q.n, t: q.t, Fr: q.Fr, Fa: q.Fa };
   });
   const heaviest = per.reduce((a, b) => (b.Pf > a.Pf ? b : a), per[0]!);
-  const mean = spectrumMean(per.map((q) => ({ P: q.Pf, n: q.n, t: q.t })), p);
+  const mean = spectrumMean(
+    per.map((q) => ({ P: q.Pf, n: q.n, t: q.t })),
+    p,
+  );
   const P = mean.P;
   const n = mean.n;
 
@@ -386,13 +455,19 @@ function evaluate(s: CandidateSpec, x: EvalContext): RollingCandidate {
   if (kappa !== null && P > 0) {
     const a = aIso(s.type, kappa, (x.cont.eC * s.Cu) / P);
     aISO = a.aISO;
-    if (a.kappaRange === 'above') x.warn(`${s.designation}: viscosity ratio κ = ${fmt(kappa)} > 4 is taken as 4, as ISO 281:2007 says`);
+    if (a.kappaRange === 'above')
+      x.warn(`${s.designation}: viscosity ratio κ = ${fmt(kappa)} > 4 is taken as 4, as ISO 281:2007 says`);
     if (a.kappaRange === 'below') {
-      x.warn(`${s.designation}: viscosity ratio κ = ${fmt(kappa)} < 0.1 is outside the a_ISO method of ISO 281:2007; a_ISO at κ = 0.1 is shown for orientation only and the lubrication check fails`);
+      x.warn(
+        `${s.designation}: viscosity ratio κ = ${fmt(kappa)} < 0.1 is outside the a_ISO method of ISO 281:2007; a_ISO at κ = 0.1 is shown for orientation only and the lubrication check fails`,
+      );
     }
     if (a.capped) x.warn(`${s.designation}: a_ISO reached its cap of 50 (ISO 281:2007)`);
   }
-  if (s.dm >= 0.1) x.warn(`${s.designation}: pitch diameter ${fmt(s.dm * 1000)} mm ≥ 100 mm; e_C is taken from the dm < 100 mm guidance, which is the lower (conservative) one`);
+  if (s.dm >= 0.1)
+    x.warn(
+      `${s.designation}: pitch diameter ${fmt(s.dm * 1000)} mm ≥ 100 mm; e_C is taken from the dm < 100 mm guidance, which is the lower (conservative) one`,
+    );
   const L10mh = L10h !== null && aISO !== null ? x.a1 * aISO * L10h : null;
 
   // Static.
@@ -420,7 +495,10 @@ function evaluate(s: CandidateSpec, x: EvalContext): RollingCandidate {
   if (x.speedSupply === 'grease') {
     const kf = f.relubrication.find((q) => q.type === s.type)!;
     relub = relubricationInterval(x.maxSpeed, s.bore, kf.kf, x.temperature);
-    if (relub === 0) x.warn(`${s.designation}: the grease interval formula gives no positive interval at ${fmt(x.maxSpeed * 60)} r/min: too fast for grease by this rule; oil is needed`);
+    if (relub === 0)
+      x.warn(
+        `${s.designation}: the grease interval formula gives no positive interval at ${fmt(x.maxSpeed * 60)} r/min: too fast for grease by this rule; oil is needed`,
+      );
   }
 
   // Oscillation.
@@ -436,35 +514,117 @@ function evaluate(s: CandidateSpec, x: EvalContext): RollingCandidate {
 
   // Checks.
   if (L10mh !== null && c.life.hours > 0) {
-    checks.push(makeCheck('rolling-life', 'modified rating life L10mh', L10mh, c.life.hours, 'h', 'min', 'ISO 281:2007, modified rating life L10m = a1·a_ISO·L10 (cl. 9, from memory); target from the case'));
+    checks.push(
+      makeCheck(
+        'rolling-life',
+        'modified rating life L10mh',
+        L10mh,
+        c.life.hours,
+        'h',
+        'min',
+        'ISO 281:2007, modified rating life L10m = a1·a_ISO·L10 (cl. 9, from memory); target from the case',
+      ),
+    );
   }
   if (kappa !== null) {
-    checks.push(makeCheck('viscosity-ratio', 'viscosity ratio κ = ν/ν1 within the a_ISO method', kappa, KAPPA_MIN, '1', 'min', 'ISO 281:2007, a_ISO valid for 0.1 ≤ κ ≤ 4 (from memory)'));
+    checks.push(
+      makeCheck(
+        'viscosity-ratio',
+        'viscosity ratio κ = ν/ν1 within the a_ISO method',
+        kappa,
+        KAPPA_MIN,
+        '1',
+        'min',
+        'ISO 281:2007, a_ISO valid for 0.1 ≤ κ ≤ 4 (from memory)',
+      ),
+    );
   }
   if (L10 !== null && P > 0) {
-    checks.push(makeCheck('load-ratio', 'dynamic equivalent load P/C', P / s.C, 0.5, '1', 'max', 'ISO 281:2007 (from memory): the rating-life equation is not meant for P > 0.5·C'));
+    checks.push(
+      makeCheck(
+        'load-ratio',
+        'dynamic equivalent load P/C',
+        P / s.C,
+        0.5,
+        '1',
+        'max',
+        'ISO 281:2007 (from memory): the rating-life equation is not meant for P > 0.5·C',
+      ),
+    );
   }
   if (s0 !== null) {
-    checks.push(makeCheck('static-safety', `static safety s0 = C0/P0 (${x.s0Row.guidance})`, s0, s0Limit, '1', 'min', `ISO 76 s0 = C0/P0; limit: ${x.s0Row.source}`));
+    checks.push(
+      makeCheck(
+        'static-safety',
+        `static safety s0 = C0/P0 (${x.s0Row.guidance})`,
+        s0,
+        s0Limit,
+        '1',
+        'min',
+        `ISO 76 s0 = C0/P0; limit: ${x.s0Row.source}`,
+      ),
+    );
   }
   if (s.type === 'ball') {
     const faC0 = x.points.reduce((m, q) => Math.max(m, q.Fa / s.C0), 0);
     if (faC0 > 0) {
       const last = f.xyDeepGrooveBall.rows[f.xyDeepGrooveBall.rows.length - 1]!.faC0;
-      checks.push(makeCheck('axial-load-table', 'relative axial load Fa/C0 within the X/Y table', faC0, last, '1', 'max', f.xyDeepGrooveBall.source));
+      checks.push(
+        makeCheck(
+          'axial-load-table',
+          'relative axial load Fa/C0 within the X/Y table',
+          faC0,
+          last,
+          '1',
+          'max',
+          f.xyDeepGrooveBall.source,
+        ),
+      );
     }
   }
   if (ndm > 0 && lim) {
-    checks.push(makeCheck('speed-factor', `speed factor n·dm (${x.speedSupply})`, ndm, lim.ndm, 'mm*r/min', 'max', lim.source));
+    checks.push(
+      makeCheck('speed-factor', `speed factor n·dm (${x.speedSupply})`, ndm, lim.ndm, 'mm*r/min', 'max', lim.source),
+    );
   }
   if (s.outerDiameter !== null && c.space.maxOuterDiameter > 0) {
-    checks.push(makeCheck('space-outer-diameter', 'bearing outside diameter against the housing room', s.outerDiameter, c.space.maxOuterDiameter, 'm', 'max', 'case space; bearing dimensions ISO 15 (from memory) or supplier'));
+    checks.push(
+      makeCheck(
+        'space-outer-diameter',
+        'bearing outside diameter against the housing room',
+        s.outerDiameter,
+        c.space.maxOuterDiameter,
+        'm',
+        'max',
+        'case space; bearing dimensions ISO 15 (from memory) or supplier',
+      ),
+    );
   }
   if (s.width !== null && c.space.maxLength > 0) {
-    checks.push(makeCheck('space-width', 'bearing width against the axial room', s.width, c.space.maxLength, 'm', 'max', 'case space; bearing dimensions ISO 15 (from memory) or supplier'));
+    checks.push(
+      makeCheck(
+        'space-width',
+        'bearing width against the axial room',
+        s.width,
+        c.space.maxLength,
+        'm',
+        'max',
+        'case space; bearing dimensions ISO 15 (from memory) or supplier',
+      ),
+    );
   }
   if (x.sealed && relub !== null && c.life.hours > 0) {
-    checks.push(makeCheck('grease-life', 'grease life of the sealed bearing (relubrication-interval formula)', relub, c.life.hours, 'h', 'min', f.relubrication.find((q) => q.type === s.type)!.source));
+    checks.push(
+      makeCheck(
+        'grease-life',
+        'grease life of the sealed bearing (relubrication-interval formula)',
+        relub,
+        c.life.hours,
+        'h',
+        'min',
+        f.relubrication.find((q) => q.type === s.type)!.source,
+      ),
+    );
   }
 
   const feasible = exclusions.length === 0 && checks.every((k) => k.pass);
@@ -532,19 +692,28 @@ function caseViscosity(
   const lub = lubricants();
   let grade = c.lubrication.oilGrade;
   if (grade !== undefined && supply === 'grease') {
-    assumed.push({ field: 'lubrication.oilGrade', value: `ISO VG ${grade}`, reason: 'with grease supply the named oil grade is taken as the grease base oil' });
+    assumed.push({
+      field: 'lubrication.oilGrade',
+      value: `ISO VG ${grade}`,
+      reason: 'with grease supply the named oil grade is taken as the grease base oil',
+    });
   }
   if (grade === undefined) {
     grade = supply === 'grease' ? lub.greaseBaseOil.grade : 68;
     assumed.push({
       field: 'lubrication.oilGrade',
       value: `ISO VG ${grade}`,
-      reason: supply === 'grease' ? `grease base oil (${lub.greaseBaseOil.source})` : 'no oil grade given: ISO VG 68, a common general-machinery grade (common practice)',
+      reason:
+        supply === 'grease'
+          ? `grease base oil (${lub.greaseBaseOil.source})`
+          : 'no oil grade given: ISO VG 68, a common general-machinery grade (common practice)',
     });
   }
   let oil = oilGrade(grade);
   if (!oil) {
-    warn(`ISO VG ${grade} is not in data/lubricants.json: the grease base oil grade ${lub.greaseBaseOil.grade} is used instead`);
+    warn(
+      `ISO VG ${grade} is not in data/lubricants.json: the grease base oil grade ${lub.greaseBaseOil.grade} is used instead`,
+    );
     oil = oilGrade(lub.greaseBaseOil.grade) ?? lub.grades[0]!;
   }
   return kinematicViscosity(oil, tC) * 1e-6;
@@ -567,7 +736,10 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
   const powTxt = k.type === 'ball' ? '3' : '(10/3)';
   const mu = x.f.friction.find((q) => q.type === k.type)!.mu;
   // Per-point loads as evaluate() works them: Pi without f_d (friction), f_d·Pi (life).
-  const per = x.points.map((q) => ({ ...q, P: dynamicEquivalentLoad(k.type, q.Fr, q.Fa, k.staticRating, x.f.xyDeepGrooveBall).P }));
+  const per = x.points.map((q) => ({
+    ...q,
+    P: dynamicEquivalentLoad(k.type, q.Fr, q.Fa, k.staticRating, x.f.xyDeepGrooveBall).P,
+  }));
   const many = per.length > SHEET_TERMS_MAX;
   const sumT = per.reduce((acc, q) => acc + Math.max(0, q.t), 0);
   const byRevolutions = per.some((q) => q.n > 0 && q.t > 0);
@@ -598,10 +770,24 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
     });
   }
   if (k.L10 !== null) {
-    lines.push({ label: 'Basic rating life L10', formula: 'L10 = (C/P)^p', substituted: `L10 = (${fmt(k.dynamicRating)} N / ${fmt(k.equivalentLoad)} N)^${powTxt}`, value: k.L10, unit: '10^6 rev', source: 'ISO 281:2007' });
+    lines.push({
+      label: 'Basic rating life L10',
+      formula: 'L10 = (C/P)^p',
+      substituted: `L10 = (${fmt(k.dynamicRating)} N / ${fmt(k.equivalentLoad)} N)^${powTxt}`,
+      value: k.L10,
+      unit: '10^6 rev',
+      source: 'ISO 281:2007',
+    });
   }
   if (k.L10h !== null && k.L10 !== null) {
-    lines.push({ label: 'Basic rating life L10h', formula: 'L10h = 10^6·L10/(60·n)', substituted: `L10h = 10^6·${fmt(k.L10)}/(60·${fmt(n * 60)} r/min)`, value: k.L10h, unit: 'h', source: 'ISO 281:2007' });
+    lines.push({
+      label: 'Basic rating life L10h',
+      formula: 'L10h = 10^6·L10/(60·n)',
+      substituted: `L10h = 10^6·${fmt(k.L10)}/(60·${fmt(n * 60)} r/min)`,
+      value: k.L10h,
+      unit: 'h',
+      source: 'ISO 281:2007',
+    });
   }
   if (k.requiredDynamicRating !== null && x.c.life.hours > 0) {
     lines.push({
@@ -617,7 +803,8 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
     const rpm = n * 60;
     lines.push({
       label: 'Rated viscosity ν1',
-      formula: rpm < 1000 ? 'ν1 = 45000·n^-0.83·dm^-0.5 (mm²/s, r/min, mm)' : 'ν1 = 4500·n^-0.5·dm^-0.5 (mm²/s, r/min, mm)',
+      formula:
+        rpm < 1000 ? 'ν1 = 45000·n^-0.83·dm^-0.5 (mm²/s, r/min, mm)' : 'ν1 = 4500·n^-0.5·dm^-0.5 (mm²/s, r/min, mm)',
       substituted: `ν1 = ${rpm < 1000 ? '45000' : '4500'}·${fmt(rpm)}^${rpm < 1000 ? '-0.83' : '-0.5'}·${fmt(k.pitchDiameter * 1000)}^-0.5 mm²/s`,
       value: k.ratedViscosity,
       unit: 'm^2/s',
@@ -663,7 +850,14 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
     source: 'ISO 281:2007',
   });
   if (k.L10mh !== null && k.L10h !== null && k.aISO !== null) {
-    lines.push({ label: 'Modified rating life L10mh', formula: 'L10mh = a1·a_ISO·L10h', substituted: `L10mh = ${fmt(k.a1)}·${fmt(k.aISO)}·${fmt(k.L10h)} h`, value: k.L10mh, unit: 'h', source: 'ISO 281:2007' });
+    lines.push({
+      label: 'Modified rating life L10mh',
+      formula: 'L10mh = a1·a_ISO·L10h',
+      substituted: `L10mh = ${fmt(k.a1)}·${fmt(k.aISO)}·${fmt(k.L10h)} h`,
+      value: k.L10mh,
+      unit: 'h',
+      source: 'ISO 281:2007',
+    });
   }
   if (k.s0 !== null) {
     lines.push({
@@ -675,12 +869,22 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
       source: 'ISO 76 (from memory)',
     });
   }
-  lines.push({ label: 'Speed factor n·dm', formula: 'n·dm (highest point speed, r/min × mm)', substituted: `${fmt(x.maxSpeed * 60)} r/min × ${fmt(k.pitchDiameter * 1000)} mm`, value: k.ndm, unit: 'mm*r/min', source: 'common practice' });
+  lines.push({
+    label: 'Speed factor n·dm',
+    formula: 'n·dm (highest point speed, r/min × mm)',
+    substituted: `${fmt(x.maxSpeed * 60)} r/min × ${fmt(k.pitchDiameter * 1000)} mm`,
+    value: k.ndm,
+    unit: 'mm*r/min',
+    source: 'common practice',
+  });
   // Friction: M = μ·Pi·d/2 per point (Pi without f_d), time means over the duty.
   const pBar = sumT > 0 ? per.reduce((acc, q) => acc + Math.max(0, q.t) * Math.max(0, q.P), 0) / sumT : 0;
   lines.push({
     label: per.length > 1 ? 'Friction torque M (time mean over the duty)' : 'Friction torque M',
-    formula: per.length > 1 ? 'M = μ·P̄·d/2, P̄ = Σ ti·Pi/Σ ti, Pi = X·Fr + Y·Fa (without f_d)' : 'M = μ·P·d/2, P = X·Fr + Y·Fa (without f_d)',
+    formula:
+      per.length > 1
+        ? 'M = μ·P̄·d/2, P̄ = Σ ti·Pi/Σ ti, Pi = X·Fr + Y·Fa (without f_d)'
+        : 'M = μ·P·d/2, P = X·Fr + Y·Fa (without f_d)',
     substituted: `M = ${mu}·${fmt(pBar)} N·${fmt(k.bore)} m/2`,
     value: k.frictionTorque,
     unit: 'N*m',
@@ -711,7 +915,8 @@ function sheetFor(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
     const core = `${kf}·[14·10^6/(${fmt(rpm)}·√${fmt(dMm)}) − 4·${fmt(dMm)}]${k.temperature > 70 ? `·0.5^((${fmt(k.temperature)} − 70)/15)` : ''}`;
     lines.push({
       label: x.sealed ? 'Grease life (sealed bearing)' : 'Grease relubrication interval',
-      formula: 't_f = k_f·[14·10^6/(n·√d) − 4·d]·0.5^((T − 70)/15 if T > 70), n highest speed in r/min, d bore in mm, T in °C; no positive interval gives 0',
+      formula:
+        't_f = k_f·[14·10^6/(n·√d) − 4·d]·0.5^((T − 70)/15 if T > 70), n highest speed in r/min, d bore in mm, T in °C; no positive interval gives 0',
       substituted: `t_f = ${k.relubricationHours === 0 ? `max(0, ${core})` : core}`,
       value: k.relubricationHours,
       unit: 'h',

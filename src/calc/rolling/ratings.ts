@@ -33,7 +33,10 @@ export interface RatingResult {
 
 /** f_c or f0 at gamma = Dw·cosα/Dpw by linear interpolation (the standards permit it). */
 export function ratingFactor(curve: FactorCurve, gamma: number): { factor: number; inTable: boolean } {
-  const r = interpolate(curve.rows.map((q) => ({ x: q.gamma, y: q.f })), gamma);
+  const r = interpolate(
+    curve.rows.map((q) => ({ x: q.gamma, y: q.f })),
+    gamma,
+  );
   return { factor: r.value, inTable: r.range === 'inside' };
 }
 
@@ -104,7 +107,11 @@ export function rollerDynamicRating(g: RollerGeometry, fc: FactorCurve): RatingR
   const gamma = (g.Dwe * Math.cos(g.alpha)) / g.Dpw;
   const { factor, inTable } = ratingFactor(fc, gamma);
   const value =
-    BM_ROLLER * factor * Math.pow(g.i * LweMm * Math.cos(g.alpha), 7 / 9) * Math.pow(g.Z, 3 / 4) * Math.pow(DweMm, 29 / 27);
+    BM_ROLLER *
+    factor *
+    Math.pow(g.i * LweMm * Math.cos(g.alpha), 7 / 9) *
+    Math.pow(g.Z, 3 / 4) *
+    Math.pow(DweMm, 29 / 27);
   return { value, factor, gamma, inTable };
 }
 

@@ -16,8 +16,13 @@ export type { AskDeps, AskHooks, AskOptions } from './types.js';
 export function registerAsk(program: Command, deps: AskDeps, hooks?: AskHooks): void {
   program
     .command('ask')
-    .description('answer questions about the duty, one at a time; the answers become a case file, then the advice is printed')
-    .option('--save <file>', 'case file to write as you answer (must not exist; default: ./shaftwise-case.yaml, numbered if taken)')
+    .description(
+      'answer questions about the duty, one at a time; the answers become a case file, then the advice is printed',
+    )
+    .option(
+      '--save <file>',
+      'case file to write as you answer (must not exist; default: ./shaftwise-case.yaml, numbered if taken)',
+    )
     .option('--resume <file>', 'continue a case file an earlier ask was writing, from its first unanswered question')
     .exitOverride()
     .action(async (opts: AskOptions) => {

@@ -94,19 +94,29 @@ const PRIORITY_HELP: Record<(typeof PRIORITIES)[number], string> = {
 
 export const QUESTIONS: readonly Question[] = [
   {
-    id: 'title', path: ['title'], kind: 'text', section: 'The case',
+    id: 'title',
+    path: ['title'],
+    kind: 'text',
+    section: 'The case',
     message: 'Name of this shaft support',
     help: 'Heads the advice and the review note, so a reader knows which shaft it is.',
     default: fixed('New shaft support (from shaftwise ask)'),
   },
   {
-    id: 'diameter', path: ['shaft', 'diameter'], kind: 'quantity', quantity: 'length', section: 'Shaft and motion',
+    id: 'diameter',
+    path: ['shaft', 'diameter'],
+    kind: 'quantity',
+    quantity: 'length',
+    section: 'Shaft and motion',
     message: 'Shaft diameter at the support',
     help: 'The bore of the support: sets bearing pressure, sliding speed and which standard sizes fit.',
     default: fixed('40 mm'),
   },
   {
-    id: 'motion', path: null, kind: 'choice', section: 'Shaft and motion',
+    id: 'motion',
+    path: null,
+    kind: 'choice',
+    section: 'Shaft and motion',
     message: 'Does the shaft turn round or swing back and forth?',
     help: 'A swinging shaft never builds an oil film and wears a bushing faster; it decides which checks apply.',
     default: fixed('rotating'),
@@ -116,37 +126,63 @@ export const QUESTIONS: readonly Question[] = [
     ],
   },
   {
-    id: 'speed', path: ['shaft', 'speed'], kind: 'quantity', quantity: 'speed', section: 'Shaft and motion',
+    id: 'speed',
+    path: ['shaft', 'speed'],
+    kind: 'quantity',
+    quantity: 'speed',
+    section: 'Shaft and motion',
     message: 'Shaft speed',
     help: 'Sliding speed for a bushing, life in revolutions for a rolling bearing, film build-up for an oil film.',
-    default: fixed('300 rpm'), when: rotating,
+    default: fixed('300 rpm'),
+    when: rotating,
   },
   {
-    id: 'oscillationAngle', path: ['shaft', 'oscillation', 'angle'], kind: 'quantity', quantity: 'angle', section: 'Shaft and motion',
+    id: 'oscillationAngle',
+    path: ['shaft', 'oscillation', 'angle'],
+    kind: 'quantity',
+    quantity: 'angle',
+    section: 'Shaft and motion',
     message: 'Total swing angle (end to end)',
     help: 'With the frequency, gives the mean sliding speed and the travel per cycle.',
-    default: fixed('90 deg'), when: oscillating,
+    default: fixed('90 deg'),
+    when: oscillating,
   },
   {
-    id: 'oscillationFrequency', path: ['shaft', 'oscillation', 'frequency'], kind: 'quantity', quantity: 'frequency', section: 'Shaft and motion',
+    id: 'oscillationFrequency',
+    path: ['shaft', 'oscillation', 'frequency'],
+    kind: 'quantity',
+    quantity: 'frequency',
+    section: 'Shaft and motion',
     message: 'Swing frequency (full back-and-forth cycles per second)',
     help: 'How often the swing repeats: sets sliding distance, wear and heat.',
-    default: fixed('1 Hz'), when: oscillating,
+    default: fixed('1 Hz'),
+    when: oscillating,
   },
   {
-    id: 'radial', path: ['load', 'radial'], kind: 'quantity', quantity: 'force', section: 'Loads',
+    id: 'radial',
+    path: ['load', 'radial'],
+    kind: 'quantity',
+    quantity: 'force',
+    section: 'Loads',
     message: 'Radial load on this support',
     help: 'The force across the shaft that the support carries: drives pressure, bearing life and film thickness.',
     default: fixed('2 kN'),
   },
   {
-    id: 'axial', path: ['load', 'axial'], kind: 'quantity', quantity: 'force', section: 'Loads',
+    id: 'axial',
+    path: ['load', 'axial'],
+    kind: 'quantity',
+    quantity: 'force',
+    section: 'Loads',
     message: 'Axial (thrust) load',
     help: 'Force along the shaft: a plain bushing needs a thrust face for it; a rolling bearing takes some.',
     default: fixed('0 N'),
   },
   {
-    id: 'shock', path: ['load', 'shock'], kind: 'choice', section: 'Loads',
+    id: 'shock',
+    path: ['load', 'shock'],
+    kind: 'choice',
+    section: 'Loads',
     message: 'How much shock or knocking does the load carry?',
     help: 'Knocks raise the effective load and favour supports that tolerate peaks.',
     default: fixed('none'),
@@ -158,25 +194,41 @@ export const QUESTIONS: readonly Question[] = [
     }),
   },
   {
-    id: 'lifeHours', path: ['life', 'hours'], kind: 'quantity', quantity: 'time', section: 'Life',
+    id: 'lifeHours',
+    path: ['life', 'hours'],
+    kind: 'quantity',
+    quantity: 'time',
+    section: 'Life',
     message: 'Required service life (running hours)',
     help: 'Rolling-bearing fatigue life and bushing wear life are both checked against it.',
     default: fixed('20000 h'),
   },
   {
-    id: 'wearAllowance', path: ['life', 'wearAllowance'], kind: 'quantity', quantity: 'length', section: 'Life',
+    id: 'wearAllowance',
+    path: ['life', 'wearAllowance'],
+    kind: 'quantity',
+    quantity: 'length',
+    section: 'Life',
     message: 'Radial wear a bushing may lose before replacement',
-    help: 'How much play the machine tolerates; sets a plain bushing\'s wear life.',
+    help: "How much play the machine tolerates; sets a plain bushing's wear life.",
     default: fixed('0.25 mm'),
   },
   {
-    id: 'maxLength', path: ['space', 'maxLength'], kind: 'quantity', quantity: 'length', section: 'Space',
+    id: 'maxLength',
+    path: ['space', 'maxLength'],
+    kind: 'quantity',
+    quantity: 'length',
+    section: 'Space',
     message: 'Axial space for the support (longest it may be)',
     help: 'Limits bushing and journal length and the width of a rolling bearing.',
     default: fromDiameter(1, '40 mm'),
   },
   {
-    id: 'maxOuterDiameter', path: ['space', 'maxOuterDiameter'], kind: 'quantity', quantity: 'length', section: 'Space',
+    id: 'maxOuterDiameter',
+    path: ['space', 'maxOuterDiameter'],
+    kind: 'quantity',
+    quantity: 'length',
+    section: 'Space',
     message: 'Radial space: largest housing bore (outer diameter)',
     help: 'Limits the wall of a bushing and the outer ring of a rolling bearing.',
     // 2.5 × the bore leaves room for a standard series-02 or -03 ball bearing of that bore (ISO 15 proportions, from memory).
@@ -189,11 +241,16 @@ export const QUESTIONS: readonly Question[] = [
       } catch {
         return undefined; // an unreadable diameter is reported at its own question
       }
-      return od > d ? undefined : `got ${show(value)}, not more than the shaft diameter ${show(a.diameter)}; expected a housing bore larger than the shaft`;
+      return od > d
+        ? undefined
+        : `got ${show(value)}, not more than the shaft diameter ${show(a.diameter)}; expected a housing bore larger than the shaft`;
     },
   },
   {
-    id: 'supply', path: ['lubrication', 'supply'], kind: 'choice', section: 'Lubrication',
+    id: 'supply',
+    path: ['lubrication', 'supply'],
+    kind: 'choice',
+    section: 'Lubrication',
     message: 'What lubrication can the machine supply at this support?',
     help: 'An oil-film bearing needs a steady oil supply; a bushing may run dry; a rolling bearing needs grease or oil.',
     default: fixed('none'),
@@ -205,25 +262,42 @@ export const QUESTIONS: readonly Question[] = [
     }),
   },
   {
-    id: 'oil', path: ['lubrication', 'oil'], kind: 'choice', section: 'Lubrication',
+    id: 'oil',
+    path: ['lubrication', 'oil'],
+    kind: 'choice',
+    section: 'Lubrication',
     message: 'Which oil (ISO viscosity grade)?',
     help: 'Its viscosity at running temperature sets the film thickness and friction of an oil film.',
-    default: defaultOil, choices: oilChoices, when: hasOil,
+    default: defaultOil,
+    choices: oilChoices,
+    when: hasOil,
   },
   {
-    id: 'inletTemperature', path: ['lubrication', 'inletTemperature'], kind: 'quantity', quantity: 'temperature', section: 'Temperatures',
+    id: 'inletTemperature',
+    path: ['lubrication', 'inletTemperature'],
+    kind: 'quantity',
+    quantity: 'temperature',
+    section: 'Temperatures',
     message: 'Lubricant temperature where it reaches the support',
     help: 'Viscosity falls fast with temperature: it decides film thickness and rolling-bearing lubrication quality.',
-    default: fixed('40 degC'), when: hasLubricant,
+    default: fixed('40 degC'),
+    when: hasLubricant,
   },
   {
-    id: 'ambient', path: ['environment', 'ambient'], kind: 'quantity', quantity: 'temperature', section: 'Temperatures',
+    id: 'ambient',
+    path: ['environment', 'ambient'],
+    kind: 'quantity',
+    quantity: 'temperature',
+    section: 'Temperatures',
     message: 'Ambient temperature around the support',
     help: 'A bushing sheds its friction heat to the surroundings; a hot machine leaves less margin.',
     default: fixed('25 degC'),
   },
   {
-    id: 'contamination', path: ['environment', 'contamination'], kind: 'choice', section: 'Environment',
+    id: 'contamination',
+    path: ['environment', 'contamination'],
+    kind: 'choice',
+    section: 'Environment',
     message: 'How clean are the surroundings?',
     help: 'Dirt shortens rolling-bearing life and speeds up bushing wear.',
     default: fixed('normal'),
@@ -235,19 +309,23 @@ export const QUESTIONS: readonly Question[] = [
     }),
   },
   {
-    id: 'startsPerHour', path: ['environment', 'startsPerHour'], kind: 'number', section: 'Environment',
+    id: 'startsPerHour',
+    path: ['environment', 'startsPerHour'],
+    kind: 'number',
+    section: 'Environment',
     message: 'Starts per hour',
     help: 'Each start runs an oil-film bearing in metal contact until the film builds up.',
     default: fixed('1'),
   },
-  ...PRIORITIES.map(
-    (p): Question => ({
-      id: `priority.${p}`, path: ['priorities', p], kind: 'number', section: 'Priorities (1 = unimportant … 5 = essential)',
-      message: `Priority: ${p} (1-5)`,
-      help: `Weights the ranking: ${PRIORITY_HELP[p]}.`,
-      default: fixed('3'),
-    }),
-  ),
+  ...PRIORITIES.map((p): Question => ({
+    id: `priority.${p}`,
+    path: ['priorities', p],
+    kind: 'number',
+    section: 'Priorities (1 = unimportant … 5 = essential)',
+    message: `Priority: ${p} (1-5)`,
+    help: `Weights the ranking: ${PRIORITY_HELP[p]}.`,
+    default: fixed('3'),
+  })),
 ];
 
 export function questionById(id: string): Question | undefined {
@@ -313,9 +391,11 @@ export function checkAnswer(q: Question, given: unknown, a: Answers, fromFile = 
     value = Number(value);
   } else if (q.kind === 'quantity' && typeof value === 'string' && !fromFile) {
     const info = KINDS[q.quantity!];
-    if (NUMBER.test(value)) return fail(`got "${value}" without a unit; expected ${info.noun} with its unit, such as ${info.examples}`);
+    if (NUMBER.test(value))
+      return fail(`got "${value}" without a unit; expected ${info.noun} with its unit, such as ${info.examples}`);
     // The parser reads a lone unit as one of it ("mm" = 1 mm); typed, that is a number lost by editing.
-    if (!/^[-+]?\.?\d/.test(value)) return fail(`got "${value}" without a number; expected ${info.noun} with its unit, such as ${info.examples}`);
+    if (!/^[-+]?\.?\d/.test(value))
+      return fail(`got "${value}" without a number; expected ${info.noun} with its unit, such as ${info.examples}`);
   }
   if (q.path) {
     const r = fieldSchema(q.path).safeParse(value);
@@ -369,7 +449,11 @@ function getPath(obj: unknown, path: readonly string[]): unknown {
  * are not case keys come from `state` (saved beside the keys), or are inferred:
  * a speed in the file means the shaft rotates, an oscillation that it swings.
  */
-export function answersFromCase(doc: unknown, state: Answers = {}, questions: readonly Question[] = QUESTIONS): Answers {
+export function answersFromCase(
+  doc: unknown,
+  state: Answers = {},
+  questions: readonly Question[] = QUESTIONS,
+): Answers {
   const a: Answers = {};
   for (const q of questions) {
     if (!q.path) {

@@ -33,7 +33,13 @@ export type PromptSpec =
       /** Called with the text as it is typed, so an interrupt loses nothing. */
       onDraft: (text: string) => void;
     }
-  | { kind: 'select'; message: string; help: string; default: string; choices: { value: string; name: string; description?: string }[] }
+  | {
+      kind: 'select';
+      message: string;
+      help: string;
+      default: string;
+      choices: { value: string; name: string; description?: string }[];
+    }
   | { kind: 'confirm'; message: string; help: string; default: boolean };
 
 export type Prompter = (spec: PromptSpec) => Promise<string | boolean>;
@@ -54,7 +60,13 @@ export function isInterrupt(e: unknown): boolean {
 function specFor(q: Question, a: Answers, def: string, onDraft: (t: string) => void): PromptSpec {
   if (q.kind === 'choice') {
     const choices = q.choices!().map((c) => ({ ...c }));
-    return { kind: 'select', message: q.message, help: q.help, default: choices.some((c) => c.value === def) ? def : q.default(a), choices };
+    return {
+      kind: 'select',
+      message: q.message,
+      help: q.help,
+      default: choices.some((c) => c.value === def) ? def : q.default(a),
+      choices,
+    };
   }
   return {
     kind: 'input',
@@ -134,19 +146,26 @@ function open(opts: AskOptions, cwd: string, say: (l: string) => void): Session 
     const from = resolve(cwd, opts.resume);
     const file = opts.save !== undefined ? resolve(cwd, opts.save) : from;
     if (file !== from && existsSync(file)) {
-      throw new UsageError(`--save ${opts.save}: already exists; expected a new file name (or leave out --save to continue ${opts.resume} in place)`);
+      throw new UsageError(
+        `--save ${opts.save}: already exists; expected a new file name (or leave out --save to continue ${opts.resume} in place)`,
+      );
     }
     const saved = readSaved(from, opts.resume);
     const answers = answersFromCase(saved.doc, saved.state.steer);
     const p = progress(answers);
-    say(`Resuming ${displayPath(from, cwd)}: ${p.answered} of ${p.total} questions answered.` + (file !== from ? ` Saving to ${displayPath(file, cwd)}.` : ''));
+    say(
+      `Resuming ${displayPath(from, cwd)}: ${p.answered} of ${p.total} questions answered.` +
+        (file !== from ? ` Saving to ${displayPath(file, cwd)}.` : ''),
+    );
     return { file, cwd, document: saved.document, answers, state: saved.state };
   }
   let file: string;
   if (opts.save !== undefined) {
     file = resolve(cwd, opts.save);
     if (existsSync(file)) {
-      throw new UsageError(`--save ${opts.save}: already exists; expected a new file name, or continue that file with: shaftwise ask --resume ${opts.save}`);
+      throw new UsageError(
+        `--save ${opts.save}: already exists; expected a new file name, or continue that file with: shaftwise ask --resume ${opts.save}`,
+      );
     }
   } else {
     file = freeName(resolve(cwd, 'shaftwise-case.yaml'));
@@ -168,7 +187,9 @@ export async function runAsk(opts: AskOptions, deps: AskDeps, hooks: AskHooks = 
   const s = open(opts, cwd, say);
   // Written at once so the name is taken and a Ctrl-C at the first question still leaves a file to resume.
   save(s, false);
-  say(`Answers are saved to ${displayPath(s.file, s.cwd)} as you go. Enter takes the default in brackets; Ctrl-C stops, and ${resumeHint(s)} continues.`);
+  say(
+    `Answers are saved to ${displayPath(s.file, s.cwd)} as you go. Enter takes the default in brackets; Ctrl-C stops, and ${resumeHint(s)} continues.`,
+  );
   const prompt = hooks.prompter ?? (await (await import('./prompts.js')).inquirerPrompter());
 
   const finished = await runQuestions(s, prompt, say);
@@ -184,7 +205,12 @@ export async function runAsk(opts: AskOptions, deps: AskDeps, hooks: AskHooks = 
   if (deps.offerNote) {
     let yes: string | boolean;
     try {
-      yes = await prompt({ kind: 'confirm', message: 'Write the design-review note for this case now?', help: 'The note sets out inputs, checks with margins and why the other options lost.', default: true });
+      yes = await prompt({
+        kind: 'confirm',
+        message: 'Write the design-review note for this case now?',
+        help: 'The note sets out inputs, checks with margins and why the other options lost.',
+        default: true,
+      });
     } catch (e) {
       if (!isInterrupt(e)) throw e;
       say(`\nNo note written. The case is complete in ${displayPath(s.file, s.cwd)}.`);

@@ -1,4 +1,14 @@
-import { closeSync, existsSync, fsyncSync, openSync, readFileSync, renameSync, rmSync, statSync, writeSync } from 'node:fs';
+import {
+  closeSync,
+  existsSync,
+  fsyncSync,
+  openSync,
+  readFileSync,
+  renameSync,
+  rmSync,
+  statSync,
+  writeSync,
+} from 'node:fs';
 import { basename, dirname, extname, join } from 'node:path';
 import { Document, isMap, parseDocument } from 'yaml';
 import { UsageError } from '../errors.js';
@@ -29,7 +39,12 @@ export interface SavedCase {
 
 const STATE_TAG = 'ask-state:';
 /** Header lines this tool writes (and replaces on each save); other comment lines are kept. */
-const OURS = [/^Duty case (being )?written by shaftwise ask/, /^Continue with: shaftwise ask/, /^Run: shaftwise advise/, new RegExp(`^${STATE_TAG}`)];
+const OURS = [
+  /^Duty case (being )?written by shaftwise ask/,
+  /^Continue with: shaftwise ask/,
+  /^Run: shaftwise advise/,
+  new RegExp(`^${STATE_TAG}`),
+];
 
 /** A document for a new case. */
 export function newDocument(): Document {
@@ -60,7 +75,9 @@ export function renderCase(document: Document, state: AskState, file: string, do
   if (!done && state.steer && Object.keys(state.steer).length) keep.steer = state.steer;
   if (!done && state.draft && state.draft.text !== '') keep.draft = state.draft;
   if (Object.keys(keep).length) lines.push(` ${STATE_TAG} ${JSON.stringify(keep)}`);
-  const theirs = (document.commentBefore ?? '').split('\n').filter((l) => l.trim() !== '' && !OURS.some((re) => re.test(l.trim())));
+  const theirs = (document.commentBefore ?? '')
+    .split('\n')
+    .filter((l) => l.trim() !== '' && !OURS.some((re) => re.test(l.trim())));
   document.commentBefore = [...lines, ...theirs].join('\n');
   return document.toString();
 }
@@ -69,26 +86,37 @@ export function renderCase(document: Document, state: AskState, file: string, do
 export function readSaved(file: string, shownAs = file): SavedCase {
   let text: string;
   try {
-    if (statSync(file).isDirectory()) throw new UsageError(`--resume ${shownAs}: is a directory; expected the case file shaftwise ask was writing`);
+    if (statSync(file).isDirectory())
+      throw new UsageError(`--resume ${shownAs}: is a directory; expected the case file shaftwise ask was writing`);
     text = readFileSync(file, 'utf8');
   } catch (e) {
     if (e instanceof UsageError) throw e;
     const code = (e as NodeJS.ErrnoException).code;
     const why = code === 'ENOENT' ? 'no such file' : code === 'EACCES' ? 'permission denied' : (e as Error).message;
-    throw new UsageError(`--resume ${shownAs}: cannot be read (${why}); expected the case file shaftwise ask was writing`);
+    throw new UsageError(
+      `--resume ${shownAs}: cannot be read (${why}); expected the case file shaftwise ask was writing`,
+    );
   }
   // Same limits as the case loader: bounded aliases, duplicate keys are errors.
   const parsed = parseDocument(text, { uniqueKeys: true, prettyErrors: true });
   if (parsed.errors.length) {
-    throw new UsageError(`--resume ${shownAs}: is not valid YAML (${parsed.errors[0]!.message.split('\n')[0]}); expected a case file`);
+    throw new UsageError(
+      `--resume ${shownAs}: is not valid YAML (${parsed.errors[0]!.message.split('\n')[0]}); expected a case file`,
+    );
   }
   const raw: unknown = parsed.toJS({ maxAliasCount: 50 });
   if (raw !== null && raw !== undefined && (typeof raw !== 'object' || Array.isArray(raw))) {
-    throw new UsageError(`--resume ${shownAs}: holds ${Array.isArray(raw) ? 'a list' : `a ${typeof raw}`}; expected a mapping with the case keys (title, shaft, load…)`);
+    throw new UsageError(
+      `--resume ${shownAs}: holds ${Array.isArray(raw) ? 'a list' : `a ${typeof raw}`}; expected a mapping with the case keys (title, shaft, load…)`,
+    );
   }
   const document = raw === null || raw === undefined ? newDocument() : parsed;
   if (document !== parsed) document.commentBefore = parsed.commentBefore ?? parsed.comment ?? null;
-  return { document, doc: (raw ?? {}) as Record<string, unknown>, state: parseState(parsed.commentBefore ?? parsed.comment ?? '') };
+  return {
+    document,
+    doc: (raw ?? {}) as Record<string, unknown>,
+    state: parseState(parsed.commentBefore ?? parsed.comment ?? ''),
+  };
 }
 
 function parseState(comment: string): AskState {
@@ -101,7 +129,9 @@ function parseState(comment: string): AskState {
         const o = s as Record<string, unknown>;
         const out: AskState = {};
         if (o.steer && typeof o.steer === 'object' && !Array.isArray(o.steer)) {
-          out.steer = Object.fromEntries(Object.entries(o.steer).filter(([, v]) => typeof v === 'string' || typeof v === 'number')) as Answers;
+          out.steer = Object.fromEntries(
+            Object.entries(o.steer).filter(([, v]) => typeof v === 'string' || typeof v === 'number'),
+          ) as Answers;
         }
         const d = o.draft as Record<string, unknown> | undefined;
         if (d && typeof d.id === 'string' && typeof d.text === 'string') out.draft = { id: d.id, text: d.text };
@@ -133,8 +163,11 @@ export function writeAtomic(file: string, text: string): void {
   } catch (e) {
     rmSync(tmp, { force: true });
     const code = (e as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such directory' : code === 'EACCES' ? 'permission denied' : (e as Error).message;
-    throw new UsageError(`cannot write the case file ${file} (${why}); expected a writable path (choose one with --save FILE)`);
+    const why =
+      code === 'ENOENT' ? 'no such directory' : code === 'EACCES' ? 'permission denied' : (e as Error).message;
+    throw new UsageError(
+      `cannot write the case file ${file} (${why}); expected a writable path (choose one with --save FILE)`,
+    );
   }
 }
 
@@ -150,5 +183,7 @@ export function freeName(base: string): string {
     const candidate = `${stem}-${n}${ext}`;
     if (!existsSync(candidate)) return candidate;
   }
-  throw new UsageError(`${base} and its numbered versions up to ${MAX_NUMBERED} exist; expected a free name: choose one with --save FILE`);
+  throw new UsageError(
+    `${base} and its numbered versions up to ${MAX_NUMBERED} exist; expected a free name: choose one with --save FILE`,
+  );
 }

@@ -16,10 +16,16 @@ export function registerBatch(program: Command): void {
       try {
         st = statSync(dir);
       } catch {
-        throw new UsageError(`batch: folder "${dir}" does not exist; expected a folder of case files (*.yaml, *.yml, *.json)`);
+        throw new UsageError(
+          `batch: folder "${dir}" does not exist; expected a folder of case files (*.yaml, *.yml, *.json)`,
+        );
       }
-      if (!st.isDirectory()) throw new UsageError(`batch: got "${dir}", which is not a folder; expected a folder of case files (*.yaml, *.yml, *.json)`);
-      if (raw.out === undefined) throw new UsageError('--out: missing; expected the CSV file to write, e.g. --out summary.csv');
+      if (!st.isDirectory())
+        throw new UsageError(
+          `batch: got "${dir}", which is not a folder; expected a folder of case files (*.yaml, *.yml, *.json)`,
+        );
+      if (raw.out === undefined)
+        throw new UsageError('--out: missing; expected the CSV file to write, e.g. --out summary.csv');
       const { runBatch } = await import('../../explore/batch.js');
       const { batchCsv } = await import('../../report/explore/csv.js');
       const { progressBar } = await import('../../report/explore/progress.js');
@@ -34,7 +40,9 @@ export function registerBatch(program: Command): void {
       writeFileSafe(raw.out, batchCsv(rows), { force: raw.force === true, option: '--out' });
       const bad = rows.filter((r) => r.result === 'error');
       const none = rows.filter((r) => r.result === 'fail').length;
-      process.stdout.write(`wrote ${raw.out}: ${rows.length} case${rows.length === 1 ? '' : 's'}, ${rows.length - bad.length - none} with a recommendation, ${none} with none feasible, ${bad.length} failed\n`);
+      process.stdout.write(
+        `wrote ${raw.out}: ${rows.length} case${rows.length === 1 ? '' : 's'}, ${rows.length - bad.length - none} with a recommendation, ${none} with none feasible, ${bad.length} failed\n`,
+      );
       for (const r of bad) process.stderr.write(`shaftwise: ${r.file}: ${r.error}\n`);
       if (bad.length) process.exitCode = EXIT.checkFailed;
     });

@@ -9,43 +9,54 @@ export function registerMap(program: Command): void {
     .option('--out <file>', 'write an SVG (.svg) or self-contained HTML (.html) map instead of the text map')
     .option('--force', 'replace an existing --out file')
     .option('--grid <n>', 'cells per axis, 2 to 200 (default: 60 for --out, 30 for text)')
-    .option('--load <min..max>', 'radial load range of the governing point, e.g. "100N..20kN" (default 0.1× to 10× the case)')
-    .option('--speed <min..max>', 'speed range of the governing point, e.g. "10rpm..5000rpm" (default 0.1× to 10× the case)')
+    .option(
+      '--load <min..max>',
+      'radial load range of the governing point, e.g. "100N..20kN" (default 0.1× to 10× the case)',
+    )
+    .option(
+      '--speed <min..max>',
+      'speed range of the governing point, e.g. "10rpm..5000rpm" (default 0.1× to 10× the case)',
+    )
     .exitOverride()
-    .action(async (file: string, raw: { out?: string; force?: boolean; grid?: string; load?: string; speed?: string }) => {
-      const { UsageError } = await import('../errors.js');
-      const { parseGrid, parseRange } = await import('../../explore/axes.js');
-      let kind: 'svg' | 'html' | 'text' = 'text';
-      if (raw.out !== undefined) {
-        const m = /\.(svg|html?)$/i.exec(raw.out);
-        if (!m) throw new UsageError(`--out: got "${raw.out}"; expected a file name ending in .svg or .html`);
-        kind = m[1]!.toLowerCase() === 'svg' ? 'svg' : 'html';
-      }
-      const grid = parseGrid(raw.grid, kind === 'text' ? 30 : 60);
-      const load = raw.load === undefined ? undefined : parseRange('--load', raw.load, 'force', '100N..20kN');
-      const speed = raw.speed === undefined ? undefined : parseRange('--speed', raw.speed, 'speed', '10rpm..5000rpm');
-      const { loadCaseFile } = await import('../../case/load.js');
-      const loaded = loadCaseFile(file);
-      const { computeMap } = await import('../../explore/map.js');
-      const { progressBar } = await import('../../report/explore/progress.js');
-      const bar = progressBar('map');
-      const opts: Parameters<typeof computeMap>[2] = { grid, onProgress: bar.update };
-      if (load) opts.load = load;
-      if (speed) opts.speed = speed;
-      let m;
-      try {
-        m = await computeMap(loaded.case, loaded.assumed, opts);
-      } finally {
-        bar.done();
-      }
-      if (kind === 'text') {
-        const { mapText } = await import('../../report/explore/map-text.js');
-        process.stdout.write(mapText(m) + '\n');
-        return;
-      }
-      const { mapSvg, mapHtml } = await import('../../report/explore/map-svg.js');
-      const { writeFileSafe } = await import('../write-file.js');
-      writeFileSafe(raw.out!, kind === 'svg' ? mapSvg(m) : mapHtml(m), { force: raw.force === true, option: '--out' });
-      process.stdout.write(`wrote ${raw.out}\n`);
-    });
+    .action(
+      async (file: string, raw: { out?: string; force?: boolean; grid?: string; load?: string; speed?: string }) => {
+        const { UsageError } = await import('../errors.js');
+        const { parseGrid, parseRange } = await import('../../explore/axes.js');
+        let kind: 'svg' | 'html' | 'text' = 'text';
+        if (raw.out !== undefined) {
+          const m = /\.(svg|html?)$/i.exec(raw.out);
+          if (!m) throw new UsageError(`--out: got "${raw.out}"; expected a file name ending in .svg or .html`);
+          kind = m[1]!.toLowerCase() === 'svg' ? 'svg' : 'html';
+        }
+        const grid = parseGrid(raw.grid, kind === 'text' ? 30 : 60);
+        const load = raw.load === undefined ? undefined : parseRange('--load', raw.load, 'force', '100N..20kN');
+        const speed = raw.speed === undefined ? undefined : parseRange('--speed', raw.speed, 'speed', '10rpm..5000rpm');
+        const { loadCaseFile } = await import('../../case/load.js');
+        const loaded = loadCaseFile(file);
+        const { computeMap } = await import('../../explore/map.js');
+        const { progressBar } = await import('../../report/explore/progress.js');
+        const bar = progressBar('map');
+        const opts: Parameters<typeof computeMap>[2] = { grid, onProgress: bar.update };
+        if (load) opts.load = load;
+        if (speed) opts.speed = speed;
+        let m;
+        try {
+          m = await computeMap(loaded.case, loaded.assumed, opts);
+        } finally {
+          bar.done();
+        }
+        if (kind === 'text') {
+          const { mapText } = await import('../../report/explore/map-text.js');
+          process.stdout.write(mapText(m) + '\n');
+          return;
+        }
+        const { mapSvg, mapHtml } = await import('../../report/explore/map-svg.js');
+        const { writeFileSafe } = await import('../write-file.js');
+        writeFileSafe(raw.out!, kind === 'svg' ? mapSvg(m) : mapHtml(m), {
+          force: raw.force === true,
+          option: '--out',
+        });
+        process.stdout.write(`wrote ${raw.out}\n`);
+      },
+    );
 }

@@ -5,7 +5,9 @@ import { formatOption } from '../options.js';
 export function registerSensitivity(program: Command): void {
   program
     .command('sensitivity')
-    .description('change load, speed, life target, inlet temperature, journal clearance and bushing wear factor by ±10 % and ±25 %; show the margins that move and where the recommendation flips')
+    .description(
+      'change load, speed, life target, inlet temperature, journal clearance and bushing wear factor by ±10 % and ±25 %; show the margins that move and where the recommendation flips',
+    )
     .argument('<case>', 'duty case file (YAML or JSON)')
     .addOption(formatOption(['text', 'json', 'html']))
     .option('--out <file>', 'write to this file instead of standard output')
@@ -14,13 +16,19 @@ export function registerSensitivity(program: Command): void {
     .action(async (file: string, raw: { format?: string; out?: string; force?: boolean }) => {
       const { UsageError } = await import('../errors.js');
       const format = raw.format ?? 'text';
-      if (!['text', 'json', 'html'].includes(format)) throw new UsageError(`--format: got "${format}"; expected one of: text, json, html`);
+      if (!['text', 'json', 'html'].includes(format))
+        throw new UsageError(`--format: got "${format}"; expected one of: text, json, html`);
       const { loadCaseFile } = await import('../../case/load.js');
       const loaded = loadCaseFile(file);
       const { computeSensitivity } = await import('../../explore/sensitivity.js');
       const r = await computeSensitivity(loaded.case, loaded.assumed);
       const rep = await import('../../report/explore/sensitivity-report.js');
-      const text = format === 'json' ? rep.sensitivityJson(r) : format === 'html' ? rep.sensitivityHtml(r) : rep.sensitivityText(r);
+      const text =
+        format === 'json'
+          ? rep.sensitivityJson(r)
+          : format === 'html'
+            ? rep.sensitivityHtml(r)
+            : rep.sensitivityText(r);
       if (raw.out === undefined) {
         process.stdout.write(text.endsWith('\n') ? text : text + '\n');
         return;

@@ -31,6 +31,18 @@ const n = (x: number | null, digits = 4) => (x === null || !Number.isFinite(x) ?
 export function batchCsv(rows: BatchRow[]): string {
   return csv(
     BATCH_HEAD,
-    rows.map((r) => [r.file, r.title, r.result, r.recommendation, n(r.score), n(r.lifeHours), r.design, r.feasible.bushing, r.feasible.rolling, r.feasible.journal, r.error]),
+    rows.map((r) => [
+      r.file,
+      r.title,
+      r.result,
+      r.recommendation,
+      n(r.score),
+      n(r.lifeHours),
+      r.design,
+      r.feasible.bushing,
+      r.feasible.rolling,
+      r.feasible.journal,
+      r.error,
+    ]),
   );
 }

@@ -1,6 +1,10 @@
 /** Axis and legend numbers for the explore reports: SI with an engineering multiple, 3 figures. */
 export function fmtLoad(n: number): string {
-  return n >= 1e6 ? `${+(n / 1e6).toPrecision(3)} MN` : n >= 1e3 ? `${+(n / 1e3).toPrecision(3)} kN` : `${+n.toPrecision(3)} N`;
+  return n >= 1e6
+    ? `${+(n / 1e6).toPrecision(3)} MN`
+    : n >= 1e3
+      ? `${+(n / 1e3).toPrecision(3)} kN`
+      : `${+n.toPrecision(3)} N`;
 }
 
 /** Speed from rev/s to r/min. */

@@ -12,7 +12,8 @@ export function caseCell(m: MapResult): { i: number; j: number } | null {
   const near = (xs: number[], x: number) => {
     if (x < xs[0]! * 0.999 || x > xs[xs.length - 1]! * 1.001) return -1;
     let best = 0;
-    for (let k = 1; k < xs.length; k++) if (Math.abs(Math.log(xs[k]! / x)) < Math.abs(Math.log(xs[best]! / x))) best = k;
+    for (let k = 1; k < xs.length; k++)
+      if (Math.abs(Math.log(xs[k]! / x)) < Math.abs(Math.log(xs[best]! / x))) best = k;
     return best;
   };
   const i = near(m.loads, m.reference.load);
@@ -27,7 +28,8 @@ function tickCells(xs: number[], scale = 1): Map<number, number> {
   for (const { value } of t) {
     let best = 0;
     const v = value / scale;
-    for (let k = 1; k < xs.length; k++) if (Math.abs(Math.log(xs[k]! / v)) < Math.abs(Math.log(xs[best]! / v))) best = k;
+    for (let k = 1; k < xs.length; k++)
+      if (Math.abs(Math.log(xs[k]! / v)) < Math.abs(Math.log(xs[best]! / v))) best = k;
     if (!out.has(best)) out.set(best, value);
   }
   return out;
@@ -87,7 +89,9 @@ export function mapText(m: MapResult): string {
     lines.push(OPTIONS.map((_, k) => cols.map((j) => (m.cells[i]![j]!.feasible[k] ? '#' : '.')).join('')).join('   '));
   }
   lines.push('');
-  lines.push(`Ranges: load ${fmtLoad(m.ranges.load[0])} to ${fmtLoad(m.ranges.load[1])}${m.ranges.loadGiven ? '' : ' (0.1× to 10× the case)'}, speed ${fmtSpeed(m.ranges.speed[0])} to ${fmtSpeed(m.ranges.speed[1])}${m.ranges.speedGiven ? '' : ' (0.1× to 10× the case)'}; ${m.loads.length} × ${n} cells.`);
+  lines.push(
+    `Ranges: load ${fmtLoad(m.ranges.load[0])} to ${fmtLoad(m.ranges.load[1])}${m.ranges.loadGiven ? '' : ' (0.1× to 10× the case)'}, speed ${fmtSpeed(m.ranges.speed[0])} to ${fmtSpeed(m.ranges.speed[1])}${m.ranges.speedGiven ? '' : ' (0.1× to 10× the case)'}; ${m.loads.length} × ${n} cells.`,
+  );
   for (const note of m.notes) lines.push(`- ${note}`);
   lines.push(`- Journal designs used: ${m.journal.designs.map((d) => d.label).join('; ')}.`);
   return lines.join('\n');

@@ -9,7 +9,10 @@ export interface Progress {
   done: () => void;
 }
 
-export function progressBar(label: string, opts: { stream?: NodeJS.WriteStream; delayMs?: number; width?: number } = {}): Progress {
+export function progressBar(
+  label: string,
+  opts: { stream?: NodeJS.WriteStream; delayMs?: number; width?: number } = {},
+): Progress {
   const stream = opts.stream ?? process.stderr;
   const delay = opts.delayMs ?? 1000;
   const width = opts.width ?? 30;
@@ -25,7 +28,9 @@ export function progressBar(label: string, opts: { stream?: NodeJS.WriteStream; 
       shown = true;
       const f = total > 0 ? done / total : 1;
       const full = Math.round(f * width);
-      stream.write(`\r${label} [${'#'.repeat(full)}${'.'.repeat(width - full)}] ${String(Math.round(f * 100)).padStart(3)} % ${done}/${total}`);
+      stream.write(
+        `\r${label} [${'#'.repeat(full)}${'.'.repeat(width - full)}] ${String(Math.round(f * 100)).padStart(3)} % ${done}/${total}`,
+      );
     },
     done() {
       if (shown) stream.write('\r\u001b[2K');

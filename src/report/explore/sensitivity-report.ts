@@ -10,10 +10,26 @@ const stepText = (s: number) => `${s > 0 ? '+' : ''}${Math.round(s * 100)} %`;
 /** The sensitivity as a text table: one row per parameter and step, with each option's governing margin. */
 export function sensitivityText(r: SensitivityResult): string {
   const head = ['parameter', 'change', 'value', 'recommended', ...OPTIONS.map((o) => `${o} margin`), ''];
-  const rows: string[][] = [['(the case)', '0 %', '', r.recommendation ?? 'none', ...OPTIONS.map((o) => `${pct(r.margins[o].margin)} ${r.margins[o].check}`), '']];
+  const rows: string[][] = [
+    [
+      '(the case)',
+      '0 %',
+      '',
+      r.recommendation ?? 'none',
+      ...OPTIONS.map((o) => `${pct(r.margins[o].margin)} ${r.margins[o].check}`),
+      '',
+    ],
+  ];
   for (const p of r.parameters) {
     for (const v of p.variations) {
-      rows.push([p.label, stepText(v.step), fmt(v.value, p.unit, 'SI'), v.recommendation ?? 'none', ...OPTIONS.map((o) => `${pct(v.margins[o].margin)} ${v.margins[o].check}`), v.flip ? 'FLIP' : '']);
+      rows.push([
+        p.label,
+        stepText(v.step),
+        fmt(v.value, p.unit, 'SI'),
+        v.recommendation ?? 'none',
+        ...OPTIONS.map((o) => `${pct(v.margins[o].margin)} ${v.margins[o].check}`),
+        v.flip ? 'FLIP' : '',
+      ]);
     }
   }
   return [
@@ -22,7 +38,9 @@ export function sensitivityText(r: SensitivityResult): string {
     '',
     table(head, rows),
     '',
-    r.flips.length ? `The recommendation flips at:\n${r.flips.map((f) => `  - ${f}`).join('\n')}` : 'The recommendation does not flip within ±25 % of any parameter.',
+    r.flips.length
+      ? `The recommendation flips at:\n${r.flips.map((f) => `  - ${f}`).join('\n')}`
+      : 'The recommendation does not flip within ±25 % of any parameter.',
     '',
     ...r.notes.map((n) => `- ${n}`),
   ].join('\n');
@@ -50,8 +68,12 @@ export function sensitivityHtml(r: SensitivityResult): string {
     `<h1>Sensitivity of the advice</h1><p>${esc(r.title)} — recommended at the case's values: <b>${esc(r.recommendation ?? 'none feasible')}</b></p>`,
     svg,
     '<h2>Flips</h2>',
-    r.flips.length ? `<ul>${r.flips.map((f) => `<li>${esc(f)}</li>`).join('')}</ul>` : '<p>The recommendation does not flip within ±25 % of any parameter.</p>',
-    '<h2>Numbers</h2><table><tr><th>parameter</th><th>change</th><th>value</th><th>recommended</th>' + OPTIONS.map((o) => `<th>${o} margin</th>`).join('') + '</tr>',
+    r.flips.length
+      ? `<ul>${r.flips.map((f) => `<li>${esc(f)}</li>`).join('')}</ul>`
+      : '<p>The recommendation does not flip within ±25 % of any parameter.</p>',
+    '<h2>Numbers</h2><table><tr><th>parameter</th><th>change</th><th>value</th><th>recommended</th>' +
+      OPTIONS.map((o) => `<th>${o} margin</th>`).join('') +
+      '</tr>',
     ...r.parameters.flatMap((p) =>
       p.variations.map(
         (v) =>
@@ -70,7 +92,11 @@ export function sensitivityHtml(r: SensitivityResult): string {
 
 function tornado(r: SensitivityResult, o: OptionName): string {
   const base = r.margins[o].margin;
-  const W = 860, L = 300, P = 520, rowH = 26, top = 44;
+  const W = 860,
+    L = 300,
+    P = 520,
+    rowH = 26,
+    top = 44;
   const ps = r.parameters;
   const H = top + ps.length * rowH + 40;
   const vals = ps.flatMap((p) => p.variations.map((v) => v.margins[o].margin)).filter((x): x is number => x !== null);
@@ -81,36 +107,62 @@ function tornado(r: SensitivityResult, o: OptionName): string {
   const span = hi - lo || 1;
   const x = (m: number) => L + ((Math.max(lo, Math.min(hi, m)) - lo) / span) * P;
   const out: string[] = [];
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" role="img" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" font-family="Helvetica, Arial, sans-serif" font-size="12">`);
-  out.push(`<defs><pattern id="hatch-${o}" width="5" height="5" patternUnits="userSpaceOnUse"><rect width="5" height="5" fill="#3a3a58"/><path d="M0 5 L5 0" stroke="#ffffff" stroke-width="0.9"/></pattern></defs>`);
-  out.push(`<text x="10" y="20" font-size="14" font-weight="bold">${esc(`${o}: governing margin ${pct(base)} (${r.margins[o].check})`)}</text>`);
+  out.push(
+    `<svg xmlns="http://www.w3.org/2000/svg" role="img" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
+  );
+  out.push(
+    `<defs><pattern id="hatch-${o}" width="5" height="5" patternUnits="userSpaceOnUse"><rect width="5" height="5" fill="#3a3a58"/><path d="M0 5 L5 0" stroke="#ffffff" stroke-width="0.9"/></pattern></defs>`,
+  );
+  out.push(
+    `<text x="10" y="20" font-size="14" font-weight="bold">${esc(`${o}: governing margin ${pct(base)} (${r.margins[o].check})`)}</text>`,
+  );
   out.push(`<text x="${L}" y="36" fill="#333">light bar: −25 %, hatched bar: +25 %, ticks: ±10 %</text>`);
   ps.forEach((p, k) => {
     const y = top + k * rowH;
     const v = (s: number) => p.variations.find((q) => q.step === s)!;
-    out.push(`<text x="${L - 8}" y="${y + 16}" text-anchor="end">${esc(p.label.length > 44 ? p.label.slice(0, 43) + '…' : p.label)}</text>`);
-    for (const [s, fill, dy] of [[-0.25, '#c6c6d6', 3], [0.25, `url(#hatch-${o})`, 12]] as const) {
+    out.push(
+      `<text x="${L - 8}" y="${y + 16}" text-anchor="end">${esc(p.label.length > 44 ? p.label.slice(0, 43) + '…' : p.label)}</text>`,
+    );
+    for (const [s, fill, dy] of [
+      [-0.25, '#c6c6d6', 3],
+      [0.25, `url(#hatch-${o})`, 12],
+    ] as const) {
       const m = v(s).margins[o].margin;
       if (m === null) continue;
-      const a = x(base), b = x(m);
-      out.push(`<rect x="${Math.min(a, b).toFixed(1)}" y="${y + dy}" width="${Math.max(1, Math.abs(b - a)).toFixed(1)}" height="9" fill="${fill}" stroke="#222" stroke-width="0.5"/>`);
+      const a = x(base),
+        b = x(m);
+      out.push(
+        `<rect x="${Math.min(a, b).toFixed(1)}" y="${y + dy}" width="${Math.max(1, Math.abs(b - a)).toFixed(1)}" height="9" fill="${fill}" stroke="#222" stroke-width="0.5"/>`,
+      );
     }
-    for (const [s, dy] of [[-0.1, 3], [0.1, 12]] as const) {
+    for (const [s, dy] of [
+      [-0.1, 3],
+      [0.1, 12],
+    ] as const) {
       const m = v(s).margins[o].margin;
-      if (m !== null) out.push(`<line x1="${x(m).toFixed(1)}" y1="${y + dy - 1}" x2="${x(m).toFixed(1)}" y2="${y + dy + 10}" stroke="#000" stroke-width="1.5"/>`);
+      if (m !== null)
+        out.push(
+          `<line x1="${x(m).toFixed(1)}" y1="${y + dy - 1}" x2="${x(m).toFixed(1)}" y2="${y + dy + 10}" stroke="#000" stroke-width="1.5"/>`,
+        );
     }
     const flipped = p.variations.filter((q) => q.flip).map((q) => stepText(q.step));
     if (flipped.length) out.push(`<text x="${L + P + 8}" y="${y + 16}">◆ flips at ${esc(flipped.join(', '))}</text>`);
   });
   const y1 = top + ps.length * rowH;
-  out.push(`<line x1="${x(0).toFixed(1)}" y1="${top - 4}" x2="${x(0).toFixed(1)}" y2="${y1}" stroke="#000" stroke-width="2.2"/>`);
-  out.push(`<line x1="${x(base).toFixed(1)}" y1="${top - 4}" x2="${x(base).toFixed(1)}" y2="${y1}" stroke="#555" stroke-dasharray="3 2"/>`);
+  out.push(
+    `<line x1="${x(0).toFixed(1)}" y1="${top - 4}" x2="${x(0).toFixed(1)}" y2="${y1}" stroke="#000" stroke-width="2.2"/>`,
+  );
+  out.push(
+    `<line x1="${x(base).toFixed(1)}" y1="${top - 4}" x2="${x(base).toFixed(1)}" y2="${y1}" stroke="#555" stroke-dasharray="3 2"/>`,
+  );
   out.push(`<line x1="${L}" y1="${y1}" x2="${L + P}" y2="${y1}" stroke="#222"/>`);
   for (let t = 0; t <= 4; t++) {
     const m = lo + (span * t) / 4;
     out.push(`<text x="${x(m).toFixed(1)}" y="${y1 + 16}" text-anchor="middle">${pct(m)}</text>`);
   }
-  out.push(`<text x="${L + P / 2}" y="${y1 + 32}" text-anchor="middle">governing margin (0 = at the limit; heavy line)</text>`);
+  out.push(
+    `<text x="${L + P / 2}" y="${y1 + 32}" text-anchor="middle">governing margin (0 = at the limit; heavy line)</text>`,
+  );
   out.push('</svg>');
   return out.join('\n');
 }

@@ -29,7 +29,8 @@ const range = (a: number, b: number, n: number, log: boolean) =>
 
 /** The bushing material the note shows: the best, else the nearest miss the advisor named. */
 export function shownMaterial(a: AdviceResult): BushingMaterialResult | undefined {
-  const id = a.checks.bushing.best ?? (a.ranking.find((r) => r.option === 'bushing')?.design['material'] as string | undefined);
+  const id =
+    a.checks.bushing.best ?? (a.ranking.find((r) => r.option === 'bushing')?.design['material'] as string | undefined);
   return a.checks.bushing.materials.find((m) => m.id === id) ?? a.checks.bushing.materials[0];
 }
 
@@ -79,7 +80,12 @@ export function rollingLifeChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
   const n = r.equivalentSpeed;
   const cands = [...r.candidates].sort((x, y) => Number(y.id === r.best) - Number(x.id === r.best)).slice(0, 6);
   if (!(n > 0) || cands.length === 0 || r.equivalentLoad === null || !(r.equivalentLoad > 0))
-    return { id, spec: null, caption: 'No rotation, no load or no candidate bearing: the basic rating life is not defined, so there is no life chart.' };
+    return {
+      id,
+      spec: null,
+      caption:
+        'No rotation, no load or no candidate bearing: the basic rating life is not defined, so there is no life chart.',
+    };
   const Pop = r.equivalentLoad;
   const loads = range(0.2 * Pop, 5 * Pop, 25, true);
   const series = cands.map((k) => {
@@ -89,7 +95,10 @@ export function rollingLifeChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
       const h = L10 === null ? null : lifeHours(L10, n);
       return h === null ? [] : [[disp(P, 'N', u), h] as const];
     });
-    return { name: `${k.id}, ${k.type}, C ${fmt(k.dynamicRating, 'N', u)}, p = ${k.type === 'ball' ? '3' : '10/3'}${k.id === r.best ? ' (chosen)' : ''}`, points: pts };
+    return {
+      name: `${k.id}, ${k.type}, C ${fmt(k.dynamicRating, 'N', u)}, p = ${k.type === 'ball' ? '3' : '10/3'}${k.id === r.best ? ' (chosen)' : ''}`,
+      points: pts,
+    };
   });
   const allH = series.flatMap((s) => s.points.map((p) => p[1]));
   const hMin = Math.min(...allH, c.life.hours);
@@ -117,7 +126,13 @@ export function rollingLifeChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
 /** The lubricant of the chosen journal design, as the check reports it (its grade, or the case's fixed viscosity). */
 function journalFluid(c: CaseSI, grade: number | null): Fluid | null {
   const crit = journalCriteria();
-  if (c.lubrication.viscosity !== undefined) return { kind: 'fixed', viscosity: c.lubrication.viscosity, density: crit.fixedDensity, specificHeat: crit.fixedSpecificHeat };
+  if (c.lubrication.viscosity !== undefined)
+    return {
+      kind: 'fixed',
+      viscosity: c.lubrication.viscosity,
+      density: crit.fixedDensity,
+      specificHeat: crit.fixedSpecificHeat,
+    };
   const row = grade === null ? undefined : oilGrade(grade);
   return row ? { kind: 'oil', oil: row } : null;
 }
@@ -138,7 +153,14 @@ export function journalSpeedCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): N
   const speeds = range(0.2 * N, 3 * N, 21, true);
   const rows = speeds.flatMap((s) => {
     try {
-      const e = evaluateDesign(D, cand, [{ share: 1, load: gov.load, speed: s }], c.lubrication.inletTemperature, gov.load, crit);
+      const e = evaluateDesign(
+        D,
+        cand,
+        [{ share: 1, load: gov.load, speed: s }],
+        c.lubrication.inletTemperature,
+        gov.load,
+        crit,
+      );
       return [{ s, r: e.governing.result }];
     } catch {
       return []; // a point the kernel cannot evaluate is left out, never invented
@@ -149,7 +171,9 @@ export function journalSpeedCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): N
   const h = rows.map((x) => x.r.minFilmThickness);
   const hAllow = j.allowableFilmThickness;
   const filmLog = spansDecades(Math.min(...h, hAllow), Math.max(...h, hAllow));
-  const runaway = rows.some((x) => x.r.thermalRunaway) ? ' Points marked as thermal runaway by the kernel carry temperatures that are lower bounds.' : '';
+  const runaway = rows.some((x) => x.r.thermalRunaway)
+    ? ' Points marked as thermal runaway by the kernel carry temperatures that are lower bounds.'
+    : '';
   const where = `the chosen design (${fmt(j.length, 'm', u)} long, radial clearance ${fmt(j.radialClearance, 'm', u)}, ${j.oil}) at the governing load ${fmt(gov.load, 'N', u)}`;
   const opLine = { axis: 'x' as const, value: rpm(N), label: `operating speed ${fmt(N, 'rev/s', u)}` };
   return [
@@ -160,7 +184,12 @@ export function journalSpeedCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): N
         title: 'Journal bearing: minimum film thickness against speed',
         x: { label: 'Shaft speed', unit: displayUnit('rev/s', u), log: true },
         y: { label: 'Minimum film thickness h0', unit: displayUnit(hu, u), log: filmLog },
-        series: [{ name: 'h0, finite-length Reynolds solution with thermal balance', points: rows.map((x) => [rpm(x.s), disp(x.r.minFilmThickness, hu, u)] as const) }],
+        series: [
+          {
+            name: 'h0, finite-length Reynolds solution with thermal balance',
+            points: rows.map((x) => [rpm(x.s), disp(x.r.minFilmThickness, hu, u)] as const),
+          },
+        ],
         refs: [{ axis: 'y', value: disp(hAllow, hu, u), label: `allowable h0 ${fmt(hAllow, 'm', u)}` }, opLine],
       },
       caption: `Minimum film thickness of ${where}, from 0.2 to 3 times the operating speed, each point computed by the journal kernel (evaluateDesign: load matching and thermal balance). The film is adequate above the allowable line.`,
@@ -173,10 +202,23 @@ export function journalSpeedCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): N
         x: { label: 'Shaft speed', unit: displayUnit('rev/s', u), log: true },
         y: { label: 'Temperature', unit: displayUnit('degC', u) },
         series: [
-          { name: 'effective film temperature', points: rows.map((x) => [rpm(x.s), disp(x.r.effectiveTemperature, 'degC', u)] as const) },
-          { name: 'maximum (outlet) temperature estimate', points: rows.map((x) => [rpm(x.s), disp(x.r.maxTemperature, 'degC', u)] as const) },
+          {
+            name: 'effective film temperature',
+            points: rows.map((x) => [rpm(x.s), disp(x.r.effectiveTemperature, 'degC', u)] as const),
+          },
+          {
+            name: 'maximum (outlet) temperature estimate',
+            points: rows.map((x) => [rpm(x.s), disp(x.r.maxTemperature, 'degC', u)] as const),
+          },
         ],
-        refs: [{ axis: 'y', value: disp(crit.maxTemperature, 'degC', u), label: `allowable maximum ${fmt(crit.maxTemperature, 'degC', u)}` }, opLine],
+        refs: [
+          {
+            axis: 'y',
+            value: disp(crit.maxTemperature, 'degC', u),
+            label: `allowable maximum ${fmt(crit.maxTemperature, 'degC', u)}`,
+          },
+          opLine,
+        ],
       },
       caption: `Effective and maximum film temperature of ${where}, by the journal kernel's thermal balance at each speed. The allowable line applies to the maximum temperature (${crit.sources['maxTemperature'] ?? 'journal criteria'}).${runaway}`,
     },
@@ -186,22 +228,51 @@ export function journalSpeedCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): N
 export function journalPressureChart(a: AdviceResult, u: UnitSystem): NoteChart {
   const j = a.checks.journal;
   const id = 'journal-pressure';
-  if (!j.pressureProfile.length) return { id, spec: null, caption: 'No pressure distribution: no film at the governing point, or the eccentricity is beyond the solved table.' };
+  if (!j.pressureProfile.length)
+    return {
+      id,
+      spec: null,
+      caption:
+        'No pressure distribution: no film at the governing point, or the eccentricity is beyond the solved table.',
+    };
   return {
     id,
     spec: {
       id,
       title: 'Journal bearing: film pressure around the journal',
-      x: { label: 'Angle from the maximum film, in the direction of rotation', unit: '°', min: 0, max: 360, ticks: [0, 60, 120, 180, 240, 300, 360] },
+      x: {
+        label: 'Angle from the maximum film, in the direction of rotation',
+        unit: '°',
+        min: 0,
+        max: 360,
+        ticks: [0, 60, 120, 180, 240, 300, 360],
+      },
       y: { label: 'Film pressure at mid-length', unit: displayUnit('Pa', u) },
-      series: [{ name: `pressure at ε = ${fmtValue(j.eccentricityRatio, '1', u)}`, points: j.pressureProfile.map((p) => [p.angleDeg, disp(p.pressure, 'Pa', u)] as const) }],
-      refs: [{ axis: 'x', value: j.peakPressureAngle, label: `peak ${fmt(j.peakPressure, 'Pa', u)} at ${fmtValue(j.peakPressureAngle, 'deg', u)}°` }],
+      series: [
+        {
+          name: `pressure at ε = ${fmtValue(j.eccentricityRatio, '1', u)}`,
+          points: j.pressureProfile.map((p) => [p.angleDeg, disp(p.pressure, 'Pa', u)] as const),
+        },
+      ],
+      refs: [
+        {
+          axis: 'x',
+          value: j.peakPressureAngle,
+          label: `peak ${fmt(j.peakPressure, 'Pa', u)} at ${fmtValue(j.peakPressureAngle, 'deg', u)}°`,
+        },
+      ],
     },
-    caption: 'Pressure of the oil film at mid-length around the journal at the governing operating point, as solved by the journal kernel (finite-difference Reynolds equation with the Reynolds cavitation condition: zero gauge pressure where the film ruptures).',
+    caption:
+      'Pressure of the oil film at mid-length around the journal at the governing operating point, as solved by the journal kernel (finite-difference Reynolds equation with the Reynolds cavitation condition: zero gauge pressure where the film ruptures).',
   };
 }
 
 /** Every chart of the note, in the order they appear. */
 export function noteCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): NoteChart[] {
-  return [bushingWearChart(a, c, u), rollingLifeChart(a, c, u), ...journalSpeedCharts(a, c, u), journalPressureChart(a, u)];
+  return [
+    bushingWearChart(a, c, u),
+    rollingLifeChart(a, c, u),
+    ...journalSpeedCharts(a, c, u),
+    journalPressureChart(a, u),
+  ];
 }

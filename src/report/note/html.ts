@@ -66,7 +66,9 @@ function block(b: Block): string {
     case 'table': {
       const cap = b.caption ? `<caption>${h(b.caption)}</caption>` : '';
       const head = `<thead><tr>${b.head.map((x) => `<th scope="col">${h(x)}</th>`).join('')}</tr></thead>`;
-      const rows = b.rows.map((r) => `<tr>${r.map((c, i) => cell(c, b.numeric?.includes(i) === true)).join('')}</tr>`).join('\n');
+      const rows = b.rows
+        .map((r) => `<tr>${r.map((c, i) => cell(c, b.numeric?.includes(i) === true)).join('')}</tr>`)
+        .join('\n');
       return `<table>${cap}${head}<tbody>\n${rows}\n</tbody></table>`;
     }
     case 'chart':
@@ -82,7 +84,10 @@ function block(b: Block): string {
 
 export function renderHtml(n: NoteModel): string {
   const sections = n.sections
-    .map((s) => `<section id="${h(s.id)}"${s.pageBreak ? ' class="page-break"' : ''}>\n<h2>${h(s.title)}</h2>\n${s.blocks.map(block).join('\n')}\n</section>`)
+    .map(
+      (s) =>
+        `<section id="${h(s.id)}"${s.pageBreak ? ' class="page-break"' : ''}>\n<h2>${h(s.title)}</h2>\n${s.blocks.map(block).join('\n')}\n</section>`,
+    )
     .join('\n');
   return `<!DOCTYPE html>
 <html lang="en">
@@ -99,7 +104,7 @@ export function renderHtml(n: NoteModel): string {
 </header>
 <p class="summary">${h(n.summary)}</p>
 ${sections}
-<footer>${h('Concept-stage estimate: confirm with the supplier\'s data and by test. Bearing failure can injure people: follow local codes, standards and licensed engineering practice.')}</footer>
+<footer>${h("Concept-stage estimate: confirm with the supplier's data and by test. Bearing failure can injure people: follow local codes, standards and licensed engineering practice.")}</footer>
 </body>
 </html>
 `;

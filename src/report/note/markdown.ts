@@ -7,12 +7,24 @@ import type { Block, Cell, NoteModel } from './model.js';
  * caption and a pointer to the HTML note, which carries them. Every model string is escaped.
  */
 export function renderMarkdown(n: NoteModel): string {
-  const out: string[] = [`# Design-review note: ${escapeMd(n.title)}`, '', `Date: ${n.date} · Units: ${n.units} · Written by shaftwise`, '', `**${escapeMd(n.summary)}**`, ''];
+  const out: string[] = [
+    `# Design-review note: ${escapeMd(n.title)}`,
+    '',
+    `Date: ${n.date} · Units: ${n.units} · Written by shaftwise`,
+    '',
+    `**${escapeMd(n.summary)}**`,
+    '',
+  ];
   for (const s of n.sections) {
     out.push(`## ${escapeMd(s.title)}`, '');
     for (const b of s.blocks) out.push(block(b), '');
   }
-  return out.join('\n').replace(/\n{3,}/g, '\n\n').trimEnd() + '\n';
+  return (
+    out
+      .join('\n')
+      .replace(/\n{3,}/g, '\n\n')
+      .trimEnd() + '\n'
+  );
 }
 
 const cellText = (c: Cell) => escapeMd(typeof c === 'string' ? c : c.text);
@@ -34,6 +46,10 @@ function block(b: Block): string {
     case 'chart':
       return `> **Chart: ${escapeMd(b.chart.spec?.title ?? b.chart.id)}** (drawn in the HTML note: \`--format html\`). ${escapeMd(b.chart.caption)}`;
     case 'signoff':
-      return ['| role | name | signature | date |', '| --- | --- | --- | --- |', ...b.roles.map((r) => `| ${escapeMd(r)} | &nbsp; | &nbsp; | &nbsp; |`)].join('\n');
+      return [
+        '| role | name | signature | date |',
+        '| --- | --- | --- | --- |',
+        ...b.roles.map((r) => `| ${escapeMd(r)} | &nbsp; | &nbsp; | &nbsp; |`),
+      ].join('\n');
   }
 }

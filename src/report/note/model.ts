@@ -47,7 +47,11 @@ export interface NoteOptions {
   caseFile?: string;
 }
 
-export const OPTION_NAMES = { bushing: 'Plain bushing', rolling: 'Rolling bearing', journal: 'Oil-film journal bearing' } as const;
+export const OPTION_NAMES = {
+  bushing: 'Plain bushing',
+  rolling: 'Rolling bearing',
+  journal: 'Oil-film journal bearing',
+} as const;
 
 export const CAUTIONS = [
   "This note is a concept-stage estimate, to be confirmed with the supplier's data and by test.",
@@ -68,19 +72,49 @@ export function noteDate(now?: () => Date): string {
 
 /** SI unit of a case field, from its key (the case schema's conventions; see src/case/types.ts). */
 const FIELD_UNIT: Record<string, string> = {
-  diameter: 'm', maxLength: 'm', maxOuterDiameter: 'm', wearAllowance: 'm', length: 'm', radialClearance: 'm', outerDiameter: 'm', width: 'm',
-  speed: 'rev/s', radial: 'N', axial: 'N', dynamicRating: 'N', staticRating: 'N', fatigueLimit: 'N', hours: 'h',
-  inletTemperature: 'degC', ambient: 'degC', maxTemperature: 'degC', viscosity: 'Pa*s', angle: 'deg', frequency: 'Hz',
-  maxPressure: 'Pa', maxVelocity: 'm/s', maxPV: 'Pa*m/s', wearFactor: 'm^2/N', wearFactorLow: 'm^2/N', wearFactorHigh: 'm^2/N', reliability: '%',
+  diameter: 'm',
+  maxLength: 'm',
+  maxOuterDiameter: 'm',
+  wearAllowance: 'm',
+  length: 'm',
+  radialClearance: 'm',
+  outerDiameter: 'm',
+  width: 'm',
+  speed: 'rev/s',
+  radial: 'N',
+  axial: 'N',
+  dynamicRating: 'N',
+  staticRating: 'N',
+  fatigueLimit: 'N',
+  hours: 'h',
+  inletTemperature: 'degC',
+  ambient: 'degC',
+  maxTemperature: 'degC',
+  viscosity: 'Pa*s',
+  angle: 'deg',
+  frequency: 'Hz',
+  maxPressure: 'Pa',
+  maxVelocity: 'm/s',
+  maxPV: 'Pa*m/s',
+  wearFactor: 'm^2/N',
+  wearFactorLow: 'm^2/N',
+  wearFactorHigh: 'm^2/N',
+  reliability: '%',
 };
 
 function flatten(v: unknown, path: string, out: Map<string, unknown>): void {
   if (Array.isArray(v)) v.forEach((x, i) => flatten(x, `${path}[${i}]`, out));
-  else if (v !== null && typeof v === 'object') for (const [k, x] of Object.entries(v)) flatten(x, path ? `${path}.${k}` : k, out);
+  else if (v !== null && typeof v === 'object')
+    for (const [k, x] of Object.entries(v)) flatten(x, path ? `${path}.${k}` : k, out);
   else out.set(path, v);
 }
 
-const leafKey = (path: string) => path.replace(/\[\d+\]$/, '').split('.').pop()!.replace(/\[\d+\]/g, '');
+const leafKey = (path: string) =>
+  path
+    .replace(/\[\d+\]$/, '')
+    .split('.')
+    .pop()!
+    .replace(/\[\d+\]/g, '');
 
 function siText(path: string, v: unknown, u: UnitSystem): string {
   if (typeof v !== 'number') return String(v);
@@ -89,7 +123,9 @@ function siText(path: string, v: unknown, u: UnitSystem): string {
   if (unit === 'Hz' || unit === '%') return `${fmtValue(v, '1', u)} ${unit}`;
   if (!unit) return fmtValue(v, '1', u);
   const shown = fmt(v, unit, u);
-  return u === 'SI' && unit !== 'h' && unit !== 'degC' ? `${shown} (${fmtValue(v, '1', u)} ${unit.replace('*', '·')})` : shown;
+  return u === 'SI' && unit !== 'h' && unit !== 'degC'
+    ? `${shown} (${fmtValue(v, '1', u)} ${unit.replace('*', '·')})`
+    : shown;
 }
 
 function dutyRows(loaded: LoadedCase, u: UnitSystem): Cell[][] {
@@ -107,7 +143,9 @@ function dutyRows(loaded: LoadedCase, u: UnitSystem): Cell[][] {
   }
   // Fields the user wrote that the SI case holds under another shape (e.g. "oil: ISO VG 68").
   const renamed = new Set(Object.values(givenAs));
-  for (const [path, g] of given) if (!si.has(path) && path !== 'title' && !renamed.has(path)) rows.push([path, String(g), 'read as described under Assumptions']);
+  for (const [path, g] of given)
+    if (!si.has(path) && path !== 'title' && !renamed.has(path))
+      rows.push([path, String(g), 'read as described under Assumptions']);
   return rows;
 }
 
@@ -118,7 +156,14 @@ function checkRows(checks: CheckRecord[], u: UnitSystem, advisoryIds: readonly s
     const adv = k.advisory === true || advisoryIds.includes(k.id);
     const mark: Mark = adv ? (k.pass ? 'advice' : 'advice-exceeded') : k.pass ? 'pass' : 'fail';
     const label = { pass: 'pass', fail: 'FAIL', advice: 'advice: ok', 'advice-exceeded': 'advice: exceeded' }[mark];
-    return [k.label, fmt(k.value, k.unit, u), `${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)}`, pct(k.margin), { text: label, mark }, k.source];
+    return [
+      k.label,
+      fmt(k.value, k.unit, u),
+      `${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)}`,
+      pct(k.margin),
+      { text: label, mark },
+      k.source,
+    ];
   });
 }
 const CHECK_HEAD = ['check', 'value', 'limit', 'margin', 'result', 'source of the limit'];
@@ -128,7 +173,9 @@ function designText(r: RankedOption, u: UnitSystem): string {
   const m = (k: string) => (typeof d[k] === 'number' ? fmt(d[k] as number, 'm', u) : '—');
   switch (r.option) {
     case 'bushing':
-      return d['material'] ? `${d['name']} (${d['material']}), ${m('length')} long, outside diameter ${m('outerDiameter')}` : 'no material could be sized';
+      return d['material']
+        ? `${d['name']} (${d['material']}), ${m('length')} long, outside diameter ${m('outerDiameter')}`
+        : 'no material could be sized';
     case 'rolling':
       return d['bearing']
         ? `${d['designation']} (${d['bearing']}), ${m('bore')} bore × ${m('outerDiameter')} outside × ${m('width')} wide, basic dynamic load rating C ${fmt(d['dynamicRating'] as number, 'N', u)} (${d['ratingSource']})`
@@ -148,11 +195,16 @@ function whyLost(r: RankedOption, winner: RankedOption, a: AdviceResult, u: Unit
   const out: string[] = [];
   if (!r.feasible) {
     for (const e of r.excluded) out.push(`Excluded: ${e}`);
-    for (const k of r.failed) out.push(`Fails: ${k.label}: ${fmt(k.value, k.unit, u)} against ${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)} (margin ${pct(k.margin)}; ${k.source}).`);
+    for (const k of r.failed)
+      out.push(
+        `Fails: ${k.label}: ${fmt(k.value, k.unit, u)} against ${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)} (margin ${pct(k.margin)}; ${k.source}).`,
+      );
     return out;
   }
   if (r === winner) return out;
-  out.push(`Feasible, but scores ${r.score.toFixed(2)} against ${winner.score.toFixed(2)} for the ${OPTION_NAMES[winner.option].toLowerCase()}.`);
+  out.push(
+    `Feasible, but scores ${r.score.toFixed(2)} against ${winner.score.toFixed(2)} for the ${OPTION_NAMES[winner.option].toLowerCase()}.`,
+  );
   if (a.tieBreak && r.score === winner.score) out.push(`Tie: ${a.tieBreak}.`);
   const cons = r.reasons.filter((x) => x.points < 0);
   if (cons.length) out.push(...cons.map((x) => `Counts against it: ${reasonText(x)}`));
@@ -197,7 +249,10 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
     id: 'duty',
     title: 'Duty as understood',
     blocks: [
-      { kind: 'p', text: `Case file: ${opts.caseFile ?? '(given)'}. Each field as written in the case, and as the calculation read it (${u === 'SI' ? 'SI, with the base-unit number in brackets' : 'US customary'}); "(default)" marks a value the case did not give.` },
+      {
+        kind: 'p',
+        text: `Case file: ${opts.caseFile ?? '(given)'}. Each field as written in the case, and as the calculation read it (${u === 'SI' ? 'SI, with the base-unit number in brackets' : 'US customary'}); "(default)" marks a value the case did not give.`,
+      },
       { kind: 'table', head: ['field', 'as given', 'as understood'], rows: dutyRows(loaded, u) },
     ],
   });
@@ -205,7 +260,13 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
     id: 'assumptions',
     title: 'Assumptions and defaults',
     blocks: a.assumed.length
-      ? [{ kind: 'table', head: ['field', 'value', 'reason'], rows: a.assumed.map((x) => [x.field, x.value, x.reason]) }]
+      ? [
+          {
+            kind: 'table',
+            head: ['field', 'value', 'reason'],
+            rows: a.assumed.map((x) => [x.field, x.value, x.reason]),
+          },
+        ]
       : [{ kind: 'p', text: 'None: every input was given.' }],
   });
 
@@ -226,21 +287,44 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
       fmt(r.figures.outerDiameter, 'm', u),
     ]),
   });
-  rec.push({ kind: 'p', text: 'Feasibility is decided by the checks; among feasible options the score, the sum of rule points (rules/*.json, common practice) weighted by the case priorities (priority / 3), decides the rank.' });
-  if (a.toMakeFeasible.length) rec.push({ kind: 'sub', title: 'What would make an option feasible' }, { kind: 'list', items: a.toMakeFeasible });
+  rec.push({
+    kind: 'p',
+    text: 'Feasibility is decided by the checks; among feasible options the score, the sum of rule points (rules/*.json, common practice) weighted by the case priorities (priority / 3), decides the rank.',
+  });
+  if (a.toMakeFeasible.length)
+    rec.push({ kind: 'sub', title: 'What would make an option feasible' }, { kind: 'list', items: a.toMakeFeasible });
   if (a.warnings.length) rec.push({ kind: 'sub', title: 'Warnings' }, { kind: 'list', items: a.warnings });
   sections.push({ id: 'recommendation', title: 'Recommendation and ranking', blocks: rec });
 
   for (const r of a.ranking) {
-    const blocks: Block[] = [{ kind: 'p', text: `Rank ${r.rank}${r.feasible ? '' : ', not feasible'}. Design found${r.feasible ? '' : ' (nearest miss)'}: ${designText(r, u)}.` }];
+    const blocks: Block[] = [
+      {
+        kind: 'p',
+        text: `Rank ${r.rank}${r.feasible ? '' : ', not feasible'}. Design found${r.feasible ? '' : ' (nearest miss)'}: ${designText(r, u)}.`,
+      },
+    ];
     if (r.option === 'bushing') {
       const m = shownMaterial(a);
       blocks.push({ kind: 'sub', title: 'Checks' });
-      if (m) blocks.push({ kind: 'table', head: CHECK_HEAD, rows: checkRows(m.checks, u), caption: `Checks of ${m.name} at ${fmt(m.length, 'm', u)} long` });
+      if (m)
+        blocks.push({
+          kind: 'table',
+          head: CHECK_HEAD,
+          rows: checkRows(m.checks, u),
+          caption: `Checks of ${m.name} at ${fmt(m.length, 'm', u)} long`,
+        });
       blocks.push({ kind: 'sub', title: 'Every material class checked' });
       blocks.push({
         kind: 'table',
-        head: ['material', 'length', 'mean pressure', 'PV', 'wear life (short – typical – long)', 'feasible', 'failing checks'],
+        head: [
+          'material',
+          'length',
+          'mean pressure',
+          'PV',
+          'wear life (short – typical – long)',
+          'feasible',
+          'failing checks',
+        ],
         rows: a.checks.bushing.materials.map((x) => [
           `${x.name} (${x.id})`,
           fmt(x.length, 'm', u),
@@ -248,7 +332,10 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
           fmt(x.pv, 'Pa*m/s', u),
           `${fmt(x.lifeBand.short, 'h', u)} – ${fmt(x.lifeBand.typical, 'h', u)} – ${fmt(x.lifeBand.long, 'h', u)}`,
           x.feasible ? { text: 'yes', mark: 'pass' } : { text: 'NO', mark: 'fail' },
-          x.checks.filter((k) => !k.pass && !k.advisory).map((k) => k.label).join('; ') || '—',
+          x.checks
+            .filter((k) => !k.pass && !k.advisory)
+            .map((k) => k.label)
+            .join('; ') || '—',
         ]),
       });
       blocks.push({ kind: 'p', text: a.checks.bushing.bestReason });
@@ -257,7 +344,13 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
       const ro = a.checks.rolling;
       const k = ro.candidates.find((x) => x.id === r.design['bearing']);
       blocks.push({ kind: 'sub', title: 'Checks' });
-      if (k) blocks.push({ kind: 'table', head: CHECK_HEAD, rows: checkRows(k.checks, u), caption: `Checks of ${k.designation}` });
+      if (k)
+        blocks.push({
+          kind: 'table',
+          head: CHECK_HEAD,
+          rows: checkRows(k.checks, u),
+          caption: `Checks of ${k.designation}`,
+        });
       blocks.push({ kind: 'sub', title: 'Every candidate checked' });
       blocks.push({
         kind: 'table',
@@ -277,18 +370,35 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
     } else {
       const j = a.checks.journal;
       blocks.push({ kind: 'sub', title: 'Checks' });
-      blocks.push({ kind: 'table', head: CHECK_HEAD, rows: checkRows(j.checks, u, j.advisory), caption: 'Checks of the chosen journal design' });
+      blocks.push({
+        kind: 'table',
+        head: CHECK_HEAD,
+        rows: checkRows(j.checks, u, j.advisory),
+        caption: 'Checks of the chosen journal design',
+      });
       blocks.push({
         kind: 'p',
         text: `Operating state at the governing point: eccentricity ratio ${fmtValue(j.eccentricityRatio, '1', u)}, minimum film ${fmt(j.minFilmThickness, 'm', u)}, attitude angle ${fmtValue(j.attitudeAngle, 'deg', u)}°, friction coefficient ${fmtValue(j.frictionCoefficient, '1', u)}, power loss ${fmt(j.powerLoss, 'W', u)}, flow ${fmt(j.flow, 'm^3/s', u)}, effective temperature ${fmt(j.effectiveTemperature, 'degC', u)}; ${j.sweep.length} designs were compared in the sweep of length, clearance and oil grade.`,
       });
-      blocks.push({ kind: 'chart', chart: chartFor('journal-film') }, { kind: 'chart', chart: chartFor('journal-temperature') }, { kind: 'chart', chart: chartFor('journal-pressure') });
+      blocks.push(
+        { kind: 'chart', chart: chartFor('journal-film') },
+        { kind: 'chart', chart: chartFor('journal-temperature') },
+        { kind: 'chart', chart: chartFor('journal-pressure') },
+      );
     }
     const pro = r.reasons.filter((x) => x.points > 0);
     const con = r.reasons.filter((x) => x.points < 0);
-    if (pro.length || con.length) blocks.push({ kind: 'sub', title: 'Points for and against' }, { kind: 'list', items: [...pro, ...con].map(reasonText) });
+    if (pro.length || con.length)
+      blocks.push(
+        { kind: 'sub', title: 'Points for and against' },
+        { kind: 'list', items: [...pro, ...con].map(reasonText) },
+      );
     const lost = whyLost(r, winner, a, u);
-    if (r !== winner || !r.feasible) blocks.push({ kind: 'sub', title: 'Why it lost' }, lost.length ? { kind: 'list', items: lost } : { kind: 'p', text: 'It ranks below the options above.' });
+    if (r !== winner || !r.feasible)
+      blocks.push(
+        { kind: 'sub', title: 'Why it lost' },
+        lost.length ? { kind: 'list', items: lost } : { kind: 'p', text: 'It ranks below the options above.' },
+      );
     sections.push({ id: `option-${r.option}`, title: `${r.rank}. ${OPTION_NAMES[r.option]}`, pageBreak: true, blocks });
   }
 
@@ -296,7 +406,11 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
   for (const o of ['bushing', 'rolling', 'journal'] as const) {
     const lines = a.checks[o].sheet;
     sheet.push({ kind: 'sub', title: OPTION_NAMES[o] });
-    sheet.push(lines.length ? { kind: 'table', head: ['figure', 'formula', 'with values', 'result', 'source'], rows: sheetRows(lines, u) } : { kind: 'p', text: 'No calculation lines (nothing could be sized).' });
+    sheet.push(
+      lines.length
+        ? { kind: 'table', head: ['figure', 'formula', 'with values', 'result', 'source'], rows: sheetRows(lines, u) }
+        : { kind: 'p', text: 'No calculation lines (nothing could be sized).' },
+    );
   }
   sections.push({ id: 'sheet', title: 'Calculation sheet', pageBreak: true, blocks: sheet });
 
@@ -311,7 +425,10 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
     id: 'methods',
     title: 'Methods and references',
     blocks: [
-      ...(['bushing', 'rolling', 'journal'] as const).flatMap((o): Block[] => [{ kind: 'sub', title: OPTION_NAMES[o] }, { kind: 'list', items: METHODS[o] }]),
+      ...(['bushing', 'rolling', 'journal'] as const).flatMap((o): Block[] => [
+        { kind: 'sub', title: OPTION_NAMES[o] },
+        { kind: 'list', items: METHODS[o] },
+      ]),
       { kind: 'sub', title: 'Sources of the limits in this note' },
       { kind: 'list', items: sources },
     ],
@@ -320,7 +437,10 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
   sections.push({
     id: 'signoff',
     title: 'Sign-off',
-    blocks: [{ kind: 'p', text: 'To be completed by hand. The note is not released until it is checked and approved.' }, { kind: 'signoff', roles: ['Prepared', 'Checked', 'Approved'] }],
+    blocks: [
+      { kind: 'p', text: 'To be completed by hand. The note is not released until it is checked and approved.' },
+      { kind: 'signoff', roles: ['Prepared', 'Checked', 'Approved'] },
+    ],
   });
   return { title: c.title, date: noteDate(opts.now), units: u, summary, sections };
 }

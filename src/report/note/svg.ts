@@ -71,7 +71,8 @@ export function linearTicks(min: number, max: number, n = 6): number[] {
   const mag = 10 ** Math.floor(Math.log10(raw));
   const step = [1, 2, 5, 10].map((k) => k * mag).find((s) => s >= raw)!;
   const out: number[] = [];
-  for (let v = Math.ceil(min / step - 1e-9) * step; v <= max + step * 1e-9; v += step) out.push(Math.abs(v) < step * 1e-9 ? 0 : +v.toPrecision(12));
+  for (let v = Math.ceil(min / step - 1e-9) * step; v <= max + step * 1e-9; v += step)
+    out.push(Math.abs(v) < step * 1e-9 ? 0 : +v.toPrecision(12));
   return out;
 }
 
@@ -178,8 +179,14 @@ function legendColumns(spec: ChartSpec): number {
 /** The chart as an SVG element (a string). Sizes scale with the page: width 100 %, fixed aspect ratio. */
 export function lineChart(spec: ChartSpec): string {
   const id = spec.id.replace(/[^a-zA-Z0-9-]/g, '-');
-  const xs = [...spec.series.flatMap((s) => s.points.map((p) => p[0])), ...spec.refs.filter((r) => r.axis === 'x').map((r) => r.value)];
-  const ys = [...spec.series.flatMap((s) => s.points.map((p) => p[1])), ...spec.refs.filter((r) => r.axis === 'y').map((r) => r.value)];
+  const xs = [
+    ...spec.series.flatMap((s) => s.points.map((p) => p[0])),
+    ...spec.refs.filter((r) => r.axis === 'x').map((r) => r.value),
+  ];
+  const ys = [
+    ...spec.series.flatMap((s) => s.points.map((p) => p[1])),
+    ...spec.refs.filter((r) => r.axis === 'y').map((r) => r.value),
+  ];
   const sx = makeScale(spec.x, xs, PW, false);
   const sy = makeScale(spec.y, ys, PH, true);
   const X = (v: number) => M.left + sx.to(v);
@@ -199,10 +206,16 @@ export function lineChart(spec: ChartSpec): string {
   // Grid and ticks.
   const grid: string[] = [];
   const ticks: string[] = [];
-  const xt = sx.log ? logTicks(sx.min, sx.max) : { major: spec.x.ticks ?? linearTicks(sx.min, sx.max), minor: [] as number[] };
-  const yt = sy.log ? logTicks(sy.min, sy.max) : { major: spec.y.ticks ?? linearTicks(sy.min, sy.max, 5), minor: [] as number[] };
-  for (const v of xt.minor) grid.push(`<line x1="${r1(X(v))}" y1="${M.top}" x2="${r1(X(v))}" y2="${M.top + PH}" stroke="#eee"/>`);
-  for (const v of yt.minor) grid.push(`<line x1="${M.left}" y1="${r1(Y(v))}" x2="${M.left + PW}" y2="${r1(Y(v))}" stroke="#eee"/>`);
+  const xt = sx.log
+    ? logTicks(sx.min, sx.max)
+    : { major: spec.x.ticks ?? linearTicks(sx.min, sx.max), minor: [] as number[] };
+  const yt = sy.log
+    ? logTicks(sy.min, sy.max)
+    : { major: spec.y.ticks ?? linearTicks(sy.min, sy.max, 5), minor: [] as number[] };
+  for (const v of xt.minor)
+    grid.push(`<line x1="${r1(X(v))}" y1="${M.top}" x2="${r1(X(v))}" y2="${M.top + PH}" stroke="#eee"/>`);
+  for (const v of yt.minor)
+    grid.push(`<line x1="${M.left}" y1="${r1(Y(v))}" x2="${M.left + PW}" y2="${r1(Y(v))}" stroke="#eee"/>`);
   for (const v of xt.major) {
     grid.push(`<line x1="${r1(X(v))}" y1="${M.top}" x2="${r1(X(v))}" y2="${M.top + PH}" stroke="#d5d5d5"/>`);
     ticks.push(`<line x1="${r1(X(v))}" y1="${M.top + PH}" x2="${r1(X(v))}" y2="${M.top + PH + 5}" stroke="#333"/>`);
@@ -228,19 +241,28 @@ export function lineChart(spec: ChartSpec): string {
     const dash = REF_DASHES[k % REF_DASHES.length];
     if (r.axis === 'y') {
       const y = r1(Y(r.value));
-      body.push(`<line class="ref" x1="${M.left}" y1="${y}" x2="${M.left + PW}" y2="${y}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${dash}"/>`);
+      body.push(
+        `<line class="ref" x1="${M.left}" y1="${y}" x2="${M.left + PW}" y2="${y}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${dash}"/>`,
+      );
     } else {
       const x = r1(X(r.value));
-      body.push(`<line class="ref" x1="${x}" y1="${M.top}" x2="${x}" y2="${M.top + PH}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${dash}"/>`);
+      body.push(
+        `<line class="ref" x1="${x}" y1="${M.top}" x2="${x}" y2="${M.top + PH}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${dash}"/>`,
+      );
     }
   });
   spec.series.forEach((s, k) => {
     const st = STYLES[k % STYLES.length]!;
-    const pts = s.points.filter((p) => Number.isFinite(p[0]) && Number.isFinite(p[1]) && (!sx.log || p[0] > 0) && (!sy.log || p[1] > 0));
+    const pts = s.points.filter(
+      (p) => Number.isFinite(p[0]) && Number.isFinite(p[1]) && (!sx.log || p[0] > 0) && (!sy.log || p[1] > 0),
+    );
     if (!pts.length) return;
     const d = pts.map((p, i) => `${i ? 'L' : 'M'}${r1(X(p[0]))} ${r1(Y(p[1]))}`).join('');
-    body.push(`<path class="series" d="${d}" fill="none" stroke="${st.colour}" stroke-width="2.2"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`);
-    if (s.markers !== false) body.push(...markerIndices(pts.length).map((i) => marker(st.marker, X(pts[i]![0]), Y(pts[i]![1]), st.colour)));
+    body.push(
+      `<path class="series" d="${d}" fill="none" stroke="${st.colour}" stroke-width="2.2"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`,
+    );
+    if (s.markers !== false)
+      body.push(...markerIndices(pts.length).map((i) => marker(st.marker, X(pts[i]![0]), Y(pts[i]![1]), st.colour)));
   });
   out.push(`<g clip-path="url(#clip-${id})">${body.join('')}</g>`);
 
@@ -257,10 +279,14 @@ export function lineChart(spec: ChartSpec): string {
     const y = H + 16 + Math.floor(i / cols) * LEGEND_ROW;
     if (row.kind === 'series') {
       const st = STYLES[row.k % STYLES.length]!;
-      entries.push(`<line x1="${r1(lx)}" y1="${y - 4}" x2="${r1(lx + 30)}" y2="${y - 4}" stroke="${st.colour}" stroke-width="2.2"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`);
+      entries.push(
+        `<line x1="${r1(lx)}" y1="${y - 4}" x2="${r1(lx + 30)}" y2="${y - 4}" stroke="${st.colour}" stroke-width="2.2"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`,
+      );
       if (spec.series[row.k]!.markers !== false) entries.push(marker(st.marker, lx + 15, y - 4, st.colour));
     } else {
-      entries.push(`<line x1="${r1(lx)}" y1="${y - 4}" x2="${r1(lx + 30)}" y2="${y - 4}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${REF_DASHES[row.k % REF_DASHES.length]}"/>`);
+      entries.push(
+        `<line x1="${r1(lx)}" y1="${y - 4}" x2="${r1(lx + 30)}" y2="${y - 4}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${REF_DASHES[row.k % REF_DASHES.length]}"/>`,
+      );
     }
     const room = Math.floor((colW - 44) / 6.2);
     const name = row.name.length > room ? row.name.slice(0, room - 1) + '…' : row.name;

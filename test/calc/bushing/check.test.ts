@@ -6,8 +6,11 @@ import { pumpCase } from '../../helpers/case.js';
 describe('checkBushing', () => {
   it('at the reported shortest length the governing limit is met with zero margin', () => {
     const first = checkBushing(pumpCase({ bushing: { material: 'sintered-bronze' } })).materials[0]!;
-    const atMin = checkBushing(pumpCase({ bushing: { material: 'sintered-bronze', length: first.minLength } })).materials[0]!;
-    const governing = Math.min(...atMin.checks.filter((k) => ['pressure', 'pv', 'wear-life'].includes(k.id)).map((k) => k.margin));
+    const atMin = checkBushing(pumpCase({ bushing: { material: 'sintered-bronze', length: first.minLength } }))
+      .materials[0]!;
+    const governing = Math.min(
+      ...atMin.checks.filter((k) => ['pressure', 'pv', 'wear-life'].includes(k.id)).map((k) => k.margin),
+    );
     expect(governing).toBeCloseTo(0, 9);
   });
 
@@ -25,8 +28,12 @@ describe('checkBushing', () => {
 
   it('wear over a duty spectrum is the share-weighted sum of the points', () => {
     const fixed = { material: 'acetal', length: '30 mm' };
-    const a = checkBushing(pumpCase({ bushing: fixed, load: { radial: '1 kN' }, shaft: { diameter: '30 mm', speed: '200 rpm' } })).materials[0]!;
-    const b = checkBushing(pumpCase({ bushing: fixed, load: { radial: '2 kN' }, shaft: { diameter: '30 mm', speed: '50 rpm' } })).materials[0]!;
+    const a = checkBushing(
+      pumpCase({ bushing: fixed, load: { radial: '1 kN' }, shaft: { diameter: '30 mm', speed: '200 rpm' } }),
+    ).materials[0]!;
+    const b = checkBushing(
+      pumpCase({ bushing: fixed, load: { radial: '2 kN' }, shaft: { diameter: '30 mm', speed: '50 rpm' } }),
+    ).materials[0]!;
     const duty = checkBushing(
       pumpCase({
         bushing: fixed,
@@ -54,14 +61,18 @@ describe('checkBushing', () => {
   });
 
   it('an oscillating shaft slides at θ·D·f and carries the oscillation motion factor', () => {
-    const r = checkBushing(pumpCase({ shaft: { diameter: '30 mm', oscillation: { angle: '60 deg', frequency: '0.5 Hz' } } }));
+    const r = checkBushing(
+      pumpCase({ shaft: { diameter: '30 mm', oscillation: { angle: '60 deg', frequency: '0.5 Hz' } } }),
+    );
     const m = r.materials[0]!;
     expect(m.velocity).toBeCloseTo((Math.PI / 3) * 0.03 * 0.5, 12);
     expect(m.factors.motion).toBe(2);
   });
 
   it('names the best material or says why none fits', () => {
-    const easy = checkBushing(pumpCase({ shaft: { diameter: '30 mm', speed: '20 rpm' }, load: { radial: '300 N' }, life: { hours: '2000 h' } }));
+    const easy = checkBushing(
+      pumpCase({ shaft: { diameter: '30 mm', speed: '20 rpm' }, load: { radial: '300 N' }, life: { hours: '2000 h' } }),
+    );
     expect(easy.best).not.toBeNull();
     expect(easy.materials.find((m) => m.id === easy.best)!.feasible).toBe(true);
     const hard = checkBushing(pumpCase({ shaft: { diameter: '30 mm', speed: '3000 rpm' }, load: { radial: '20 kN' } }));
@@ -77,7 +88,13 @@ describe('bushing calculation sheet', () => {
     expect(r.sheet[0]!.label).toContain(r.materials.find((m) => m.id === r.shown)!.name);
     let numerical = 0;
     for (const l of r.sheet) {
-      const v = evaluate(l.substituted.replace(/m\^2\/N/g, '').replace(/m\/s/g, '').replace(/\bs\b/g, '').replace(/rad|Hz/g, ''));
+      const v = evaluate(
+        l.substituted
+          .replace(/m\^2\/N/g, '')
+          .replace(/m\/s/g, '')
+          .replace(/\bs\b/g, '')
+          .replace(/rad|Hz/g, ''),
+      );
       if (v === null) continue;
       numerical++;
       expect(Math.abs(v / l.value - 1), `${l.label}: ${l.substituted}`).toBeLessThan(0.01);

@@ -11,10 +11,31 @@ import { lineShaftCase } from '../../helpers/case.js';
 import { allFinite } from '../../helpers/finite.js';
 
 const CONTRACT_KEYS = [
-  'option', 'length', 'radialClearance', 'lengthToDiameter', 'sommerfeld', 'eccentricityRatio',
-  'minFilmThickness', 'attitudeAngle', 'frictionCoefficient', 'petroffFrictionCoefficient',
-  'frictionTorque', 'powerLoss', 'flow', 'sideFlow', 'peakPressure', 'effectiveTemperature',
-  'maxTemperature', 'viscosity', 'oil', 'feasible', 'checks', 'sweep', 'assumed', 'warnings', 'sheet',
+  'option',
+  'length',
+  'radialClearance',
+  'lengthToDiameter',
+  'sommerfeld',
+  'eccentricityRatio',
+  'minFilmThickness',
+  'attitudeAngle',
+  'frictionCoefficient',
+  'petroffFrictionCoefficient',
+  'frictionTorque',
+  'powerLoss',
+  'flow',
+  'sideFlow',
+  'peakPressure',
+  'effectiveTemperature',
+  'maxTemperature',
+  'viscosity',
+  'oil',
+  'feasible',
+  'checks',
+  'sweep',
+  'assumed',
+  'warnings',
+  'sheet',
 ];
 
 describe('checkJournal — line-shaft steady bearing, oil feed', () => {
@@ -62,7 +83,14 @@ describe('checkJournal — line-shaft steady bearing, oil feed', () => {
 
   it('writes a calculation sheet with formula and substituted values for each key figure', () => {
     const labels = r.sheet.map((s) => s.label).join('|');
-    for (const key of ['Sommerfeld', 'Eccentricity', 'Minimum film', 'Friction coefficient', 'Power loss', 'Temperature rise'])
+    for (const key of [
+      'Sommerfeld',
+      'Eccentricity',
+      'Minimum film',
+      'Friction coefficient',
+      'Power loss',
+      'Temperature rise',
+    ])
       expect(labels).toContain(key);
     for (const s of r.sheet) {
       expect(s.formula.length).toBeGreaterThan(0);
@@ -121,7 +149,7 @@ describe('checkJournal — given geometry and fixed viscosity', () => {
     expect(r.sweep).toHaveLength(1);
     // S = (r/c)²μN/P by definition (Raimondi & Boyd 1958).
     const P = 2500 / (0.045 * 0.06);
-    expect(r.sommerfeld).toBeCloseTo((1 / 0.0011) ** 2 * 0.03 * (1450 / 60) / P, 9);
+    expect(r.sommerfeld).toBeCloseTo(((1 / 0.0011) ** 2 * 0.03 * (1450 / 60)) / P, 9);
   });
 });
 
@@ -148,9 +176,9 @@ describe('checkJournal — duty spectrum', () => {
   });
 
   it('an unknown oil grade is a clear error naming the field', () => {
-    expect(() => checkJournal(lineShaftCase({ lubrication: { supply: 'oil-feed', inletTemperature: 40, oilGrade: 55 } }))).toThrow(
-      /oilGrade ISO VG 55/,
-    );
+    expect(() =>
+      checkJournal(lineShaftCase({ lubrication: { supply: 'oil-feed', inletTemperature: 40, oilGrade: 55 } })),
+    ).toThrow(/oilGrade ISO VG 55/);
   });
 });
 

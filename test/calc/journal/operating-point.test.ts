@@ -40,7 +40,13 @@ describe('load matching (Raimondi & Boyd 1958: S = (r/c)²μN/P)', () => {
 
   it('more load gives a thinner film, more speed a thicker one', () => {
     const t = tableFor(0.8);
-    const base: OperatingInput = { geometry, load: 6000, speed: 16, fluid: { kind: 'oil', oil: vg68 }, inletTemperature: 45 };
+    const base: OperatingInput = {
+      geometry,
+      load: 6000,
+      speed: 16,
+      fluid: { kind: 'oil', oil: vg68 },
+      inletTemperature: 45,
+    };
     const h = operatingPoint(t, base).minFilmThickness;
     expect(operatingPoint(t, { ...base, load: 12000 }).minFilmThickness).toBeLessThan(h);
     expect(operatingPoint(t, { ...base, speed: 32 }).minFilmThickness).toBeGreaterThan(h);
@@ -48,7 +54,13 @@ describe('load matching (Raimondi & Boyd 1958: S = (r/c)²μN/P)', () => {
 
   it('rejects impossible inputs by name', () => {
     const t = tableFor(0.8);
-    const base: OperatingInput = { geometry, load: 6000, speed: 16, fluid: { kind: 'oil', oil: vg68 }, inletTemperature: 45 };
+    const base: OperatingInput = {
+      geometry,
+      load: 6000,
+      speed: 16,
+      fluid: { kind: 'oil', oil: vg68 },
+      inletTemperature: 45,
+    };
     expect(() => operatingPoint(t, { ...base, speed: 0 })).toThrow(/speed/);
     expect(() => operatingPoint(t, { ...base, load: -1 })).toThrow(/load/);
   });
@@ -56,7 +68,13 @@ describe('load matching (Raimondi & Boyd 1958: S = (r/c)²μN/P)', () => {
 
 describe('thermal balance (Raimondi & Boyd 1958, Part III, from memory; common practice)', () => {
   const t = tableFor(0.8);
-  const input: OperatingInput = { geometry, load: 6000, speed: 16, fluid: { kind: 'oil', oil: vg68 }, inletTemperature: 45 };
+  const input: OperatingInput = {
+    geometry,
+    load: 6000,
+    speed: 16,
+    fluid: { kind: 'oil', oil: vg68 },
+    inletTemperature: 45,
+  };
   const res = operatingPoint(t, input);
 
   it('converges to T_eff = T_in + ΔT/2 within 0.01 K, with μ = μ(T_eff) on the Walther line', () => {

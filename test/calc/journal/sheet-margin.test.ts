@@ -23,7 +23,6 @@ function steady(over: Partial<CaseSI> = {}): CaseSI {
   });
 }
 
-
 describe('journal calculation sheet: each substituted expression is the value it is printed with', () => {
   const r = checkJournal(steady());
   it('numerical lines evaluate to their value within 1 % (four-figure numbers); the rest are functions of their arguments', () => {
@@ -35,7 +34,10 @@ describe('journal calculation sheet: each substituted expression is the value it
         continue;
       }
       numerical++;
-      expect(Math.abs(v - l.value) / Math.max(Math.abs(l.value), 1e-30), `${l.label}: "${l.substituted}" = ${v}, value ${l.value}`).toBeLessThan(0.01);
+      expect(
+        Math.abs(v - l.value) / Math.max(Math.abs(l.value), 1e-30),
+        `${l.label}: "${l.substituted}" = ${v}, value ${l.value}`,
+      ).toBeLessThan(0.01);
     }
     expect(numerical).toBeGreaterThanOrEqual(12);
   });
@@ -53,7 +55,9 @@ describe('film criterion text from the criteria data', () => {
     expect(allowableFilmText({ ...crit, minFilmBase: 8e-6, minFilmPerDiameter: 5e-5 })).toBe('8 µm + 0.00005·D');
     const r = checkJournal(steady());
     expect(r.checks.find((k) => k.id === 'min-film')!.label).toContain(allowableFilmText(crit));
-    expect(r.sheet.find((l) => l.label.startsWith('Allowable minimum film'))!.formula).toBe(`h_allow = ${allowableFilmText(crit)}`);
+    expect(r.sheet.find((l) => l.label.startsWith('Allowable minimum film'))!.formula).toBe(
+      `h_allow = ${allowableFilmText(crit)}`,
+    );
   });
 });
 
@@ -76,7 +80,8 @@ describe('max-temperature margin: share of the allowed rise above the inlet', ()
 describe('mean power loss over the duty', () => {
   it('is Σ share·powerLoss/Σ share over points, and lies between the points', () => {
     const r = checkJournal(steady());
-    const expected = r.points.reduce((s, p) => s + p.share * p.powerLoss, 0) / r.points.reduce((s, p) => s + p.share, 0);
+    const expected =
+      r.points.reduce((s, p) => s + p.share * p.powerLoss, 0) / r.points.reduce((s, p) => s + p.share, 0);
     expect(r.meanPowerLoss).toBeCloseTo(expected, 9);
     const losses = r.points.map((p) => p.powerLoss);
     expect(r.meanPowerLoss).toBeGreaterThan(Math.min(...losses));

@@ -2,7 +2,13 @@
 // re-solves some of it so a solver change without regenerating the file fails here.
 import { describe, expect, it } from 'vitest';
 import { shippedJournalTables } from '../../../src/data/journal-tables.js';
-import { buildTable, DEFAULT_MESH, pointAtEccentricity, TABLE_ECCENTRICITIES, tableFromRows } from '../../../src/calc/journal/table.js';
+import {
+  buildTable,
+  DEFAULT_MESH,
+  pointAtEccentricity,
+  TABLE_ECCENTRICITIES,
+  tableFromRows,
+} from '../../../src/calc/journal/table.js';
 import { makeMesh } from '../../../src/calc/journal/mesh.js';
 
 describe('shipped journal tables', () => {
@@ -21,12 +27,23 @@ describe('shipped journal tables', () => {
       expect(file.rows).toHaveLength(fresh.rows.length);
       fresh.rows.forEach((r, i) => {
         const s = file.rows[i]!;
-        for (const k of ['sommerfeld', 'attitudeDeg', 'frictionVariable', 'flowVariable', 'sideFlowRatio', 'pressureRatio'] as const) {
+        for (const k of [
+          'sommerfeld',
+          'attitudeDeg',
+          'frictionVariable',
+          'flowVariable',
+          'sideFlowRatio',
+          'pressureRatio',
+        ] as const) {
           expect(Math.abs(s[k] / r[k] - 1), `${k} at ε=${r.eccentricity}`).toBeLessThan(1e-9);
         }
       });
       // and interpolate identically between rows
-      const seeded = tableFromRows(ld, file.rows, makeMesh(DEFAULT_MESH.nTheta, DEFAULT_MESH.nZeta, DEFAULT_MESH.stretch));
+      const seeded = tableFromRows(
+        ld,
+        file.rows,
+        makeMesh(DEFAULT_MESH.nTheta, DEFAULT_MESH.nZeta, DEFAULT_MESH.stretch),
+      );
       for (const e of [0.33, 0.77, 0.955]) {
         expect(pointAtEccentricity(seeded, e).sommerfeld / pointAtEccentricity(fresh, e).sommerfeld).toBeCloseTo(1, 9);
       }

@@ -27,7 +27,14 @@ describe('dimensionless table', () => {
         const eps = (TABLE_ECCENTRICITIES[k]! + TABLE_ECCENTRICITIES[k + 1]!) / 2;
         const d = performance(solveReynolds(eps, ld, mesh));
         const p = pointAtEccentricity(t, eps);
-        for (const key of ['sommerfeld', 'attitudeDeg', 'frictionVariable', 'flowVariable', 'sideFlowRatio', 'pressureRatio'] as const)
+        for (const key of [
+          'sommerfeld',
+          'attitudeDeg',
+          'frictionVariable',
+          'flowVariable',
+          'sideFlowRatio',
+          'pressureRatio',
+        ] as const)
           expect(Math.abs(p[key] / d[key] - 1)).toBeLessThan(3e-3);
       }
     }

@@ -25,11 +25,44 @@ describe('carton conveyor head shaft', () => {
   const r = checkRolling(conveyorShaft());
 
   it('has the contract keys', () => {
-    for (const k of ['option', 'equivalentLoad', 'equivalentSpeed', 'requiredDynamicRating', 'candidates', 'best', 'assumed', 'warnings', 'feasible', 'sheet']) {
+    for (const k of [
+      'option',
+      'equivalentLoad',
+      'equivalentSpeed',
+      'requiredDynamicRating',
+      'candidates',
+      'best',
+      'assumed',
+      'warnings',
+      'feasible',
+      'sheet',
+    ]) {
       expect(r).toHaveProperty(k);
     }
     expect(r.option).toBe('rolling');
-    for (const k of ['id', 'type', 'series', 'bore', 'outerDiameter', 'width', 'dynamicRating', 'staticRating', 'ratingSource', 'X', 'Y', 'L10', 'L10h', 'aISO', 'kappa', 'L10mh', 's0', 'ndm', 'frictionPower', 'feasible', 'checks']) {
+    for (const k of [
+      'id',
+      'type',
+      'series',
+      'bore',
+      'outerDiameter',
+      'width',
+      'dynamicRating',
+      'staticRating',
+      'ratingSource',
+      'X',
+      'Y',
+      'L10',
+      'L10h',
+      'aISO',
+      'kappa',
+      'L10mh',
+      's0',
+      'ndm',
+      'frictionPower',
+      'feasible',
+      'checks',
+    ]) {
       expect(r.candidates[0]).toHaveProperty(k);
     }
     expect(allFinite(r)).toBe(true);
@@ -68,7 +101,15 @@ describe('carton conveyor head shaft', () => {
 
   it('states the grease base oil, temperature, e_C and service factor it assumed', () => {
     const fields = r.assumed.map((a) => a.field);
-    expect(fields).toEqual(expect.arrayContaining(['load.shock', 'rolling.temperature', 'lubrication.oilGrade', 'environment.contamination', 'rolling.ratings']));
+    expect(fields).toEqual(
+      expect.arrayContaining([
+        'load.shock',
+        'rolling.temperature',
+        'lubrication.oilGrade',
+        'environment.contamination',
+        'rolling.ratings',
+      ]),
+    );
     expect(r.candidates[0]!.relubricationHours).toBeGreaterThan(0);
   });
 
@@ -155,7 +196,10 @@ describe('bad or awkward inputs give warnings or exclusions, not crashes', () =>
   });
   it('κ below 0.1 (thin oil, slow shaft): warning, lubrication check fails', () => {
     const r = checkRolling(
-      conveyorShaft({ shaft: { diameter: 0.035, speed: 0.2 }, lubrication: { supply: 'oil-bath', viscosity: 0.002, inletTemperature: 25 } }),
+      conveyorShaft({
+        shaft: { diameter: 0.035, speed: 0.2 },
+        lubrication: { supply: 'oil-bath', viscosity: 0.002, inletTemperature: 25 },
+      }),
     );
     const k = r.candidates[0]!;
     expect(k.kappa!).toBeLessThan(0.1);
@@ -200,13 +244,23 @@ describe('bad or awkward inputs give warnings or exclusions, not crashes', () =>
 describe('oscillating shaft and no lubricant supply', () => {
   it('small swing: equivalent speed θ·f/π, and a false-brinelling warning', () => {
     const theta = (10 * Math.PI) / 180;
-    const r = checkRolling(conveyorShaft({ shaft: { diameter: 0.035, oscillation: { angle: theta, frequency: 2 } }, load: { radial: 2400, axial: 0, shock: 'light' } }));
+    const r = checkRolling(
+      conveyorShaft({
+        shaft: { diameter: 0.035, oscillation: { angle: theta, frequency: 2 } },
+        load: { radial: 2400, axial: 0, shock: 'light' },
+      }),
+    );
     expect(r.equivalentSpeed).toBeCloseTo((theta * 2) / Math.PI, 12);
     expect(r.warnings.some((w) => /false brinelling and fretting/.test(w))).toBe(true);
     expect(r.candidates[0]!.criticalSwingAngle).toBeGreaterThan(theta);
   });
   it('a wide swing raises no such warning', () => {
-    const r = checkRolling(conveyorShaft({ shaft: { diameter: 0.035, oscillation: { angle: Math.PI, frequency: 1 } }, load: { radial: 2400, axial: 0, shock: 'light' } }));
+    const r = checkRolling(
+      conveyorShaft({
+        shaft: { diameter: 0.035, oscillation: { angle: Math.PI, frequency: 1 } },
+        load: { radial: 2400, axial: 0, shock: 'light' },
+      }),
+    );
     expect(r.warnings.some((w) => /false brinelling/.test(w))).toBe(false);
   });
   it('supply "none" is read as a sealed-for-life greased bearing whose grease life is checked', () => {

@@ -4,7 +4,12 @@
 import { describe, expect, it } from 'vitest';
 import { boundaryDimensions, rollingFactors } from '../../../src/data/rolling.js';
 import { estimateBallGeometry, estimateRollerGeometry } from '../../../src/calc/rolling/geometry.js';
-import { ballDynamicRating, ballStaticRating, rollerDynamicRating, rollerStaticRating } from '../../../src/calc/rolling/ratings.js';
+import {
+  ballDynamicRating,
+  ballStaticRating,
+  rollerDynamicRating,
+  rollerStaticRating,
+} from '../../../src/calc/rolling/ratings.js';
 
 const f = rollingFactors();
 
@@ -56,7 +61,10 @@ describe('ratings estimated over the whole ISO 15 table', () => {
       const D = r.outerDiameter_mm / 1000;
       return r.type === 'ball'
         ? ballDynamicRating(estimateBallGeometry(d, D, f.geometryEstimate), f.ratingFactors.fcBall).value
-        : rollerDynamicRating(estimateRollerGeometry(d, D, r.width_mm / 1000, f.geometryEstimate), f.ratingFactors.fcRoller).value;
+        : rollerDynamicRating(
+            estimateRollerGeometry(d, D, r.width_mm / 1000, f.geometryEstimate),
+            f.ratingFactors.fcRoller,
+          ).value;
     };
     expect(C('dgb-03-50')).toBeGreaterThan(C('dgb-02-50'));
     expect(C('cyl-02-50')).toBeGreaterThan(C('dgb-02-50'));

@@ -24,12 +24,16 @@ const lifeOf = (c: CaseSI, id = 'dgb-02-50') => checkRolling(c).candidates.find(
 describe('monotonic behaviour', () => {
   it('cleaner oil gives a longer modified life (e_C grows from severe to clean)', () => {
     const levels: Contamination[] = ['severe', 'dirty', 'normal', 'clean'];
-    const lives = levels.map((l) => lifeOf(unwindShaft({ environment: { ambient: 30, contamination: l, startsPerHour: 1 } })));
+    const lives = levels.map((l) =>
+      lifeOf(unwindShaft({ environment: { ambient: 30, contamination: l, startsPerHour: 1 } })),
+    );
     for (let i = 1; i < lives.length; i++) expect(lives[i]!).toBeGreaterThan(lives[i - 1]!);
   });
   it('heavier shock lowers the life (service factor) and raises the static-safety limit', () => {
     const shocks: Shock[] = ['none', 'light', 'moderate', 'heavy'];
-    const runs = shocks.map((s) => checkRolling(unwindShaft({ load: { radial: 3000, axial: 0, shock: s } })).candidates[0]!);
+    const runs = shocks.map(
+      (s) => checkRolling(unwindShaft({ load: { radial: 3000, axial: 0, shock: s } })).candidates[0]!,
+    );
     for (let i = 1; i < runs.length; i++) {
       expect(runs[i]!.L10h!).toBeLessThan(runs[i - 1]!.L10h!);
       const lim = (k: (typeof runs)[number]) => k.checks.find((x) => x.id === 'static-safety')!.limit;

@@ -26,7 +26,6 @@ function drumIdler(over: Partial<CaseSI> = {}): CaseSI {
   };
 }
 
-
 describe('rolling calculation sheet: each substituted expression is the value it is printed with', () => {
   const r = checkRolling(drumIdler());
 
@@ -50,7 +49,10 @@ describe('rolling calculation sheet: each substituted expression is the value it
       numerical++;
       // ν1 is written in mm²/s and stored in m²/s
       const value = l.unit === 'm^2/s' ? l.value * 1e6 : l.value;
-      expect(Math.abs(v - value) / Math.max(Math.abs(value), 1e-12), `${l.label}: "${lhs}" = ${v}, value ${value}`).toBeLessThan(0.01);
+      expect(
+        Math.abs(v - value) / Math.max(Math.abs(value), 1e-12),
+        `${l.label}: "${lhs}" = ${v}, value ${value}`,
+      ).toBeLessThan(0.01);
     }
     expect(numerical).toBeGreaterThanOrEqual(10);
   });
@@ -65,7 +67,9 @@ describe('rolling calculation sheet: each substituted expression is the value it
   });
 
   it('a_ISO line names its arguments; the e_C·Cu/P line carries that intermediate as its value', () => {
-    const best = r.candidates.find((k) => k.id === r.sheet[0]!.label.match(/\(([^)]*)\)$/)?.[1]) ?? r.candidates.find((k) => k.id === (r.best ?? r.candidates[0]!.id))!;
+    const best =
+      r.candidates.find((k) => k.id === r.sheet[0]!.label.match(/\(([^)]*)\)$/)?.[1]) ??
+      r.candidates.find((k) => k.id === (r.best ?? r.candidates[0]!.id))!;
     const term = r.sheet.find((l) => l.label.startsWith('Contamination and fatigue-limit term'))!;
     const a = r.sheet.find((l) => l.label === 'Life modification factor a_ISO')!;
     expect(a.substituted).toMatch(/^a_ISO\(κ = [\d.]+, e_C·Cu\/P = [\d.]+\)$/);
@@ -81,7 +85,10 @@ describe('required dynamic rating names its bearing type', () => {
     expect(r.requiredDynamicRatingFor).toEqual({ type: lead.type, p: lifeExponent(lead.type) });
     expect(r.requiredDynamicRating).toBeCloseTo(lead.requiredDynamicRating!, 6);
     for (const k of r.candidates) {
-      expect(k.requiredDynamicRating).toBeCloseTo(requiredDynamicRating(k.equivalentLoad, r.equivalentSpeed, 20000, lifeExponent(k.type), k.a1)!, 6);
+      expect(k.requiredDynamicRating).toBeCloseTo(
+        requiredDynamicRating(k.equivalentLoad, r.equivalentSpeed, 20000, lifeExponent(k.type), k.a1)!,
+        6,
+      );
     }
   });
   it('the two types differ: p = 3 and p = 10/3 give different needs for the same case', () => {
@@ -95,10 +102,15 @@ describe('required dynamic rating names its bearing type', () => {
 
 describe('friction power is a time mean over the duty', () => {
   it('equals Σ ti·Mi·2π·ni/Σ ti with Mi = μ·Pi·d/2, not M̄·2π·n̄', () => {
-    const r = checkRolling(drumIdler({ load: { radial: 3000, axial: 0, shock: 'light' }, duty: [
-      { share: 0.5, radial: 3000, axial: 0, speed: 600 / 60 },
-      { share: 0.5, radial: 6000, axial: 0, speed: 100 / 60 },
-    ] }));
+    const r = checkRolling(
+      drumIdler({
+        load: { radial: 3000, axial: 0, shock: 'light' },
+        duty: [
+          { share: 0.5, radial: 3000, axial: 0, speed: 600 / 60 },
+          { share: 0.5, radial: 6000, axial: 0, speed: 100 / 60 },
+        ],
+      }),
+    );
     const k = r.candidates.find((c) => c.type === 'roller')!;
     // Roller: Pi = Fr. Mi = μ·Fr·d/2; mean of Mi·2π·ni with equal shares.
     const mu = (2 * k.frictionTorque) / (((3000 + 6000) / 2) * 0.04); // μ from the mean torque

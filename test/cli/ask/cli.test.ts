@@ -16,7 +16,8 @@ import { ROOT, runCli, STACK } from '../../helpers/cli.js';
 const DRIVER = fileURLToPath(new URL('./driver.mjs', import.meta.url));
 const BUILT = join(ROOT, 'dist/cli/ask/index.js');
 const fresh = () => mkdtempSync(join(tmpdir(), 'shaftwise-ask-cli-'));
-const NO_TTY = /shaftwise: ask needs an interactive terminal, and standard input is not one\. To run without questions, write the duty in a case file \(see examples\/sawmill-infeed-roller\.yaml and the README\) and run: shaftwise advise CASE/;
+const NO_TTY =
+  /shaftwise: ask needs an interactive terminal, and standard input is not one\. To run without questions, write the duty in a case file \(see examples\/sawmill-infeed-roller\.yaml and the README\) and run: shaftwise advise CASE/;
 
 describe('ask without a terminal', () => {
   it('exits 2 with a message pointing to case files and shaftwise advise, and writes nothing', () => {
@@ -53,7 +54,10 @@ const hasScript = spawnSync('script', ['--version'], { encoding: 'utf8' }).statu
 function onTerminal(cwd: string, args: string[], keys: string[]): Promise<{ code: number | null; screen: string }> {
   return new Promise((resolve, reject) => {
     const cmd = [process.execPath, DRIVER, ...args].map((a) => `'${a}'`).join(' ');
-    const child = spawn('script', ['-qfec', cmd, '/dev/null'], { cwd, env: { ...process.env, NO_COLOR: '1', COLUMNS: '200' } });
+    const child = spawn('script', ['-qfec', cmd, '/dev/null'], {
+      cwd,
+      env: { ...process.env, NO_COLOR: '1', COLUMNS: '200' },
+    });
     let screen = '';
     let last = Date.now();
     let step = 0;
@@ -96,7 +100,11 @@ describe.runIf(hasScript)('ask on a pseudo-terminal', () => {
   it('Ctrl-C part-way: exit 130, the answers so far on file, and how to resume', async () => {
     const cwd = fresh();
     // Title typed, diameter in inches, Enter for the motion, then Ctrl-C at the speed.
-    const r = await onTerminal(cwd, ['ask', '--save', 'irrigation-pump.yaml'], ['Irrigation pump jackshaft\r', '1.25 in\r', '\r', '\u0003']);
+    const r = await onTerminal(
+      cwd,
+      ['ask', '--save', 'irrigation-pump.yaml'],
+      ['Irrigation pump jackshaft\r', '1.25 in\r', '\r', '\u0003'],
+    );
     expect(r.code).toBe(130);
     expect(r.screen).toContain('Continue with: shaftwise ask --resume irrigation-pump.yaml');
     const doc = parse(readFileSync(join(cwd, 'irrigation-pump.yaml'), 'utf8'));

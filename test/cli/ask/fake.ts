@@ -18,7 +18,8 @@ export function scripted(steps: Step[]): { prompter: Prompter; asked: Asked[] } 
   const asked: Asked[] = [];
   let i = 0;
   const take = (): Step => (i < steps.length ? steps[i++]! : '');
-  const interrupt = () => Object.assign(new Error('User force closed the prompt with SIGINT'), { name: 'ExitPromptError' });
+  const interrupt = () =>
+    Object.assign(new Error('User force closed the prompt with SIGINT'), { name: 'ExitPromptError' });
   const prompter: Prompter = async (spec) => {
     const rec: Asked = { spec, rejected: [] };
     asked.push(rec);
@@ -31,7 +32,8 @@ export function scripted(steps: Step[]): { prompter: Prompter; asked: Asked[] } 
       if (spec.kind === 'confirm') return step === '' ? spec.default : step === true || step === 'y';
       if (spec.kind === 'select') {
         const v = step === '' ? spec.default : String(step);
-        if (!spec.choices.some((c) => c.value === v)) throw new Error(`script offers "${v}" to a select without it: ${spec.message}`);
+        if (!spec.choices.some((c) => c.value === v))
+          throw new Error(`script offers "${v}" to a select without it: ${spec.message}`);
         return v;
       }
       const text = step === '' ? spec.default : String(step);

@@ -25,13 +25,18 @@ describe('one real input prompt (@inquirer/testing render)', () => {
       return c.ok ? true : c.message;
     };
     // Types of @inquirer/testing 2.1.9 predate @inquirer/prompts 7; the runtime contract is the same.
-    const { answer, events, getScreen } = await render(input as never, { message: q.message, default: '40 mm', validate } as never);
+    const { answer, events, getScreen } = await render(
+      input as never,
+      { message: q.message, default: '40 mm', validate } as never,
+    );
     events.type('40 kg');
     events.keypress('enter');
     await new Promise((r) => setTimeout(r, 20));
     // The screen wraps at 80 columns and may drop the space at the break: compare without whitespace.
     const squash = (t: string) => t.replace(/\s+/g, '');
-    expect(squash(getScreen())).toContain(squash('shaft.diameter: "40 kg" is a mass; expected a length such as "40 mm" or "1.5 in"'));
+    expect(squash(getScreen())).toContain(
+      squash('shaft.diameter: "40 kg" is a mass; expected a length such as "40 mm" or "1.5 in"'),
+    );
     for (let i = 0; i < '40 kg'.length; i++) events.keypress('backspace');
     events.type('40 mm');
     events.keypress('enter');
@@ -132,7 +137,11 @@ describe('the whole questionnaire on real prompts', () => {
     expect(text).toContain('"draft":{"id":"inletTemperature","text":"45 de"}');
 
     const again = await keyed({ 'Lubricant temperature': ['45 degC'] });
-    const done = await runAsk({ resume: r.file }, { advise: async () => '' }, { prompter: again.prompter, say: () => {}, cwd });
+    const done = await runAsk(
+      { resume: r.file },
+      { advise: async () => '' },
+      { prompter: again.prompter, say: () => {}, cwd },
+    );
     expect(done.status).toBe('done');
     const c = parseCaseText(readFileSync(r.file, 'utf8')).case;
     expect(c.lubrication.oilGrade).toBe(100);

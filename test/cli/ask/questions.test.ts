@@ -64,10 +64,29 @@ describe('the question list', () => {
     const order = QUESTIONS.map((x) => x.id);
     const at = (id: string) => order.indexOf(id);
     expect(at('title')).toBe(0);
-    for (const [a, b] of [['diameter', 'motion'], ['motion', 'speed'], ['speed', 'radial'], ['radial', 'axial'], ['shock', 'lifeHours'], ['wearAllowance', 'maxLength'], ['maxOuterDiameter', 'supply'], ['supply', 'oil'], ['oil', 'inletTemperature'], ['inletTemperature', 'ambient'], ['contamination', 'startsPerHour'], ['startsPerHour', 'priority.cost']]) {
+    for (const [a, b] of [
+      ['diameter', 'motion'],
+      ['motion', 'speed'],
+      ['speed', 'radial'],
+      ['radial', 'axial'],
+      ['shock', 'lifeHours'],
+      ['wearAllowance', 'maxLength'],
+      ['maxOuterDiameter', 'supply'],
+      ['supply', 'oil'],
+      ['oil', 'inletTemperature'],
+      ['inletTemperature', 'ambient'],
+      ['contamination', 'startsPerHour'],
+      ['startsPerHour', 'priority.cost'],
+    ]) {
       expect(at(a!), `${a} before ${b}`).toBeLessThan(at(b!));
     }
-    expect(order.filter((id) => id.startsWith('priority.'))).toEqual(['priority.cost', 'priority.friction', 'priority.maintenance', 'priority.noise', 'priority.precision']);
+    expect(order.filter((id) => id.startsWith('priority.'))).toEqual([
+      'priority.cost',
+      'priority.friction',
+      'priority.maintenance',
+      'priority.noise',
+      'priority.precision',
+    ]);
   });
 
   it('defaults alone (Enter at every question) make a case that validateCase accepts', () => {
@@ -118,30 +137,41 @@ describe('checking an answer', () => {
   it('asks for the unit of a bare number typed at the prompt, but reads one from a file as a case file does', () => {
     const typed = checkAnswer(q('diameter'), '40', {});
     expect(typed.ok).toBe(false);
-    if (!typed.ok) expect(typed.message).toMatch(/shaft\.diameter: got "40" without a unit; expected a length with its unit, such as "40 mm"/);
+    if (!typed.ok)
+      expect(typed.message).toMatch(
+        /shaft\.diameter: got "40" without a unit; expected a length with its unit, such as "40 mm"/,
+      );
     expect(checkAnswer(q('diameter'), 0.04, {}, true)).toEqual({ ok: true, value: 0.04 });
     // A lone unit (what is left after deleting the number) is not read as one of it.
     const unitOnly = checkAnswer(q('diameter'), 'mm', {});
     expect(unitOnly.ok).toBe(false);
-    if (!unitOnly.ok) expect(unitOnly.message).toBe('shaft.diameter: got "mm" without a number; expected a length with its unit, such as "40 mm" or "1.5 in"');
+    if (!unitOnly.ok)
+      expect(unitOnly.message).toBe(
+        'shaft.diameter: got "mm" without a number; expected a length with its unit, such as "40 mm" or "1.5 in"',
+      );
     expect(checkAnswer(q('diameter'), '.5 in', {}).ok).toBe(true);
   });
 
-  it('reads plain numbers for starts and priorities, with the schema\'s range', () => {
+  it("reads plain numbers for starts and priorities, with the schema's range", () => {
     expect(checkAnswer(q('startsPerHour'), '12', {})).toEqual({ ok: true, value: 12 });
     expect(checkAnswer(q('priority.noise'), '5', {})).toEqual({ ok: true, value: 5 });
     const six = checkAnswer(q('priority.noise'), '6', {});
     expect(six.ok).toBe(false);
-    if (!six.ok) expect(six.message).toBe('priorities.noise: got 6; expected a priority from 1 (unimportant) to 5 (essential)');
+    if (!six.ok)
+      expect(six.message).toBe('priorities.noise: got 6; expected a priority from 1 (unimportant) to 5 (essential)');
     const word = checkAnswer(q('startsPerHour'), 'often', {});
     expect(word.ok).toBe(false);
-    if (!word.ok) expect(word.message).toMatch(/^environment\.startsPerHour: got "often"; expected a number of starts per hour/);
+    if (!word.ok)
+      expect(word.message).toMatch(/^environment\.startsPerHour: got "often"; expected a number of starts per hour/);
   });
 
   it('refuses a housing bore not larger than the shaft, as the case loader does', () => {
     const c = checkAnswer(q('maxOuterDiameter'), '1.5 in', { diameter: '40 mm' });
     expect(c.ok).toBe(false);
-    if (!c.ok) expect(c.message).toBe('space.maxOuterDiameter: got "1.5 in", not more than the shaft diameter "40 mm"; expected a housing bore larger than the shaft');
+    if (!c.ok)
+      expect(c.message).toBe(
+        'space.maxOuterDiameter: got "1.5 in", not more than the shaft diameter "40 mm"; expected a housing bore larger than the shaft',
+      );
     expect(checkAnswer(q('maxOuterDiameter'), '2 in', { diameter: '40 mm' }).ok).toBe(true);
   });
 
@@ -219,7 +249,9 @@ describe('answers read back from a case document', () => {
     expect(answersFromCase({ title: 'x' }).motion).toBeUndefined();
   });
 
-  it('ignores what is not a scalar at a question\'s key', () => {
-    expect(answersFromCase({ shaft: { diameter: { value: 40 } }, priorities: { cost: 4 } })).toEqual({ 'priority.cost': 4 });
+  it("ignores what is not a scalar at a question's key", () => {
+    expect(answersFromCase({ shaft: { diameter: { value: 40 } }, priorities: { cost: 4 } })).toEqual({
+      'priority.cost': 4,
+    });
   });
 });

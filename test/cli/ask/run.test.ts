@@ -58,9 +58,26 @@ describe('a full run', () => {
 
   it('the real advisor (src/cli/advise.ts) accepts the finished case', async () => {
     const { runAdvise } = await import('../../../src/cli/advise.js');
-    const { prompter } = scripted(['Irrigation pump jackshaft', '30 mm', '', '1450 rpm', '1.2 kN', '', 'light', '', '', '', '', 'grease']);
+    const { prompter } = scripted([
+      'Irrigation pump jackshaft',
+      '30 mm',
+      '',
+      '1450 rpm',
+      '1.2 kN',
+      '',
+      'light',
+      '',
+      '',
+      '',
+      '',
+      'grease',
+    ]);
     const said: string[] = [];
-    await runAsk({}, { advise: (p) => runAdvise(p, { format: 'text', units: 'SI', explain: false }) }, { prompter, say: (l) => said.push(l), cwd: fresh() });
+    await runAsk(
+      {},
+      { advise: (p) => runAdvise(p, { format: 'text', units: 'SI', explain: false }) },
+      { prompter, say: (l) => said.push(l), cwd: fresh() },
+    );
     expect(said.at(-1)).toMatch(/^Irrigation pump jackshaft\n/);
     expect(said.at(-1)).toMatch(/Recommended|No option is feasible/);
   });
@@ -80,7 +97,23 @@ describe('a full run', () => {
 
   it('an oscillating shaft with an oil feed, answered in US units, makes a valid case without a speed', async () => {
     // Order: title, diameter, motion, angle, frequency, radial, axial, shock, hours, wear, length, bore, supply, oil, inlet…
-    const s = session(['Packaging line crimper arm', '1.25 in', 'oscillating', '60 deg', '2 Hz', '450 lbf', '', 'moderate', '', '0.01 in', '', '', 'oil-feed', 'ISO VG 46', '104 degF']);
+    const s = session([
+      'Packaging line crimper arm',
+      '1.25 in',
+      'oscillating',
+      '60 deg',
+      '2 Hz',
+      '450 lbf',
+      '',
+      'moderate',
+      '',
+      '0.01 in',
+      '',
+      '',
+      'oil-feed',
+      'ISO VG 46',
+      '104 degF',
+    ]);
     const r = await s.run();
     const c = parseCaseText(readFileSync(r.file, 'utf8')).case;
     expect(c.shaft.speed).toBeUndefined();
@@ -98,7 +131,9 @@ describe('a wrong answer', () => {
     const s = session(['Irrigation pump jackshaft', '40 kg', '40 mm']);
     const r = await s.run();
     const diameter = s.asked.find((a) => a.spec.message.startsWith('Shaft diameter'))!;
-    expect(diameter.rejected).toEqual(['shaft.diameter: "40 kg" is a mass; expected a length such as "40 mm" or "1.5 in"']);
+    expect(diameter.rejected).toEqual([
+      'shaft.diameter: "40 kg" is a mass; expected a length such as "40 mm" or "1.5 in"',
+    ]);
     const text = readFileSync(r.file, 'utf8');
     expect(text).not.toContain('40 kg');
     expect(parse(text).shaft.diameter).toBe('40 mm');
@@ -115,13 +150,22 @@ describe('interrupt and resume', () => {
     const doc = parse(text);
     expect(doc).toEqual({ title: 'Irrigation pump jackshaft', shaft: { diameter: '30 mm', speed: '1450 rpm' } });
     expect(text).toContain('# Continue with: shaftwise ask --resume shaftwise-case.yaml');
-    expect(s.said.at(-1)).toMatch(/saved in shaftwise-case\.yaml\.\nContinue with: shaftwise ask --resume shaftwise-case\.yaml$/);
+    expect(s.said.at(-1)).toMatch(
+      /saved in shaftwise-case\.yaml\.\nContinue with: shaftwise ask --resume shaftwise-case\.yaml$/,
+    );
     expect(s.advised).toEqual([]);
     expect(readdirSync(s.cwd)).toEqual(['shaftwise-case.yaml']); // no temporary file left
   });
 
   it('--resume continues from the first unanswered question and finishes a valid case', async () => {
-    const first = session(['Irrigation pump jackshaft', '30 mm', 'rotating', '1450 rpm', '1.2 kN', { interrupt: true }]);
+    const first = session([
+      'Irrigation pump jackshaft',
+      '30 mm',
+      'rotating',
+      '1450 rpm',
+      '1.2 kN',
+      { interrupt: true },
+    ]);
     const { file } = await first.run();
     const second = session(['', 'light'], { resume: file }, first.cwd);
     const r = await second.run();
@@ -169,10 +213,15 @@ describe('interrupt and resume', () => {
   it('resume keeps keys and comments a person added by hand, and re-asks a saved value that does not pass', async () => {
     const cwd = fresh();
     const file = join(cwd, 'pump.yaml');
-    writeFileSync(file, '# Pump house 3, checked by R.\ntitle: Irrigation pump jackshaft   # from the P&ID\nshaft:\n  diameter: 40 kg\nbushing:\n  material: sintered-bronze\n');
+    writeFileSync(
+      file,
+      '# Pump house 3, checked by R.\ntitle: Irrigation pump jackshaft   # from the P&ID\nshaft:\n  diameter: 40 kg\nbushing:\n  material: sintered-bronze\n',
+    );
     const s = session(['30 mm'], { resume: file }, cwd);
     await s.run();
-    expect(s.said.some((l) => l.includes('The saved answer is not usable (shaft.diameter: "40 kg" is a mass'))).toBe(true);
+    expect(s.said.some((l) => l.includes('The saved answer is not usable (shaft.diameter: "40 kg" is a mass'))).toBe(
+      true,
+    );
     const text = readFileSync(file, 'utf8');
     expect(text).toContain('# Pump house 3, checked by R.');
     expect(text).toContain('# from the P&ID');
@@ -223,24 +272,34 @@ describe('files it will not touch', () => {
     writeFileSync(join(cwd, 'mine.yaml'), 'title: keep me\n');
     const s = session([], { save: 'mine.yaml' }, cwd);
     await expect(s.run()).rejects.toThrow(UsageError);
-    await expect(s.run()).rejects.toThrow('--save mine.yaml: already exists; expected a new file name, or continue that file with: shaftwise ask --resume mine.yaml');
+    await expect(s.run()).rejects.toThrow(
+      '--save mine.yaml: already exists; expected a new file name, or continue that file with: shaftwise ask --resume mine.yaml',
+    );
     expect(readFileSync(join(cwd, 'mine.yaml'), 'utf8')).toBe('title: keep me\n');
     expect(s.asked).toEqual([]);
   });
 
   it('refuses a --save path in a folder that does not exist, before asking anything', async () => {
     const s = session([], { save: 'no-such-folder/pump.yaml' });
-    await expect(s.run()).rejects.toThrow(/^cannot write the case file .*no-such-folder\/pump\.yaml \(no such directory\); expected a writable path \(choose one with --save FILE\)$/);
+    await expect(s.run()).rejects.toThrow(
+      /^cannot write the case file .*no-such-folder\/pump\.yaml \(no such directory\); expected a writable path \(choose one with --save FILE\)$/,
+    );
     expect(s.asked).toEqual([]);
   });
 
   it('refuses a --resume file that is missing, not YAML, or not a mapping', async () => {
     const cwd = fresh();
-    await expect(session([], { resume: 'nope.yaml' }, cwd).run()).rejects.toThrow(/--resume nope\.yaml: cannot be read \(no such file\)/);
+    await expect(session([], { resume: 'nope.yaml' }, cwd).run()).rejects.toThrow(
+      /--resume nope\.yaml: cannot be read \(no such file\)/,
+    );
     writeFileSync(join(cwd, 'bad.yaml'), 'title: [unclosed\n');
-    await expect(session([], { resume: 'bad.yaml' }, cwd).run()).rejects.toThrow(/--resume bad\.yaml: is not valid YAML/);
+    await expect(session([], { resume: 'bad.yaml' }, cwd).run()).rejects.toThrow(
+      /--resume bad\.yaml: is not valid YAML/,
+    );
     writeFileSync(join(cwd, 'list.yaml'), '- 1\n- 2\n');
-    await expect(session([], { resume: 'list.yaml' }, cwd).run()).rejects.toThrow('--resume list.yaml: holds a list; expected a mapping with the case keys (title, shaft, load…)');
+    await expect(session([], { resume: 'list.yaml' }, cwd).run()).rejects.toThrow(
+      '--resume list.yaml: holds a list; expected a mapping with the case keys (title, shaft, load…)',
+    );
     expect(readFileSync(join(cwd, 'list.yaml'), 'utf8')).toBe('- 1\n- 2\n');
   });
 
@@ -258,7 +317,9 @@ describe('no terminal', () => {
     const cwd = fresh();
     const r = runAsk({}, { advise: async () => '' }, { isTTY: false, cwd });
     await expect(r).rejects.toThrow(UsageError);
-    await expect(runAsk({}, { advise: async () => '' }, { isTTY: false, cwd })).rejects.toThrow(/not one\. .*case file .*shaftwise advise CASE/);
+    await expect(runAsk({}, { advise: async () => '' }, { isTTY: false, cwd })).rejects.toThrow(
+      /not one\. .*case file .*shaftwise advise CASE/,
+    );
     expect(existsSync(join(cwd, 'shaftwise-case.yaml'))).toBe(false);
   });
 });
