@@ -1,6 +1,7 @@
+import { OPTIONS, type OptionName } from '../core/options.js';
 import { Engine, type RuleResult } from 'json-rules-engine';
 import type { Assumption, CaseSI } from '../case/types.js';
-import type { CheckRecord } from '../calc/check.js';
+import type { CheckRecord } from '../core/check.js';
 import { checkBushing, type BushingResult } from '../calc/bushing/index.js';
 import { checkRolling } from '../calc/rolling/index.js';
 import type { RollingResult } from '../calc/rolling/types.js';
@@ -15,7 +16,7 @@ import {
 } from './facts.js';
 import { loadRules, type LoadedRule } from './load-rules.js';
 import { resolvePath } from './path.js';
-import { OPTIONS, type Condition, type OptionName, type leafSchema } from './rule-schema.js';
+import { type Condition, type leafSchema } from './rule-schema.js';
 import type { z } from 'zod';
 
 export interface Reason {

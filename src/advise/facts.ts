@@ -1,10 +1,10 @@
+import { type OptionName } from '../core/options.js';
 import type { CaseSI } from '../case/types.js';
-import type { CheckRecord } from '../calc/check.js';
+import { governingMargin, type CheckRecord } from '../core/check.js';
 import type { BushingResult } from '../calc/bushing/index.js';
 import type { RollingResult } from '../calc/rolling/types.js';
 import type { JournalResult } from '../calc/journal/index.js';
 import { operatingPoints, pointSpeed } from '../calc/duty.js';
-import type { OptionName } from './rule-schema.js';
 
 /**
  * The derived duty: plain numbers the rules compare against, computed once from the case.
@@ -83,9 +83,7 @@ export interface OptionFigures {
   why: string[];
 }
 
-const failing = (checks: CheckRecord[], advisory: string[] = []) =>
-  checks.filter((k) => !k.pass && !k.advisory && !advisory.includes(k.id));
-const smallestMargin = (checks: CheckRecord[]) => Math.min(...checks.filter((k) => !k.advisory).map((k) => k.margin));
+const failing = (checks: CheckRecord[]) => checks.filter((k) => !k.pass && !k.advisory);
 
 export function bushingFigures(r: BushingResult, c: CaseSI): OptionFigures {
   // Best, or the nearest miss (the check's own choice, so sheet, charts and advice show one material).
@@ -118,7 +116,7 @@ export function bushingFigures(r: BushingResult, c: CaseSI): OptionFigures {
 export function rollingFigures(r: RollingResult, c: CaseSI): OptionFigures {
   const k =
     r.candidates.find((x) => x.id === r.best) ??
-    [...r.candidates].sort((a, b) => smallestMargin(b.checks) - smallestMargin(a.checks))[0];
+    [...r.candidates].sort((a, b) => governingMargin(b.checks) - governingMargin(a.checks))[0];
   if (!k)
     return {
       feasible: false,
@@ -163,11 +161,9 @@ export function journalFigures(r: JournalResult): OptionFigures {
     frictionPower: r.meanPowerLoss,
     length: r.length,
     outerDiameter: null,
-    failed: r.feasible ? [] : failing(r.checks, r.advisory),
+    failed: r.feasible ? [] : failing(r.checks),
     // Why it is out: the failing limits (its warnings are cautions, reported apart).
-    why: r.feasible
-      ? []
-      : failing(r.checks, r.advisory).map((k) => `fails: ${k.label.charAt(0).toLowerCase()}${k.label.slice(1)}`),
+    why: r.feasible ? [] : failing(r.checks).map((k) => `fails: ${k.label.charAt(0).toLowerCase()}${k.label.slice(1)}`),
   };
 }
 

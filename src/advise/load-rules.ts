@@ -1,6 +1,7 @@
+import { DataError } from '../core/errors.js';
 import { readdirSync, readFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
-import { DataError } from '../data/load.js';
+
 import { ruleFileSchema, type Rule } from './rule-schema.js';
 
 interface Issue {

@@ -1,3 +1,4 @@
+import { OPTIONS } from '../core/options.js';
 import { z } from 'zod';
 import { PRIORITIES } from '../case/schema.js';
 
@@ -7,8 +8,6 @@ import { PRIORITIES } from '../case/schema.js';
  * conditions over the facts below, an event that scores or excludes an option, a `because`
  * sentence a reviewer can read, and a source ("common practice" where it is a habit of the trade).
  */
-export const OPTIONS = ['bushing', 'rolling', 'journal'] as const;
-export type OptionName = (typeof OPTIONS)[number];
 
 /** Facts a rule may read: the case, the derived duty, the three check results and their figures. */
 export const FACTS = ['case', 'duty', 'figures', 'bushing', 'rolling', 'journal'] as const;

@@ -1,12 +1,9 @@
+import type { Problem } from '../core/errors.js';
 import type { Assumption, CaseSI, Priority } from './types.js';
 import type { CaseFile } from './schema.js';
 import { PRIORITIES } from './schema.js';
 
 /** One problem in a case: the field (dotted path) and what is wrong with it. */
-export interface Problem {
-  field: string;
-  message: string;
-}
 
 /**
  * Defaults applied to a case that leaves a value out. Each is recorded as an

@@ -1,22 +1,12 @@
+import { CaseError } from '../core/errors.js';
 import { readFileSync, statSync } from 'node:fs';
 import { parse as parseYaml, YAMLParseError } from 'yaml';
 import { caseFileSchema } from './schema.js';
 import { KINEMATIC_TO_DYNAMIC_DENSITY } from './quantity.js';
-import { completeCase, type Problem } from './defaults.js';
+import { completeCase } from './defaults.js';
 import type { Assumption, CaseSI } from './types.js';
 import { lubricants } from '../data/load.js';
 import { bushingMaterials } from '../data/bushing.js';
-
-/** A case that cannot be used: every problem found, each naming its field. Exit code 2. */
-export class CaseError extends Error {
-  constructor(
-    readonly source: string,
-    readonly problems: Problem[],
-  ) {
-    super(`${source}: ${problems.map((p) => `${p.field}: ${p.message}`).join('; ')}`);
-    this.name = 'CaseError';
-  }
-}
 
 export interface LoadedCase {
   case: CaseSI;

@@ -1,8 +1,8 @@
+import { UsageError } from '../core/errors.js';
 import { loadCaseFile } from '../case/load.js';
 import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
 import type { UnitSystem } from '../report/units.js';
 import type { OutputOptions } from './check.js';
-import { UsageError } from './errors.js';
 
 /** Output formats of `advise`: text and json print; md and html are the design-review note. */
 export const ADVISE_FORMATS = ['text', 'json', 'md', 'html'] as const;

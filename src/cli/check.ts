@@ -1,7 +1,7 @@
+import { UsageError } from '../core/errors.js';
 import { loadCaseFile, type LoadedCase } from '../case/load.js';
 import type { UnitSystem } from '../report/units.js';
 import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
-import { UsageError } from './errors.js';
 
 export type Format = 'text' | 'json';
 export interface OutputOptions {

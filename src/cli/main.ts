@@ -1,10 +1,10 @@
 #!/usr/bin/env node
+import { CaseError, DataError, UsageError } from '../core/errors.js';
 import { readFileSync } from 'node:fs';
 import { Command, CommanderError } from 'commander';
 import { z } from 'zod';
-import { CaseError } from '../case/load.js';
-import { DataError } from '../data/load.js';
-import { EXIT, UsageError } from './errors.js';
+
+import { EXIT } from './errors.js';
 import { registerCheck } from './commands/check.js';
 import { registerAdvise } from './commands/advise.js';
 import { registerAsk } from './ask/index.js';

@@ -1,7 +1,7 @@
+import { UsageError } from '../core/errors.js';
 import { closeSync, fsyncSync, linkSync, openSync, renameSync, rmSync, statSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { randomBytes } from 'node:crypto';
-import { UsageError } from './errors.js';
 
 export interface WriteOptions {
   /** Replace an existing file (the command's --force). */

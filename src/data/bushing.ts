@@ -1,5 +1,6 @@
+import { DataError } from '../core/errors.js';
 import { z } from 'zod';
-import { DataError, loadTable } from './load.js';
+import { loadTable } from './load.js';
 import type { BushingMaterial } from '../case/types.js';
 
 /**

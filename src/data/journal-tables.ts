@@ -1,5 +1,6 @@
+import { DataError } from '../core/errors.js';
 import { readFileSync } from 'node:fs';
-import { DataError, dataDir } from './load.js';
+import { dataDir } from './load.js';
 import type { DimensionlessPerformance } from '../calc/journal/reynolds.js';
 
 /**

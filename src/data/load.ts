@@ -1,3 +1,4 @@
+import { DataError } from '../core/errors.js';
 import { readFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { z } from 'zod';
@@ -7,12 +8,6 @@ import type { OilGrade } from '../calc/lubricant.js';
  * Loaders for the tables in data/. Each table is validated by a zod schema when read;
  * a row that fails names the file, the row and the field. Tables are read once and cached.
  */
-export class DataError extends Error {
-  constructor(message: string) {
-    super(message);
-    this.name = 'DataError';
-  }
-}
 
 /**
  * The folder of data tables: data/ beside the program, or the folder named by

@@ -1,5 +1,5 @@
+import { UsageError } from '../core/errors.js';
 import { parseQuantity, QuantityError, type Kind } from '../case/quantity.js';
-import { UsageError } from '../cli/errors.js';
 
 /** A logarithmic axis: `n` values from min to max, equal ratios between neighbours. */
 export function logAxis(min: number, max: number, n: number): number[] {

@@ -1,9 +1,11 @@
+import { OPTIONS } from '../core/options.js';
+import { CaseError } from '../core/errors.js';
 import { readdirSync, statSync } from 'node:fs';
 import { join } from 'node:path';
-import { CaseError, loadCaseFile } from '../case/load.js';
+import { loadCaseFile } from '../case/load.js';
 import { advise, type AdviceResult } from '../advise/engine.js';
 import { loadRules, type LoadedRule } from '../advise/load-rules.js';
-import { OPTIONS } from '../advise/rule-schema.js';
+
 import { checkJournal } from '../calc/journal/index.js';
 import { ruleRunner } from './rule-runner.js';
 

@@ -1,3 +1,4 @@
+import { governingMargin } from '../core/check.js';
 import type { CaseSI } from '../case/types.js';
 import { checkJournal, type JournalResult } from '../calc/journal/index.js';
 
@@ -45,14 +46,6 @@ export function checkDesign(c: CaseSI, d: JournalDesign): JournalResult {
   return checkJournal(withDesign(c, d), { pressureProfile: false, sheet: false });
 }
 
-/** Smallest margin over the limit checks (advisory ones excluded): the design's governing margin. */
-export function governingMargin(r: JournalResult): { id: string; margin: number } {
-  let best = { id: '', margin: Infinity };
-  for (const k of r.checks)
-    if (!r.advisory.includes(k.id) && k.margin < best.margin) best = { id: k.id, margin: k.margin };
-  return best;
-}
-
 /**
  * The better of several fixed designs at one case: a feasible one first, then the larger
  * minimum-film margin (the sweep's own figure of merit, design.ts); with none feasible,
@@ -63,7 +56,7 @@ export function bestOf(c: CaseSI, designs: readonly JournalDesign[]): { design: 
   for (const d of designs) {
     const result = checkDesign(c, d);
     const film = result.checks.find((k) => k.id === 'min-film')?.margin ?? -Infinity;
-    const rank = result.feasible ? 1e6 + film : governingMargin(result).margin;
+    const rank = result.feasible ? 1e6 + film : governingMargin(result.checks);
     if (!best || rank > best.rank) best = { design: d, result, rank };
   }
   if (!best) throw new Error('map: no journal design to evaluate');

@@ -1,7 +1,8 @@
+import { OPTIONS, type OptionName } from '../core/options.js';
 import type { Assumption, CaseSI } from '../case/types.js';
 import { advise, type AdviceResult } from '../advise/engine.js';
 import { loadRules, type LoadedRule } from '../advise/load-rules.js';
-import { OPTIONS, type OptionName } from '../advise/rule-schema.js';
+
 import { checkBushing } from '../calc/bushing/index.js';
 import { checkRolling } from '../calc/rolling/index.js';
 import { checkJournal } from '../calc/journal/index.js';

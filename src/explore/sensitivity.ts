@@ -1,8 +1,9 @@
+import { OPTIONS, type OptionName } from '../core/options.js';
 import type { Assumption, BushingMaterial, CaseSI } from '../case/types.js';
-import type { CheckRecord } from '../calc/check.js';
+import { governingCheck, type CheckRecord } from '../core/check.js';
 import { advise, type AdviceResult } from '../advise/engine.js';
 import { loadRules, type LoadedRule } from '../advise/load-rules.js';
-import { OPTIONS, type OptionName } from '../advise/rule-schema.js';
+
 import { bushingMaterials } from '../data/bushing.js';
 import { checkDesign, designOf } from './journal-design.js';
 import { ruleRunner } from './rule-runner.js';
@@ -63,12 +64,9 @@ export interface SensitivityResult {
   notes: string[];
 }
 
-const minLimit = (checks: readonly CheckRecord[], advisory: readonly string[] = []): GoverningMargin => {
-  let g: GoverningMargin = { check: '', margin: null };
-  for (const k of checks)
-    if (!k.advisory && !advisory.includes(k.id) && (g.margin === null || k.margin < g.margin))
-      g = { check: k.id, margin: k.margin };
-  return g;
+const minLimit = (checks: readonly CheckRecord[]): GoverningMargin => {
+  const k = governingCheck(checks);
+  return k ? { check: k.id, margin: k.margin } : { check: '', margin: null };
 };
 
 /** Each option's governing margin in an advice. */
@@ -79,7 +77,7 @@ export function governingMargins(a: AdviceResult): Record<OptionName, GoverningM
   return {
     bushing: b ? minLimit(b.checks) : { check: '', margin: null },
     rolling: r ? minLimit(r.checks) : { check: '', margin: null },
-    journal: minLimit(a.checks.journal.checks, a.checks.journal.advisory),
+    journal: minLimit(a.checks.journal.checks),
   };
 }
 

@@ -1,5 +1,5 @@
 import type { AdviceResult, RankedOption } from '../advise/engine.js';
-import type { SheetLine } from '../calc/check.js';
+import type { SheetLine } from '../core/check.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 import { checksTable, heading, paint, shorten } from './text.js';

@@ -41,12 +41,7 @@ export function journalText(r: JournalResult, units: UnitSystem): string {
     ),
   );
   out.push(paint.bold(r.feasible ? 'Feasible: every limit check passes.' : 'Not feasible: see the failing checks.'));
-  out.push(
-    checksTable(
-      r.checks.map((k) => (r.advisory.includes(k.id) ? { ...k, advisory: true } : k)),
-      units,
-    ),
-  );
+  out.push(checksTable(r.checks, units));
   if (r.sweep.length > 1) {
     const rows = [...r.sweep].sort((a, b) => b.filmMargin - a.filmMargin).slice(0, 12);
     out.push(

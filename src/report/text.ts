@@ -1,4 +1,4 @@
-import type { CheckRecord } from '../calc/check.js';
+import type { CheckRecord } from '../core/check.js';
 import type { Assumption } from '../case/types.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';

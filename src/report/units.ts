@@ -1,4 +1,4 @@
-import { num } from '../calc/check.js';
+import { num } from '../core/format.js';
 
 /**
  * Display units: results are SI inside; they are written once, here, in SI

@@ -1,6 +1,7 @@
+import { CaseError } from '../../src/core/errors.js';
 // Case-file validation: schema errors name the field, the value and what was expected (contract keys).
 import { describe, expect, it } from 'vitest';
-import { CaseError, parseCaseText, validateCase } from '../../src/case/load.js';
+import { parseCaseText, validateCase } from '../../src/case/load.js';
 
 const good = `
 title: Packaging line, film unwind spindle

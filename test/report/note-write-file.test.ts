@@ -19,7 +19,7 @@ vi.mock('node:fs', async (importOriginal) => {
 });
 
 const { writeFileSafe } = await import('../../src/cli/write-file.js');
-const { UsageError } = await import('../../src/cli/errors.js');
+const { UsageError } = await import('../../src/core/errors.js');
 
 afterEach(() => {
   failWrite.on = false;

@@ -1,5 +1,13 @@
 import type { Assumption, BushingMaterial, CaseSI } from '../../case/types.js';
-import { advisory, allLimitsPass, makeCheck, num, type CheckRecord, type SheetLine } from '../check.js';
+import {
+  advisory,
+  allLimitsPass,
+  governingMargin,
+  makeCheck,
+  type CheckRecord,
+  type SheetLine,
+} from '../../core/check.js';
+import { num } from '../../core/format.js';
 import { operatingPoints } from '../duty.js';
 import { bushingFactors, bushingMaterials, type BushingMaterialRow } from '../../data/bushing.js';
 import {
@@ -137,8 +145,8 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
   let bestReason: string;
   if (feasible.length) {
     // Most robust: the largest smallest margin over the governing checks; ties keep data order.
-    best = feasible.reduce((a, b) => (smallestMargin(b) > smallestMargin(a) ? b : a));
-    bestReason = `${best.name} at ${num(best.length * 1000, 3)} mm long has the largest smallest margin (${(smallestMargin(best) * 100).toFixed(0)} %) of the ${feasible.length} material(s) that pass every check`;
+    best = feasible.reduce((a, b) => (governingMargin(b.checks) > governingMargin(a.checks) ? b : a));
+    bestReason = `${best.name} at ${num(best.length * 1000, 3)} mm long has the largest smallest margin (${(governingMargin(best.checks) * 100).toFixed(0)} %) of the ${feasible.length} material(s) that pass every check`;
   } else {
     bestReason = `no material passes every check: ${whyNone(materials)}`;
     warnings.push(bestReason);
@@ -147,7 +155,7 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
   const shown =
     best ??
     materials.reduce<BushingMaterialResult | undefined>(
-      (a, b) => (a === undefined || smallestMargin(b) > smallestMargin(a) ? b : a),
+      (a, b) => (a === undefined || governingMargin(b.checks) > governingMargin(a.checks) ? b : a),
       undefined,
     );
   return {
@@ -304,9 +312,6 @@ function checkMaterial(
 }
 
 /** Smallest margin over the limit checks (advice left out): the robustness of a material's design. */
-function smallestMargin(m: BushingMaterialResult): number {
-  return Math.min(...m.checks.filter((k) => !k.advisory).map((k) => k.margin));
-}
 
 function whyNone(ms: BushingMaterialResult[]): string {
   const count = new Map<string, number>();

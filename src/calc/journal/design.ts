@@ -1,4 +1,4 @@
-import { makeCheck, type CheckRecord } from '../check.js';
+import { advisory, makeCheck, type CheckRecord } from '../../core/check.js';
 import { operatingPoint, type Fluid, type Geometry, type OperatingResult } from './operating-point.js';
 import { tableFor } from './table.js';
 
@@ -293,7 +293,7 @@ export function sweepDesigns(
   return { chosen: evals[best]!, rows };
 }
 
-/** Check ids that inform but do not decide feasibility. */
+/** Check ids that inform but do not decide feasibility: designChecks marks them with the advisory flag. */
 export const ADVISORY_CHECKS: readonly string[] = ['unit-load', 'light-load', 'film-design-load'];
 
 /**
@@ -399,5 +399,5 @@ export function designChecks(
       ),
     );
   }
-  return checks;
+  return checks.map((k) => (ADVISORY_CHECKS.includes(k.id) ? advisory(k) : k));
 }

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { Assumption, CaseSI } from '../../case/types.js';
-import { makeCheck, type CheckRecord, type SheetLine } from '../check.js';
+import { allLimitsPass, makeCheck, type CheckRecord, type SheetLine } from '../../core/check.js';
 import { operatingPoints, pointSpeed } from '../duty.js';
 import type { OilGrade } from '../lubricant.js';
 import { loadTable, lubricants, oilGrade } from '../../data/load.js';
@@ -9,7 +9,6 @@ import { solveReynolds } from './reynolds.js';
 import { DEFAULT_MESH, seedTables } from './table.js';
 import { shippedJournalTables } from '../../data/journal-tables.js';
 import {
-  ADVISORY_CHECKS,
   allowableFilm,
   allowableFilmText,
   designChecks,
@@ -114,8 +113,6 @@ export interface JournalResult {
   oilGrade: number | null;
   feasible: boolean;
   checks: CheckRecord[];
-  /** Ids of checks that inform but do not decide `feasible`. */
-  advisory: string[];
   sweep: SweepRow[];
   assumed: Assumption[];
   warnings: string[];
@@ -411,8 +408,7 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     ? undefined
     : evaluateDesign(D, chosen.candidate, points, tIn, startLoad, crit, crit.designLoadFactor);
   const checks = [...designChecks(chosen, designLoad, supply, crit, tIn), ...extraChecks];
-  const advisory = [...ADVISORY_CHECKS];
-  const feasible = checks.every((k) => k.pass || advisory.includes(k.id));
+  const feasible = allLimitsPass(checks);
 
   const g = chosen.governing;
   const res = g.result;
@@ -518,7 +514,6 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     oilGrade: chosen.candidate.grade ?? null,
     feasible,
     checks,
-    advisory,
     sweep: rows,
     assumed,
     warnings,

@@ -1,5 +1,5 @@
 import type { Assumption, CaseSI, Supply } from '../../case/types.js';
-import { makeCheck, type CheckRecord, type SheetLine } from '../check.js';
+import { makeCheck, type CheckRecord, type SheetLine } from '../../core/check.js';
 import { operatingPoints, pointSpeed } from '../duty.js';
 import { kinematicViscosity } from '../lubricant.js';
 import { lubricants, oilGrade } from '../../data/load.js';

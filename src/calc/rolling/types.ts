@@ -1,5 +1,5 @@
 import type { Assumption } from '../../case/types.js';
-import type { CheckRecord, SheetLine } from '../check.js';
+import type { CheckRecord, SheetLine } from '../../core/check.js';
 import type { RollingType } from './life.js';
 
 /**

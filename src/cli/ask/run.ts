@@ -1,7 +1,8 @@
+import { UsageError } from '../../core/errors.js';
 import { existsSync } from 'node:fs';
 import { relative, resolve } from 'node:path';
 import { validateCase } from '../../case/load.js';
-import { UsageError } from '../errors.js';
+
 import type { Document } from 'yaml';
 import {
   answersFromCase,

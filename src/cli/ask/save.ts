@@ -1,3 +1,4 @@
+import { UsageError } from '../../core/errors.js';
 import {
   closeSync,
   existsSync,
@@ -11,7 +12,7 @@ import {
 } from 'node:fs';
 import { basename, dirname, extname, join } from 'node:path';
 import { Document, isMap, parseDocument } from 'yaml';
-import { UsageError } from '../errors.js';
+
 import type { Answers, Question } from './questions.js';
 
 /**

@@ -10,7 +10,8 @@ export function registerBatch(program: Command): void {
     .option('--force', 'replace an existing --out file')
     .exitOverride()
     .action(async (dir: string, raw: { out?: string; force?: boolean }) => {
-      const { UsageError, EXIT } = await import('../errors.js');
+      const { EXIT } = await import('../errors.js');
+      const { UsageError } = await import('../../core/errors.js');
       const { statSync } = await import('node:fs');
       let st;
       try {

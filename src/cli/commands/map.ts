@@ -20,7 +20,7 @@ export function registerMap(program: Command): void {
     .exitOverride()
     .action(
       async (file: string, raw: { out?: string; force?: boolean; grid?: string; load?: string; speed?: string }) => {
-        const { UsageError } = await import('../errors.js');
+        const { UsageError } = await import('../../core/errors.js');
         const { parseGrid, parseRange } = await import('../../explore/axes.js');
         let kind: 'svg' | 'html' | 'text' = 'text';
         if (raw.out !== undefined) {

@@ -14,7 +14,7 @@ export function registerSensitivity(program: Command): void {
     .option('--force', 'replace an existing --out file')
     .exitOverride()
     .action(async (file: string, raw: { format?: string; out?: string; force?: boolean }) => {
-      const { UsageError } = await import('../errors.js');
+      const { UsageError } = await import('../../core/errors.js');
       const format = raw.format ?? 'text';
       if (!['text', 'json', 'html'].includes(format))
         throw new UsageError(`--format: got "${format}"; expected one of: text, json, html`);

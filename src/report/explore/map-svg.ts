@@ -1,5 +1,6 @@
+import { OPTIONS, type OptionName } from '../../core/options.js';
 import type { MapResult } from '../../explore/map.js';
-import { OPTIONS, type OptionName } from '../../advise/rule-schema.js';
+
 import { logTicks } from '../../explore/axes.js';
 import { caseCell, LETTER } from './map-text.js';
 import { esc, fmtLoad, fmtSpeed } from './format.js';

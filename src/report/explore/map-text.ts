@@ -1,5 +1,6 @@
+import { OPTIONS } from '../../core/options.js';
 import type { MapResult } from '../../explore/map.js';
-import { OPTIONS } from '../../advise/rule-schema.js';
+
 import { logTicks } from '../../explore/axes.js';
 import { fmtLoad, fmtSpeed } from './format.js';
 

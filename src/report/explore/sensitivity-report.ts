@@ -1,5 +1,6 @@
+import { OPTIONS, type OptionName } from '../../core/options.js';
 import type { SensitivityResult } from '../../explore/sensitivity.js';
-import { OPTIONS, type OptionName } from '../../advise/rule-schema.js';
+
 import { fmt } from '../units.js';
 import { table } from '../table.js';
 import { esc } from './format.js';

@@ -1,5 +1,5 @@
 import type { AdviceResult, RankedOption } from '../../advise/engine.js';
-import type { CheckRecord, SheetLine } from '../../calc/check.js';
+import type { CheckRecord, SheetLine } from '../../core/check.js';
 import type { LoadedCase } from '../../case/load.js';
 import { fmt, fmtValue, type UnitSystem } from '../units.js';
 import { noteCharts, shownMaterial, type NoteChart } from './charts.js';
@@ -151,9 +151,9 @@ function dutyRows(loaded: LoadedCase, u: UnitSystem): Cell[][] {
 
 const pct = (m: number) => `${m >= 0 ? '+' : ''}${(m * 100).toFixed(0)} %`;
 
-function checkRows(checks: CheckRecord[], u: UnitSystem, advisoryIds: readonly string[] = []): Cell[][] {
+function checkRows(checks: CheckRecord[], u: UnitSystem): Cell[][] {
   return checks.map((k) => {
-    const adv = k.advisory === true || advisoryIds.includes(k.id);
+    const adv = k.advisory === true;
     const mark: Mark = adv ? (k.pass ? 'advice' : 'advice-exceeded') : k.pass ? 'pass' : 'fail';
     const label = { pass: 'pass', fail: 'FAIL', advice: 'advice: ok', 'advice-exceeded': 'advice: exceeded' }[mark];
     return [
@@ -373,7 +373,7 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
       blocks.push({
         kind: 'table',
         head: CHECK_HEAD,
-        rows: checkRows(j.checks, u, j.advisory),
+        rows: checkRows(j.checks, u),
         caption: 'Checks of the chosen journal design',
       });
       blocks.push({

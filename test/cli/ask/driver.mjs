@@ -3,7 +3,8 @@
 // argv: node driver.mjs ask [options]. Advice is a fixed marker so tests can see it printed.
 import { Command } from 'commander';
 import { registerAsk } from '../../../dist/cli/ask/index.js';
-import { UsageError, EXIT } from '../../../dist/cli/errors.js';
+import { EXIT } from '../../../dist/cli/errors.js';
+import { UsageError } from '../../../dist/core/errors.js';
 
 const program = new Command().name('shaftwise').exitOverride();
 registerAsk(program, { advise: async (file) => `ADVICE-MARKER for ${file}` });

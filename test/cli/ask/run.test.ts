@@ -1,3 +1,4 @@
+import { UsageError } from '../../../src/core/errors.js';
 // The prompt runner driven by a scripted prompter (no terminal): saving as it goes,
 // interrupt and resume, refusing to overwrite, the end (validate, advise, note).
 // Scenario values are invented: an irrigation pump, a packaging-line crimper.
@@ -8,7 +9,7 @@ import { Command } from 'commander';
 import { parse } from 'yaml';
 import { afterEach, describe, expect, it } from 'vitest';
 import { parseCaseText } from '../../../src/case/load.js';
-import { UsageError } from '../../../src/cli/errors.js';
+
 import { registerAsk } from '../../../src/cli/ask/index.js';
 import { runAsk } from '../../../src/cli/ask/run.js';
 import { scripted, type Step } from './fake.js';

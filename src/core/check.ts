@@ -94,10 +94,17 @@ export interface SheetLine {
   source: string;
 }
 
-/** A number written for a calculation sheet: four significant figures, no trailing zeros. */
-export function num(x: number, digits = 4): string {
-  if (x === 0 || !Number.isFinite(x)) return String(x);
-  const a = Math.abs(x);
-  if (a >= 1e-3 && a < 1e6) return String(+x.toPrecision(digits));
-  return x.toExponential(digits - 1).replace(/\.?0+e/, 'e');
+/**
+ * The governing check: the limit check (advisory ones excluded) with the smallest margin, the
+ * first of equals; undefined when there is none.
+ */
+export function governingCheck(checks: readonly CheckRecord[]): CheckRecord | undefined {
+  let best: CheckRecord | undefined;
+  for (const k of checks) if (!k.advisory && (best === undefined || k.margin < best.margin)) best = k;
+  return best;
+}
+
+/** The smallest margin over the limit checks (advisory ones excluded); Infinity when there is none. */
+export function governingMargin(checks: readonly CheckRecord[]): number {
+  return governingCheck(checks)?.margin ?? Infinity;
 }
