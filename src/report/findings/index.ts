@@ -1,0 +1,39 @@
+import type { Assumption } from '../../case/types.js';
+import type { AssumedFinding, Finding } from '../../core/finding.js';
+import type { AssumptionWording, Wording } from './types.js';
+import { bushingWording } from './bushing.js';
+import { journalWording } from './journal.js';
+import { rollingWording } from './rolling.js';
+
+/** Every finding code and its words, one table per kernel. */
+const WORDING: Record<string, Wording> = {
+  ...bushingWording.findings,
+  ...rollingWording.findings,
+  ...journalWording.findings,
+};
+const ASSUMPTION_WORDING: Record<string, AssumptionWording> = {
+  ...bushingWording.assumptions,
+  ...rollingWording.assumptions,
+  ...journalWording.assumptions,
+};
+
+/** The sentence for a finding. An unknown code is a defect: it throws rather than print nothing. */
+export function describe(f: Finding | string): string {
+  if (typeof f === 'string') return f;
+  const w = WORDING[f.code];
+  if (!w) throw new Error(`no wording for finding ${f.code}`);
+  return w(f.values);
+}
+
+/** An assumption as shown (field, value, reason), from an assumed finding or a written one. */
+export function describeAssumption(a: AssumedFinding | Assumption): Assumption {
+  if (!('code' in a)) return a;
+  const w = ASSUMPTION_WORDING[a.code];
+  if (!w) throw new Error(`no wording for assumption ${a.code}`);
+  return { field: a.field, ...w(a.values) };
+}
+
+/** Every code that has words (the tests check that each code a kernel emits is here). */
+export function knownCodes(): string[] {
+  return [...Object.keys(WORDING), ...Object.keys(ASSUMPTION_WORDING)];
+}
