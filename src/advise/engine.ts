@@ -1,3 +1,4 @@
+import { finding, remarkKey, type AssumedFinding, type Finding, type Remark } from '../core/finding.js';
 import { OPTIONS, type OptionName } from '../core/options.js';
 import { Engine, type RuleResult } from 'json-rules-engine';
 import type { Assumption, CaseSI } from '../case/types.js';
@@ -48,7 +49,7 @@ export interface RankedOption {
   /** Limit checks that fail, for an option excluded by its check. */
   failed: CheckRecord[];
   /** Why the option is excluded (check findings and exclusion rules); empty when feasible. */
-  excluded: string[];
+  excluded: Remark[];
 }
 
 export interface ConditionTrace {
@@ -73,12 +74,14 @@ export interface AdviceResult {
   recommendation: OptionName | null;
   ranking: RankedOption[];
   checks: { bushing: BushingResult; rolling: RollingResult; journal: JournalResult };
-  assumed: Assumption[];
-  warnings: string[];
+  /** The loader's assumptions, then each kernel's (as findings, worded by the report). */
+  assumed: (Assumption | AssumedFinding)[];
+  /** Cautions of the three checks; a finding's code names its option. */
+  warnings: Remark[];
   /** How ties were broken, when there was one. */
   tieBreak: string | null;
   /** What would make an option feasible, when none is. */
-  toMakeFeasible: string[];
+  toMakeFeasible: Finding[];
   /** Every rule evaluated, fired or not, with the fact values it saw. */
   rules: RuleTrace[];
 }
@@ -186,7 +189,7 @@ export async function advise(
   const ranking = OPTIONS.map((option): RankedOption => {
     const f = fig[option];
     const reasons: Reason[] = [];
-    const excluded: string[] = [];
+    const excluded: Remark[] = [];
     if (!f.feasible) excluded.push(...(f.why.length ? f.why : ['its check found no feasible design']));
     for (const r of rules) {
       if (!fired.has(r.name) || r.event.option !== option) continue;
@@ -241,9 +244,9 @@ export async function advise(
   }
   const recommendation = top.feasible ? top.option : null;
   const warnings = dedupe([
-    ...checks.bushing.warnings.map((w) => `bushing: ${w}`),
-    ...checks.rolling.warnings.map((w) => `rolling: ${w}`),
-    ...checks.journal.warnings.map((w) => `journal: ${w}`),
+    ...checks.bushing.warnings.map((w) => (typeof w === 'string' ? `bushing: ${w}` : w)),
+    ...checks.rolling.warnings.map((w) => (typeof w === 'string' ? `rolling: ${w}` : w)),
+    ...checks.journal.warnings.map((w) => (typeof w === 'string' ? `journal: ${w}` : w)),
   ]);
   return {
     recommendation,
@@ -271,34 +274,42 @@ function flatten(cond: Condition | undefined): ConditionTrace[] {
   return [t];
 }
 
-/** What would make an option feasible, from the failing checks (the designer's next move). */
-function suggestions(c: CaseSI, checks: AdviceResult['checks'], fig: Figures): string[] {
-  const out: string[] = [];
+/** What would make an option feasible, from the failing checks (the designer's next move), as findings. */
+function suggestions(c: CaseSI, checks: AdviceResult['checks'], fig: Figures): Finding[] {
+  const out: Finding[] = [];
   const b = checks.bushing.materials.filter((m) => m.checks.find((k) => k.id === 'velocity')?.pass);
   if (b.length) {
     const m = [...b].sort((x, y) => x.minLength - y.minLength)[0]!;
     out.push(
-      `bushing: ${m.name} would need ${fmtMm(m.minLength)} of length (the case allows ${fmtMm(c.space.maxLength)}); or a shorter life target (it reaches ${Math.round(m.lifeHours)} h of ${c.life.hours} h), a larger wear allowance or cleaner running`,
+      finding('bushing.to-feasible-length', {
+        material: m.name,
+        minLength: m.minLength,
+        maxLength: c.space.maxLength,
+        lifeHours: m.lifeHours,
+        targetHours: c.life.hours,
+      }),
     );
   } else {
-    out.push('bushing: the sliding speed is beyond every material class: a lower speed or a smaller shaft');
+    out.push(finding('bushing.to-feasible-speed'));
   }
   if (!fig.rolling.feasible) {
-    const why = fig.rolling.failed.map((k) => k.label.toLowerCase());
-    out.push(
-      `rolling: ${why.length ? `fails on ${why.join(', ')}` : (fig.rolling.why[0] ?? 'no candidate fits')}; more radial room (a larger housing bore) admits a larger series, or give a supplier's bearing with higher ratings`,
-    );
+    const failing = fig.rolling.failed.map((k) => k.label.toLowerCase()).join(', ');
+    const first = fig.rolling.why[0];
+    out.push(finding('rolling.to-feasible', { failing, why: first === undefined ? null : first }));
   }
   if (c.lubrication.supply === 'none' || c.lubrication.supply === 'grease') {
-    out.push('journal: an oil supply (oil bath, or pumped and filtered oil) is needed for a full film');
+    out.push(finding('journal.to-feasible-oil'));
   } else if (!fig.journal.feasible) {
     out.push(
-      `journal: fails on ${fig.journal.failed.map((k) => k.label.toLowerCase()).join(', ') || 'its criteria'}; more length, a higher speed or a more viscous oil thickens the film`,
+      finding('journal.to-feasible-film', { failing: fig.journal.failed.map((k) => k.label.toLowerCase()).join(', ') }),
     );
   }
   return out;
 }
 
 const round2 = (x: number) => Math.round(x * 100) / 100;
-const dedupe = (xs: string[]) => [...new Set(xs)];
-const fmtMm = (m: number) => `${Math.round(m * 1000)} mm`;
+/** The remarks without repeats, first occurrence kept. */
+const dedupe = (xs: Remark[]): Remark[] => {
+  const seen = new Set<string>();
+  return xs.filter((x) => !seen.has(remarkKey(x)) && !!seen.add(remarkKey(x)));
+};

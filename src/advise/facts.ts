@@ -1,3 +1,4 @@
+import type { Remark } from '../core/finding.js';
 import { type OptionName } from '../core/options.js';
 import type { CaseSI } from '../case/types.js';
 import { governingMargin, type CheckRecord } from '../core/check.js';
@@ -80,7 +81,7 @@ export interface OptionFigures {
   /** Limit checks that fail for the design shown (advisory checks excluded). */
   failed: CheckRecord[];
   /** Why the check found nothing feasible, in words. */
-  why: string[];
+  why: Remark[];
 }
 
 const failing = (checks: CheckRecord[]) => checks.filter((k) => !k.pass && !k.advisory);

@@ -1,5 +1,7 @@
 import { UsageError } from '../core/errors.js';
 import { loadCaseFile } from '../case/load.js';
+import { describeWarning } from '../report/findings/index.js';
+import { wordedAdvice } from '../report/findings/worded.js';
 import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
 import type { UnitSystem } from '../report/units.js';
 import type { OutputOptions } from './check.js';
@@ -58,7 +60,7 @@ export async function runAdvise(
     return '';
   }
   if (format === 'json') {
-    const { rules, ...rest } = a;
+    const { rules, ...rest } = wordedAdvice(a);
     return JSON.stringify(
       opts.explain ? { ...rest, case: loaded.case, rules } : { ...rest, case: loaded.case },
       null,
@@ -71,7 +73,7 @@ export async function runAdvise(
     loaded.case.title,
     adviceText(a, opts.units, opts.explain),
     assumptionsBlock(a.assumed),
-    warningsBlock(a.warnings),
+    warningsBlock(a.warnings, describeWarning),
     CAUTION,
   ]
     .filter(Boolean)

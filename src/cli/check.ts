@@ -1,6 +1,9 @@
 import { UsageError } from '../core/errors.js';
 import { loadCaseFile, type LoadedCase } from '../case/load.js';
 import type { UnitSystem } from '../report/units.js';
+import type { Assumption } from '../case/types.js';
+import type { AssumedFinding, Remark } from '../core/finding.js';
+import { wordedResult } from '../report/findings/worded.js';
 import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
 
 export type Format = 'text' | 'json';
@@ -42,8 +45,11 @@ async function computeCheck(
   opts: OutputOptions,
 ): Promise<{ json: unknown; text: string }> {
   const c = loaded.case;
-  const wrap = (r: { option: string; assumed: LoadedCase['assumed']; warnings: string[] }, body: string) => {
-    const { option, assumed, ...rest } = r;
+  const wrap = (
+    r: { option: string; assumed: readonly (Assumption | AssumedFinding)[]; warnings: readonly Remark[] },
+    body: string,
+  ) => {
+    const { option, assumed, ...rest } = wordedResult(r);
     const json = { option, case: c, assumed: [...loaded.assumed, ...assumed], ...rest };
     const text = [`${c.title}`, body, assumptionsBlock(json.assumed), warningsBlock(r.warnings), CAUTION]
       .filter(Boolean)

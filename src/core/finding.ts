@@ -3,12 +3,12 @@
  * values carry the numbers (SI) and names it rests on; the words a reader sees are written in
  * one place, src/report/findings/, so JSON, text and the note say the same thing.
  */
-export type FindingValue = number | string | boolean | null;
+export type FindingValue = number | string | boolean | null | Finding;
 
 export interface Finding {
   /** Stable code, "<option>.<what>", e.g. "rolling.kappa-below-range". */
   code: string;
-  /** Numbers in SI base units (temperatures °C), ids and names the wording needs. */
+  /** Numbers in SI base units (temperatures °C), ids and names the wording needs, or a finding it rests on. */
   values: Record<string, FindingValue>;
 }
 
@@ -25,4 +25,15 @@ export function finding(code: string, values: Record<string, FindingValue> = {})
 /** Build an assumed finding for `field`. */
 export function assumedFinding(field: string, code: string, values: Record<string, FindingValue> = {}): AssumedFinding {
   return { field, code, values };
+}
+
+/**
+ * A reason or caution as it travels to the report: a sentence already written (a rule file's
+ * `because`, a check's label) or a finding that the report words.
+ */
+export type Remark = string | Finding;
+
+/** A key that is equal for equal remarks (for removing repeats). */
+export function remarkKey(r: Remark): string {
+  return typeof r === 'string' ? r : JSON.stringify(r);
 }

@@ -1,3 +1,4 @@
+import { describe } from './findings/index.js';
 import type { AdviceResult, RankedOption } from '../advise/engine.js';
 import type { SheetLine } from '../core/check.js';
 import { fmt, type UnitSystem } from './units.js';
@@ -58,13 +59,13 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
         `  − ${Math.abs(x.points).toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`,
       );
     if (!r.feasible) {
-      for (const e of r.excluded) out.push(`  excluded: ${e}`);
+      for (const e of r.excluded) out.push(`  excluded: ${describe(e)}`);
       if (r.failed.length) out.push(checksTable(r.failed, units));
     }
   }
   if (a.toMakeFeasible.length) {
     out.push('\nWhat would make an option feasible:');
-    for (const s of a.toMakeFeasible) out.push(`  - ${s}`);
+    for (const s of a.toMakeFeasible) out.push(`  - ${describe(s)}`);
   }
   out.push(
     '\nScores are the sum of rule points (rules/*.json, common practice), weighted by the case priorities (priority/3); the checks decide feasibility.',

@@ -1,5 +1,7 @@
 import type { CheckRecord } from '../core/check.js';
 import type { Assumption } from '../case/types.js';
+import type { AssumedFinding, Remark } from '../core/finding.js';
+import { describe, describeAssumption } from './findings/index.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 
@@ -59,14 +61,20 @@ export function checksTable(checks: CheckRecord[], units: UnitSystem, rowSource?
   );
 }
 
-export function assumptionsBlock(assumed: Assumption[]): string {
+export function assumptionsBlock(assumed: readonly (Assumption | AssumedFinding)[]): string {
   if (!assumed.length) return '';
-  return 'Assumed:\n' + assumed.map((a) => `  - ${a.field} = ${a.value}: ${a.reason}`).join('\n');
+  return (
+    'Assumed:\n' +
+    assumed
+      .map(describeAssumption)
+      .map((a) => `  - ${a.field} = ${a.value}: ${a.reason}`)
+      .join('\n')
+  );
 }
 
-export function warningsBlock(warnings: string[]): string {
+export function warningsBlock(warnings: readonly Remark[], worded: (w: Remark) => string = describe): string {
   if (!warnings.length) return '';
-  return 'Warnings:\n' + warnings.map((w) => `  ! ${w}`).join('\n');
+  return 'Warnings:\n' + warnings.map((w) => `  ! ${worded(w)}`).join('\n');
 }
 
 export function shorten(s: string, n: number): string {

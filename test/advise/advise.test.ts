@@ -6,6 +6,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { advise } from '../../src/advise/engine.js';
+import { describe as wordOf } from '../../src/report/findings/index.js';
 import { loadRules, RuleFileError } from '../../src/advise/load-rules.js';
 import { validateCase } from '../../src/case/load.js';
 import { runCli } from '../helpers/cli.js';
@@ -41,8 +42,8 @@ describe('scenario matrix (expected winner: common practice)', () => {
     const a = await advise(c, assumed);
     expect(a.recommendation).toBeNull();
     expect(a.ranking.every((r) => !r.feasible)).toBe(true);
-    expect(a.toMakeFeasible.join('\n')).toMatch(/journal: an oil supply/);
-    expect(a.toMakeFeasible.join('\n')).toMatch(/bushing:/);
+    expect(a.toMakeFeasible.map(wordOf).join('\n')).toMatch(/journal: an oil supply/);
+    expect(a.toMakeFeasible.map(wordOf).join('\n')).toMatch(/bushing:/);
   });
 
   it('priorities weigh the rules that name them: cost 5 scores the cost rule at 5/3 of its points', async () => {

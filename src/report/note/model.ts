@@ -1,3 +1,4 @@
+import { describe, describeAssumption, describeWarning } from '../findings/index.js';
 import type { AdviceResult, RankedOption } from '../../advise/engine.js';
 import type { CheckRecord, SheetLine } from '../../core/check.js';
 import type { LoadedCase } from '../../case/load.js';
@@ -194,7 +195,7 @@ function reasonText(x: RankedOption['reasons'][number]): string {
 function whyLost(r: RankedOption, winner: RankedOption, a: AdviceResult, u: UnitSystem): string[] {
   const out: string[] = [];
   if (!r.feasible) {
-    for (const e of r.excluded) out.push(`Excluded: ${e}`);
+    for (const e of r.excluded) out.push(`Excluded: ${describe(e)}`);
     for (const k of r.failed)
       out.push(
         `Fails: ${k.label}: ${fmt(k.value, k.unit, u)} against ${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)} (margin ${pct(k.margin)}; ${k.source}).`,
@@ -264,7 +265,7 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
           {
             kind: 'table',
             head: ['field', 'value', 'reason'],
-            rows: a.assumed.map((x) => [x.field, x.value, x.reason]),
+            rows: a.assumed.map(describeAssumption).map((x) => [x.field, x.value, x.reason]),
           },
         ]
       : [{ kind: 'p', text: 'None: every input was given.' }],
@@ -292,8 +293,12 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
     text: 'Feasibility is decided by the checks; among feasible options the score, the sum of rule points (rules/*.json, common practice) weighted by the case priorities (priority / 3), decides the rank.',
   });
   if (a.toMakeFeasible.length)
-    rec.push({ kind: 'sub', title: 'What would make an option feasible' }, { kind: 'list', items: a.toMakeFeasible });
-  if (a.warnings.length) rec.push({ kind: 'sub', title: 'Warnings' }, { kind: 'list', items: a.warnings });
+    rec.push(
+      { kind: 'sub', title: 'What would make an option feasible' },
+      { kind: 'list', items: a.toMakeFeasible.map(describe) },
+    );
+  if (a.warnings.length)
+    rec.push({ kind: 'sub', title: 'Warnings' }, { kind: 'list', items: a.warnings.map(describeWarning) });
   sections.push({ id: 'recommendation', title: 'Recommendation and ranking', blocks: rec });
 
   for (const r of a.ranking) {
