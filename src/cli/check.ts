@@ -3,7 +3,7 @@ import { loadCaseFile, type LoadedCase } from '../case/load.js';
 import type { UnitSystem } from '../report/units.js';
 import type { Assumption } from '../case/types.js';
 import type { AssumedFinding, Remark } from '../core/finding.js';
-import { wordedResult } from '../report/findings/worded.js';
+import { worded } from '../report/findings/worded.js';
 import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
 
 export type Format = 'text' | 'json';
@@ -49,7 +49,7 @@ async function computeCheck(
     r: { option: string; assumed: readonly (Assumption | AssumedFinding)[]; warnings: readonly Remark[] },
     body: string,
   ) => {
-    const { option, assumed, ...rest } = wordedResult(r);
+    const { option, assumed, ...rest } = worded(r) as typeof r & { assumed: Assumption[] };
     const json = { option, case: c, assumed: [...loaded.assumed, ...assumed], ...rest };
     const text = [`${c.title}`, body, assumptionsBlock(json.assumed), warningsBlock(r.warnings), CAUTION]
       .filter(Boolean)

@@ -3,7 +3,7 @@
  * values carry the numbers (SI) and names it rests on; the words a reader sees are written in
  * one place, src/report/findings/, so JSON, text and the note say the same thing.
  */
-export type FindingValue = number | string | boolean | null | Finding;
+export type FindingValue = number | string | boolean | null | Finding | readonly (number | string)[];
 
 export interface Finding {
   /** Stable code, "<option>.<what>", e.g. "rolling.kappa-below-range". */

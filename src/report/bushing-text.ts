@@ -1,3 +1,4 @@
+import { describe } from './findings/index.js';
 import type { BushingResult } from '../calc/bushing/index.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
@@ -32,7 +33,7 @@ export function bushingText(r: BushingResult, units: UnitSystem): string {
       '* beyond twice the allowed rise: the one-node temperature model is out of its range there; read it as "far too hot", not as a figure.',
     );
   }
-  out.push(r.best ? paint.bold(`Best: ${r.bestReason}.`) : paint.bold(`None: ${r.bestReason}.`));
+  out.push(paint.bold(`${r.best ? 'Best' : 'None'}: ${describe(r.bestReason)}.`));
   out.push('Life band: hours to wear through the allowance at the high, typical and low published wear factor.');
   for (const m of r.materials) {
     const lengthNote =

@@ -1,4 +1,5 @@
-import type { Assumption, BushingMaterial, CaseSI } from '../../case/types.js';
+import { assumedFinding, finding, type AssumedFinding, type Finding } from '../../core/finding.js';
+import type { BushingMaterial, CaseSI } from '../../case/types.js';
 import {
   advisory,
   allLimitsPass,
@@ -72,10 +73,10 @@ export interface BushingResult {
   /** The material the sheet, charts and advice show: the best, or the nearest miss when none is feasible. */
   shown: string | null;
   /** Why the best was chosen, or why none fits. */
-  bestReason: string;
+  bestReason: Finding;
   feasible: boolean;
-  assumed: Assumption[];
-  warnings: string[];
+  assumed: AssumedFinding[];
+  warnings: Finding[];
   sheet: SheetLine[];
 }
 
@@ -99,8 +100,8 @@ const LENGTH_STEP = 1e-3;
  */
 export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): BushingResult {
   const factors = bushingFactors();
-  const assumed: Assumption[] = [];
-  const warnings: string[] = [];
+  const assumed: AssumedFinding[] = [];
+  const warnings: Finding[] = [];
   const D = c.shaft.diameter;
   const osc = c.shaft.oscillation;
   const points: Point[] = operatingPoints(c).map((p) => ({
@@ -108,31 +109,33 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
     F: p.radial,
     V: osc ? oscillatingSlidingSpeed(D, osc.angle, osc.frequency) : rotatingSlidingSpeed(D, p.speed ?? 0),
   }));
-  if (points.some((p) => p.V === 0))
-    warnings.push('an operating point has zero speed: no sliding, no wear at that point');
-  if (c.load.axial > 0 || (c.duty ?? []).some((p) => p.axial > 0)) {
-    warnings.push('axial load is not carried by a plain bushing: add a thrust washer or shoulder (not checked here)');
-  }
+  if (points.some((p) => p.V === 0)) warnings.push(finding('bushing.zero-speed'));
+  if (c.load.axial > 0 || (c.duty ?? []).some((p) => p.axial > 0)) warnings.push(finding('bushing.axial-not-carried'));
 
   const motionKey = osc ? 'oscillating' : 'rotating';
   const fm = factors.motion.find((m) => m.key === motionKey)!;
   const fe = factors.environment.find((m) => m.key === c.environment.contamination)!;
-  assumed.push({ field: 'bushing.motionFactor', value: String(fm.value), reason: `${fm.note} (${fm.source})` });
-  assumed.push({
-    field: 'bushing.environmentFactor',
-    value: String(fe.value),
-    reason: `${c.environment.contamination}: ${fe.note} (${fe.source})`,
-  });
-  assumed.push({
-    field: 'bushing.heat',
-    value: `h = ${factors.heat.dissipation} W/(m^2*K), A = ${factors.heat.areaFactor}·π·D·L`,
-    reason: `${factors.heat.note} (${factors.heat.source})`,
-  });
-  if (c.lubrication.supply !== 'none') {
-    warnings.push(
-      `the case offers ${c.lubrication.supply} lubrication; the bushing figures are for boundary (rubbing) lubrication, which is conservative where a lubricant reaches the bore`,
-    );
-  }
+  assumed.push(
+    assumedFinding('bushing.motionFactor', 'bushing.motion-factor', {
+      factor: fm.value,
+      note: fm.note,
+      source: fm.source,
+    }),
+    assumedFinding('bushing.environmentFactor', 'bushing.environment-factor', {
+      contamination: c.environment.contamination,
+      factor: fe.value,
+      note: fe.note,
+      source: fe.source,
+    }),
+    assumedFinding('bushing.heat', 'bushing.heat-model', {
+      dissipation: factors.heat.dissipation,
+      areaFactor: factors.heat.areaFactor,
+      note: factors.heat.note,
+      source: factors.heat.source,
+    }),
+  );
+  if (c.lubrication.supply !== 'none')
+    warnings.push(finding('bushing.boundary-conservative', { supply: c.lubrication.supply }));
 
   const all = bushingMaterials();
   const named = c.bushing?.material;
@@ -142,13 +145,18 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
   const materials = candidates.map((m) => checkMaterial(c, m, points, fm.value, fe.value, factors));
   const feasible = materials.filter((m) => m.feasible);
   let best: BushingMaterialResult | undefined;
-  let bestReason: string;
+  let bestReason: Finding;
   if (feasible.length) {
     // Most robust: the largest smallest margin over the governing checks; ties keep data order.
     best = feasible.reduce((a, b) => (governingMargin(b.checks) > governingMargin(a.checks) ? b : a));
-    bestReason = `${best.name} at ${num(best.length * 1000, 3)} mm long has the largest smallest margin (${(governingMargin(best.checks) * 100).toFixed(0)} %) of the ${feasible.length} material(s) that pass every check`;
+    bestReason = finding('bushing.best', {
+      material: best.name,
+      length: best.length,
+      margin: governingMargin(best.checks),
+      passing: feasible.length,
+    });
   } else {
-    bestReason = `no material passes every check: ${whyNone(materials)}`;
+    bestReason = noneFeasible(materials);
     warnings.push(bestReason);
   }
   // The material shown when none is feasible: the nearest miss, by the same largest-smallest-margin rule.
@@ -311,13 +319,16 @@ function checkMaterial(
   };
 }
 
-/** Smallest margin over the limit checks (advice left out): the robustness of a material's design. */
-
-function whyNone(ms: BushingMaterialResult[]): string {
+/** No material passes: each failing limit check's label and the number of materials it fails for. */
+function noneFeasible(ms: BushingMaterialResult[]): Finding {
   const count = new Map<string, number>();
   for (const m of ms)
     for (const k of m.checks) if (!k.pass && !k.advisory) count.set(k.label, (count.get(k.label) ?? 0) + 1);
-  return [...count.entries()].map(([label, n]) => `${label} fails for ${n} of ${ms.length}`).join('; ');
+  return finding('bushing.none-feasible', {
+    failing: [...count.keys()],
+    failingCount: [...count.values()],
+    materials: ms.length,
+  });
 }
 
 function sheetFor(c: CaseSI, m: BushingMaterialResult, points: Point[]): SheetLine[] {

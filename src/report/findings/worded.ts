@@ -1,41 +1,28 @@
-import type { Assumption } from '../../case/types.js';
-import type { AssumedFinding, Remark } from '../../core/finding.js';
+import type { AssumedFinding, Finding, Remark } from '../../core/finding.js';
 import { describe, describeAssumption, describeWarning } from './index.js';
 
-/** What a kernel result carries that needs words: its cautions and its assumptions. */
-interface Remarked {
-  warnings: readonly Remark[];
-  assumed: readonly (Assumption | AssumedFinding)[];
+const isFinding = (v: unknown): v is Finding =>
+  typeof v === 'object' &&
+  v !== null &&
+  typeof (v as Finding).code === 'string' &&
+  typeof (v as Finding).values === 'object' &&
+  Object.keys(v).every((k) => k === 'code' || k === 'values' || k === 'field');
+
+/**
+ * A result as printed in JSON: every finding in it worded the way the text and the note word
+ * it (an assumed finding as field, value, reason; any other as its sentence), everything else
+ * as it is, keys in their order.
+ */
+export function worded(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(worded);
+  if (isFinding(value)) return 'field' in value ? describeAssumption(value as AssumedFinding) : describe(value);
+  if (typeof value !== 'object' || value === null) return value;
+  const out: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(value)) out[k] = worded(v);
+  return out;
 }
 
-/** A kernel result as printed in JSON: cautions as sentences, assumptions as field, value, reason. */
-export function wordedResult<T extends Remarked>(
-  r: T,
-): Omit<T, 'warnings' | 'assumed'> & { warnings: string[]; assumed: Assumption[] } {
-  return { ...r, warnings: r.warnings.map(describe), assumed: r.assumed.map(describeAssumption) };
-}
-
-/** What an advice carries that needs words, besides the kernel results in `checks`. */
-interface RemarkedAdvice {
-  warnings: readonly Remark[];
-  assumed: readonly (Assumption | AssumedFinding)[];
-  ranking: readonly { excluded: readonly Remark[] }[];
-  toMakeFeasible: readonly Remark[];
-  checks: { bushing: Remarked; rolling: Remarked; journal: Remarked };
-}
-
-/** An advice as printed in JSON: every finding worded the way the text and the note word it. */
-export function wordedAdvice<T extends RemarkedAdvice>(a: T) {
-  return {
-    ...a,
-    ranking: a.ranking.map((r) => ({ ...r, excluded: r.excluded.map(describe) })),
-    checks: {
-      bushing: wordedResult(a.checks.bushing),
-      rolling: wordedResult(a.checks.rolling),
-      journal: wordedResult(a.checks.journal),
-    },
-    assumed: a.assumed.map(describeAssumption),
-    toMakeFeasible: a.toMakeFeasible.map(describe),
-    warnings: a.warnings.map(describeWarning),
-  };
+/** An advice as printed in JSON: as worded(), with each caution naming its option. */
+export function wordedAdvice<T extends { warnings: readonly Remark[] }>(a: T): Record<string, unknown> {
+  return worded({ ...a, warnings: a.warnings.map(describeWarning) }) as Record<string, unknown>;
 }

@@ -343,7 +343,7 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
             .join('; ') || '—',
         ]),
       });
-      blocks.push({ kind: 'p', text: a.checks.bushing.bestReason });
+      blocks.push({ kind: 'p', text: describe(a.checks.bushing.bestReason) });
       blocks.push({ kind: 'chart', chart: chartFor('bushing-wear') });
     } else if (r.option === 'rolling') {
       const ro = a.checks.rolling;
