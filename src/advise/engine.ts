@@ -116,6 +116,11 @@ export interface AdviseOptions {
   runRules?: (facts: RuleFacts) => Promise<RuleRun>;
   /** false: leave `rules` (the per-rule trace for --explain) empty; a sweep has no use for it. */
   traces?: boolean;
+  /**
+   * Options of the kernels this run computes: `sheet: false` skips the calculation sheets and
+   * `pressureProfile: false` the journal's pressure profile (text output and sweeps show neither).
+   */
+  kernel?: { sheet?: boolean; pressureProfile?: boolean };
 }
 
 /** Fixed order for ties: the simpler and cheaper support first (common practice). */
@@ -134,9 +139,12 @@ export async function advise(
   opts: AdviseOptions = {},
 ): Promise<AdviceResult> {
   const cache: Partial<{ bushing: BushingResult; rolling: RollingResult; journal: JournalResult }> = { ...opts.checks };
-  const bushing = () => (cache.bushing ??= checkBushing(c));
-  const rolling = () => (cache.rolling ??= checkRolling(c));
-  const journal = () => (cache.journal ??= checkJournal(c));
+  const kernel = opts.kernel ?? {};
+  const sheet = kernel.sheet === undefined ? {} : { sheet: kernel.sheet };
+  const profile = kernel.pressureProfile === undefined ? {} : { pressureProfile: kernel.pressureProfile };
+  const bushing = () => (cache.bushing ??= checkBushing(c, sheet));
+  const rolling = () => (cache.rolling ??= checkRolling(c, sheet));
+  const journal = () => (cache.journal ??= checkJournal(c, { ...sheet, ...profile }));
   let figs: Figures | undefined;
   const figures = (): Figures =>
     (figs ??= {

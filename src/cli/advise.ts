@@ -42,11 +42,9 @@ export async function runAdvise(
   const loaded = loadCaseFile(file);
   const { advise } = await import('../advise/engine.js');
   // The pressure profile (one more Reynolds solve) is drawn in the note and kept in JSON; text has no use for it.
-  const checks =
-    format === 'text'
-      ? { journal: (await import('../calc/journal/index.js')).checkJournal(loaded.case, { pressureProfile: false }) }
-      : {};
-  const a = await advise(loaded.case, loaded.assumed, undefined, { checks });
+  const a = await advise(loaded.case, loaded.assumed, undefined, {
+    kernel: format === 'text' ? { pressureProfile: false } : {},
+  });
   if (note) {
     const { renderNote } = await import('../report/note/index.js');
     const text = await renderNote(loaded, a, format, {

@@ -6,7 +6,6 @@ import { loadCaseFile } from '../case/load.js';
 import { advise, type AdviceResult } from '../advise/engine.js';
 import { loadRules, type LoadedRule } from '../advise/load-rules.js';
 
-import { checkJournal } from '../calc/journal/index.js';
 import { ruleRunner } from './rule-runner.js';
 
 /**
@@ -65,7 +64,7 @@ export async function adviseFile(
     const loaded = loadCaseFile(path);
     const c = loaded.case;
     const a = await advise(c, loaded.assumed, rules, {
-      checks: { journal: checkJournal(c, { pressureProfile: false, sheet: false }) },
+      kernel: { pressureProfile: false, sheet: false },
       runRules: run,
     });
     const top = a.ranking[0]!;

@@ -3,8 +3,6 @@ import type { Assumption, CaseSI } from '../case/types.js';
 import { advise, type AdviceResult } from '../advise/engine.js';
 import { loadRules, type LoadedRule } from '../advise/load-rules.js';
 
-import { checkBushing } from '../calc/bushing/index.js';
-import { checkRolling } from '../calc/rolling/index.js';
 import { checkJournal } from '../calc/journal/index.js';
 import { logAxis } from './axes.js';
 import { bestOf, designOf, type JournalDesign } from './journal-design.js';
@@ -153,7 +151,8 @@ export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOpti
         ids.map((k) => designs[k]!),
       ).result;
       const a = await advise(cc, [], rules, {
-        checks: { bushing: checkBushing(cc, { sheet: false }), rolling: checkRolling(cc, { sheet: false }), journal },
+        checks: { journal },
+        kernel: { sheet: false },
         runRules: runner.run,
         traces: false,
       });
