@@ -1,3 +1,7 @@
+import type { OilGrade } from '../data/load.js';
+
+/** The oil grade row (defined with its schema in src/data/load.ts), for the kernels that take one. */
+export type { OilGrade };
 /**
  * Lubricant viscosity against temperature.
  *
@@ -11,20 +15,6 @@
  * Dynamic viscosity μ = ν·ρ(T), with ρ(T) = ρ15·(1 − α·(T − 15 °C)) and α ≈ 0.00065 /K
  * (from memory: mineral oil density falls about 0.065 %/K).
  */
-
-export interface OilGrade {
-  /** ISO VG number: nominal kinematic viscosity at 40 °C, mm²/s (ISO 3448). */
-  grade: number;
-  /** Kinematic viscosity at 40 °C, mm²/s. */
-  nu40: number;
-  /** Kinematic viscosity at 100 °C, mm²/s. */
-  nu100: number;
-  /** Density at 15 °C, kg/m³. */
-  density15: number;
-  /** Specific heat, J/(kg·K). */
-  specificHeat: number;
-  source: string;
-}
 
 export interface WaltherConstants {
   A: number;

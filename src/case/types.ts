@@ -1,3 +1,4 @@
+import type { BushingMaterial } from '../data/bushing.js';
 /**
  * The duty case as understood, in SI base units. This is what the calculation
  * kernels receive; the case-file loader (src/case/load.ts) produces it from
@@ -11,27 +12,8 @@ export type Supply = 'none' | 'grease' | 'oil-bath' | 'oil-feed';
 export type Contamination = 'clean' | 'normal' | 'dirty' | 'severe';
 export type Priority = 'cost' | 'friction' | 'maintenance' | 'noise' | 'precision';
 
-/** A bushing material class, in the same shape as the rows of data/bushing-materials.json (SI). */
-export interface BushingMaterial {
-  id: string;
-  name: string;
-  /** Maximum mean projected pressure, Pa. */
-  maxPressure: number;
-  /** Maximum sliding speed, m/s. */
-  maxVelocity: number;
-  /** Maximum PV, Pa·m/s. */
-  maxPV: number;
-  /** Typical dimensional wear factor k, m³/(N·m) (= m²/N). */
-  wearFactor: number;
-  /** Low and high ends of the published scatter of k, m³/(N·m). Default: typical/3 and typical×3. */
-  wearFactorLow?: number;
-  wearFactorHigh?: number;
-  /** Typical friction coefficient, boundary regime, dimensionless. */
-  friction: number;
-  /** Maximum continuous temperature of the material, °C. */
-  maxTemperature: number;
-  source: string;
-}
+/** A bushing material class, SI (defined with its schema in src/data/bushing.ts). */
+export type { BushingMaterial };
 
 export interface OperatingPointSI {
   /** Share of running time, 0..1; shares add to 1. */

@@ -1,7 +1,6 @@
 import { DataError } from '../core/errors.js';
 import { z } from 'zod';
 import { loadTable } from './load.js';
-import type { BushingMaterial } from '../case/types.js';
 
 /**
  * data/bushing-materials.json and data/bushing-factors.json. Rows are written in
@@ -11,16 +10,26 @@ import type { BushingMaterial } from '../case/types.js';
 const pos = z.number().positive();
 const rowSchema = z.strictObject({
   id: z.string().regex(/^[a-z0-9-]+$/),
+  /** Generic class name, never a trade name. */
   name: z.string().min(1),
+  /** Maximum mean projected pressure (file MPa; SI Pa). */
   maxPressure: pos,
+  /** Maximum sliding speed, m/s. */
   maxVelocity: pos,
+  /** Maximum PV (file MPa·m/s; SI Pa·m/s). */
   maxPV: pos,
+  /** Typical dimensional wear factor k (file mm³/(N·m); SI m³/(N·m) = m²/N). */
   wearFactor: pos,
+  /** Low and high ends of the published scatter of k, same unit. */
   wearFactorLow: pos,
   wearFactorHigh: pos,
+  /** Typical friction coefficient, boundary regime, dimensionless. */
   friction: pos.max(1),
+  /** Maximum continuous temperature of the material, °C. */
   maxTemperature: z.number(),
+  /** Wall thickness as a fraction of bore (common practice). */
   wallFraction: pos.max(0.5),
+  /** Minimum wall (file mm; SI m). */
   minWall: pos,
   source: z.string().min(1),
 });
@@ -30,13 +39,18 @@ const fileSchema = z.strictObject({
   materials: z.array(rowSchema).min(1),
 });
 
-export interface BushingMaterialRow extends BushingMaterial {
-  wearFactorLow: number;
-  wearFactorHigh: number;
-  /** Wall thickness as a fraction of bore, and its minimum, m (common practice). */
-  wallFraction: number;
-  minWall: number;
-}
+/** A row of data/bushing-materials.json converted to SI (the same fields as the file's schema). */
+export type BushingMaterialRow = z.infer<typeof rowSchema>;
+
+/**
+ * A bushing material as a case may give it inline (a supplier's datasheet): the row's fields in
+ * SI without the wall sizing, the wear scatter optional (default typical/3 and typical×3).
+ */
+export type BushingMaterial = Omit<
+  BushingMaterialRow,
+  'wallFraction' | 'minWall' | 'wearFactorLow' | 'wearFactorHigh'
+> &
+  Partial<Pick<BushingMaterialRow, 'wearFactorLow' | 'wearFactorHigh'>>;
 
 const converted = new WeakMap<object, BushingMaterialRow[]>();
 

@@ -1,7 +1,6 @@
 import { DataError } from '../core/errors.js';
 import { readFileSync } from 'node:fs';
 import { dataDir } from './load.js';
-import type { DimensionlessPerformance } from '../calc/journal/reynolds.js';
 
 /**
  * data/journal-tables.json: the journal solver's dimensionless tables, solved ahead of time
@@ -9,15 +8,7 @@ import type { DimensionlessPerformance } from '../calc/journal/reynolds.js';
  * our own making, so it is checked by a plain loop (every row has every field, finite)
  * rather than a zod schema, which costs tens of milliseconds at start-up here.
  */
-export interface ShippedTables {
-  description: string;
-  source: string;
-  mesh: { nTheta: number; nZeta: number; stretch: number };
-  eccentricities: number[];
-  tables: { lengthToDiameter: number; rows: DimensionlessPerformance[] }[];
-}
-
-const FIELDS: (keyof DimensionlessPerformance)[] = [
+const FIELDS = [
   'eccentricity',
   'lengthToDiameter',
   'sommerfeld',
@@ -31,7 +22,18 @@ const FIELDS: (keyof DimensionlessPerformance)[] = [
   'filmEndDeg',
   'loadRadial',
   'loadTangential',
-];
+] as const;
+
+/** One solved row: the dimensionless performance at one eccentricity ratio and L/D (the solver's own figures). */
+export type JournalTableRow = Record<(typeof FIELDS)[number], number>;
+
+export interface ShippedTables {
+  description: string;
+  source: string;
+  mesh: { nTheta: number; nZeta: number; stretch: number };
+  eccentricities: number[];
+  tables: { lengthToDiameter: number; rows: JournalTableRow[] }[];
+}
 
 const cached = new Map<string, ShippedTables>();
 

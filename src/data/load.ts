@@ -2,7 +2,6 @@ import { DataError } from '../core/errors.js';
 import { readFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { z } from 'zod';
-import type { OilGrade } from '../calc/lubricant.js';
 
 /**
  * Loaders for the tables in data/. Each table is validated by a zod schema when read;
@@ -65,13 +64,20 @@ export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
 
 const positive = z.number().positive();
 const oilGradeSchema = z.object({
+  /** ISO VG number: nominal kinematic viscosity at 40 °C, mm²/s (ISO 3448). */
   grade: positive,
+  /** Kinematic viscosity at 40 °C, mm²/s. */
   nu40: positive,
+  /** Kinematic viscosity at 100 °C, mm²/s. */
   nu100: positive,
+  /** Density at 15 °C, kg/m³. */
   density15: positive,
+  /** Specific heat, J/(kg·K). */
   specificHeat: positive,
   source: z.string().min(1),
 });
+/** An oil grade row of data/lubricants.json (the one definition of an oil grade). */
+export type OilGrade = z.infer<typeof oilGradeSchema>;
 const lubricantsSchema = z.object({
   description: z.string(),
   units: z.record(z.string(), z.string()),
