@@ -82,6 +82,8 @@ const lubricantsSchema = z.object({
   description: z.string(),
   units: z.record(z.string(), z.string()),
   densityTemperatureCoefficient: z.object({ value: positive, unit: z.string(), source: z.string() }),
+  /** The grade taken where a case supplies oil but names none (one place for it). */
+  defaultGrade: z.object({ grade: positive, source: z.string().min(1) }),
   greaseBaseOil: z.object({ grade: positive, source: z.string() }),
   grades: z.array(oilGradeSchema).min(1),
 });

@@ -2,6 +2,7 @@ import type { z } from 'zod';
 import { caseFileSchema, CONTAMINATIONS, PRIORITIES, SHOCKS, SUPPLIES } from '../../case/schema.js';
 import { KINDS, parseQuantity, type Kind } from '../../case/quantity.js';
 import { lubricants } from '../../data/load.js';
+import { DEFAULTS } from '../../case/defaults.js';
 
 /**
  * The questionnaire as data. Each question names the case-file key it fills
@@ -75,9 +76,12 @@ function oilChoices(): Choice[] {
 }
 
 function defaultOil(): string {
-  const grades = lubricants().grades.map((g) => g.grade);
-  // VG 68 is a common general-purpose circulating oil; otherwise the middle grade of the table.
-  const g = grades.includes(68) ? 68 : grades[Math.floor(grades.length / 2)]!;
+  const table = lubricants();
+  const grades = table.grades.map((g) => g.grade);
+  // The table's default grade; a user's data folder without that row gets its middle grade.
+  const g = grades.includes(table.defaultGrade.grade)
+    ? table.defaultGrade.grade
+    : grades[Math.floor(grades.length / 2)]!;
   return `ISO VG ${g}`;
 }
 
@@ -176,7 +180,7 @@ export const QUESTIONS: readonly Question[] = [
     section: 'Loads',
     message: 'Axial (thrust) load',
     help: 'Force along the shaft: a plain bushing needs a thrust face for it; a rolling bearing takes some.',
-    default: fixed('0 N'),
+    default: fixed(`${DEFAULTS.axial.value} N`),
   },
   {
     id: 'shock',
@@ -185,7 +189,7 @@ export const QUESTIONS: readonly Question[] = [
     section: 'Loads',
     message: 'How much shock or knocking does the load carry?',
     help: 'Knocks raise the effective load and favour supports that tolerate peaks.',
-    default: fixed('none'),
+    default: fixed(DEFAULTS.shock.value),
     choices: choicesOf(SHOCKS, {
       none: 'smooth running',
       light: 'occasional small knocks',
@@ -211,7 +215,7 @@ export const QUESTIONS: readonly Question[] = [
     section: 'Life',
     message: 'Radial wear a bushing may lose before replacement',
     help: "How much play the machine tolerates; sets a plain bushing's wear life.",
-    default: fixed('0.25 mm'),
+    default: fixed(`${DEFAULTS.wearAllowance.value * 1000} mm`),
   },
   {
     id: 'maxLength',
@@ -253,7 +257,7 @@ export const QUESTIONS: readonly Question[] = [
     section: 'Lubrication',
     message: 'What lubrication can the machine supply at this support?',
     help: 'An oil-film bearing needs a steady oil supply; a bushing may run dry; a rolling bearing needs grease or oil.',
-    default: fixed('none'),
+    default: fixed(DEFAULTS.supply.value),
     choices: choicesOf(SUPPLIES, {
       none: 'nothing: dry running or lubricated for life',
       grease: 'grease, by hand or a grease nipple',
@@ -280,7 +284,7 @@ export const QUESTIONS: readonly Question[] = [
     section: 'Temperatures',
     message: 'Lubricant temperature where it reaches the support',
     help: 'Viscosity falls fast with temperature: it decides film thickness and rolling-bearing lubrication quality.',
-    default: fixed('40 degC'),
+    default: fixed(`${DEFAULTS.inletTemperature.value} degC`),
     when: hasLubricant,
   },
   {
@@ -291,7 +295,7 @@ export const QUESTIONS: readonly Question[] = [
     section: 'Temperatures',
     message: 'Ambient temperature around the support',
     help: 'A bushing sheds its friction heat to the surroundings; a hot machine leaves less margin.',
-    default: fixed('25 degC'),
+    default: fixed(`${DEFAULTS.ambient.value} degC`),
   },
   {
     id: 'contamination',
@@ -300,7 +304,7 @@ export const QUESTIONS: readonly Question[] = [
     section: 'Environment',
     message: 'How clean are the surroundings?',
     help: 'Dirt shortens rolling-bearing life and speeds up bushing wear.',
-    default: fixed('normal'),
+    default: fixed(DEFAULTS.contamination.value),
     choices: choicesOf(CONTAMINATIONS, {
       clean: 'sealed, filtered, indoor and tidy',
       normal: 'ordinary workshop or plant',
@@ -315,7 +319,7 @@ export const QUESTIONS: readonly Question[] = [
     section: 'Environment',
     message: 'Starts per hour',
     help: 'Each start runs an oil-film bearing in metal contact until the film builds up.',
-    default: fixed('1'),
+    default: fixed(String(DEFAULTS.startsPerHour.value)),
   },
   ...PRIORITIES.map((p): Question => ({
     id: `priority.${p}`,
@@ -324,7 +328,7 @@ export const QUESTIONS: readonly Question[] = [
     section: 'Priorities (1 = unimportant … 5 = essential)',
     message: `Priority: ${p} (1-5)`,
     help: `Weights the ranking: ${PRIORITY_HELP[p]}.`,
-    default: fixed('3'),
+    default: fixed(String(DEFAULTS.priority.value)),
   })),
 ];
 
