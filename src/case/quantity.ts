@@ -2,8 +2,8 @@ import { createRequire } from 'node:module';
 import type QtyType from 'js-quantities';
 
 type Qty = QtyType;
-// js-quantities takes ~30 ms to load and ~10 ms more on first use: it is loaded only when a
-// spelling is not in the common-unit table below (synchronously, as parsing is synchronous).
+// js-quantities is slow to load next to a whole start-up: it is loaded only when a spelling
+// is not in the common-unit table below (synchronously, as parsing is synchronous).
 const requireLib = createRequire(import.meta.url);
 let lib: typeof QtyType | undefined;
 const Qty = (text: string): Qty => (lib ??= requireLib('js-quantities') as typeof QtyType)(text);
