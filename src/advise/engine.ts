@@ -123,8 +123,8 @@ export interface AdviseOptions {
   kernel?: { sheet?: boolean; pressureProfile?: boolean };
 }
 
-/** Fixed order for ties: the simpler and cheaper support first (common practice). */
-const TIE_ORDER: OptionName[] = ['bushing', 'rolling', 'journal'];
+/** Fixed order for ties: the simpler and cheaper support first (common practice), the options' own order. */
+const TIE_ORDER: readonly OptionName[] = OPTIONS;
 const NEUTRAL_PRIORITY = 3;
 
 /**

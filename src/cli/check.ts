@@ -1,3 +1,4 @@
+import { OPTIONS, type OptionName } from '../core/options.js';
 import { UsageError } from '../core/errors.js';
 import { loadCaseFile, type LoadedCase } from '../case/load.js';
 import type { UnitSystem } from '../report/units.js';
@@ -12,8 +13,9 @@ export interface OutputOptions {
   units: UnitSystem;
 }
 
-export const CHECKS = ['bushing', 'rolling', 'journal'] as const;
-export type CheckName = (typeof CHECKS)[number];
+/** One check per option, named as the option. */
+export const CHECKS = OPTIONS;
+export type CheckName = OptionName;
 
 /** Parse --format / --units values into the options object, or a UsageError naming the flag. */
 export function outputOptions(

@@ -1,3 +1,4 @@
+import { OPTIONS } from '../../core/options.js';
 import { describe, describeAssumption, describeWarning } from '../findings/index.js';
 import type { AdviceResult, RankedOption } from '../../advise/engine.js';
 import type { CheckRecord, SheetLine } from '../../core/check.js';
@@ -408,7 +409,7 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
   }
 
   const sheet: Block[] = [];
-  for (const o of ['bushing', 'rolling', 'journal'] as const) {
+  for (const o of OPTIONS) {
     const lines = a.checks[o].sheet;
     sheet.push({ kind: 'sub', title: OPTION_NAMES[o] });
     sheet.push(
@@ -430,7 +431,7 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
     id: 'methods',
     title: 'Methods and references',
     blocks: [
-      ...(['bushing', 'rolling', 'journal'] as const).flatMap((o): Block[] => [
+      ...OPTIONS.flatMap((o): Block[] => [
         { kind: 'sub', title: OPTION_NAMES[o] },
         { kind: 'list', items: METHODS[o] },
       ]),
