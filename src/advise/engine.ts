@@ -79,7 +79,7 @@ export interface AdviceResult {
   /** Cautions of the three checks; a finding's code names its option. */
   warnings: Remark[];
   /** How ties were broken, when there was one. */
-  tieBreak: string | null;
+  tieBreak: Finding | null;
   /** What would make an option feasible, when none is. */
   toMakeFeasible: Finding[];
   /** Every rule evaluated, fired or not, with the fact values it saw. */
@@ -127,17 +127,8 @@ export interface AdviseOptions {
 const TIE_ORDER: readonly OptionName[] = OPTIONS;
 const NEUTRAL_PRIORITY = 3;
 
-/**
- * Advise on a case: run the three checks as dynamic facts (computed on first use, cached for
- * the run), evaluate every rule in rules/, gate feasibility on the checks, score and rank.
- * Deterministic: the same case gives the same result, byte for byte.
- */
-export async function advise(
-  c: CaseSI,
-  caseAssumed: Assumption[],
-  rules: LoadedRule[] = loadRules(),
-  opts: AdviseOptions = {},
-): Promise<AdviceResult> {
+/** The kernels of one run, each computed on first use and kept (the rules' dynamic facts). */
+function lazyChecks(c: CaseSI, opts: AdviseOptions) {
   const cache: Partial<{ bushing: BushingResult; rolling: RollingResult; journal: JournalResult }> = { ...opts.checks };
   const kernel = opts.kernel ?? {};
   const sheet = kernel.sheet === undefined ? {} : { sheet: kernel.sheet };
@@ -152,9 +143,19 @@ export async function advise(
       rolling: rollingFigures(rolling(), c),
       journal: journalFigures(journal()),
     });
-  let run: RuleRun;
-  if (opts.runRules) {
-    run = await opts.runRules({
+  return { bushing, rolling, journal, figures };
+}
+
+/** Evaluate every rule: with the caller's runner, or a fresh Engine whose kernel facts are computed on demand. */
+async function runAllRules(
+  c: CaseSI,
+  rules: LoadedRule[],
+  lazy: ReturnType<typeof lazyChecks>,
+  runRules: AdviseOptions['runRules'],
+): Promise<RuleRun> {
+  const { bushing, rolling, journal, figures } = lazy;
+  if (runRules)
+    return runRules({
       case: c,
       duty: dutyFacts(c),
       bushing: bushing(),
@@ -162,94 +163,121 @@ export async function advise(
       journal: journal(),
       figures: figures(),
     });
-  } else {
-    const engine = new Engine([], { allowUndefinedFacts: true, pathResolver: resolvePath });
-    engine.addFact('case', c);
-    engine.addFact('duty', dutyFacts(c));
-    engine.addFact('bushing', () => bushing(), { cache: true });
-    engine.addFact('rolling', () => rolling(), { cache: true });
-    engine.addFact('journal', () => journal(), { cache: true });
-    engine.addFact('figures', () => figures(), { cache: true });
-    rules.forEach((r) =>
-      engine.addRule({
-        name: r.name,
-        conditions: r.conditions as never,
-        event: { type: r.event.type, params: { ...r.event } },
-      }),
-    );
-    run = await engine.run();
-  }
-  const fired = new Set(run.results.map((r) => r.name));
-  const byName = new Map<string, RuleResult>([...run.results, ...run.failureResults].map((r) => [r.name, r]));
-  const traces: RuleTrace[] =
-    opts.traces === false
-      ? []
-      : rules.map((r) => ({
-          rule: r.name,
-          file: r.file,
-          fired: fired.has(r.name),
-          event: r.event,
-          conditions: flatten(byName.get(r.name)?.conditions as unknown as Condition | undefined),
-        }));
+  const engine = new Engine([], { allowUndefinedFacts: true, pathResolver: resolvePath });
+  engine.addFact('case', c);
+  engine.addFact('duty', dutyFacts(c));
+  engine.addFact('bushing', () => bushing(), { cache: true });
+  engine.addFact('rolling', () => rolling(), { cache: true });
+  engine.addFact('journal', () => journal(), { cache: true });
+  engine.addFact('figures', () => figures(), { cache: true });
+  rules.forEach((r) =>
+    engine.addRule({
+      name: r.name,
+      conditions: r.conditions as never,
+      event: { type: r.event.type, params: { ...r.event } },
+    }),
+  );
+  return engine.run();
+}
 
-  const fig = figures();
-  const checks = { bushing: bushing(), rolling: rolling(), journal: journal() };
-  const ranking = OPTIONS.map((option): RankedOption => {
-    const f = fig[option];
-    const reasons: Reason[] = [];
-    const excluded: Remark[] = [];
-    if (!f.feasible) excluded.push(...(f.why.length ? f.why : ['its check found no feasible design']));
-    for (const r of rules) {
-      if (!fired.has(r.name) || r.event.option !== option) continue;
-      if (r.event.type === 'exclude') {
-        excluded.push(r.because);
-        reasons.push({ rule: r.name, points: 0, basePoints: 0, weight: 1, because: r.because, file: r.file });
-        continue;
-      }
-      const weight = r.event.priority ? c.priorities[r.event.priority] / NEUTRAL_PRIORITY : 1;
-      const reason: Reason = {
-        rule: r.name,
-        points: round2(r.event.points * weight),
-        basePoints: r.event.points,
-        weight: round2(weight),
-        because: r.because,
-        file: r.file,
-      };
-      if (r.event.priority) reason.priority = r.event.priority;
-      reasons.push(reason);
+/** Every rule with whether it fired and the fact values its conditions saw (for --explain). */
+function traceRules(rules: LoadedRule[], run: RuleRun, fired: Set<string>): RuleTrace[] {
+  const byName = new Map<string, RuleResult>([...run.results, ...run.failureResults].map((r) => [r.name, r]));
+  return rules.map((r) => ({
+    rule: r.name,
+    file: r.file,
+    fired: fired.has(r.name),
+    event: r.event,
+    conditions: flatten(byName.get(r.name)?.conditions as unknown as Condition | undefined),
+  }));
+}
+
+/**
+ * One option's place before ranking: its check's exclusions, then each fired rule for it — an
+ * exclusion, or points weighted by the priority it names (priority/3, 3 neutral).
+ */
+function scoreOption(
+  option: OptionName,
+  f: OptionFigures,
+  rules: LoadedRule[],
+  fired: Set<string>,
+  c: CaseSI,
+): RankedOption {
+  const reasons: Reason[] = [];
+  const excluded: Remark[] = [];
+  if (!f.feasible) excluded.push(...(f.why.length ? f.why : ['its check found no feasible design']));
+  for (const r of rules) {
+    if (!fired.has(r.name) || r.event.option !== option) continue;
+    if (r.event.type === 'exclude') {
+      excluded.push(r.because);
+      reasons.push({ rule: r.name, points: 0, basePoints: 0, weight: 1, because: r.because, file: r.file });
+      continue;
     }
-    return {
-      option,
-      rank: 0,
-      score: round2(reasons.reduce((s, x) => s + x.points, 0)),
-      feasible: excluded.length === 0,
-      design: f.design,
-      figures: {
-        lifeHours: f.lifeHours,
-        lifeRatio: f.lifeRatio,
-        frictionPower: f.frictionPower,
-        length: f.length,
-        outerDiameter: f.outerDiameter,
-      },
-      reasons,
-      failed: f.failed,
-      excluded: dedupe(excluded),
+    const weight = r.event.priority ? c.priorities[r.event.priority] / NEUTRAL_PRIORITY : 1;
+    const reason: Reason = {
+      rule: r.name,
+      points: round2(r.event.points * weight),
+      basePoints: r.event.points,
+      weight: round2(weight),
+      because: r.because,
+      file: r.file,
     };
-  });
-  ranking.sort(
+    if (r.event.priority) reason.priority = r.event.priority;
+    reasons.push(reason);
+  }
+  return {
+    option,
+    rank: 0,
+    score: round2(reasons.reduce((s, x) => s + x.points, 0)),
+    feasible: excluded.length === 0,
+    design: f.design,
+    figures: {
+      lifeHours: f.lifeHours,
+      lifeRatio: f.lifeRatio,
+      frictionPower: f.frictionPower,
+      length: f.length,
+      outerDiameter: f.outerDiameter,
+    },
+    reasons,
+    failed: f.failed,
+    excluded: dedupe(excluded),
+  };
+}
+
+/** Feasible first, then by score, ties in the fixed order; ranks numbered from 1. */
+function rank(options: RankedOption[]): RankedOption[] {
+  const ranking = [...options].sort(
     (a, b) =>
       Number(b.feasible) - Number(a.feasible) ||
       b.score - a.score ||
       TIE_ORDER.indexOf(a.option) - TIE_ORDER.indexOf(b.option),
   );
   ranking.forEach((r, i) => (r.rank = i + 1));
+  return ranking;
+}
 
-  let tieBreak: string | null = null;
+/**
+ * Advise on a case: run the three checks as dynamic facts (computed on first use, cached for
+ * the run), evaluate every rule in rules/, gate feasibility on the checks, score and rank.
+ * Deterministic: the same case gives the same result, byte for byte.
+ */
+export async function advise(
+  c: CaseSI,
+  caseAssumed: Assumption[],
+  rules: LoadedRule[] = loadRules(),
+  opts: AdviseOptions = {},
+): Promise<AdviceResult> {
+  const lazy = lazyChecks(c, opts);
+  const run = await runAllRules(c, rules, lazy, opts.runRules);
+  const fired = new Set(run.results.map((r) => r.name));
+  const traces = opts.traces === false ? [] : traceRules(rules, run, fired);
+  const fig = lazy.figures();
+  const checks = { bushing: lazy.bushing(), rolling: lazy.rolling(), journal: lazy.journal() };
+  const ranking = rank(OPTIONS.map((option) => scoreOption(option, fig[option], rules, fired, c)));
   const top = ranking[0]!;
   const tied = ranking.filter((r) => r.feasible === top.feasible && r.score === top.score);
-  if (tied.length > 1) {
-    tieBreak = `${tied.map((r) => r.option).join(' and ')} tie on ${top.score} points; the tie is broken by the fixed order bushing, rolling, journal (the simpler and cheaper support first)`;
-  }
+  const tieBreak =
+    tied.length > 1 ? finding('advice.tie-broken', { options: tied.map((r) => r.option), score: top.score }) : null;
   const recommendation = top.feasible ? top.option : null;
   const warnings = dedupe([
     ...checks.bushing.warnings.map((w) => (typeof w === 'string' ? `bushing: ${w}` : w)),

@@ -30,7 +30,7 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
       ? paint.bold(`Recommended: ${NAMES[a.recommendation].toLowerCase()} — ${designLine(a.ranking[0]!, units)}.`)
       : paint.bold('No option is feasible for this duty as given.'),
   );
-  if (a.tieBreak) out.push(`Tie: ${a.tieBreak}.`);
+  if (a.tieBreak) out.push(`Tie: ${describe(a.tieBreak)}.`);
   out.push(
     table(
       ['rank', 'option', 'feasible', 'score', 'life', 'friction power', 'length', 'OD'],

@@ -19,6 +19,8 @@ export function adviceWording(describeNested: (f: Finding | string) => string): 
         const first = why === null || why === undefined ? 'no candidate fits' : describeNested(why as Finding | string);
         return `rolling: ${v['failing'] ? `fails on ${String(v['failing'])}` : first}; more radial room (a larger housing bore) admits a larger series, or give a supplier's bearing with higher ratings`;
       },
+      'advice.tie-broken': (v) =>
+        `${(v['options'] as readonly string[]).join(' and ')} tie on ${String(v['score'])} points; the tie is broken by the fixed order bushing, rolling, journal (the simpler and cheaper support first)`,
       'journal.to-feasible-oil': () =>
         'journal: an oil supply (oil bath, or pumped and filtered oil) is needed for a full film',
       'journal.to-feasible-film': (v) =>

@@ -207,7 +207,7 @@ function whyLost(r: RankedOption, winner: RankedOption, a: AdviceResult, u: Unit
   out.push(
     `Feasible, but scores ${r.score.toFixed(2)} against ${winner.score.toFixed(2)} for the ${OPTION_NAMES[winner.option].toLowerCase()}.`,
   );
-  if (a.tieBreak && r.score === winner.score) out.push(`Tie: ${a.tieBreak}.`);
+  if (a.tieBreak && r.score === winner.score) out.push(`Tie: ${describe(a.tieBreak)}.`);
   const cons = r.reasons.filter((x) => x.points < 0);
   if (cons.length) out.push(...cons.map((x) => `Counts against it: ${reasonText(x)}`));
   return out;
@@ -273,7 +273,7 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
   });
 
   const rec: Block[] = [{ kind: 'p', text: summary, strong: true }];
-  if (a.tieBreak) rec.push({ kind: 'p', text: `Tie: ${a.tieBreak}.` });
+  if (a.tieBreak) rec.push({ kind: 'p', text: `Tie: ${describe(a.tieBreak)}.` });
   rec.push({
     kind: 'table',
     head: ['rank', 'option', 'feasible', 'score', 'life', 'friction power', 'length', 'outside diameter'],
