@@ -43,8 +43,10 @@ export function heading(text: string): string {
   return paint.bold(text) + '\n' + '='.repeat(text.length);
 }
 
-/** A table of check records: mark, check, value, limit, margin, source. */
-/** `rowSource`, when given, is a data row's source printed once below: checks citing it say so instead of repeating it. */
+/**
+ * A table of check records: mark, check, value, limit, margin, source. `rowSource`, when given,
+ * is a data row's source printed once below: checks citing it say so instead of repeating it.
+ */
 export function checksTable(checks: CheckRecord[], units: UnitSystem, rowSource?: string): string {
   return table(
     ['', 'check', 'value', 'limit', 'margin', 'limit from'],
