@@ -1,7 +1,3 @@
-import type { OilGrade } from '../data/load.js';
-
-/** The oil grade row (defined with its schema in src/data/load.ts), for the kernels that take one. */
-export type { OilGrade };
 /**
  * Lubricant viscosity against temperature.
  *
@@ -15,6 +11,11 @@ export type { OilGrade };
  * Dynamic viscosity μ = ν·ρ(T), with ρ(T) = ρ15·(1 − α·(T − 15 °C)) and α ≈ 0.00065 /K
  * (from memory: mineral oil density falls about 0.065 %/K).
  */
+
+import type { OilGrade } from '../data/load.js';
+
+/** The oil grade row (defined with its schema in src/data/load.ts), for the kernels that take one. */
+export type { OilGrade };
 
 export interface WaltherConstants {
   A: number;
