@@ -12,8 +12,14 @@ await build({
   input: 'dist/cli/main.js',
   platform: 'node',
   external: [/^node:/],
-  // json-rules-engine's default JSONPath resolver is never used (see scripts/jsonpath-stub.mjs).
-  resolve: { alias: { 'jsonpath-plus': new URL('./jsonpath-stub.mjs', import.meta.url).pathname } },
+  // Never used, so left out: json-rules-engine's default JSONPath resolver (see
+  // scripts/jsonpath-stub.mjs) and inquirer's text-editor prompt (scripts/external-editor-stub.mjs).
+  resolve: {
+    alias: {
+      'jsonpath-plus': new URL('./jsonpath-stub.mjs', import.meta.url).pathname,
+      '@inquirer/external-editor': new URL('./external-editor-stub.mjs', import.meta.url).pathname,
+    },
+  },
   logLevel: 'warn',
   output: {
     dir: 'dist/bundle',

@@ -1,8 +1,8 @@
 import { UsageError } from '../core/errors.js';
 import { loadCaseFile } from '../case/load.js';
 import { describeWarning } from '../report/findings/index.js';
-import { wordedAdvice } from '../report/findings/worded.js';
 import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
+import { adviceJson } from '../report/json.js';
 import type { UnitSystem } from '../report/units.js';
 import type { OutputOptions } from './check.js';
 
@@ -58,12 +58,7 @@ export async function runAdvise(
     return '';
   }
   if (format === 'json') {
-    const { rules, ...rest } = wordedAdvice(a);
-    return JSON.stringify(
-      opts.explain ? { ...rest, case: loaded.case, rules } : { ...rest, case: loaded.case },
-      null,
-      2,
-    );
+    return JSON.stringify(adviceJson(loaded, a, { explain: opts.explain }), null, 2);
   }
   const { adviceText } = await import('../report/advice-text.js');
   await useColour();

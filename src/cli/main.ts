@@ -47,6 +47,14 @@ function fail(e: unknown): never {
   process.exit(EXIT.defect);
 }
 
+// A reader that stops early (`shaftwise advise … | head`) closes the pipe: the rest of the output
+// has nowhere to go, and that is the reader's choice, not a failure. Without a listener Node
+// would throw the EPIPE as an unhandled 'error' event, with a stack trace.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code === 'EPIPE') process.exit(EXIT.ok);
+  fail(e);
+});
+
 const program = new Command()
   .name('shaftwise')
   .description(

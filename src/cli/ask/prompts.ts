@@ -7,20 +7,23 @@ export interface PromptContext {
 }
 
 /**
- * The real prompts (@inquirer/prompts, which ships with inquirer), loaded only here so
- * other commands never pay for the prompt library. The help line is printed above each
- * prompt; inquirer shows the default in brackets and re-asks with the validation message.
+ * The real prompts, through inquirer's prompt module (inquirer 12: each question runs the
+ * @inquirer/core prompt of its type). inquirer is loaded only here, so other commands never pay
+ * for the prompt library. The help line is printed above each prompt; inquirer shows the
+ * default in brackets and re-asks with the validation message.
  */
 export async function inquirerPrompter(context: PromptContext = {}): Promise<Prompter> {
-  const { input, select, confirm } = await import('@inquirer/prompts');
+  const { default: inquirer } = await import('inquirer');
   const out = context.output ?? process.stdout;
-  const ctx = { ...context, output: out };
+  const prompt = inquirer.createPromptModule({ ...context, output: out });
   return async (spec) => {
     out.write(`  ${spec.help}\n`);
     switch (spec.kind) {
-      case 'input':
-        return input(
+      case 'input': {
+        const { answer } = await prompt<{ answer: string }>([
           {
+            type: 'input',
+            name: 'answer',
             message: spec.message,
             default: spec.default,
             validate: spec.validate,
@@ -30,12 +33,28 @@ export async function inquirerPrompter(context: PromptContext = {}): Promise<Pro
               return value;
             },
           },
-          ctx,
-        );
-      case 'select':
-        return select({ message: spec.message, default: spec.default, choices: spec.choices, pageSize: 8 }, ctx);
-      case 'confirm':
-        return confirm({ message: spec.message, default: spec.default }, ctx);
+        ]);
+        return answer;
+      }
+      case 'select': {
+        const { answer } = await prompt<{ answer: string }>([
+          {
+            type: 'select',
+            name: 'answer',
+            message: spec.message,
+            default: spec.default,
+            choices: spec.choices,
+            pageSize: 8,
+          },
+        ]);
+        return answer;
+      }
+      case 'confirm': {
+        const { answer } = await prompt<{ answer: boolean }>([
+          { type: 'confirm', name: 'answer', message: spec.message, default: spec.default },
+        ]);
+        return answer;
+      }
     }
   };
 }

@@ -1,4 +1,4 @@
-// The real prompts (@inquirer/prompts through our adapter), driven by keypresses on a
+// The real prompts (inquirer's prompt module through our adapter), driven by keypresses on a
 // fake terminal stream: Enter takes the default, a wrong unit is shown with its reason
 // and asked again, Ctrl-C ends with the answers saved. Scenario data invented (a
 // vineyard sprayer fan shaft).
@@ -6,7 +6,7 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Writable } from 'node:stream';
-import { input } from '@inquirer/prompts';
+import inquirer from 'inquirer';
 import { render } from '@inquirer/testing';
 import MuteStream from 'mute-stream';
 import stripAnsi from 'strip-ansi';
@@ -17,6 +17,9 @@ import { checkAnswer, questionById } from '../../../src/cli/ask/questions.js';
 import { inquirerPrompter } from '../../../src/cli/ask/prompts.js';
 import { runAsk, type Prompter } from '../../../src/cli/ask/run.js';
 
+/** The prompt inquirer runs for a question of type 'input' (its registry of built-in prompts). */
+const input = inquirer.prompt.prompts['input']!;
+
 describe('one real input prompt (@inquirer/testing render)', () => {
   it('re-asks "40 kg" for the diameter with the reason, then takes "40 mm"', async () => {
     const q = questionById('diameter')!;
@@ -24,7 +27,7 @@ describe('one real input prompt (@inquirer/testing render)', () => {
       const c = checkAnswer(q, t === '' ? '40 mm' : t, {});
       return c.ok ? true : c.message;
     };
-    // Types of @inquirer/testing 2.1.9 predate @inquirer/prompts 7; the runtime contract is the same.
+    // Types of @inquirer/testing 2.1.9 predate inquirer 12's prompts; the runtime contract is the same.
     const { answer, events, getScreen } = await render(
       input as never,
       { message: q.message, default: '40 mm', validate } as never,

@@ -1,0 +1,34 @@
+import type { AdviceResult, RuleTrace } from '../advise/engine.js';
+import type { LoadedCase } from '../case/load.js';
+import type { CaseSI } from '../case/types.js';
+import { wordedAdvice, type Worded } from './findings/worded.js';
+
+/** Options of adviceJson. */
+export interface AdviceJsonOptions {
+  /** Keep `rules`, the per-rule trace with the fact values each condition saw (`--explain`). */
+  explain?: boolean;
+}
+
+/**
+ * The advice as JSON data, every finding worded as text and the note word it: every key of the advice result but the rule trace, the SI case
+ * under `case`, and `rules` only when explaining. JSON has no Infinity or NaN: a number the
+ * calculation found infinite (a margin over no limit check, say) is null here, and a key whose
+ * value was undefined is absent.
+ */
+export type AdviceJson = Worded<Omit<AdviceResult, 'rules'>> & { case: CaseSI; rules?: Worded<RuleTrace[]> };
+
+/**
+ * The advice as `advise --format json` prints it. Returned after the JSON round trip (so an
+ * infinite figure is null and an undefined key is gone), so that the CLI, which prints
+ * `JSON.stringify(obj, null, 2)`, and the library's advise() give the very same object, and a
+ * caller never meets a value JSON cannot hold.
+ */
+export function adviceJson(
+  loaded: Pick<LoadedCase, 'case'>,
+  advice: AdviceResult,
+  opts: AdviceJsonOptions = {},
+): AdviceJson {
+  const { rules, ...rest } = wordedAdvice(advice);
+  const shown: AdviceJson = opts.explain ? { ...rest, case: loaded.case, rules } : { ...rest, case: loaded.case };
+  return JSON.parse(JSON.stringify(shown)) as AdviceJson;
+}
