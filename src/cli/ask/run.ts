@@ -188,10 +188,12 @@ export async function runAsk(opts: AskOptions, deps: AskDeps, hooks: AskHooks = 
   const s = open(opts, cwd, say);
   // Written at once so the name is taken and a Ctrl-C at the first question still leaves a file to resume.
   save(s, false);
+  // The prompt library loads before the first words to the user (it takes some 0.1 s), so the
+  // first question follows them at once and nothing typed in between goes astray.
+  const prompt = hooks.prompter ?? (await (await import('./prompts.js')).inquirerPrompter());
   say(
     `Answers are saved to ${displayPath(s.file, s.cwd)} as you go. Enter takes the default in brackets; Ctrl-C stops, and ${resumeHint(s)} continues.`,
   );
-  const prompt = hooks.prompter ?? (await (await import('./prompts.js')).inquirerPrompter());
 
   const finished = await runQuestions(s, prompt, say);
   if (!finished) {
