@@ -6,7 +6,8 @@
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../helpers/sheet.js';
 import type { CaseSI } from '../../../src/case/types.js';
-import { checkRolling, lifeExponent, requiredDynamicRating } from '../../../src/calc/rolling/index.js';
+import { checkRolling } from '../../../src/calc/rolling/index.js';
+import { lifeExponent, requiredDynamicRating } from '../../../src/calc/rolling/life.js';
 
 function drumIdler(over: Partial<CaseSI> = {}): CaseSI {
   return {

@@ -1,0 +1,91 @@
+import type { CaseSI } from '../../case/types.js';
+import { rollingFactors } from '../../data/rolling.js';
+import { candidateSpecs } from './candidates.js';
+import { dutyPoints, lifeFactors, shockFactors } from './conditions.js';
+import { evaluate, type EvalContext } from './evaluate.js';
+import { newNotes } from './findings.js';
+import { lifeExponent, requiredDynamicRating, type RollingType } from './life.js';
+import { bearingLubrication } from './lubrication.js';
+import { bestCandidate, equivalentLoadBound } from './select.js';
+import { rollingSheet } from './sheet.js';
+import type { RollingResult } from './types.js';
+
+/**
+ * Rolling-element bearing check of a duty case (pure: reads the data tables, no other I/O).
+ * `opts.sheet: false` skips the calculation sheet's text (sweeps evaluate thousands of points).
+ *
+ * For each candidate bearing — the case's own bearing when a supplier's C and C0 are
+ * given, and every ISO 15 row (data/rolling-boundary-dimensions.json) whose bore is
+ * the shaft diameter and that fits the space — it works:
+ *   P   = f_d·(X·Fr + Y·Fa) per operating point, duty mean P = (Σ Pi^p·ni·ti/Σ ni·ti)^(1/p)
+ *   L10 = (C/P)^p (10⁶ rev), L10h = 10⁶·L10/(3600·n) (n rev/s), L10mh = a1·a_ISO·L10h
+ *   κ = ν/ν1, a_ISO(κ, e_C·Cu/P), s0 = C0/P0 at the peak point, n·dm, M = μ·P·d/2,
+ *   grease interval t_f.
+ * Symbols: Fr, Fa radial and axial load (N); f_d service factor for the shock level;
+ * n speed (rev/s); ν, ν1 kinematic and rated viscosity (m²/s); e_C contamination
+ * factor; Cu fatigue load limit (N); dm pitch diameter (m); d bore (m).
+ * The best candidate is the smallest (outside diameter, then width) that meets the
+ * modified life L10mh ≥ target, static safety, speed factor, κ ≥ 0.1 and space, and
+ * is not excluded (roller under axial load, ball beyond the X/Y table).
+ * Validity: radial loads on single-row deep-groove ball and cylindrical roller
+ * bearings; concept-stage estimates where ratings are estimated from boundary
+ * dimensions. Sources: ISO 281:2007, ISO 76, ISO 15 (see each module), common
+ * practice where said.
+ *
+ * The steps, one module each: conditions.ts (operating points, shock and life factors),
+ * lubrication.ts, candidates.ts, evaluate.ts with checks.ts, select.ts, sheet.ts; findings.ts
+ * collects what each step assumed and cautions, in the order the steps run.
+ */
+export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): RollingResult {
+  const notes = newNotes();
+  const f = rollingFactors();
+  const duty = dutyPoints(c, notes);
+  const shock = shockFactors(c, f, notes);
+  const lubrication = bearingLubrication(c, notes);
+  const life = lifeFactors(c, f, notes);
+  const specs = candidateSpecs(c, f, notes);
+
+  const ctx: EvalContext = {
+    c,
+    f,
+    points: duty.points,
+    maxSpeed: duty.maxSpeed,
+    serviceFactor: shock.serviceFactor,
+    s0Row: shock.s0Row,
+    cont: life.cont,
+    a1: life.a1,
+    reliabilityUsed: life.reliabilityUsed,
+    lubrication,
+  };
+  const candidates = specs.map((s) => evaluate(s, ctx, notes));
+  const best = bestCandidate(candidates, notes);
+
+  // The figures of the result: the best candidate's, else the first's, else a bound for a ball bearing.
+  const lead = best ?? candidates[0] ?? null;
+  const leadType: RollingType = lead ? lead.type : 'ball';
+  const equivalentLoad = lead
+    ? lead.equivalentLoad
+    : equivalentLoadBound(duty.points, shock.serviceFactor, f.xyDeepGrooveBall, notes);
+  const requiredC = requiredDynamicRating(
+    equivalentLoad,
+    duty.meanSpeed,
+    c.life.hours,
+    lifeExponent(leadType),
+    life.a1,
+  );
+  if (!(c.life.hours > 0)) notes.warn('no life target (life.hours ≤ 0): the life check is left out');
+
+  return {
+    option: 'rolling',
+    equivalentLoad,
+    equivalentSpeed: duty.meanSpeed,
+    requiredDynamicRating: requiredC,
+    requiredDynamicRatingFor: requiredC !== null ? { type: leadType, p: lifeExponent(leadType) } : null,
+    candidates,
+    best: best ? best.id : null,
+    feasible: best !== null,
+    assumed: notes.assumed,
+    warnings: notes.warnings,
+    sheet: lead && opts.sheet !== false ? rollingSheet(lead, ctx, duty.meanSpeed) : [],
+  };
+}

@@ -1,0 +1,238 @@
+import type { CaseSI } from '../../case/types.js';
+import type { RollingFactors } from '../../data/rolling.js';
+import { aIso, ratedViscosity } from './aiso.js';
+import type { CandidateSpec } from './candidates.js';
+import { candidateChecks } from './checks.js';
+import type { LoadPoint } from './conditions.js';
+import {
+  dynamicEquivalentLoad,
+  spectrumMean,
+  staticEquivalentLoad,
+  type DynamicLoadResult,
+} from './equivalent-load.js';
+import { fmt, type Notes } from './findings.js';
+import { basicRatingLife, lifeExponent, lifeHours, requiredDynamicRating } from './life.js';
+import type { Lubrication } from './lubrication.js';
+import { criticalSwingAngle, frictionPower, frictionTorque, relubricationInterval, speedFactor } from './speed.js';
+import type { RollingCandidate } from './types.js';
+
+/**
+ * One candidate's figures: its loads, lives, lubrication, static safety, speed, friction,
+ * grease interval and oscillation criterion, then its checks (src/calc/rolling/checks.ts).
+ *
+ * References
+ * [1] ISO 281:2007: P = X·Fr + Y·Fa, the duty mean P, L10 = (C/P)^p, L10h, κ = ν/ν1, a_ISO,
+ *     L10mh = a1·a_ISO·L10h (the kernels in equivalent-load.ts, life.ts, aiso.ts).
+ * [2] ISO 76: P0 and s0 = C0/P0.
+ * [3] Speed factor n·dm, friction M = μ·P·d/2, grease interval t_f, swing for full element
+ *     overlap (speed.ts; common practice and a bearing-maker technical guide).
+ */
+
+/** What every candidate of one case is evaluated in: the case, its factors, points and lubricant. */
+export interface EvalContext {
+  c: CaseSI;
+  f: RollingFactors;
+  points: LoadPoint[];
+  /** Highest point speed, rev/s. */
+  maxSpeed: number;
+  /** Service factor f_d, 1. */
+  serviceFactor: number;
+  s0Row: RollingFactors['staticSafety'][number];
+  cont: RollingFactors['contamination'][number];
+  /** Reliability factor a1, 1, and the reliability it is worked for, %. */
+  a1: number;
+  reliabilityUsed: number;
+  lubrication: Lubrication;
+}
+
+/** The figures the checks read, SI (lives h, L10 10⁶ rev, ndm mm·r/min). */
+export interface CandidateFigures {
+  /** Duty-mean dynamic equivalent load with f_d, N. */
+  P: number;
+  L10: number | null;
+  kappa: number | null;
+  L10mh: number | null;
+  s0: number | null;
+  ndm: number;
+  relubricationHours: number | null;
+}
+
+/** Pitch diameter from which the e_C guidance for dm < 100 mm is stretched, m (ISO 281:2007, from memory). */
+const EC_GUIDANCE_DM = 0.1;
+
+/** A point's dynamic equivalent load without f_d (P, for friction) and with it (Pf, for life), N. */
+type PointLoad = DynamicLoadResult & { Pf: number } & LoadPoint;
+
+/**
+ * Dynamic equivalent load at each point [1], Pi = X·Fr + Y·Fa, and with the service factor
+ * Pf,i = f_d·Pi; the duty mean P = (Σ Pf,i^p·ni·ti / Σ ni·ti)^(1/p) and mean speed n, rev/s.
+ * A point the method cannot rate excludes the bearing (its reason kept once).
+ */
+function pointLoads(
+  s: CandidateSpec,
+  x: EvalContext,
+  notes: Notes,
+): { per: PointLoad[]; exclusions: string[]; heaviest: PointLoad; P: number; n: number } {
+  const exclusions: string[] = [];
+  const per = x.points.map((q): PointLoad => {
+    const r = dynamicEquivalentLoad(s.type, q.Fr, q.Fa, s.C0, x.f.xyDeepGrooveBall);
+    if (r.exclusion && !exclusions.includes(r.exclusion)) exclusions.push(r.exclusion);
+    if (r.range === 'below' && r.faC0 !== null && r.faC0 > 0 && r.Y > 0) {
+      notes.warn(
+        `${s.designation}: Fa/C0 = ${r.faC0.toFixed(4)} is below the first row of the ISO 281 X/Y table (0.014); e and Y of that row are used (Y would be somewhat larger): not extrapolated`,
+      );
+    }
+    return { ...r, Pf: x.serviceFactor * r.P, n: q.n, t: q.t, Fr: q.Fr, Fa: q.Fa };
+  });
+  const heaviest = per.reduce((a, b) => (b.Pf > a.Pf ? b : a), per[0]!);
+  const mean = spectrumMean(
+    per.map((q) => ({ P: q.Pf, n: q.n, t: q.t })),
+    lifeExponent(s.type),
+  );
+  return { per, exclusions, heaviest, P: mean.P, n: mean.n };
+}
+
+/**
+ * Lives and lubrication [1]: L10 (10⁶ rev), L10h (h) at the mean speed n (rev/s), rated
+ * viscosity ν1 and κ = ν/ν1, a_ISO(κ, e_C·Cu/P) and L10mh = a1·a_ISO·L10h (h). Where κ or
+ * a_ISO leave the method's range, it is said.
+ */
+function lives(s: CandidateSpec, x: EvalContext, P: number, n: number, notes: Notes) {
+  const L10 = basicRatingLife(s.C, P, lifeExponent(s.type));
+  const L10h = L10 !== null ? lifeHours(L10, n) : null;
+  const nu1 = ratedViscosity(n, s.dm);
+  const kappa = nu1 !== null ? x.lubrication.viscosity / nu1 : null;
+  let aISO: number | null = null;
+  if (kappa !== null && P > 0) {
+    const a = aIso(s.type, kappa, (x.cont.eC * s.Cu) / P);
+    aISO = a.aISO;
+    if (a.kappaRange === 'above')
+      notes.warn(`${s.designation}: viscosity ratio κ = ${fmt(kappa)} > 4 is taken as 4, as ISO 281:2007 says`);
+    if (a.kappaRange === 'below') {
+      notes.warn(
+        `${s.designation}: viscosity ratio κ = ${fmt(kappa)} < 0.1 is outside the a_ISO method of ISO 281:2007; a_ISO at κ = 0.1 is shown for orientation only and the lubrication check fails`,
+      );
+    }
+    if (a.capped) notes.warn(`${s.designation}: a_ISO reached its cap of 50 (ISO 281:2007)`);
+  }
+  if (s.dm >= EC_GUIDANCE_DM)
+    notes.warn(
+      `${s.designation}: pitch diameter ${fmt(s.dm * 1000)} mm ≥ 100 mm; e_C is taken from the dm < 100 mm guidance, which is the lower (conservative) one`,
+    );
+  const L10mh = L10h !== null && aISO !== null ? x.a1 * aISO * L10h : null;
+  return { L10, L10h, nu1, kappa, aISO, L10mh };
+}
+
+/**
+ * Speed, friction and grease [3]: n·dm at the highest speed (mm·r/min); the time means over the
+ * duty of the friction torque Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W), with
+ * Mi = μ·Pi·d/2 and Pi without f_d; on grease, the interval t_f (h) at the highest speed.
+ */
+function running(s: CandidateSpec, x: EvalContext, per: PointLoad[], notes: Notes) {
+  const ndm = speedFactor(x.maxSpeed, s.dm);
+  const mu = x.f.friction.find((q) => q.type === s.type)!.mu;
+  let sumT = 0;
+  let sumM = 0;
+  let sumW = 0;
+  for (const q of per) {
+    const M = frictionTorque(mu, q.P, s.bore);
+    sumT += q.t;
+    sumM += q.t * M;
+    sumW += q.t * frictionPower(M, q.n);
+  }
+  const torque = sumT > 0 ? sumM / sumT : 0;
+  const power = sumT > 0 ? sumW / sumT : 0;
+  let relub: number | null = null;
+  if (x.lubrication.supply === 'grease') {
+    const kf = x.f.relubrication.find((q) => q.type === s.type)!.kf;
+    relub = relubricationInterval(x.maxSpeed, s.bore, kf, x.lubrication.temperature);
+    if (relub === 0)
+      notes.warn(
+        `${s.designation}: the grease interval formula gives no positive interval at ${fmt(x.maxSpeed * 60)} r/min: too fast for grease by this rule; oil is needed`,
+      );
+  }
+  return { ndm, torque, power, relub };
+}
+
+/**
+ * For an oscillating shaft, the smallest swing for full rolling-element overlap,
+ * 720°/(Z·(1 − Dw/dm)) (rad) [3]; a smaller swing is said (false brinelling). Null when the
+ * shaft rotates.
+ */
+function swingAngle(s: CandidateSpec, c: CaseSI, notes: Notes): number | null {
+  if (!c.shaft.oscillation) return null;
+  const swing = criticalSwingAngle(s.Z, s.Dw, s.dm);
+  if (c.shaft.oscillation.angle < swing) {
+    notes.warn(
+      `${s.designation}: swing ${fmt((c.shaft.oscillation.angle * 180) / Math.PI)}° is smaller than ${fmt((swing * 180) / Math.PI)}°, the swing for each of its ${s.Z} rolling elements to roll onto its neighbour's track (720°/(Z·(1 − Dw/dm)), estimated geometry): the same track patches carry every cycle; false brinelling and fretting are the risk and the equivalent-speed life is not reliable`,
+    );
+  }
+  return swing;
+}
+
+/**
+ * One candidate, evaluated [1–3]: every figure of RollingCandidate (SI; lives h) and its
+ * checks. It is feasible when nothing excludes it and every check passes. Static safety
+ * s0 = C0/P0 uses the peak static equivalent load P0 over the points, without f_d [2].
+ */
+export function evaluate(s: CandidateSpec, x: EvalContext, notes: Notes): RollingCandidate {
+  const loads = pointLoads(s, x, notes);
+  const life = lives(s, x, loads.P, loads.n, notes);
+  const P0 = x.points.reduce((m, q) => Math.max(m, staticEquivalentLoad(s.type, q.Fr, q.Fa)), 0);
+  const s0 = P0 > 0 ? s.C0 / P0 : null;
+  const run = running(s, x, loads.per, notes);
+  const swing = swingAngle(s, x.c, notes);
+  const checks = candidateChecks(
+    s,
+    {
+      P: loads.P,
+      L10: life.L10,
+      kappa: life.kappa,
+      L10mh: life.L10mh,
+      s0,
+      ndm: run.ndm,
+      relubricationHours: run.relub,
+    },
+    x,
+  );
+  return {
+    id: s.id,
+    type: s.type,
+    kind: s.kind,
+    series: s.series,
+    designation: s.designation,
+    bore: s.bore,
+    outerDiameter: s.outerDiameter,
+    width: s.width,
+    dynamicRating: s.C,
+    staticRating: s.C0,
+    fatigueLimit: s.Cu,
+    ratingSource: s.ratingSource,
+    pitchDiameter: s.dm,
+    elementDiameter: s.Dw,
+    elementCount: s.Z,
+    X: loads.heaviest.X,
+    Y: loads.heaviest.Y,
+    equivalentLoad: loads.P,
+    staticEquivalentLoad: P0,
+    L10: life.L10,
+    L10h: life.L10h,
+    a1: x.a1,
+    aISO: life.aISO,
+    kappa: life.kappa,
+    L10mh: life.L10mh,
+    s0,
+    ndm: run.ndm,
+    frictionTorque: run.torque,
+    frictionPower: run.power,
+    requiredDynamicRating: requiredDynamicRating(loads.P, loads.n, x.c.life.hours, lifeExponent(s.type), x.a1),
+    relubricationHours: run.relub,
+    temperature: x.lubrication.temperature,
+    viscosity: x.lubrication.viscosity,
+    ratedViscosity: life.nu1,
+    criticalSwingAngle: swing,
+    exclusions: loads.exclusions,
+    feasible: loads.exclusions.length === 0 && checks.every((k) => k.pass),
+    checks,
+  };
+}

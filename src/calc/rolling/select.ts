@@ -1,0 +1,77 @@
+import type { XYTable } from '../../data/rolling.js';
+import type { LoadPoint } from './conditions.js';
+import { spectrumMean } from './equivalent-load.js';
+import { fmt, type Notes } from './findings.js';
+import { lifeExponent } from './life.js';
+import type { RollingCandidate } from './types.js';
+
+/**
+ * Choosing among the evaluated candidates: the best is the smallest feasible one; when none
+ * is feasible, why each is not is said; and when there is no candidate at all, the result's
+ * equivalent load is an upper bound over the deep-groove ball X/Y table.
+ *
+ * References
+ * [1] ISO 281:2007, X and Y for radial ball bearings (data/rolling-factors.json, from memory).
+ */
+
+/** Ascending order with unknown sizes last (never NaN, which would upset the sort). */
+function orderNullLast(a: number | null, b: number | null): number {
+  if (a === null && b === null) return 0;
+  if (a === null) return 1;
+  if (b === null) return -1;
+  return a - b;
+}
+
+/**
+ * The best candidate: of the feasible ones, the smallest by outside diameter, then width
+ * (unknown sizes last); on a tie the supplier's bearing, then a ball bearing. Null when none
+ * is feasible; then each candidate's exclusions and failing checks are said.
+ */
+export function bestCandidate(candidates: RollingCandidate[], notes: Notes): RollingCandidate | null {
+  const feasible = candidates
+    .filter((k) => k.feasible)
+    .sort(
+      (a, b) =>
+        orderNullLast(a.outerDiameter, b.outerDiameter) ||
+        orderNullLast(a.width, b.width) ||
+        (a.ratingSource === 'supplier' ? -1 : 0) - (b.ratingSource === 'supplier' ? -1 : 0) ||
+        (a.type === 'ball' ? -1 : 0) - (b.type === 'ball' ? -1 : 0),
+    );
+  const best = feasible[0] ?? null;
+  if (best) return best;
+  if (candidates.length === 0)
+    notes.warn(
+      'no rolling bearing candidate: none of the ISO 15 sizes of this bore fits, and no supplier bearing is given',
+    );
+  for (const k of candidates) {
+    const why = [
+      ...k.exclusions,
+      ...k.checks.filter((x) => !x.pass).map((x) => `${x.label}: ${fmt(x.value)} against ${fmt(x.limit)} ${x.unit}`),
+    ];
+    notes.warn(`${k.designation} not suitable: ${why.join('; ')}`);
+  }
+  return null;
+}
+
+/**
+ * Upper bound of the duty-mean dynamic equivalent load of a deep-groove ball bearing (p = 3)
+ * over its X/Y table [1], N, for a case with no candidate to read X and Y from: at each point
+ * Pi = f_d·Fr when Fa/Fr ≤ the table's smallest e, else f_d·max(Fr, X·Fr + Y_max·Fa) with X
+ * above e and the table's largest Y.
+ */
+export function equivalentLoadBound(points: LoadPoint[], serviceFactor: number, table: XYTable, notes: Notes): number {
+  const eMin = Math.min(...table.rows.map((r) => r.e));
+  const yMax = Math.max(...table.rows.map((r) => r.Y));
+  const bound = points.map((q) => ({
+    P: serviceFactor * (q.Fr > 0 && q.Fa / q.Fr <= eMin ? q.Fr : Math.max(q.Fr, table.xAboveE * q.Fr + yMax * q.Fa)),
+    n: q.n,
+    t: q.t,
+  }));
+  const P = spectrumMean(bound, lifeExponent('ball')).P;
+  notes.assume({
+    field: 'equivalentLoad',
+    value: `${fmt(P)} N`,
+    reason: `no candidate to read X and Y from: the upper bound of P over the deep-groove ball X/Y table is given (X = ${table.xBelowE} when Fa/Fr ≤ ${eMin}, else the larger of Fr and ${table.xAboveE}·Fr + ${yMax.toFixed(2)}·Fa)`,
+  });
+  return P;
+}
