@@ -35,8 +35,6 @@ const RISE_OVER_AMBIENT = 20;
 const FALLBACK_BASE_TEMPERATURE = 20;
 /** Density converting a fixed dynamic viscosity to kinematic, kg/m³: typical mineral oil (from memory; data/lubricants.json spans 865–900). */
 const OIL_DENSITY = 870;
-/** Oil grade when an oil supply names none: ISO VG 68, a common general-machinery grade (common practice). */
-const DEFAULT_OIL_GRADE = 68;
 
 /**
  * The supply, operating temperature T = T_base + ΔT and viscosity ν(T) of the case [1, 2]:
@@ -71,8 +69,8 @@ export function bearingLubrication(c: CaseSI, notes: Notes): Lubrication {
 /**
  * Kinematic viscosity of the case's lubricant at tC (°C), m²/s: a fixed dynamic viscosity μ
  * (Pa·s) as ν = μ/ρ; else the named grade, the grease base oil (grease supply) or the default
- * grade, by the grade's viscosity–temperature law [1]. A grade not in the table falls back to
- * the grease base oil's, and says so.
+ * grade of data/lubricants.json, by the grade's viscosity–temperature law [1]. A grade not in
+ * the table falls back to the grease base oil's, and says so.
  */
 function caseViscosity(c: CaseSI, supply: BearingSupply, tC: number, notes: Notes): number {
   const mu = c.lubrication.viscosity;
@@ -95,14 +93,14 @@ function caseViscosity(c: CaseSI, supply: BearingSupply, tC: number, notes: Note
     });
   }
   if (grade === undefined) {
-    grade = supply === 'grease' ? lub.greaseBaseOil.grade : DEFAULT_OIL_GRADE;
+    grade = supply === 'grease' ? lub.greaseBaseOil.grade : lub.defaultGrade.grade;
     notes.assume({
       field: 'lubrication.oilGrade',
       value: `ISO VG ${grade}`,
       reason:
         supply === 'grease'
           ? `grease base oil (${lub.greaseBaseOil.source})`
-          : `no oil grade given: ISO VG ${DEFAULT_OIL_GRADE}, a common general-machinery grade (common practice)`,
+          : `no oil grade given: ISO VG ${lub.defaultGrade.grade}, a common general-machinery grade (common practice)`,
     });
   }
   let oil = oilGrade(grade);
