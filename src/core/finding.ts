@@ -3,12 +3,13 @@
  * values carry the numbers (SI) and names it rests on; the words a reader sees are written in
  * one place, src/report/findings/, so JSON, text and the note say the same thing.
  */
-export type FindingValue = number | string | boolean | null | Finding | readonly (number | string)[];
+export type FindingValue =
+  number | string | boolean | null | Finding | readonly (number | string)[] | readonly Finding[];
 
 export interface Finding {
   /** Stable code, "<option>.<what>", e.g. "rolling.kappa-below-range". */
   code: string;
-  /** Numbers in SI base units (temperatures °C), ids and names the wording needs, or a finding it rests on. */
+  /** Numbers in SI base units (temperatures °C), ids and names the wording needs, or the findings it rests on. */
   values: Record<string, FindingValue>;
 }
 

@@ -1,4 +1,5 @@
 import type { RollingResult } from '../calc/rolling/types.js';
+import { describe } from './findings/index.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 import { checksTable, heading, mark, paint } from './text.js';
@@ -83,7 +84,7 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
     out.push(
       `\n${paint.bold(k.designation)} (${k.id}) — X = ${k.X}, Y = ${k.Y}, P = ${fmt(k.equivalentLoad, 'N', units)}, P0 = ${fmt(k.staticEquivalentLoad, 'N', units)}, ν = ${(k.viscosity * 1e6).toPrecision(3)} mm²/s at ${fmt(k.temperature, 'degC', units)}`,
     );
-    if (k.exclusions.length) out.push(k.exclusions.map((e) => `  ruled out: ${e}`).join('\n'));
+    if (k.exclusions.length) out.push(k.exclusions.map((e) => `  ruled out: ${describe(e)}`).join('\n'));
     out.push(checksTable(k.checks, units));
   }
   return out.join('\n');

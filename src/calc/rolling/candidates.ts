@@ -1,7 +1,9 @@
 import type { CaseSI } from '../../case/types.js';
+import { assumedFinding, finding, type Finding } from '../../core/finding.js';
+import { num } from '../../core/format.js';
 import { boundaryDimensions, type BoundaryRow, type RollingFactors } from '../../data/rolling.js';
 import { estimatedFatigueLimit } from './aiso.js';
-import { fmt, type Notes } from './findings.js';
+import type { Notes } from './findings.js';
 import { estimateBallGeometry, estimateRollerGeometry } from './geometry.js';
 import type { RollingType } from './life.js';
 import { ballDynamicRating, ballStaticRating, rollerDynamicRating, rollerStaticRating } from './ratings.js';
@@ -46,6 +48,8 @@ export interface CandidateSpec {
 
 /** Bores equal within this, m: the table holds whole millimetres, a case is converted from its unit. */
 const BORE_TOLERANCE = 1e-5;
+/** Outside diameter of a supplier bearing given without one, as a multiple of the bore (so dm = 1.5·d; common practice). */
+const UNKNOWN_OUTER_OVER_BORE = 2;
 /** C0/C above this is unusual for a deep-groove ball bearing (common practice). */
 const BALL_C0_OVER_C_MAX = 1.2;
 
@@ -59,11 +63,9 @@ export function candidateSpecs(c: CaseSI, f: RollingFactors, notes: Notes): Cand
   const rows = boundaryDimensions().rows;
   const sameBore = rows.filter((r) => Math.abs(r.bore_mm / 1000 - d) <= BORE_TOLERANCE);
   if (!(d > 0) || !Number.isFinite(d)) {
-    notes.warn(`shaft diameter ${d} m is not a positive number: no bearing can be chosen`);
+    notes.warn(finding('rolling.diameter-not-positive', { diameter: d }));
   } else if (sameBore.length === 0) {
-    notes.warn(
-      `shaft diameter ${fmt(d * 1000)} mm is not a standard bore in the ISO 15 table; nearest bores: ${nearestBores(rows, d * 1000).join(' and ')} mm`,
-    );
+    notes.warn(finding('rolling.bore-not-standard', { diameter: d, nearest: nearestBores(rows, d * 1000) }));
   }
   const specs: CandidateSpec[] = [];
   const supplierC = c.rolling?.dynamicRating;
@@ -72,26 +74,16 @@ export function candidateSpecs(c: CaseSI, f: RollingFactors, notes: Notes): Cand
     if (supplierC !== undefined && supplierC0 !== undefined && supplierC > 0 && supplierC0 > 0 && d > 0) {
       specs.push(supplierSpec(c, supplierC, supplierC0, sameBore, f, notes));
     } else {
-      notes.warn(
-        'a supplier bearing needs both a positive dynamic rating C and static rating C0; the supplier values given are not used',
-      );
+      notes.warn(finding('rolling.supplier-ratings-incomplete'));
     }
   }
   specs.push(...rowsInSpace(c, sameBore, notes).map((r) => estimatedSpec(r, f)));
-  if (specs.some((s) => s.ratingSource === 'estimated')) {
-    notes.assume({
-      field: 'rolling.ratings',
-      value: 'C and C0 estimated from ISO 15 boundary dimensions',
-      reason: `internal geometry estimated (${f.geometryEstimate.source}); C by ISO 281:2007, C0 by ISO 76 from that geometry; a supplier's rating replaces the estimate`,
-    });
-  }
-  if (specs.some((s) => s.fatigueLimitEstimated)) {
-    notes.assume({
-      field: 'rolling.fatigueLimit',
-      value: 'Cu = C0/22 (ball), C0/8.2 (roller); above dm = 100 mm × (100/dm)^0.5 (ball), × (100/dm)^0.3 (roller)',
-      reason: 'no supplier fatigue load limit; the approximation of ISO 281:2007 Annex B is taken (from memory)',
-    });
-  }
+  if (specs.some((s) => s.ratingSource === 'estimated'))
+    notes.assume(
+      assumedFinding('rolling.ratings', 'rolling.estimated-ratings', { geometrySource: f.geometryEstimate.source }),
+    );
+  if (specs.some((s) => s.fatigueLimitEstimated))
+    notes.assume(assumedFinding('rolling.fatigueLimit', 'rolling.estimated-fatigue-limit'));
   return specs;
 }
 
@@ -99,25 +91,30 @@ export function candidateSpecs(c: CaseSI, f: RollingFactors, notes: Notes): Cand
 function rowsInSpace(c: CaseSI, sameBore: BoundaryRow[], notes: Notes): BoundaryRow[] {
   const wantType = c.rolling?.type;
   const fitting: BoundaryRow[] = [];
-  const excluded: string[] = [];
+  const excluded: Finding[] = [];
   for (const r of sameBore) {
     if (wantType !== undefined && r.type !== wantType) continue;
-    const tooWide = r.width_mm / 1000 > c.space.maxLength;
-    const tooBig = r.outerDiameter_mm / 1000 > c.space.maxOuterDiameter;
+    const outerDiameter = r.outerDiameter_mm / 1000;
+    const width = r.width_mm / 1000;
+    const tooWide = width > c.space.maxLength;
+    const tooBig = outerDiameter > c.space.maxOuterDiameter;
     if (!tooWide && !tooBig) {
       fitting.push(r);
       continue;
     }
-    const over = [
-      tooBig ? `D > ${fmt(c.space.maxOuterDiameter * 1000)} mm` : '',
-      tooWide ? `B > ${fmt(c.space.maxLength * 1000)} mm` : '',
-    ];
-    excluded.push(`${r.designation} (${r.outerDiameter_mm}×${r.width_mm} mm: ${over.filter(Boolean).join(', ')})`);
-  }
-  if (excluded.length > 0)
-    notes.warn(
-      `${excluded.length} ISO 15 size(s) of this bore excluded by the space available: ${excluded.join('; ')}`,
+    excluded.push(
+      finding('rolling.size-outside-space', {
+        designation: r.designation,
+        outerDiameter,
+        width,
+        tooBig,
+        tooWide,
+        maxOuterDiameter: c.space.maxOuterDiameter,
+        maxLength: c.space.maxLength,
+      }),
     );
+  }
+  if (excluded.length > 0) notes.warn(finding('rolling.space-excluded', { sizes: excluded }));
   return fitting;
 }
 
@@ -166,19 +163,10 @@ function supplierSpec(
 ): CandidateSpec {
   const d = c.shaft.diameter;
   const type: RollingType = c.rolling?.type ?? 'ball';
-  if (c.rolling?.type === undefined) {
-    notes.assume({
-      field: 'rolling.type',
-      value: 'ball',
-      reason: 'the supplier bearing has no type given: a deep-groove ball bearing is taken',
-    });
-  }
+  if (c.rolling?.type === undefined) notes.assume(assumedFinding('rolling.type', 'rolling.supplier-type', { type }));
   const { D, B } = supplierDimensions(c, type, sameBore, notes);
-  if (type === 'ball' && C0 > BALL_C0_OVER_C_MAX * C) {
-    notes.warn(
-      `supplier ratings C0/C = ${fmt(C0 / C)}: unusual for a deep-groove ball bearing, whose C0 is normally below C (common practice); check the datasheet and the bearing type`,
-    );
-  }
+  if (type === 'ball' && C0 > BALL_C0_OVER_C_MAX * C)
+    notes.warn(finding('rolling.supplier-ratio-unusual', { ratio: C0 / C }));
   const g = supplierGeometry(type, d, D, B, f);
   const CuGiven = c.rolling?.fatigueLimit;
   const CuIsGiven = CuGiven !== undefined && CuGiven > 0;
@@ -187,7 +175,7 @@ function supplierSpec(
     type,
     kind: KIND[type],
     series: 'supplier',
-    designation: `supplier ${KIND[type]} bearing, bore ${fmt(d * 1000)}`,
+    designation: `supplier ${KIND[type]} bearing, bore ${num(d * 1000, 4, { exponentZeros: 'keep' })}`,
     bore: d,
     outerDiameter: D,
     width: B,
@@ -213,18 +201,17 @@ function supplierDimensions(
   if ((D === null || B === null) && row) {
     if (D === null) D = row.outerDiameter_mm / 1000;
     if (B === null) B = row.width_mm / 1000;
-    notes.assume({
-      field: 'rolling.outerDiameter/width',
-      value: `${fmt(D * 1000)} × ${fmt(B * 1000)} mm`,
-      reason: `supplier bearing dimensions not given: taken from the ISO 15 row "${row.designation}" of the same bore`,
-    });
+    notes.assume(
+      assumedFinding('rolling.outerDiameter/width', 'rolling.supplier-dimensions', {
+        outerDiameter: D,
+        width: B,
+        row: row.designation,
+      }),
+    );
   }
   if (D === null)
-    notes.warn(
-      'supplier bearing outside diameter not given and no ISO 15 row of its bore: pitch diameter taken as 1.5·d and the space check on D is left out',
-    );
-  if (B === null)
-    notes.warn('supplier bearing width not given and no ISO 15 row of its bore: the space check on width is left out');
+    notes.warn(finding('rolling.supplier-no-outer-diameter', { pitchOverBore: (1 + UNKNOWN_OUTER_OVER_BORE) / 2 }));
+  if (B === null) notes.warn(finding('rolling.supplier-no-width'));
   return { D, B };
 }
 
@@ -239,7 +226,7 @@ function supplierGeometry(
   B: number | null,
   f: RollingFactors,
 ): { dm: number; Dw: number; Z: number } {
-  const Dgeom = D ?? 2 * d;
+  const Dgeom = D ?? UNKNOWN_OUTER_OVER_BORE * d;
   if (type === 'ball') {
     const b = estimateBallGeometry(d, Dgeom, f.geometryEstimate);
     return { dm: b.Dpw, Dw: b.Dw, Z: b.Z };
@@ -248,10 +235,10 @@ function supplierGeometry(
   return { dm: r.Dpw, Dw: r.Dwe, Z: r.Z };
 }
 
-/** The table's bores next below and next above dMm (mm), those that exist. */
+/** The table's bores next below and next above dMm (mm), those that exist, m. */
 function nearestBores(rows: BoundaryRow[], dMm: number): number[] {
   const bores = [...new Set(rows.map((r) => r.bore_mm))].sort((a, b) => a - b);
   const below = bores.filter((b) => b < dMm).pop();
   const above = bores.find((b) => b > dMm);
-  return [below, above].filter((b): b is number => b !== undefined);
+  return [below, above].filter((b): b is number => b !== undefined).map((b) => b / 1000);
 }

@@ -1,4 +1,5 @@
 import type { CaseSI } from '../../case/types.js';
+import { finding } from '../../core/finding.js';
 import { rollingFactors } from '../../data/rolling.js';
 import { candidateSpecs } from './candidates.js';
 import { dutyPoints, lifeFactors, shockFactors } from './conditions.js';
@@ -73,7 +74,7 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     lifeExponent(leadType),
     life.a1,
   );
-  if (!(c.life.hours > 0)) notes.warn('no life target (life.hours ≤ 0): the life check is left out');
+  if (!(c.life.hours > 0)) notes.warn(finding('rolling.no-life-target'));
 
   return {
     option: 'rolling',

@@ -1,8 +1,9 @@
 import type { CaseSI } from '../../case/types.js';
+import { assumedFinding, finding } from '../../core/finding.js';
 import type { RollingFactors } from '../../data/rolling.js';
 import { operatingPoints, pointSpeed } from '../duty.js';
 import { RELIABILITY_RANGE, reliabilityFactor } from './life.js';
-import { fmt, type Notes } from './findings.js';
+import type { Notes } from './findings.js';
 
 /**
  * What the case asks of a rolling bearing, read once for every candidate: the operating
@@ -50,24 +51,13 @@ export function dutyPoints(c: CaseSI, notes: Notes): DutyPoints {
     n: Math.max(0, finiteOr(pointSpeed(c, q), 0)),
     t: Math.max(0, finiteOr(q.share, 0)),
   }));
-  if (given.some((q) => !(q.radial >= 0) || !(q.axial >= 0))) {
-    notes.warn('a load was negative or not a number: its magnitude (or 0) is used');
-  }
+  if (given.some((q) => !(q.radial >= 0) || !(q.axial >= 0))) notes.warn(finding('rolling.load-magnitude'));
   const totalTime = points.reduce((sum, q) => sum + q.t, 0);
   const meanSpeed = totalTime > 0 ? points.reduce((sum, q) => sum + q.n * q.t, 0) / totalTime : 0;
   const maxSpeed = points.reduce((m, q) => Math.max(m, q.n), 0);
-  if (c.shaft.oscillation) {
-    notes.assume({
-      field: 'shaft.oscillation',
-      value: `equivalent rotational speed ${fmt(meanSpeed * 60)} r/min`,
-      reason:
-        'for life, an oscillating shaft is taken as rotating at n = θ·f/π, the speed that turns the same angle per second (common practice)',
-    });
-  }
-  if (!(meanSpeed > 0))
-    notes.warn(
-      'the shaft does not turn (mean speed 0): rating lives, viscosity ratio and speed checks do not apply; only static safety is checked',
-    );
+  if (c.shaft.oscillation)
+    notes.assume(assumedFinding('shaft.oscillation', 'rolling.equivalent-speed', { speed: meanSpeed }));
+  if (!(meanSpeed > 0)) notes.warn(finding('rolling.not-turning'));
   return { points, meanSpeed, maxSpeed };
 }
 
@@ -84,14 +74,22 @@ export interface ShockFactors {
  */
 export function shockFactors(c: CaseSI, f: RollingFactors, notes: Notes): ShockFactors {
   const sf = f.serviceFactors.find((s) => s.shock === c.load.shock) ?? f.serviceFactors[0]!;
-  notes.assume({
-    field: 'load.shock',
-    value: `service factor f_d = ${sf.serviceFactor}`,
-    reason: `dynamic equivalent load multiplied by f_d for shock level "${c.load.shock}" (${sf.source}); static safety uses the peak operating point without f_d, its limit already graded by shock`,
-  });
+  notes.assume(
+    assumedFinding('load.shock', 'rolling.service-factor', {
+      shock: c.load.shock,
+      serviceFactor: sf.serviceFactor,
+      source: sf.source,
+    }),
+  );
   const s0Row = f.staticSafety.find((s) => s.shock === c.load.shock) ?? f.staticSafety[1]!;
   return { serviceFactor: sf.serviceFactor, s0Row };
 }
+
+/**
+ * Pitch diameter below which the ISO 281 contamination guidance is given, m (ISO 281:2007,
+ * from memory); above it the same (lower, so conservative) e_C is taken and said.
+ */
+export const EC_GUIDANCE_DM = 0.1;
 
 export interface LifeFactors {
   /** Contamination row: the ISO 281 level read and its factor e_C, 1. */
@@ -110,22 +108,28 @@ export interface LifeFactors {
  */
 export function lifeFactors(c: CaseSI, f: RollingFactors, notes: Notes): LifeFactors {
   const cont = f.contamination.find((x) => x.level === c.environment.contamination) ?? f.contamination[1]!;
-  notes.assume({
-    field: 'environment.contamination',
-    value: `e_C = ${cont.eC}`,
-    reason: `"${cont.level}" read as ISO 281 "${cont.isoLevel}" (e_C ${cont.low}–${cont.high} for dm < 100 mm); the middle of the range is taken (${cont.source})`,
-  });
+  notes.assume(
+    assumedFinding('environment.contamination', 'rolling.contamination', {
+      level: cont.level,
+      isoLevel: cont.isoLevel,
+      low: cont.low,
+      high: cont.high,
+      eC: cont.eC,
+      guidanceBelow: EC_GUIDANCE_DM,
+      source: cont.source,
+    }),
+  );
   const rel = reliabilityFactor(finiteOr(c.life.reliability, RELIABILITY_RANGE.min));
   if (rel.clamped) {
     notes.warn(
-      `reliability ${c.life.reliability} % is outside the a1 formula's range ${RELIABILITY_RANGE.min}–${RELIABILITY_RANGE.max} % (ISO 281:2007): ${rel.reliabilityUsed} % is used`,
+      finding('rolling.reliability-held', {
+        reliability: c.life.reliability,
+        used: rel.reliabilityUsed,
+        min: RELIABILITY_RANGE.min,
+        max: RELIABILITY_RANGE.max,
+      }),
     );
   }
-  notes.assume({
-    field: 'life.criterion',
-    value: 'L10mh = a1·a_ISO·L10h ≥ life target',
-    reason:
-      'a candidate meets the life target on the modified rating life of ISO 281:2007, which counts lubrication and contamination; the required dynamic rating is the basic rating with a1 only (a_ISO = 1)',
-  });
+  notes.assume(assumedFinding('life.criterion', 'rolling.life-criterion'));
   return { cont, a1: rel.a1, reliabilityUsed: rel.reliabilityUsed };
 }

@@ -1,16 +1,17 @@
 import type { CaseSI } from '../../case/types.js';
+import { finding, type Finding } from '../../core/finding.js';
 import type { RollingFactors } from '../../data/rolling.js';
-import { aIso, ratedViscosity } from './aiso.js';
+import { AISO_CAP, KAPPA_MAX, KAPPA_MIN, aIso, ratedViscosity } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import { candidateChecks } from './checks.js';
-import type { LoadPoint } from './conditions.js';
+import { EC_GUIDANCE_DM, type LoadPoint } from './conditions.js';
 import {
   dynamicEquivalentLoad,
   spectrumMean,
   staticEquivalentLoad,
   type DynamicLoadResult,
 } from './equivalent-load.js';
-import { fmt, type Notes } from './findings.js';
+import type { Notes } from './findings.js';
 import { basicRatingLife, lifeExponent, lifeHours, requiredDynamicRating } from './life.js';
 import type { Lubrication } from './lubrication.js';
 import { criticalSwingAngle, frictionPower, frictionTorque, relubricationInterval, speedFactor } from './speed.js';
@@ -57,9 +58,6 @@ export interface CandidateFigures {
   relubricationHours: number | null;
 }
 
-/** Pitch diameter from which the e_C guidance for dm < 100 mm is stretched, m (ISO 281:2007, from memory). */
-const EC_GUIDANCE_DM = 0.1;
-
 /** A point's dynamic equivalent load without f_d (P, for friction) and with it (Pf, for life), N. */
 type PointLoad = DynamicLoadResult & { Pf: number } & LoadPoint;
 
@@ -72,14 +70,29 @@ function pointLoads(
   s: CandidateSpec,
   x: EvalContext,
   notes: Notes,
-): { per: PointLoad[]; exclusions: string[]; heaviest: PointLoad; P: number; n: number } {
-  const exclusions: string[] = [];
+): { per: PointLoad[]; exclusions: Finding[]; heaviest: PointLoad; P: number; n: number } {
+  const table = x.f.xyDeepGrooveBall;
+  const exclusions: Finding[] = [];
+  // Reasons are told apart as they read (the load kernel's own sentence), as they always were.
+  const excludedFor = new Set<string>();
   const per = x.points.map((q): PointLoad => {
-    const r = dynamicEquivalentLoad(s.type, q.Fr, q.Fa, s.C0, x.f.xyDeepGrooveBall);
-    if (r.exclusion && !exclusions.includes(r.exclusion)) exclusions.push(r.exclusion);
+    const r = dynamicEquivalentLoad(s.type, q.Fr, q.Fa, s.C0, table);
+    if (r.exclusion && !excludedFor.has(r.exclusion)) {
+      excludedFor.add(r.exclusion);
+      exclusions.push(
+        s.type === 'ball'
+          ? finding('rolling.axial-beyond-table', { faC0: r.faC0, lastRow: table.rows[table.rows.length - 1]!.faC0 })
+          : finding('rolling.roller-axial-load', { axial: q.Fa }),
+      );
+    }
     if (r.range === 'below' && r.faC0 !== null && r.faC0 > 0 && r.Y > 0) {
       notes.warn(
-        `${s.designation}: Fa/C0 = ${r.faC0.toFixed(4)} is below the first row of the ISO 281 X/Y table (0.014); e and Y of that row are used (Y would be somewhat larger): not extrapolated`,
+        finding('rolling.fa-c0-below-table', {
+          designation: s.designation,
+          faC0: r.faC0,
+          firstRow: table.rows[0]!.faC0,
+        }),
+        `${s.designation} ${r.faC0.toFixed(4)}`,
       );
     }
     return { ...r, Pf: x.serviceFactor * r.P, n: q.n, t: q.t, Fr: q.Fr, Fa: q.Fa };
@@ -106,18 +119,20 @@ function lives(s: CandidateSpec, x: EvalContext, P: number, n: number, notes: No
   if (kappa !== null && P > 0) {
     const a = aIso(s.type, kappa, (x.cont.eC * s.Cu) / P);
     aISO = a.aISO;
+    const designation = s.designation;
     if (a.kappaRange === 'above')
-      notes.warn(`${s.designation}: viscosity ratio κ = ${fmt(kappa)} > 4 is taken as 4, as ISO 281:2007 says`);
-    if (a.kappaRange === 'below') {
-      notes.warn(
-        `${s.designation}: viscosity ratio κ = ${fmt(kappa)} < 0.1 is outside the a_ISO method of ISO 281:2007; a_ISO at κ = 0.1 is shown for orientation only and the lubrication check fails`,
-      );
-    }
-    if (a.capped) notes.warn(`${s.designation}: a_ISO reached its cap of 50 (ISO 281:2007)`);
+      notes.warn(finding('rolling.kappa-above-range', { designation, kappa, kappaMax: KAPPA_MAX }));
+    if (a.kappaRange === 'below')
+      notes.warn(finding('rolling.kappa-below-range', { designation, kappa, kappaMin: KAPPA_MIN }));
+    if (a.capped) notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }));
   }
   if (s.dm >= EC_GUIDANCE_DM)
     notes.warn(
-      `${s.designation}: pitch diameter ${fmt(s.dm * 1000)} mm ≥ 100 mm; e_C is taken from the dm < 100 mm guidance, which is the lower (conservative) one`,
+      finding('rolling.pitch-diameter-large', {
+        designation: s.designation,
+        pitchDiameter: s.dm,
+        guidanceBelow: EC_GUIDANCE_DM,
+      }),
     );
   const L10mh = L10h !== null && aISO !== null ? x.a1 * aISO * L10h : null;
   return { L10, L10h, nu1, kappa, aISO, L10mh };
@@ -146,10 +161,7 @@ function running(s: CandidateSpec, x: EvalContext, per: PointLoad[], notes: Note
   if (x.lubrication.supply === 'grease') {
     const kf = x.f.relubrication.find((q) => q.type === s.type)!.kf;
     relub = relubricationInterval(x.maxSpeed, s.bore, kf, x.lubrication.temperature);
-    if (relub === 0)
-      notes.warn(
-        `${s.designation}: the grease interval formula gives no positive interval at ${fmt(x.maxSpeed * 60)} r/min: too fast for grease by this rule; oil is needed`,
-      );
+    if (relub === 0) notes.warn(finding('rolling.grease-too-fast', { designation: s.designation, speed: x.maxSpeed }));
   }
   return { ndm, torque, power, relub };
 }
@@ -164,7 +176,12 @@ function swingAngle(s: CandidateSpec, c: CaseSI, notes: Notes): number | null {
   const swing = criticalSwingAngle(s.Z, s.Dw, s.dm);
   if (c.shaft.oscillation.angle < swing) {
     notes.warn(
-      `${s.designation}: swing ${fmt((c.shaft.oscillation.angle * 180) / Math.PI)}° is smaller than ${fmt((swing * 180) / Math.PI)}°, the swing for each of its ${s.Z} rolling elements to roll onto its neighbour's track (720°/(Z·(1 − Dw/dm)), estimated geometry): the same track patches carry every cycle; false brinelling and fretting are the risk and the equivalent-speed life is not reliable`,
+      finding('rolling.swing-too-small', {
+        designation: s.designation,
+        swing: c.shaft.oscillation.angle,
+        fullOverlapSwing: swing,
+        elements: s.Z,
+      }),
     );
   }
   return swing;

@@ -1,37 +1,37 @@
-import { num } from '../../core/format.js';
-import type { Assumption } from '../../case/types.js';
+import { remarkKey, type AssumedFinding, type Finding } from '../../core/finding.js';
 
 /**
- * What one rolling check found besides its figures: the assumptions it made and its cautions,
- * in the order a reader meets them. The steps of a check add to one collector in the order
- * they run, so the order of the lists is the order of the steps; a caution found twice (the
- * same words from two operating points, say) is kept once.
+ * What one rolling check found besides its figures, as data: the assumptions it made and its
+ * cautions, each a code with its values (SI numbers, ids, names), worded by the report
+ * (src/report/findings/rolling.ts). The steps of a check add to one collector in the order
+ * they run, so the order of the lists is the order of the steps. A caution found twice is
+ * kept once: two cautions are the same when their code and values are, or, where a step says
+ * so, when they agree at the precision they are shown at (the same Fa/C0 to four places from
+ * two operating points, say), which is how they have always been told apart.
  */
 export interface Notes {
-  readonly assumed: Assumption[];
-  readonly warnings: string[];
-  assume(a: Assumption): void;
-  warn(w: string): void;
+  readonly assumed: AssumedFinding[];
+  readonly warnings: Finding[];
+  assume(a: AssumedFinding): void;
+  /** Add a caution; `sameAs` names it for telling repeats apart (default: its code and values). */
+  warn(w: Finding, sameAs?: string): void;
 }
 
 /** An empty collector for one check. */
 export function newNotes(): Notes {
-  const assumed: Assumption[] = [];
-  const warnings: string[] = [];
+  const assumed: AssumedFinding[] = [];
+  const warnings: Finding[] = [];
+  const seen = new Set<string>();
   return {
     assumed,
     warnings,
     assume: (a) => void assumed.push(a),
-    warn: (w) => {
-      if (!warnings.includes(w)) warnings.push(w);
+    warn: (w, sameAs) => {
+      // A given name is kept apart from the default key (a JSON object, which starts with "{").
+      const key = sameAs === undefined ? remarkKey(w) : `${w.code}:${sameAs}`;
+      if (seen.has(key)) return;
+      seen.add(key);
+      warnings.push(w);
     },
   };
-}
-
-/**
- * A number in the kernel's messages: num with the zeros of the exponent form kept (1.000e+6),
- * as these messages have always been written.
- */
-export function fmt(v: number): string {
-  return num(v, 4, { exponentZeros: 'keep' });
 }

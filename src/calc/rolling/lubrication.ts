@@ -1,8 +1,9 @@
 import type { CaseSI } from '../../case/types.js';
+import { assumedFinding, finding } from '../../core/finding.js';
 import { lubricants, oilGrade } from '../../data/load.js';
 import { kinematicViscosity } from '../lubricant.js';
 import { finiteOr } from './conditions.js';
-import { fmt, type Notes } from './findings.js';
+import type { Notes } from './findings.js';
 
 /**
  * The lubricant a rolling bearing sees: the supply it runs on, its operating temperature and
@@ -44,25 +45,17 @@ const OIL_DENSITY = 870;
 export function bearingLubrication(c: CaseSI, notes: Notes): Lubrication {
   const sealed = c.lubrication.supply === 'none';
   const supply: BearingSupply = c.lubrication.supply === 'none' ? 'grease' : c.lubrication.supply;
-  if (sealed) {
-    notes.assume({
-      field: 'lubrication.supply',
-      value: 'sealed-for-life grease',
-      reason:
-        'a rolling bearing needs at least grease; with no supply a sealed, greased-for-life bearing is the practical reading, and its grease life is checked against the life target (common practice)',
-    });
-  }
+  if (sealed) notes.assume(assumedFinding('lubrication.supply', 'rolling.sealed-for-life'));
   const rise = supply === 'oil-feed' ? RISE_OVER_INLET : RISE_OVER_AMBIENT;
   const base = supply === 'oil-feed' ? c.lubrication.inletTemperature : c.environment.ambient;
   const temperature = finiteOr(base, FALLBACK_BASE_TEMPERATURE) + rise;
-  notes.assume({
-    field: 'rolling.temperature',
-    value: `${fmt(temperature)} °C`,
-    reason:
-      supply === 'oil-feed'
-        ? `operating temperature of the bearing taken as oil inlet + ${rise} K (common practice for circulating oil)`
-        : `operating temperature of the bearing taken as ambient + ${rise} K (common practice for a grease- or bath-lubricated bearing in a housing)`,
-  });
+  notes.assume(
+    assumedFinding('rolling.temperature', 'rolling.operating-temperature', {
+      temperature,
+      rise,
+      over: supply === 'oil-feed' ? 'inlet' : 'ambient',
+    }),
+  );
   return { sealed, supply, temperature, viscosity: caseViscosity(c, supply, temperature, notes) };
 }
 
@@ -76,38 +69,31 @@ function caseViscosity(c: CaseSI, supply: BearingSupply, tC: number, notes: Note
   const mu = c.lubrication.viscosity;
   if (mu !== undefined && mu > 0) {
     const nu = mu / OIL_DENSITY;
-    notes.assume({
-      field: 'lubrication.viscosity',
-      value: `ν = ${fmt(nu * 1e6)} mm²/s`,
-      reason: `the fixed dynamic viscosity ${mu} Pa·s is taken at the operating temperature and converted with a density of ${OIL_DENSITY} kg/m³ (typical mineral oil, from memory)`,
-    });
+    notes.assume(
+      assumedFinding('lubrication.viscosity', 'rolling.fixed-viscosity', {
+        dynamicViscosity: mu,
+        kinematicViscosity: nu,
+        density: OIL_DENSITY,
+      }),
+    );
     return nu;
   }
   const lub = lubricants();
   let grade = c.lubrication.oilGrade;
-  if (grade !== undefined && supply === 'grease') {
-    notes.assume({
-      field: 'lubrication.oilGrade',
-      value: `ISO VG ${grade}`,
-      reason: 'with grease supply the named oil grade is taken as the grease base oil',
-    });
-  }
-  if (grade === undefined) {
-    grade = supply === 'grease' ? lub.greaseBaseOil.grade : lub.defaultGrade.grade;
-    notes.assume({
-      field: 'lubrication.oilGrade',
-      value: `ISO VG ${grade}`,
-      reason:
-        supply === 'grease'
-          ? `grease base oil (${lub.greaseBaseOil.source})`
-          : `no oil grade given: ISO VG ${lub.defaultGrade.grade}, a common general-machinery grade (common practice)`,
-    });
+  if (grade !== undefined && supply === 'grease')
+    notes.assume(assumedFinding('lubrication.oilGrade', 'rolling.grade-as-base-oil', { grade }));
+  if (grade === undefined && supply === 'grease') {
+    grade = lub.greaseBaseOil.grade;
+    notes.assume(
+      assumedFinding('lubrication.oilGrade', 'rolling.grease-base-oil', { grade, source: lub.greaseBaseOil.source }),
+    );
+  } else if (grade === undefined) {
+    grade = lub.defaultGrade.grade;
+    notes.assume(assumedFinding('lubrication.oilGrade', 'rolling.default-grade', { grade }));
   }
   let oil = oilGrade(grade);
   if (!oil) {
-    notes.warn(
-      `ISO VG ${grade} is not in data/lubricants.json: the grease base oil grade ${lub.greaseBaseOil.grade} is used instead`,
-    );
+    notes.warn(finding('rolling.grade-not-in-table', { grade, fallback: lub.greaseBaseOil.grade }));
     oil = oilGrade(lub.greaseBaseOil.grade) ?? lub.grades[0]!;
   }
   return kinematicViscosity(oil, tC) * 1e-6;

@@ -1,7 +1,8 @@
+import { assumedFinding, finding } from '../../core/finding.js';
 import type { XYTable } from '../../data/rolling.js';
 import type { LoadPoint } from './conditions.js';
 import { spectrumMean } from './equivalent-load.js';
-import { fmt, type Notes } from './findings.js';
+import type { Notes } from './findings.js';
 import { lifeExponent } from './life.js';
 import type { RollingCandidate } from './types.js';
 
@@ -39,16 +40,19 @@ export function bestCandidate(candidates: RollingCandidate[], notes: Notes): Rol
     );
   const best = feasible[0] ?? null;
   if (best) return best;
-  if (candidates.length === 0)
-    notes.warn(
-      'no rolling bearing candidate: none of the ISO 15 sizes of this bore fits, and no supplier bearing is given',
-    );
+  if (candidates.length === 0) notes.warn(finding('rolling.no-candidate'));
   for (const k of candidates) {
-    const why = [
-      ...k.exclusions,
-      ...k.checks.filter((x) => !x.pass).map((x) => `${x.label}: ${fmt(x.value)} against ${fmt(x.limit)} ${x.unit}`),
-    ];
-    notes.warn(`${k.designation} not suitable: ${why.join('; ')}`);
+    const failing = k.checks.filter((x) => !x.pass);
+    notes.warn(
+      finding('rolling.not-suitable', {
+        designation: k.designation,
+        exclusions: k.exclusions,
+        failing: failing.map((x) => x.label),
+        values: failing.map((x) => x.value),
+        limits: failing.map((x) => x.limit),
+        units: failing.map((x) => x.unit),
+      }),
+    );
   }
   return null;
 }
@@ -68,10 +72,14 @@ export function equivalentLoadBound(points: LoadPoint[], serviceFactor: number, 
     t: q.t,
   }));
   const P = spectrumMean(bound, lifeExponent('ball')).P;
-  notes.assume({
-    field: 'equivalentLoad',
-    value: `${fmt(P)} N`,
-    reason: `no candidate to read X and Y from: the upper bound of P over the deep-groove ball X/Y table is given (X = ${table.xBelowE} when Fa/Fr ≤ ${eMin}, else the larger of Fr and ${table.xAboveE}·Fr + ${yMax.toFixed(2)}·Fa)`,
-  });
+  notes.assume(
+    assumedFinding('equivalentLoad', 'rolling.load-bound', {
+      load: P,
+      xBelowE: table.xBelowE,
+      eMin,
+      xAboveE: table.xAboveE,
+      yMax,
+    }),
+  );
   return P;
 }

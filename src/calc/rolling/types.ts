@@ -1,4 +1,4 @@
-import type { Assumption } from '../../case/types.js';
+import type { AssumedFinding, Finding } from '../../core/finding.js';
 import type { CheckRecord, SheetLine } from '../../core/check.js';
 import type { RollingType } from './life.js';
 
@@ -82,8 +82,8 @@ export interface RollingCandidate {
   ratedViscosity: number | null;
   /** Smallest swing angle for full rolling-element overlap, rad (oscillating shafts only). */
   criticalSwingAngle: number | null;
-  /** Reasons that rule the bearing out regardless of the checks. */
-  exclusions: string[];
+  /** Reasons that rule the bearing out regardless of the checks (worded by src/report/findings). */
+  exclusions: Finding[];
   feasible: boolean;
   checks: CheckRecord[];
 }
@@ -105,7 +105,8 @@ export interface RollingResult {
   candidates: RollingCandidate[];
   best: string | null;
   feasible: boolean;
-  assumed: Assumption[];
-  warnings: string[];
+  /** What the check assumed, and its cautions, as data (worded by src/report/findings/rolling.ts). */
+  assumed: AssumedFinding[];
+  warnings: Finding[];
   sheet: SheetLine[];
 }

@@ -1,7 +1,183 @@
-import type { KernelWording } from './types.js';
+import type { Finding, FindingValue } from '../../core/finding.js';
+import { num } from '../../core/format.js';
+import type { KernelWording, Wording } from './types.js';
 
-/** The words of the rolling kernel's findings and assumptions, keyed by code. */
+// The rolling kernel's numbers have always been written with the zeros of the exponent form
+// kept (1.000e+6); the words below keep its text exactly.
+const fig = (v: FindingValue | undefined): string => num(Number(v), 4, { exponentZeros: 'keep' });
+/** A length in m as millimetres, as a table of whole or decimal millimetres gives them. */
+const tableMm = (v: FindingValue | undefined): string => num(Number(v) * 1000, 6);
+/** A number or name as the kernel holds it (no rounding). */
+const raw = (v: FindingValue | undefined): string => String(v);
+const list = <T extends FindingValue>(v: FindingValue | undefined): readonly T[] =>
+  Array.isArray(v) ? (v as readonly T[]) : [];
+const degrees = (rad: FindingValue | undefined): string => fig((Number(rad) * 180) / Math.PI);
+
+/** Why a candidate is ruled out whatever its checks say (the load kernel's reasons). */
+const exclusionWording: Record<string, Wording> = {
+  'rolling.axial-beyond-table': (v) =>
+    `relative axial load Fa/C0 = ${Number(v['faC0']).toFixed(3)} is beyond the ISO 281 X/Y table (last row ${raw(v['lastRow'])}); a deep-groove ball bearing is not rated this way for such thrust: consider an angular-contact or thrust arrangement`,
+  'rolling.roller-axial-load': (v) =>
+    `axial load ${Number(v['axial']).toFixed(0)} N: a radial cylindrical roller bearing (ribs on one ring) takes no axial load`,
+};
+
+const exclusionWords = (f: Finding): string => {
+  const w = exclusionWording[f.code];
+  if (!w) throw new Error(`no wording for exclusion ${f.code}`);
+  return w(f.values);
+};
+
+/** An ISO 15 size the space rules out: its size and which room it exceeds. */
+const sizeOutsideSpace: Wording = (v) => {
+  const over = [
+    v['tooBig'] ? `D > ${fig(Number(v['maxOuterDiameter']) * 1000)} mm` : '',
+    v['tooWide'] ? `B > ${fig(Number(v['maxLength']) * 1000)} mm` : '',
+  ];
+  return `${raw(v['designation'])} (${tableMm(v['outerDiameter'])}×${tableMm(v['width'])} mm: ${over.filter(Boolean).join(', ')})`;
+};
+
+/** A candidate that is not suitable: its exclusions, then each failing check with value and limit. */
+const notSuitable: Wording = (v) => {
+  const values = list<number>(v['values']);
+  const limits = list<number>(v['limits']);
+  const units = list<string>(v['units']);
+  const why = [
+    ...list<Finding>(v['exclusions']).map(exclusionWords),
+    ...list<string>(v['failing']).map(
+      (label, i) => `${label}: ${fig(values[i])} against ${fig(limits[i])} ${units[i]}`,
+    ),
+  ];
+  return `${raw(v['designation'])} not suitable: ${why.join('; ')}`;
+};
+
+/** Cautions about the case as a whole: loads, speed, reliability, diameter, oil, supplier data. */
+const caseFindings: Record<string, Wording> = {
+  'rolling.load-magnitude': () => 'a load was negative or not a number: its magnitude (or 0) is used',
+  'rolling.not-turning': () =>
+    'the shaft does not turn (mean speed 0): rating lives, viscosity ratio and speed checks do not apply; only static safety is checked',
+  'rolling.reliability-held': (v) =>
+    `reliability ${raw(v['reliability'])} % is outside the a1 formula's range ${raw(v['min'])}–${raw(v['max'])} % (ISO 281:2007): ${raw(v['used'])} % is used`,
+  'rolling.grade-not-in-table': (v) =>
+    `ISO VG ${raw(v['grade'])} is not in data/lubricants.json: the grease base oil grade ${raw(v['fallback'])} is used instead`,
+  'rolling.diameter-not-positive': (v) =>
+    `shaft diameter ${raw(v['diameter'])} m is not a positive number: no bearing can be chosen`,
+  'rolling.bore-not-standard': (v) =>
+    `shaft diameter ${fig(Number(v['diameter']) * 1000)} mm is not a standard bore in the ISO 15 table; nearest bores: ${list<number>(v['nearest']).map(tableMm).join(' and ')} mm`,
+  'rolling.supplier-ratings-incomplete': () =>
+    'a supplier bearing needs both a positive dynamic rating C and static rating C0; the supplier values given are not used',
+  'rolling.space-excluded': (v) => {
+    const sizes = list<Finding>(v['sizes']);
+    return `${sizes.length} ISO 15 size(s) of this bore excluded by the space available: ${sizes.map((s) => sizeOutsideSpace(s.values)).join('; ')}`;
+  },
+  'rolling.supplier-ratio-unusual': (v) =>
+    `supplier ratings C0/C = ${fig(v['ratio'])}: unusual for a deep-groove ball bearing, whose C0 is normally below C (common practice); check the datasheet and the bearing type`,
+  'rolling.supplier-no-outer-diameter': (v) =>
+    `supplier bearing outside diameter not given and no ISO 15 row of its bore: pitch diameter taken as ${raw(v['pitchOverBore'])}·d and the space check on D is left out`,
+  'rolling.supplier-no-width': () =>
+    'supplier bearing width not given and no ISO 15 row of its bore: the space check on width is left out',
+  'rolling.no-candidate': () =>
+    'no rolling bearing candidate: none of the ISO 15 sizes of this bore fits, and no supplier bearing is given',
+  'rolling.no-life-target': () => 'no life target (life.hours ≤ 0): the life check is left out',
+};
+
+/** Cautions about one candidate, each naming it first. */
+const candidateFindings: Record<string, Wording> = {
+  'rolling.fa-c0-below-table': (v) =>
+    `${raw(v['designation'])}: Fa/C0 = ${Number(v['faC0']).toFixed(4)} is below the first row of the ISO 281 X/Y table (${raw(v['firstRow'])}); e and Y of that row are used (Y would be somewhat larger): not extrapolated`,
+  'rolling.kappa-above-range': (v) =>
+    `${raw(v['designation'])}: viscosity ratio κ = ${fig(v['kappa'])} > ${raw(v['kappaMax'])} is taken as ${raw(v['kappaMax'])}, as ISO 281:2007 says`,
+  'rolling.kappa-below-range': (v) =>
+    `${raw(v['designation'])}: viscosity ratio κ = ${fig(v['kappa'])} < ${raw(v['kappaMin'])} is outside the a_ISO method of ISO 281:2007; a_ISO at κ = ${raw(v['kappaMin'])} is shown for orientation only and the lubrication check fails`,
+  'rolling.aiso-capped': (v) => `${raw(v['designation'])}: a_ISO reached its cap of ${raw(v['cap'])} (ISO 281:2007)`,
+  'rolling.pitch-diameter-large': (v) => {
+    const guidance = fig(Number(v['guidanceBelow']) * 1000);
+    return `${raw(v['designation'])}: pitch diameter ${fig(Number(v['pitchDiameter']) * 1000)} mm ≥ ${guidance} mm; e_C is taken from the dm < ${guidance} mm guidance, which is the lower (conservative) one`;
+  },
+  'rolling.grease-too-fast': (v) =>
+    `${raw(v['designation'])}: the grease interval formula gives no positive interval at ${fig(Number(v['speed']) * 60)} r/min: too fast for grease by this rule; oil is needed`,
+  'rolling.swing-too-small': (v) =>
+    `${raw(v['designation'])}: swing ${degrees(v['swing'])}° is smaller than ${degrees(v['fullOverlapSwing'])}°, the swing for each of its ${raw(v['elements'])} rolling elements to roll onto its neighbour's track (720°/(Z·(1 − Dw/dm)), estimated geometry): the same track patches carry every cycle; false brinelling and fretting are the risk and the equivalent-speed life is not reliable`,
+  'rolling.not-suitable': notSuitable,
+};
+
+/**
+ * The words of the rolling kernel's findings and assumptions, keyed by code. Values arrive in
+ * SI (m, N, rev/s, rad, m²/s, Pa·s, °C); lengths are shown in mm, speeds in r/min, angles in
+ * degrees, viscosities in mm²/s, as the kernel has always written them.
+ */
 export const rollingWording: KernelWording = {
-  findings: {},
-  assumptions: {},
+  findings: {
+    ...exclusionWording,
+    'rolling.size-outside-space': sizeOutsideSpace,
+    ...caseFindings,
+    ...candidateFindings,
+  },
+  assumptions: {
+    'rolling.equivalent-speed': (v) => ({
+      value: `equivalent rotational speed ${fig(Number(v['speed']) * 60)} r/min`,
+      reason:
+        'for life, an oscillating shaft is taken as rotating at n = θ·f/π, the speed that turns the same angle per second (common practice)',
+    }),
+    'rolling.service-factor': (v) => ({
+      value: `service factor f_d = ${raw(v['serviceFactor'])}`,
+      reason: `dynamic equivalent load multiplied by f_d for shock level "${raw(v['shock'])}" (${raw(v['source'])}); static safety uses the peak operating point without f_d, its limit already graded by shock`,
+    }),
+    'rolling.sealed-for-life': () => ({
+      value: 'sealed-for-life grease',
+      reason:
+        'a rolling bearing needs at least grease; with no supply a sealed, greased-for-life bearing is the practical reading, and its grease life is checked against the life target (common practice)',
+    }),
+    'rolling.operating-temperature': (v) => ({
+      value: `${fig(v['temperature'])} °C`,
+      reason:
+        v['over'] === 'inlet'
+          ? `operating temperature of the bearing taken as oil inlet + ${raw(v['rise'])} K (common practice for circulating oil)`
+          : `operating temperature of the bearing taken as ambient + ${raw(v['rise'])} K (common practice for a grease- or bath-lubricated bearing in a housing)`,
+    }),
+    'rolling.fixed-viscosity': (v) => ({
+      value: `ν = ${fig(Number(v['kinematicViscosity']) * 1e6)} mm²/s`,
+      reason: `the fixed dynamic viscosity ${raw(v['dynamicViscosity'])} Pa·s is taken at the operating temperature and converted with a density of ${raw(v['density'])} kg/m³ (typical mineral oil, from memory)`,
+    }),
+    'rolling.grade-as-base-oil': (v) => ({
+      value: `ISO VG ${raw(v['grade'])}`,
+      reason: 'with grease supply the named oil grade is taken as the grease base oil',
+    }),
+    'rolling.grease-base-oil': (v) => ({
+      value: `ISO VG ${raw(v['grade'])}`,
+      reason: `grease base oil (${raw(v['source'])})`,
+    }),
+    'rolling.default-grade': (v) => ({
+      value: `ISO VG ${raw(v['grade'])}`,
+      reason: `no oil grade given: ISO VG ${raw(v['grade'])}, a common general-machinery grade (common practice)`,
+    }),
+    'rolling.contamination': (v) => ({
+      value: `e_C = ${raw(v['eC'])}`,
+      reason: `"${raw(v['level'])}" read as ISO 281 "${raw(v['isoLevel'])}" (e_C ${raw(v['low'])}–${raw(v['high'])} for dm < ${fig(Number(v['guidanceBelow']) * 1000)} mm); the middle of the range is taken (${raw(v['source'])})`,
+    }),
+    'rolling.life-criterion': () => ({
+      value: 'L10mh = a1·a_ISO·L10h ≥ life target',
+      reason:
+        'a candidate meets the life target on the modified rating life of ISO 281:2007, which counts lubrication and contamination; the required dynamic rating is the basic rating with a1 only (a_ISO = 1)',
+    }),
+    'rolling.supplier-type': (v) => ({
+      value: raw(v['type']),
+      reason: 'the supplier bearing has no type given: a deep-groove ball bearing is taken',
+    }),
+    'rolling.supplier-dimensions': (v) => ({
+      value: `${fig(Number(v['outerDiameter']) * 1000)} × ${fig(Number(v['width']) * 1000)} mm`,
+      reason: `supplier bearing dimensions not given: taken from the ISO 15 row "${raw(v['row'])}" of the same bore`,
+    }),
+    'rolling.estimated-ratings': (v) => ({
+      value: 'C and C0 estimated from ISO 15 boundary dimensions',
+      reason: `internal geometry estimated (${raw(v['geometrySource'])}); C by ISO 281:2007, C0 by ISO 76 from that geometry; a supplier's rating replaces the estimate`,
+    }),
+    'rolling.estimated-fatigue-limit': () => ({
+      value: 'Cu = C0/22 (ball), C0/8.2 (roller); above dm = 100 mm × (100/dm)^0.5 (ball), × (100/dm)^0.3 (roller)',
+      reason: 'no supplier fatigue load limit; the approximation of ISO 281:2007 Annex B is taken (from memory)',
+    }),
+    'rolling.load-bound': (v) => ({
+      value: `${fig(v['load'])} N`,
+      reason: `no candidate to read X and Y from: the upper bound of P over the deep-groove ball X/Y table is given (X = ${raw(v['xBelowE'])} when Fa/Fr ≤ ${raw(v['eMin'])}, else the larger of Fr and ${raw(v['xAboveE'])}·Fr + ${Number(v['yMax']).toFixed(2)}·Fa)`,
+    }),
+  },
 };

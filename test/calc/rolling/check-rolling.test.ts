@@ -3,8 +3,12 @@
 // exclusions, never a crash, NaN or Infinity.
 import { describe, expect, it } from 'vitest';
 import type { CaseSI } from '../../../src/case/types.js';
-import { checkRolling } from '../../../src/calc/rolling/index.js';
+import { checkRolling as rollingKernel } from '../../../src/calc/rolling/index.js';
+import { worded } from '../../../src/report/findings/worded.js';
 import { allFinite } from '../../helpers/finite.js';
+
+/** The kernel's result with its findings worded, as the JSON and the text print them. */
+const checkRolling = (c: CaseSI) => worded(rollingKernel(c));
 
 /** Head shaft of a carton conveyor on a packaging line (invented): 35 mm shaft, 180 r/min. */
 function conveyorShaft(over: Partial<CaseSI> = {}): CaseSI {
