@@ -33,7 +33,7 @@ describe('shipped data tables', () => {
     expect(f.serviceFactors.map((x) => x.shock)).toEqual(['none', 'light', 'moderate', 'heavy']);
   });
   it('journal-criteria.json and journal-tables.json', async () => {
-    const { journalCriteria } = await import('../../src/calc/journal/index.js');
+    const { journalCriteria } = await import('../../src/data/journal-criteria.js');
     const { shippedJournalTables } = await import('../../src/data/journal-tables.js');
     expect(journalCriteria().maxTemperature).toBeGreaterThan(0);
     expect(shippedJournalTables().tables.length).toBeGreaterThan(0);

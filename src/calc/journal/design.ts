@@ -1,6 +1,7 @@
 import { advisory, makeCheck, type CheckRecord } from '../../core/check.js';
 import { operatingPoint, type Fluid, type Geometry, type OperatingResult } from './operating-point.js';
 import { tableFor } from './table.js';
+import type { JournalCriteria } from '../../data/journal-criteria.js';
 
 /**
  * Design of a plain full journal bearing at concept stage: evaluation of one geometry
@@ -8,45 +9,27 @@ import { tableFor } from './table.js';
  * grade, and the design checks.
  *
  * Criteria (values and sources in data/journal-criteria.json; each check carries its source):
- *  - minimum film thickness h0 ≥ h_allow = h_base + k_D·D (Trumpler 1966, from memory:
- *    5 µm + 0.00004·D),
- *  - maximum film temperature ≤ 121 °C (Trumpler 1966, from memory),
- *  - start-up unit load W/(L·D) ≤ 2.1 MPa (Trumpler 1966, from memory),
- *  - film at the design load factor (2 × running load) still ≥ h_allow (Trumpler 1966,
+ *  - minimum film thickness h0 ≥ h_allow = h_base + k_D·D (Trumpler 1966, from memory),
+ *  - maximum film temperature T_in + ΔT ≤ T_allow (Trumpler 1966, from memory),
+ *  - start-up unit load W/(L·D) ≤ p_start (Trumpler 1966, from memory),
+ *  - film at the design load factor × running load still ≥ h_allow (Trumpler 1966,
  *    from memory; advisory),
  *  - mean unit load within the typical range (from memory; advisory),
- *  - lightly loaded (ε below about 0.2): whirl-prone (common practice; advisory),
+ *  - lightly loaded (smallest ε below the light-load limit): whirl-prone (common practice;
+ *    advisory),
  *  - oil-bath or ring supply can deliver the flow the film draws in (from memory, low
  *    confidence on the capacity).
- * Film margin = (h0 − h_allow)/h_allow, the CheckRecord convention (src/calc/check.ts).
+ * Film margin = (h0 − h_allow)/h_allow, the CheckRecord convention (src/core/check.ts).
  *
- * Sweep (common practice ranges): L/D over the listed values capped by the axial room,
- * c/r over 0.0005–0.002, and the ISO VG grades of data/lubricants.json when the case
- * names none. The chosen design maximises the governing film margin among designs whose
- * temperature and start-up load pass, preferring those not lightly loaded (ε ≥ 0.2 at
- * every point: a thicker film bought by a whirl-prone bearing is not a better design,
- * common practice); if none passes, the one with the largest min(film margin,
- * temperature margin, start-up margin) is shown (and fails).
+ * Sweep (common practice ranges, data/journal-criteria.json): L/D over the listed values
+ * capped by the axial room, c/r over the listed values, and the ISO VG grades of
+ * data/lubricants.json when the case names none. The chosen design maximises the governing
+ * film margin among designs whose temperature and start-up load pass, preferring those not
+ * lightly loaded (ε at or above the light-load limit at every point: a thicker film bought
+ * by a whirl-prone bearing is not a better design, common practice); if none passes, the
+ * one with the largest min(film margin, temperature margin, start-up margin) is shown (and
+ * fails).
  */
-
-export interface JournalCriteria {
-  minFilmBase: number;
-  minFilmPerDiameter: number;
-  maxTemperature: number;
-  maxStartUnitLoad: number;
-  designLoadFactor: number;
-  typicalUnitLoadMax: number;
-  typicalUnitLoadMin: number;
-  lightLoadEccentricity: number;
-  frequentStartsPerHour: number;
-  oilBathFlowCapacity: number;
-  lengthToDiameter: number[];
-  clearanceRatio: number[];
-  fixedDensity: number;
-  fixedSpecificHeat: number;
-  /** Source text per criterion key (same names as above). */
-  sources: Record<string, string>;
-}
 
 /** A duty point as the journal check sees it: radial load N, speed rev/s, time share. */
 export interface DutyPoint {
@@ -297,10 +280,12 @@ export function sweepDesigns(
 export const ADVISORY_CHECKS: readonly string[] = ['unit-load', 'light-load', 'film-design-load'];
 
 /**
- * The design checks of a chosen evaluation. `designLoad` is the same design evaluated at
- * the design load factor (for the advisory film check); `supply` the case's supply;
- * `inletTemperature` (°C) the reference of the temperature margin (the share of the allowed
- * rise above the inlet left; from absolute zero when not given, see check.ts).
+ * The design checks of a chosen evaluation, in report order: the limits (film, temperature,
+ * start-up), the advice (unit load, light load, film at the design load) and, with an oil
+ * bath, the supply flow. `designLoad` is the same design evaluated at the design load factor
+ * (for the advisory film check); `supply` the case's supply; `inletTemperature` (°C) the
+ * reference of the temperature margin (the share of the allowed rise above the inlet left;
+ * from absolute zero when not given, see check.ts). Limits and sources: data/journal-criteria.json.
  */
 export function designChecks(
   e: DesignEvaluation,
@@ -309,19 +294,29 @@ export function designChecks(
   crit: JournalCriteria,
   inletTemperature?: number,
 ): CheckRecord[] {
-  const g = e.governing;
+  const checks = [...limitChecks(e, crit, inletTemperature), ...adviceChecks(e, designLoad, crit)];
+  if (supply === 'oil-bath') checks.push(supplyFlowCheck(e, crit));
+  return checks.map((k) => (ADVISORY_CHECKS.includes(k.id) ? advisory(k) : k));
+}
+
+/**
+ * The limits that decide feasibility: h0 ≥ h_allow = h_base + k_D·D at the governing point,
+ * T_max = T_in + ΔT ≤ T_allow over the points, start-up unit load W_start/(L·D) ≤ p_start
+ * (Trumpler 1966, from memory; values in data/journal-criteria.json).
+ */
+function limitChecks(e: DesignEvaluation, crit: JournalCriteria, inletTemperature?: number): CheckRecord[] {
   const s = crit.sources;
   // An inlet at or above the limit leaves no rise to share out: the margin then falls back to absolute zero.
   const tRef =
     inletTemperature !== undefined && Number.isFinite(inletTemperature) && inletTemperature < crit.maxTemperature
       ? inletTemperature
       : undefined;
-  const checks: CheckRecord[] = [
+  return [
     makeCheck(
       'min-film',
       `Minimum film thickness h0 at the governing point against the allowable h0 = ${allowableFilmText(crit)}`,
-      g.result.minFilmThickness,
-      g.allowableFilm,
+      e.governing.result.minFilmThickness,
+      e.governing.allowableFilm,
       'm',
       'min',
       s['minFilmBase'] ?? '',
@@ -347,10 +342,26 @@ export function designChecks(
       'max',
       s['maxStartUnitLoad'] ?? '',
     ),
+  ];
+}
+
+/**
+ * The advice (ADVISORY_CHECKS): mean unit load P = W/(L·D) against the top of the typical
+ * range; smallest ε over the points with a film against the light-load limit (whirl, common
+ * practice); h0 at the design load factor × running load against h_allow (Trumpler 1966,
+ * from memory). The light-load check needs a film, the design-load one its evaluation.
+ */
+function adviceChecks(
+  e: DesignEvaluation,
+  designLoad: DesignEvaluation | undefined,
+  crit: JournalCriteria,
+): CheckRecord[] {
+  const s = crit.sources;
+  const checks: CheckRecord[] = [
     makeCheck(
       'unit-load',
       'Mean unit load P = W/(L·D) at the governing point, against the upper end of the typical range',
-      g.result.unitLoad,
+      e.governing.result.unitLoad,
       crit.typicalUnitLoadMax,
       'Pa',
       'max',
@@ -385,19 +396,21 @@ export function designChecks(
       ),
     );
   }
-  if (supply === 'oil-bath') {
-    const q = Math.max(...e.points.map((p) => p.result.flow));
-    checks.push(
-      makeCheck(
-        'supply-flow',
-        'Oil flow the film draws in at the maximum film thickness, against what an oil ring or bath can deliver',
-        q,
-        crit.oilBathFlowCapacity,
-        'm^3/s',
-        'max',
-        s['oilBathFlowCapacity'] ?? '',
-      ),
-    );
-  }
-  return checks.map((k) => (ADVISORY_CHECKS.includes(k.id) ? advisory(k) : k));
+  return checks;
+}
+
+/**
+ * Oil-bath supply: the largest flow the film draws in over the points, Q (m³/s), against
+ * what an oil ring or bath delivers (from memory, low confidence; data/journal-criteria.json).
+ */
+function supplyFlowCheck(e: DesignEvaluation, crit: JournalCriteria): CheckRecord {
+  return makeCheck(
+    'supply-flow',
+    'Oil flow the film draws in at the maximum film thickness, against what an oil ring or bath can deliver',
+    Math.max(...e.points.map((p) => p.result.flow)),
+    crit.oilBathFlowCapacity,
+    'm^3/s',
+    'max',
+    crit.sources['oilBathFlowCapacity'] ?? '',
+  );
 }

@@ -34,10 +34,13 @@ import type { Mesh } from './mesh.js';
  *      method (1941), as described in [1] (from memory).
  */
 
+/** Default convergence tolerance of the PSOR sweeps: stop when max |Δp̄| over a sweep ≤ this · max p̄. */
+export const PSOR_TOLERANCE = 1e-8;
+
 export interface SolveOptions {
   /** Over-relaxation factor, 1 ≤ ω < 2. Default chosen per mesh (see defaultOmega). */
   omega?: number;
-  /** Stop when max |Δp̄| over a sweep ≤ tol · max p̄. Default 1e-8. */
+  /** Stop when max |Δp̄| over a sweep ≤ tol · max p̄. Default PSOR_TOLERANCE. */
   tol?: number;
   /** Sweep limit; exceeding it throws. Default 20000. */
   maxIter?: number;
@@ -125,7 +128,7 @@ export function solveReynolds(
     throw new Error(`reynolds: L/D must be positive and finite, got ${lengthToDiameter}`);
   const { nTheta: n, nZeta: m, theta, thetaFace } = mesh;
   const omega = opts.omega ?? defaultOmega(mesh, lengthToDiameter);
-  const tol = opts.tol ?? 1e-8;
+  const tol = opts.tol ?? PSOR_TOLERANCE;
   const maxIter = opts.maxIter ?? 20000;
   const floor = opts.cavitation === false ? -Infinity : 0;
   const lambda = 1 / (lengthToDiameter * lengthToDiameter); // (D/L)²

@@ -86,6 +86,11 @@ interface Series {
   readonly d: Float64Array;
 }
 
+/** The largest eccentricity ratio the table solved, ε_max: beyond it the figures are extrapolated. */
+export function lastEccentricity(t: JournalTable): number {
+  return t.eps[t.eps.length - 1]!;
+}
+
 /** PCHIP slopes (Fritsch–Carlson monotone; three-point formula at the ends). */
 export function pchipSlopes(x: ArrayLike<number>, y: ArrayLike<number>): Float64Array {
   const n = x.length;

@@ -9,7 +9,9 @@ import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../helpers/sheet.js';
 import { lineShaftCase } from '../../helpers/case.js';
 import type { CaseSI } from '../../../src/case/types.js';
-import { allowableFilmText, checkJournal, journalCriteria } from '../../../src/calc/journal/index.js';
+import { checkJournal } from '../../../src/calc/journal/index.js';
+import { allowableFilmText } from '../../../src/calc/journal/design.js';
+import { journalCriteria } from '../../../src/data/journal-criteria.js';
 
 /** The line-shaft case with a two-speed duty. */
 function steady(over: Partial<CaseSI> = {}): CaseSI {
