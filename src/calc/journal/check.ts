@@ -2,6 +2,7 @@ import type { CaseSI } from '../../case/types.js';
 import { allLimitsPass } from '../../core/check.js';
 import { journalCriteria } from '../../data/journal-criteria.js';
 import { shippedJournalTables } from '../../data/journal-tables.js';
+import { dataDir } from '../../data/load.js';
 import { designSpace, journalDuty } from './candidates.js';
 import { allowableFilm, designChecks, evaluateDesign, sweepDesigns } from './design.js';
 import { journalAssumptions, journalWarnings } from './findings.js';
@@ -9,16 +10,27 @@ import { pressureProfile } from './profile.js';
 import { assertFinite, meanPowerLoss, pointSummaries } from './result.js';
 import { serviceChecks } from './service-checks.js';
 import { buildSheet } from './sheet.js';
-import { seedTables } from './table.js';
+import { clearTableCache, seedTables } from './table.js';
 import type { JournalOptions, JournalResult } from './types.js';
 
-let seeded = false;
+/** The data folder whose journal tables seed the table cache (undefined before the first check). */
+let seededFrom: string | undefined;
 
-/** Seed the table cache with the shipped dimensionless tables (data/journal-tables.json), once. */
+/**
+ * Seed the table cache with the dimensionless tables of the data folder in use
+ * (data/journal-tables.json, or the copy in SHAFTWISE_DATA_DIR), once per folder: the folder
+ * is read on each call, so a change between two checks drops the tables seeded or solved
+ * before it rather than answering with another folder's rows.
+ */
 function seedShippedTables(): void {
-  if (seeded) return;
+  const folder = dataDir().href;
+  if (seededFrom === folder) return;
+  if (seededFrom !== undefined) {
+    clearTableCache();
+    seededFrom = undefined;
+  }
   seedTables(shippedJournalTables().tables);
-  seeded = true;
+  seededFrom = folder;
 }
 
 /**

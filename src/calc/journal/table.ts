@@ -373,7 +373,10 @@ const seeds = new Map<number, readonly DimensionlessPerformance[]>();
 let mesh0: Mesh | undefined;
 const defaultMesh = (): Mesh => (mesh0 ??= makeMesh(DEFAULT_MESH.nTheta, DEFAULT_MESH.nZeta, DEFAULT_MESH.stretch));
 
-/** Empty the table cache and the seeds (for benchmarks: the next tables are solved afresh). */
+/**
+ * Empty the table cache and the seeds: the next tables are solved afresh (benchmarks), or
+ * seeded again from another data folder (check.ts).
+ */
 export function clearTableCache(): void {
   cache.clear();
   seeds.clear();
