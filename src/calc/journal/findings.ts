@@ -1,6 +1,6 @@
-import type { Assumption, CaseSI } from '../../case/types.js';
+import type { CaseSI } from '../../case/types.js';
 import type { CheckRecord } from '../../core/check.js';
-import { num } from '../../core/format.js';
+import { assumedFinding, finding, type AssumedFinding, type Finding } from '../../core/finding.js';
 import { lubricants } from '../../data/load.js';
 import type { JournalCriteria } from '../../data/journal-criteria.js';
 import { REPRESENTATIVE_CLEARANCE_RATIO, type DesignSpace, type JournalDuty } from './candidates.js';
@@ -12,7 +12,8 @@ import { DEFAULT_MESH, lastEccentricity, tableFor } from './table.js';
 /**
  * What the journal check found besides its checks: the cautions a reviewer must read
  * (warnings) and the values it took where the case was silent (assumptions), in the order
- * they are reported.
+ * they are reported. As data: a code "journal.<what>" and the values it rests on (SI numbers,
+ * temperatures °C, names); the words are src/report/findings/journal.ts.
  */
 
 /**
@@ -20,12 +21,6 @@ import { DEFAULT_MESH, lastEccentricity, tableFor } from './table.js';
  * 1958, test/reference/): outside it the figures are the solver's alone.
  */
 export const CHECKED_LENGTH_TO_DIAMETER = { min: 0.25, max: 2 } as const;
-
-/** Numbers in the prose: num(), with the exponent form keeping its trailing zeros as the texts always have. */
-function textNum(x: number, digits = 4): string {
-  const size = Math.abs(x);
-  return x === 0 || !Number.isFinite(x) || (size >= 1e-3 && size < 1e6) ? num(x, digits) : x.toExponential(digits - 1);
-}
 
 /** Everything the findings are read from. */
 export interface FindingInput {
@@ -38,146 +33,133 @@ export interface FindingInput {
 }
 
 /** The warnings, in report order: motion and supply first, then what the figures show. */
-export function journalWarnings(input: FindingInput): string[] {
+export function journalWarnings(input: FindingInput): Finding[] {
   return [...setupWarnings(input), ...figureWarnings(input)];
 }
 
 /** Warnings about the duty, the supply and the room, known before any design is evaluated. */
-function setupWarnings({ case: c, crit, duty, space }: FindingInput): string[] {
-  const warnings: string[] = [];
-  const supply = c.lubrication.supply;
-  if (c.shaft.oscillation && !c.shaft.speed)
-    warnings.push(
-      'Oscillating shaft: evaluated at the equivalent rotational speed θ·f/π, but the sliding speed passes through zero at every reversal, so a hydrodynamic film cannot be sustained; the figures are an upper bound on the film.',
-    );
-  if (duty.points.some((p) => !(p.speed > 0)))
-    warnings.push(
-      'At least one operating point has zero speed: no hydrodynamic film forms there (film thickness taken as zero).',
-    );
-  if (supply === 'grease')
-    warnings.push(
-      'Grease supply: the film figures use the base oil viscosity as if a full film were fed; grease does not sustain one, so they are an upper bound.',
-    );
-  if (space.noLubricant) warnings.push('No lubricant supply: no film; hydrodynamic figures are zero.');
-  const room = c.space.maxLength;
+function setupWarnings({ case: c, crit, duty, space }: FindingInput): Finding[] {
+  const warnings: Finding[] = [];
+  if (c.shaft.oscillation && !c.shaft.speed) warnings.push(finding('journal.oscillating'));
+  if (duty.points.some((p) => !(p.speed > 0))) warnings.push(finding('journal.zero-speed'));
+  if (c.lubrication.supply === 'grease') warnings.push(finding('journal.grease-upper-bound'));
+  if (space.noLubricant) warnings.push(finding('journal.no-lubricant'));
+  const maxLength = c.space.maxLength;
   if (space.exceedsRoom && c.journal?.length !== undefined)
-    warnings.push(`journal.length ${textNum(c.journal.length)} m exceeds space.maxLength ${textNum(room)} m.`);
+    warnings.push(finding('journal.length-exceeds-room', { length: c.journal.length, maxLength }));
   if (space.shortRoom)
     warnings.push(
-      `Axial room ${textNum(room)} m gives L/D = ${textNum(room / c.shaft.diameter, 3)}, below the usual ${Math.min(...crit.lengthToDiameter)}: a short bearing with large side leakage.`,
+      finding('journal.short-room', {
+        maxLength,
+        lengthToDiameter: maxLength / c.shaft.diameter,
+        usualMinLengthToDiameter: Math.min(...crit.lengthToDiameter),
+      }),
     );
   return warnings;
 }
 
 /** Warnings read from the chosen design's figures and checks. */
-function figureWarnings({ case: c, crit, chosen, checks }: FindingInput): string[] {
-  const warnings: string[] = [];
+function figureWarnings({ case: c, crit, chosen, checks }: FindingInput): Finding[] {
+  const warnings: Finding[] = [];
   const g = chosen.governing;
   const light = checks.find((k) => k.id === 'light-load');
   if (light && !light.pass)
-    warnings.push(
-      `Lightly loaded: eccentricity ratio ${textNum(light.value, 3)} below ${light.limit}; a plain full bearing is prone to oil whirl (consider a lobed or tilting-pad bearing, or a smaller length).`,
-    );
+    warnings.push(finding('journal.light-load', { eccentricityRatio: light.value, limit: light.limit }));
   if (g.film && g.result.unitLoad < crit.typicalUnitLoadMin)
     warnings.push(
-      `Mean unit load ${textNum(g.result.unitLoad / 1e6, 3)} MPa is below the typical ${textNum(crit.typicalUnitLoadMin / 1e6, 2)}–${textNum(crit.typicalUnitLoadMax / 1e6, 2)} MPa: the bearing could be shorter (${crit.sources['typicalUnitLoadMax']}).`,
+      finding('journal.low-unit-load', {
+        unitLoad: g.result.unitLoad,
+        typicalMin: crit.typicalUnitLoadMin,
+        typicalMax: crit.typicalUnitLoadMax,
+        source: crit.sources['typicalUnitLoadMax'] ?? '',
+      }),
     );
   if (c.environment.startsPerHour > crit.frequentStartsPerHour)
     warnings.push(
-      `Frequent starts (${c.environment.startsPerHour} per hour, above ${crit.frequentStartsPerHour}): each start runs in boundary lubrication; start-up unit load and lining wear govern (${crit.sources['frequentStartsPerHour']}).`,
+      finding('journal.frequent-starts', {
+        startsPerHour: c.environment.startsPerHour,
+        limit: crit.frequentStartsPerHour,
+        source: crit.sources['frequentStartsPerHour'] ?? '',
+      }),
     );
   const lengthToDiameter = chosen.candidate.length / c.shaft.diameter;
   if (chosen.points.some((p) => p.result.extrapolated))
-    warnings.push(
-      `Eccentricity ratio beyond ${lastEccentricity(tableFor(lengthToDiameter))} (the end of the solved table): ε and h0 are extrapolated and order-of-magnitude only; the film is far too thin in any case.`,
-    );
+    warnings.push(finding('journal.extrapolated', { tableEnd: lastEccentricity(tableFor(lengthToDiameter)) }));
   if (chosen.points.some((p) => p.result.thermalRunaway))
-    warnings.push(
-      `No thermal equilibrium below ${THERMAL_CEILING_C} °C: the film would overheat (thermal runaway); the temperatures shown are lower bounds.`,
-    );
+    warnings.push(finding('journal.thermal-runaway', { ceiling: THERMAL_CEILING_C }));
   if (c.lubrication.supply === 'oil-feed')
-    warnings.push(
-      `Oil feed: the pump must deliver at least ${textNum(Math.max(...chosen.points.map((p) => p.result.flow)) * 6e4, 3)} L/min per bearing at the inlet temperature (common practice: size the supply above the film's inflow).`,
-    );
+    warnings.push(finding('journal.oil-feed-flow', { flow: Math.max(...chosen.points.map((p) => p.result.flow)) }));
   const { min, max } = CHECKED_LENGTH_TO_DIAMETER;
   if (lengthToDiameter < min || lengthToDiameter > max)
-    warnings.push(
-      `L/D = ${textNum(lengthToDiameter, 3)} is outside ${min}–${max}, the range the solver was checked against published tables.`,
-    );
+    warnings.push(finding('journal.ld-unchecked', { lengthToDiameter, checkedMin: min, checkedMax: max }));
   return warnings;
 }
 
 /** The assumptions, in report order: the solver, the load, the lubricant, the design, the inlet. */
-export function journalAssumptions({ case: c, crit, duty, space }: FindingInput): Assumption[] {
-  const assumed: Assumption[] = [
-    {
-      field: 'journal.solver',
-      value: `mesh ${DEFAULT_MESH.nTheta}×${DEFAULT_MESH.nZeta} (half length), PSOR converged when max |Δp| per sweep ≤ ${PSOR_TOLERANCE}·max p; thermal balance to ${THERMAL_TOLERANCE_K} K`,
-      reason:
-        'convergence criteria of the finite-difference Reynolds solution and the temperature iteration; a solve or balance that does not converge stops the run with an error instead of reporting unconverged numbers',
-    },
+export function journalAssumptions({ case: c, crit, duty, space }: FindingInput): AssumedFinding[] {
+  const assumed: AssumedFinding[] = [
+    assumedFinding('journal.solver', 'journal.solver', {
+      nTheta: DEFAULT_MESH.nTheta,
+      nZeta: DEFAULT_MESH.nZeta,
+      psorTolerance: PSOR_TOLERANCE,
+      thermalTolerance: THERMAL_TOLERANCE_K,
+    }),
   ];
-  if (duty.axialLoad)
-    assumed.push({
-      field: 'load.axial',
-      value: 'not carried',
-      reason:
-        'a plain journal bearing carries radial load only; the axial load needs a thrust face or bearing (common practice)',
-    });
+  if (duty.axialLoad) assumed.push(assumedFinding('load.axial', 'journal.axial-not-carried'));
   const supply = c.lubrication.supply;
-  const mu = c.lubrication.viscosity;
-  if (mu !== undefined)
-    assumed.push({
-      field: 'lubrication.viscosity',
-      value: `${textNum(mu)} Pa·s, fixed`,
-      reason: `no thermal iteration; the temperature rise uses ρ = ${crit.fixedDensity} kg/m³, cp = ${crit.fixedSpecificHeat} J/(kg·K) (${crit.sources['fixedViscosityFluid']})`,
-    });
+  const viscosity = c.lubrication.viscosity;
+  if (viscosity !== undefined)
+    assumed.push(
+      assumedFinding('lubrication.viscosity', 'journal.fixed-viscosity', {
+        viscosity,
+        density: crit.fixedDensity,
+        specificHeat: crit.fixedSpecificHeat,
+        source: crit.sources['fixedViscosityFluid'] ?? '',
+      }),
+    );
   else if (supply === 'grease') {
     const base = lubricants().greaseBaseOil;
-    assumed.push({
-      field: 'lubrication.oilGrade',
-      value: `ISO VG ${base.grade} (grease base oil)`,
-      reason: base.source,
-    });
+    assumed.push(
+      assumedFinding('lubrication.oilGrade', 'journal.grease-base-oil', { grade: base.grade, source: base.source }),
+    );
   }
   assumed.push(...designAssumptions(c, crit, space));
   if (supply === 'oil-bath')
-    assumed.push({
-      field: 'lubrication.inletTemperature',
-      value: `${textNum(c.lubrication.inletTemperature)} °C`,
-      reason: 'taken as the sump temperature of the bath; the housing heat balance of the sump is not computed',
-    });
+    assumed.push(
+      assumedFinding('lubrication.inletTemperature', 'journal.bath-inlet', {
+        inletTemperature: c.lubrication.inletTemperature,
+      }),
+    );
   return assumed;
 }
 
 /** How the design was found: from the sweep (length, clearance, grade), or one representative design. */
-function designAssumptions(c: CaseSI, crit: JournalCriteria, space: DesignSpace): Assumption[] {
-  const assumed: Assumption[] = [];
+function designAssumptions(c: CaseSI, crit: JournalCriteria, space: DesignSpace): AssumedFinding[] {
+  const assumed: AssumedFinding[] = [];
   if (space.lengthSwept)
-    assumed.push({
-      field: 'journal.length',
-      value: 'chosen from the sweep',
-      reason: `L/D over ${crit.lengthToDiameter.join(', ')} within space.maxLength (${crit.sources['lengthToDiameter']})`,
-    });
+    assumed.push(
+      assumedFinding('journal.length', 'journal.length-swept', {
+        lengthToDiameter: crit.lengthToDiameter,
+        source: crit.sources['lengthToDiameter'] ?? '',
+      }),
+    );
   if (space.clearanceSwept)
-    assumed.push({
-      field: 'journal.radialClearance',
-      value: 'chosen from the sweep',
-      reason: `c/r over ${crit.clearanceRatio.join(', ')} (${crit.sources['clearanceRatio']})`,
-    });
-  if (space.gradeSwept)
-    assumed.push({
-      field: 'lubrication.oilGrade',
-      value: 'chosen from the sweep',
-      reason:
-        'ISO VG grades of data/lubricants.json, the one giving the largest film margin within the temperature limit',
-    });
+    assumed.push(
+      assumedFinding('journal.radialClearance', 'journal.clearance-swept', {
+        clearanceRatio: crit.clearanceRatio,
+        source: crit.sources['clearanceRatio'] ?? '',
+      }),
+    );
+  if (space.gradeSwept) assumed.push(assumedFinding('lubrication.oilGrade', 'journal.grade-swept'));
   const shown = space.representative;
   if (shown)
-    assumed.push({
-      field: 'journal.design',
-      value: `L = ${textNum(shown.length)} m, c = ${textNum(shown.radialClearance)} m`,
-      reason: `with ${c.lubrication.supply === 'none' ? 'no lubricant supply' : 'grease'} no design keeps a full film, so the design is not optimised: the longest allowed length and the common-practice clearance ratio ${REPRESENTATIVE_CLEARANCE_RATIO} show the numbers`,
-    });
+    assumed.push(
+      assumedFinding('journal.design', 'journal.representative-design', {
+        length: shown.length,
+        radialClearance: shown.radialClearance,
+        supply: c.lubrication.supply,
+        clearanceRatio: REPRESENTATIVE_CLEARANCE_RATIO,
+      }),
+    );
   return assumed;
 }

@@ -1,5 +1,5 @@
-import type { Assumption } from '../../case/types.js';
 import type { CheckRecord, SheetLine } from '../../core/check.js';
+import type { AssumedFinding, Finding } from '../../core/finding.js';
 import type { SweepRow } from './design.js';
 
 /**
@@ -89,8 +89,10 @@ export interface JournalResult {
   feasible: boolean;
   checks: CheckRecord[];
   sweep: SweepRow[];
-  assumed: Assumption[];
-  warnings: string[];
+  /** What the check took where the case was silent, as data (worded by src/report/findings/journal.ts). */
+  assumed: AssumedFinding[];
+  /** Cautions, as data (worded by src/report/findings/journal.ts). */
+  warnings: Finding[];
   sheet: SheetLine[];
   /** Pressure around the journal at mid-length, governing point (empty when no film or beyond the table). */
   pressureProfile: PressurePoint[];
