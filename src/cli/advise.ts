@@ -47,9 +47,11 @@ export async function runAdvise(
   });
   if (note) {
     const { renderNote } = await import('../report/note/index.js');
+    const { journalSpeedCurves } = await import('../explore/journal-curves.js');
     const text = await renderNote(loaded, a, format, {
       units: opts.units,
       caseFile: file,
+      journalCurves: journalSpeedCurves(loaded.case, a.checks.journal),
       ...(opts.now ? { now: opts.now } : {}),
     });
     if (opts.out === undefined) return text.trimEnd();

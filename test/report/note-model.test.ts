@@ -5,16 +5,18 @@ import { loadCaseFile } from '../../src/case/load.js';
 import { advise } from '../../src/advise/engine.js';
 import { buildNote, noteDate } from '../../src/report/note/model.js';
 import { noteCharts } from '../../src/report/note/charts.js';
+import { journalSpeedCurves } from '../../src/explore/journal-curves.js';
 import { linearTicks, lineChart, logTicks } from '../../src/report/note/svg.js';
 import { escapeHtml, escapeMd } from '../../src/report/note/escape.js';
 
 const loaded = loadCaseFile('examples/sawmill-infeed-roller.yaml');
 const a = await advise(loaded.case, loaded.assumed);
 const clock = () => new Date('2031-07-09T23:59:00Z');
+const journalCurves = journalSpeedCurves(loaded.case, a.checks.journal);
 
 describe('note model', () => {
   it('takes its date from the injected clock, else SOURCE_DATE_EPOCH', () => {
-    expect(buildNote(loaded, a, { units: 'SI', now: clock }).date).toBe('2031-07-09');
+    expect(buildNote(loaded, a, { units: 'SI', now: clock, journalCurves }).date).toBe('2031-07-09');
     const before = process.env['SOURCE_DATE_EPOCH'];
     process.env['SOURCE_DATE_EPOCH'] = '0';
     try {
@@ -25,7 +27,7 @@ describe('note model', () => {
     }
   });
   it('has its sections in order, one per option in rank order', () => {
-    const n = buildNote(loaded, a, { units: 'SI', now: clock });
+    const n = buildNote(loaded, a, { units: 'SI', now: clock, journalCurves });
     expect(n.sections.map((s) => s.id)).toEqual([
       'duty',
       'assumptions',
@@ -38,8 +40,8 @@ describe('note model', () => {
     ]);
   });
   it('US units change the displayed figures, not the content', () => {
-    const si = buildNote(loaded, a, { units: 'SI', now: clock });
-    const us = buildNote(loaded, a, { units: 'US', now: clock });
+    const si = buildNote(loaded, a, { units: 'SI', now: clock, journalCurves });
+    const us = buildNote(loaded, a, { units: 'US', now: clock, journalCurves });
     expect(us.sections.map((s) => s.blocks.length)).toEqual(si.sections.map((s) => s.blocks.length));
     expect(JSON.stringify(us)).toContain('["shaft.diameter","40 mm","1.57 in"]'); // as given, and in inches
     expect(JSON.stringify(si)).toContain('["shaft.diameter","40 mm","40 mm (0.04 m)"]');
@@ -47,7 +49,7 @@ describe('note model', () => {
 });
 
 describe('note charts', () => {
-  const charts = noteCharts(a, loaded.case, 'SI');
+  const charts = noteCharts(a, loaded.case, 'SI', journalCurves);
   const chart = (id: string) => charts.find((c) => c.id === id)!.spec!;
   it('draws all five charts for the demo case, every point finite', () => {
     expect(charts.map((c) => c.id)).toEqual([

@@ -2,19 +2,16 @@ import type { AdviceResult } from '../../advise/engine.js';
 import type { CaseSI } from '../../case/types.js';
 import type { BushingMaterialResult } from '../../calc/bushing/index.js';
 import { basicRatingLife, lifeExponent, lifeHours } from '../../calc/rolling/life.js';
-import { evaluateDesign, type Candidate } from '../../calc/journal/design.js';
-import type { Fluid } from '../../calc/journal/operating-point.js';
-import { journalCriteria } from '../../data/journal-criteria.js';
-import { oilGrade } from '../../data/load.js';
+import type { JournalSpeedCurves } from '../../explore/journal-curves.js';
 import { displayUnit, fmt, fmtValue, type UnitSystem } from '../units.js';
 import { spansDecades, type ChartSpec } from './svg.js';
 
 /**
  * The note's charts, as chart specifications in display units. Every curve is either a
- * straight reading of a kernel result (wear depth linear in time, the pressure profile) or a
- * call of a kernel function at other inputs (rolling life by ISO 281 from life.ts, journal
- * operating points from the journal kernel's evaluateDesign): the report draws what the
- * kernels compute and derives no physics of its own.
+ * straight reading of a kernel result (wear depth linear in time, the pressure profile), a
+ * call of a kernel function at other inputs (rolling life by ISO 281 from life.ts), or a
+ * series computed beforehand (the journal design against speed, src/explore/journal-curves.ts):
+ * the report draws what the kernels compute and derives no physics of its own.
  */
 export interface NoteChart {
   /** Stable id (also the SVG element's id suffix). */
@@ -125,55 +122,26 @@ export function rollingLifeChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
   };
 }
 
-/** The lubricant of the chosen journal design, as the check reports it (its grade, or the case's fixed viscosity). */
-function journalFluid(c: CaseSI, grade: number | null): Fluid | null {
-  const crit = journalCriteria();
-  if (c.lubrication.viscosity !== undefined)
-    return {
-      kind: 'fixed',
-      viscosity: c.lubrication.viscosity,
-      density: crit.fixedDensity,
-      specificHeat: crit.fixedSpecificHeat,
-    };
-  const row = grade === null ? undefined : oilGrade(grade);
-  return row ? { kind: 'oil', oil: row } : null;
-}
-
-export function journalSpeedCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): NoteChart[] {
+/**
+ * Film thickness and temperatures of the chosen journal design against speed: draws the
+ * samples src/explore/journal-curves.ts computed (null: no film, so no speed charts).
+ */
+export function journalSpeedCharts(a: AdviceResult, curves: JournalSpeedCurves | null, u: UnitSystem): NoteChart[] {
   const j = a.checks.journal;
   const ids = ['journal-film', 'journal-temperature'];
   const gov = j.points[j.governingPoint];
-  const fluid = journalFluid(c, j.oilGrade);
-  if (!gov || !gov.film || !fluid) {
+  if (!gov || !curves) {
     const why = 'No hydrodynamic film at the operating point (no rotation or no lubricant): no speed charts.';
     return ids.map((id) => ({ id, spec: null, caption: why }));
   }
-  const crit = journalCriteria();
-  const D = c.shaft.diameter;
-  const cand: Candidate = { length: j.length, radialClearance: j.radialClearance, fluid, oil: j.oil };
   const N = gov.speed;
-  const speeds = range(0.2 * N, 3 * N, 21, true);
-  const rows = speeds.flatMap((s) => {
-    try {
-      const e = evaluateDesign(
-        D,
-        cand,
-        [{ share: 1, load: gov.load, speed: s }],
-        c.lubrication.inletTemperature,
-        gov.load,
-        crit,
-      );
-      return [{ s, r: e.governing.result }];
-    } catch {
-      return []; // a point the kernel cannot evaluate is left out, never invented
-    }
-  });
+  const rows = curves.samples;
   const rpm = (s: number) => disp(s, 'rev/s', u);
   const hu = u === 'SI' ? 'um' : 'm';
-  const h = rows.map((x) => x.r.minFilmThickness);
+  const h = rows.map((x) => x.minFilmThickness);
   const hAllow = j.allowableFilmThickness;
   const filmLog = spansDecades(Math.min(...h, hAllow), Math.max(...h, hAllow));
-  const runaway = rows.some((x) => x.r.thermalRunaway)
+  const runaway = rows.some((x) => x.thermalRunaway)
     ? ' Points marked as thermal runaway by the kernel carry temperatures that are lower bounds.'
     : '';
   const where = `the chosen design (${fmt(j.length, 'm', u)} long, radial clearance ${fmt(j.radialClearance, 'm', u)}, ${j.oil}) at the governing load ${fmt(gov.load, 'N', u)}`;
@@ -189,12 +157,12 @@ export function journalSpeedCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): N
         series: [
           {
             name: 'h0, finite-length Reynolds solution with thermal balance',
-            points: rows.map((x) => [rpm(x.s), disp(x.r.minFilmThickness, hu, u)] as const),
+            points: rows.map((x) => [rpm(x.speed), disp(x.minFilmThickness, hu, u)] as const),
           },
         ],
         refs: [{ axis: 'y', value: disp(hAllow, hu, u), label: `allowable h0 ${fmt(hAllow, 'm', u)}` }, opLine],
       },
-      caption: `Minimum film thickness of ${where}, from 0.2 to 3 times the operating speed, each point computed by the journal kernel (evaluateDesign: load matching and thermal balance). The film is adequate above the allowable line.`,
+      caption: `Minimum film thickness of ${where}, from ${curves.lowFactor} to ${curves.highFactor} times the operating speed, each point computed by the journal kernel (evaluateDesign: load matching and thermal balance). The film is adequate above the allowable line.`,
     },
     {
       id: ids[1]!,
@@ -206,23 +174,23 @@ export function journalSpeedCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): N
         series: [
           {
             name: 'effective film temperature',
-            points: rows.map((x) => [rpm(x.s), disp(x.r.effectiveTemperature, 'degC', u)] as const),
+            points: rows.map((x) => [rpm(x.speed), disp(x.effectiveTemperature, 'degC', u)] as const),
           },
           {
             name: 'maximum (outlet) temperature estimate',
-            points: rows.map((x) => [rpm(x.s), disp(x.r.maxTemperature, 'degC', u)] as const),
+            points: rows.map((x) => [rpm(x.speed), disp(x.maxTemperature, 'degC', u)] as const),
           },
         ],
         refs: [
           {
             axis: 'y',
-            value: disp(crit.maxTemperature, 'degC', u),
-            label: `allowable maximum ${fmt(crit.maxTemperature, 'degC', u)}`,
+            value: disp(curves.maxTemperatureLimit, 'degC', u),
+            label: `allowable maximum ${fmt(curves.maxTemperatureLimit, 'degC', u)}`,
           },
           opLine,
         ],
       },
-      caption: `Effective and maximum film temperature of ${where}, by the journal kernel's thermal balance at each speed. The allowable line applies to the maximum temperature (${crit.sources['maxTemperature'] ?? 'journal criteria'}).${runaway}`,
+      caption: `Effective and maximum film temperature of ${where}, by the journal kernel's thermal balance at each speed. The allowable line applies to the maximum temperature (${curves.maxTemperatureSource}).${runaway}`,
     },
   ];
 }
@@ -270,11 +238,16 @@ export function journalPressureChart(a: AdviceResult, u: UnitSystem): NoteChart 
 }
 
 /** Every chart of the note, in the order they appear. */
-export function noteCharts(a: AdviceResult, c: CaseSI, u: UnitSystem): NoteChart[] {
+export function noteCharts(
+  a: AdviceResult,
+  c: CaseSI,
+  u: UnitSystem,
+  journalCurves: JournalSpeedCurves | null,
+): NoteChart[] {
   return [
     bushingWearChart(a, c, u),
     rollingLifeChart(a, c, u),
-    ...journalSpeedCharts(a, c, u),
+    ...journalSpeedCharts(a, journalCurves, u),
     journalPressureChart(a, u),
   ];
 }

@@ -5,6 +5,7 @@ import type { CheckRecord, SheetLine } from '../../core/check.js';
 import type { LoadedCase } from '../../case/load.js';
 import { fmt, fmtValue, type UnitSystem } from '../units.js';
 import { noteCharts, shownMaterial, type NoteChart } from './charts.js';
+import type { JournalSpeedCurves } from '../../explore/journal-curves.js';
 
 /**
  * The design-review note as a document model: sections of blocks (paragraphs, lists,
@@ -47,6 +48,11 @@ export interface NoteOptions {
   now?: () => Date;
   /** The case file as named by the user (shown in the note). */
   caseFile?: string;
+  /**
+   * The journal design against speed, for its speed charts (src/explore/journal-curves.ts);
+   * null when there is no film to draw. The note draws it and computes nothing itself.
+   */
+  journalCurves: JournalSpeedCurves | null;
 }
 
 export const OPTION_NAMES = {
@@ -243,7 +249,7 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
   const summary = a.recommendation
     ? `Recommended: ${OPTION_NAMES[a.recommendation].toLowerCase()}: ${designText(winner, u)}.`
     : 'No option is feasible for this duty as given: see what would make one feasible.';
-  const charts = noteCharts(a, c, u);
+  const charts = noteCharts(a, c, u, opts.journalCurves);
   const chartFor = (id: string) => charts.find((ch) => ch.id === id)!;
 
   const sections: Section[] = [];
