@@ -137,12 +137,17 @@ export async function renderNote(c: CaseSI, format: 'md' | 'html', opts: RenderN
   if (opts.units !== undefined && opts.units !== 'SI' && opts.units !== 'US')
     throw new UsageError(`renderNote units: got "${String(opts.units)}"; expected SI or US`);
   const loaded = loadedOf(c);
-  const [{ advise: run }, note] = await Promise.all([import('./advise/engine.js'), import('./report/note/index.js')]);
+  const [{ advise: run }, note, { journalSpeedCurves }] = await Promise.all([
+    import('./advise/engine.js'),
+    import('./report/note/index.js'),
+    import('./explore/journal-curves.js'),
+  ]);
   const result = await run(loaded.case, loaded.assumed);
   const { now } = opts;
   const caseFile = opts.caseFile ?? loaded.caseFile;
   const text = await note.renderNote(loaded, result, format, {
     units: opts.units ?? 'SI',
+    journalCurves: journalSpeedCurves(loaded.case, result.checks.journal),
     ...(caseFile !== undefined ? { caseFile } : {}),
     ...(now !== undefined ? { now: typeof now === 'function' ? now : () => now } : {}),
   });
