@@ -3,10 +3,9 @@
  * closed-form limits and identities of hydrodynamic lubrication.
  *
  * Sources: Hamrock, B. J., Schmid, S. R. and Jacobson, B. O. (2004), Fundamentals of Fluid
- * Film Lubrication, 2nd ed., Marcel Dekker — long-bearing (full Sommerfeld) and
- * short-bearing (Ocvirk) solutions, Petroff's law (formulas as restated in
- * /work/shared/reference/published-values.md, "memory" there); the friction identity under
- * the Raimondi & Boyd (1958) convention.
+ * Film Lubrication, 2nd ed., Marcel Dekker, ch. 9 — long-bearing (full Sommerfeld) and
+ * short-bearing (Ocvirk) solutions, Petroff's law (formulas and chapter number from
+ * memory); the friction identity under the Raimondi & Boyd (1958) convention.
  */
 import { describe, expect, it } from 'vitest';
 import { makeMesh } from '../../src/calc/journal/mesh.js';

@@ -1,7 +1,7 @@
 // Kind: published-value check of the data table data/rolling-boundary-dimensions.json
-// against the ISO 15 rows listed in /work/shared/reference/published-values.md
-// (d × D × B, diameter series 2 and 3; marked there "memory, a few rows seen"), and
-// properties of the whole table.
+// against ISO 15 boundary dimensions (ISO 15, Rolling bearings — Radial bearings —
+// Boundary dimensions, general plan; d × D × B, diameter series 2 and 3, bores 20–50 mm;
+// from memory, written down apart from the data file), and properties of the whole table.
 import { describe, expect, it } from 'vitest';
 import { boundaryDimensions } from '../../src/data/rolling.js';
 
@@ -19,7 +19,7 @@ const rows = boundaryDimensions().rows;
 const row = (type: 'ball' | 'roller', series: string, d: number) =>
   rows.find((r) => r.type === type && r.series === series && r.bore_mm === d);
 
-describe('ISO 15 rows of the shared reference', () => {
+describe('ISO 15 rows, diameter series 2 and 3 (from memory)', () => {
   for (const [d, [D2, B2], [D3, B3]] of REFERENCE) {
     it(`bore ${d}: series 02 ${D2}×${B2}, series 03 ${D3}×${B3}`, () => {
       expect(row('ball', '02', d)).toMatchObject({ outerDiameter_mm: D2, width_mm: B2 });

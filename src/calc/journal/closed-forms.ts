@@ -11,8 +11,8 @@
  *      in Hamrock, B. J., Schmid, S. R. and Jacobson, B. O. (2004), Fundamentals of
  *      Fluid Film Lubrication, 2nd ed., Marcel Dekker.
  *  [2] Infinitely long bearing, full-Sommerfeld solution; short bearing (Ocvirk, 1952),
- *      half-Sommerfeld: Hamrock, Schmid & Jacobson (2004), as restated in
- *      /work/shared/reference/published-values.md (memory there).
+ *      half-Sommerfeld: Hamrock, Schmid & Jacobson (2004), ch. 9, journal bearings,
+ *      analytical solutions (the formulas and the chapter number from memory).
  *  [3] Friction identity under the Raimondi–Boyd convention: follows from integrating
  *      the Poiseuille shear by parts (see reynolds.ts); Raimondi & Boyd (1958).
  */

@@ -6,8 +6,8 @@ import type { RollingType } from './life.js';
  *
  * References
  * [1] ISO 281:2007, cl. 9.3 and its annex formulas for a_ISO of radial ball and radial
- *     roller bearings, and the rated viscosity ν1 (from memory, as listed in
- *     /work/shared/reference/published-values.md).
+ *     roller bearings, and the rated viscosity ν1 (from memory: constants, exponents and
+ *     clause numbers recalled, not re-read).
  */
 
 /**
@@ -104,7 +104,7 @@ export function aIso(type: RollingType, kappa: number, eCCuP: number): AIsoResul
 
 /**
  * Fatigue load limit Cu where no supplier value is given, N (ISO 281:2007 Annex B, from
- * memory; dm ≤ 100 mm ratios as listed in /work/shared/reference/published-values.md):
+ * memory, the dm ≤ 100 mm ratios and the size exponents alike):
  *   ball:   Cu ≈ C0/22                 for dm ≤ 100 mm, C0/22·(100/dm)^0.5  for dm > 100 mm
  *   roller: Cu ≈ C0/8.2                for dm ≤ 100 mm, C0/8.2·(100/dm)^0.3 for dm > 100 mm
  * C0 basic static load rating, N; dm pitch diameter, m (the formula's dm in mm).

@@ -7,9 +7,9 @@ import type { RollingType } from './life.js';
  * and the equivalent mean load and speed of a duty spectrum (ISO 281:2007).
  *
  * References
- * [1] ISO 281:2007, dynamic equivalent radial load P = X·Fr + Y·Fa and the X, Y table
- *     for radial ball bearings (cl. 6.2, from memory; values as listed in
- *     /work/shared/reference/published-values.md).
+ * [1] ISO 281:2007, dynamic equivalent radial load P = X·Fr + Y·Fa (seen) and the X, Y
+ *     table for radial ball bearings, Table 3 (cl. 6.2; the table's values and the table
+ *     and clause numbers from memory).
  * [2] ISO 76, static equivalent radial load of radial ball bearings
  *     P0 = 0.6·Fr + 0.5·Fa, P0 ≥ Fr (from memory); radial cylindrical roller bearings
  *     P0 = Fr.

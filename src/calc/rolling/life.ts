@@ -5,8 +5,7 @@
  * [1] ISO 281:2007, Rolling bearings — Dynamic load ratings and rating life:
  *     basic rating life (cl. 6.3 ball, 7.3 roller), life modification factor for
  *     reliability a1 (cl. 9.2), modified rating life (cl. 9). Clause numbers from memory;
- *     the formulas as listed in /work/shared/reference/published-values.md ("seen" for
- *     L10 and L10h).
+ *     L10 = (C/P)^p and L10h seen, the a1 formula from memory.
  */
 
 export type RollingType = 'ball' | 'roller';

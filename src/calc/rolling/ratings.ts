@@ -10,8 +10,7 @@ import { interpolate } from './interpolate.js';
  * [1] ISO 281:2007, basic dynamic radial load rating of radial ball bearings
  *     (cl. 6.1): C = b_m·f_c·(i·cosα)^0.7·Z^(2/3)·Dw^1.8 for Dw ≤ 25.4 mm and
  *     C = 3.647·b_m·f_c·(i·cosα)^0.7·Z^(2/3)·Dw^1.4 for Dw > 25.4 mm; b_m = 1.3 for
- *     deep-groove ball bearings (from memory; the Dw ≤ 25.4 form as listed in
- *     /work/shared/reference/published-values.md; the two forms meet at 25.4 mm since
+ *     deep-groove ball bearings (both forms from memory; they meet at 25.4 mm since
  *     25.4^0.4 = 3.647).
  * [2] ISO 281:2007, radial roller bearings (cl. 7.1):
  *     C = b_m·f_c·(i·Lwe·cosα)^(7/9)·Z^(3/4)·Dwe^(29/27), b_m = 1.1 for cylindrical

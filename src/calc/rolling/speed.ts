@@ -7,8 +7,8 @@
  * [2] Friction torque with a constant coefficient referred to the bore,
  *     M = μ·P·d/2 (common practice, from memory; coefficients in data/rolling-factors.json).
  * [3] Grease relubrication interval t_f = k_f·[14·10⁶/(n·√d) − 4·d] h, n r/min, d bore mm,
- *     halved for each 15 °C above 70 °C (bearing-maker technical guide, seen, as listed in
- *     /work/shared/reference/published-values.md).
+ *     halved for each 15 °C above 70 °C (a rolling-bearing maker's general technical guide
+ *     on grease relubrication, seen; not named here).
  * [4] Small-swing criterion for oscillating bearings: the angle a ring must swing for
  *     each rolling element to roll onto the track of its neighbour (kinematics of the
  *     cage; criterion common practice).

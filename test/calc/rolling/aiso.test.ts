@@ -1,6 +1,6 @@
-// Kind: published-formula checks (ISO 281:2007 a_ISO and ν1, formulas as listed in
-// /work/shared/reference/published-values.md, from memory) on values worked by hand
-// from the formulas, plus the behaviour at the method's edges.
+// Kind: published-formula checks (ISO 281:2007, cl. 9.3 and annex, a_ISO and ν1; the
+// formulas and constants from memory) on values worked by hand from the formulas, plus
+// the behaviour at the method's edges.
 import { describe, expect, it } from 'vitest';
 import { AISO_CAP, aIso, estimatedFatigueLimit, ratedViscosity } from '../../../src/calc/rolling/aiso.js';
 

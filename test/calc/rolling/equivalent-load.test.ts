@@ -1,6 +1,6 @@
-// Kind: published-table checks (ISO 281:2007 X/Y for single-row deep-groove ball bearings,
-// as listed in /work/shared/reference/published-values.md, from memory), the ISO 76
-// static load, and the ISO 281 duty-spectrum mean on a hand-worked spectrum.
+// Kind: published-table checks (ISO 281:2007, Table 3, X/Y for single-row deep-groove ball
+// bearings; values and table number from memory), the ISO 76 static load (from memory),
+// and the ISO 281 duty-spectrum mean on a hand-worked spectrum.
 import { describe, expect, it } from 'vitest';
 import { rollingFactors } from '../../../src/data/rolling.js';
 import {

@@ -46,7 +46,7 @@ describe('required dynamic rating (inverse of L10 = (C/P)^p)', () => {
   });
 });
 
-describe('a1 = 0.95·[ln(100/R)/ln(100/90)]^(2/3) + 0.05 (ISO 281:2007, formula as in the shared reference)', () => {
+describe('a1 = 0.95·[ln(100/R)/ln(100/90)]^(2/3) + 0.05 (ISO 281:2007, cl. 9.2, formula from memory)', () => {
   it('is 1 at 90 % and falls with reliability', () => {
     expect(reliabilityFactor(90).a1).toBeCloseTo(1, 12);
     expect(reliabilityFactor(95).a1).toBeLessThan(1);

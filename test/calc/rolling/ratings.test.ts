@@ -1,6 +1,6 @@
-// Kind: published-formula checks: ISO 281:2007 dynamic ratings and ISO 76 static ratings
-// (formulas and factor tables as listed in /work/shared/reference/published-values.md and
-// data/rolling-factors.json; from memory) against values worked by hand from them.
+// Kind: published-formula checks: ISO 281:2007 dynamic ratings (cl. 6.1, 7.1) and ISO 76
+// static ratings (formulas from memory; factor tables in data/rolling-factors.json, from
+// memory) against values worked by hand from them.
 import { describe, expect, it } from 'vitest';
 import { rollingFactors } from '../../../src/data/rolling.js';
 import {

@@ -1,6 +1,6 @@
-// Kind: formula checks on hand-worked numbers: grease relubrication interval (bearing-maker
-// technical guide, seen, as in /work/shared/reference/published-values.md), n·dm, friction
-// torque M = μ·P·d/2 (common practice), and the small-swing criterion (kinematics).
+// Kind: formula checks on hand-worked numbers: grease relubrication interval (a rolling-
+// bearing maker's general technical guide, seen; not named here), n·dm, friction torque
+// M = μ·P·d/2 (common practice), and the small-swing criterion (kinematics).
 import { describe, expect, it } from 'vitest';
 import {
   criticalSwingAngle,
