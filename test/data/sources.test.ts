@@ -34,9 +34,9 @@ function trackedJson(): string[] {
  * The textbook, by its title or its authors' names. Written in pieces so that a search of the
  * tree for the book's name finds nothing, this file included.
  */
-const AUTHOR = ['Shig', 'ley'].join('');
+const AUTHORS = [['Shig', 'ley'].join(''), ['Budy', 'nas'].join('')];
 const TITLE = ['Mechanical', 'Engineering', 'Design'].join(' ');
-const TEXTBOOK = new RegExp(`${AUTHOR}|${TITLE.replace(/ /g, '\\s+')}|budynas`, 'i');
+const TEXTBOOK = new RegExp([...AUTHORS, TITLE.replace(/ /g, '\\s+')].join('|'), 'i');
 
 /**
  * An absolute path of some machine: a Unix path of at least two parts starting after a word
@@ -97,7 +97,12 @@ const parsed = files.map((f) => {
 
 describe('the provenance checker itself', () => {
   it('flags the textbook, machine paths and the outside reference file', () => {
-    for (const t of [`${AUTHOR}'s table of bushing materials`, `${TITLE}, 9th ed.`, TITLE.toLowerCase()]) {
+    for (const t of [
+      `${AUTHORS[0]}'s table of bushing materials`,
+      `${AUTHORS[1]} 2014`,
+      `${TITLE}, 9th ed.`,
+      TITLE.toLowerCase(),
+    ]) {
       expect(problemsOf(t), t).toContain('names the machine-design textbook');
     }
     for (const p of [
@@ -171,4 +176,42 @@ describe('sources of the shipped tables and rules', () => {
       }
     });
   }
+});
+
+/** Tracked text files of every kind (code, tests, docs, examples), this checker's own samples aside. */
+function trackedText(): string[] {
+  try {
+    const out = execFileSync('git', ['ls-files', '-z'], {
+      cwd: root,
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'ignore'],
+    });
+    return out
+      .split('\0')
+      .filter((f) => /\.(ts|mjs|js|json|md|ya?ml|txt|csv)$/.test(f) || f.startsWith('.ci/'))
+      .filter((f) => f !== 'test/data/sources.test.ts' && f !== 'package-lock.json');
+  } catch {
+    return []; // not a git checkout: the tables above are still checked
+  }
+}
+
+/** A path under a machine's own top folders ("/home/x", "/work/y", "C:\\Users"). */
+const MACHINE_PATH = /(?:^|[^\w.])(?:\/(?:home|work|Users|root|mnt|srv|opt|tmp)\/[\w.-]+|[A-Za-z]:\\Users\\)/;
+
+describe('no tracked file cites the textbook, the outside reference file or a machine path', () => {
+  const texts = trackedText();
+  it.skipIf(texts.length === 0)('code, tests, docs and examples, file by file', () => {
+    const bad = texts.flatMap((f) => {
+      const text = readFileSync(join(root, f), 'utf8');
+      const found = [
+        TEXTBOOK.test(text) ? 'names the machine-design textbook' : '',
+        OUTSIDE_FILE.test(text) ? 'cites a file outside the repository' : '',
+        MACHINE_PATH.exec(text)?.[0] ?? '',
+      ].filter((x) => x !== '');
+      return found.length ? [`${f}: ${found.join('; ')}`] : [];
+    });
+    expect(bad).toEqual([]);
+    expect(MACHINE_PATH.test('see /home/me/refs.md')).toBe(true);
+    expect(MACHINE_PATH.test('units mm^3/(N*m), ./src/x.ts')).toBe(false);
+  });
 });

@@ -259,7 +259,7 @@ function greaseLines(k: RollingCandidate, x: EvalContext): SheetLine[] {
       substituted: `t_f = ${k.relubricationHours === 0 ? `max(0, ${core})` : core}`,
       value: k.relubricationHours,
       unit: 'h',
-      source: 'bearing-maker technical guide (seen, as in the shared reference)',
+      source: "a rolling-bearing maker's general technical guide on grease relubrication (seen; not named here)",
     },
   ];
 }
