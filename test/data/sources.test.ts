@@ -195,7 +195,7 @@ function trackedText(): string[] {
   }
 }
 
-/** A path under a machine's own top folders ("/home/x", "/work/y", "C:\\Users"). */
+/** A path under a machine's own top folders ("/home/x", "/srv/y", "C:\\Users"). */
 const MACHINE_PATH = /(?:^|[^\w.])(?:\/(?:home|work|Users|root|mnt|srv|opt|tmp)\/[\w.-]+|[A-Za-z]:\\Users\\)/;
 
 describe('no tracked file cites the textbook, the outside reference file or a machine path', () => {
