@@ -1,10 +1,11 @@
 import { OPTIONS } from '../../core/options.js';
 import { describe, describeAssumption, describeWarning } from '../findings/index.js';
-import type { AdviceResult, RankedOption } from '../../advise/engine.js';
-import type { CheckRecord, SheetLine } from '../../core/check.js';
+import type { AdviceResult } from '../../advise/engine.js';
+import type { SheetLine } from '../../core/check.js';
 import type { LoadedCase } from '../../case/load.js';
 import { fmt, fmtValue, type UnitSystem } from '../units.js';
 import { noteCharts, shownMaterial, type NoteChart } from './charts.js';
+import { designText, OPTION_NAMES, optionSection } from './option-sections.js';
 import type { JournalSpeedCurves } from '../../explore/journal-curves.js';
 
 /**
@@ -54,12 +55,6 @@ export interface NoteOptions {
    */
   journalCurves: JournalSpeedCurves | null;
 }
-
-export const OPTION_NAMES = {
-  bushing: 'Plain bushing',
-  rolling: 'Rolling bearing',
-  journal: 'Oil-film journal bearing',
-} as const;
 
 export const CAUTIONS = [
   "This note is a concept-stage estimate, to be confirmed with the supplier's data and by test.",
@@ -157,68 +152,6 @@ function dutyRows(loaded: LoadedCase, u: UnitSystem): Cell[][] {
   return rows;
 }
 
-const pct = (m: number) => `${m >= 0 ? '+' : ''}${(m * 100).toFixed(0)} %`;
-
-function checkRows(checks: CheckRecord[], u: UnitSystem): Cell[][] {
-  return checks.map((k) => {
-    const adv = k.advisory === true;
-    const mark: Mark = adv ? (k.pass ? 'advice' : 'advice-exceeded') : k.pass ? 'pass' : 'fail';
-    const label = { pass: 'pass', fail: 'FAIL', advice: 'advice: ok', 'advice-exceeded': 'advice: exceeded' }[mark];
-    return [
-      k.label,
-      fmt(k.value, k.unit, u),
-      `${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)}`,
-      pct(k.margin),
-      { text: label, mark },
-      k.source,
-    ];
-  });
-}
-const CHECK_HEAD = ['check', 'value', 'limit', 'margin', 'result', 'source of the limit'];
-
-function designText(r: RankedOption, u: UnitSystem): string {
-  const d = r.design;
-  const m = (k: string) => (typeof d[k] === 'number' ? fmt(d[k] as number, 'm', u) : '—');
-  switch (r.option) {
-    case 'bushing':
-      return d['material']
-        ? `${d['name']} (${d['material']}), ${m('length')} long, outside diameter ${m('outerDiameter')}`
-        : 'no material could be sized';
-    case 'rolling':
-      return d['bearing']
-        ? `${d['designation']} (${d['bearing']}), ${m('bore')} bore × ${m('outerDiameter')} outside × ${m('width')} wide, basic dynamic load rating C ${fmt(d['dynamicRating'] as number, 'N', u)} (${d['ratingSource']})`
-        : 'no candidate bearing';
-    case 'journal':
-      return `${m('length')} long (L/D ${fmtValue(d['lengthToDiameter'] as number, '1', u)}), radial clearance ${fmt(d['radialClearance'] as number, 'm', u)}, ${d['oil']}`;
-  }
-}
-
-function reasonText(x: RankedOption['reasons'][number]): string {
-  const w = x.priority ? ` (${x.basePoints} × ${x.weight} for the ${x.priority} priority)` : '';
-  return `${x.points > 0 ? '+' : '−'}${Math.abs(x.points).toFixed(2)}: ${x.because}${w} [rule ${x.rule}, ${x.file}]`;
-}
-
-/** Why an option lost: its exclusions, failed checks, and the points that separate it from the winner. */
-function whyLost(r: RankedOption, winner: RankedOption, a: AdviceResult, u: UnitSystem): string[] {
-  const out: string[] = [];
-  if (!r.feasible) {
-    for (const e of r.excluded) out.push(`Excluded: ${describe(e)}`);
-    for (const k of r.failed)
-      out.push(
-        `Fails: ${k.label}: ${fmt(k.value, k.unit, u)} against ${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)} (margin ${pct(k.margin)}; ${k.source}).`,
-      );
-    return out;
-  }
-  if (r === winner) return out;
-  out.push(
-    `Feasible, but scores ${r.score.toFixed(2)} against ${winner.score.toFixed(2)} for the ${OPTION_NAMES[winner.option].toLowerCase()}.`,
-  );
-  if (a.tieBreak && r.score === winner.score) out.push(`Tie: ${describe(a.tieBreak)}.`);
-  const cons = r.reasons.filter((x) => x.points < 0);
-  if (cons.length) out.push(...cons.map((x) => `Counts against it: ${reasonText(x)}`));
-  return out;
-}
-
 function sheetRows(lines: SheetLine[], u: UnitSystem): Cell[][] {
   return lines.map((l) => [l.label, l.formula, l.substituted, fmt(l.value, l.unit, u), l.source]);
 }
@@ -241,199 +174,100 @@ const METHODS: Record<'bushing' | 'rolling' | 'journal', string[]> = {
   ],
 };
 
-/** Build the note from a loaded case and the advice on it. */
-export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions): NoteModel {
-  const u = opts.units;
-  const c = loaded.case;
-  const winner = a.ranking[0]!;
-  const summary = a.recommendation
-    ? `Recommended: ${OPTION_NAMES[a.recommendation].toLowerCase()}: ${designText(winner, u)}.`
-    : 'No option is feasible for this duty as given: see what would make one feasible.';
-  const charts = noteCharts(a, c, u, opts.journalCurves);
-  const chartFor = (id: string) => charts.find((ch) => ch.id === id)!;
-
-  const sections: Section[] = [];
-  sections.push({
+/** The duty section: each case field as the user wrote it and as the calculation read it. */
+function dutySection(loaded: LoadedCase, units: UnitSystem, caseFile: string | undefined): Section {
+  return {
     id: 'duty',
     title: 'Duty as understood',
     blocks: [
       {
         kind: 'p',
-        text: `Case file: ${opts.caseFile ?? '(given)'}. Each field as written in the case, and as the calculation read it (${u === 'SI' ? 'SI, with the base-unit number in brackets' : 'US customary'}); "(default)" marks a value the case did not give.`,
+        text: `Case file: ${caseFile ?? '(given)'}. Each field as written in the case, and as the calculation read it (${units === 'SI' ? 'SI, with the base-unit number in brackets' : 'US customary'}); "(default)" marks a value the case did not give.`,
       },
-      { kind: 'table', head: ['field', 'as given', 'as understood'], rows: dutyRows(loaded, u) },
+      { kind: 'table', head: ['field', 'as given', 'as understood'], rows: dutyRows(loaded, units) },
     ],
-  });
-  sections.push({
+  };
+}
+
+/** The assumptions section: each default the case loader filled in, with its reason. */
+function assumptionsSection(advice: AdviceResult): Section {
+  return {
     id: 'assumptions',
     title: 'Assumptions and defaults',
-    blocks: a.assumed.length
+    blocks: advice.assumed.length
       ? [
           {
             kind: 'table',
             head: ['field', 'value', 'reason'],
-            rows: a.assumed.map(describeAssumption).map((x) => [x.field, x.value, x.reason]),
+            rows: advice.assumed.map(describeAssumption).map((x) => [x.field, x.value, x.reason]),
           },
         ]
       : [{ kind: 'p', text: 'None: every input was given.' }],
-  });
+  };
+}
 
-  const rec: Block[] = [{ kind: 'p', text: summary, strong: true }];
-  if (a.tieBreak) rec.push({ kind: 'p', text: `Tie: ${describe(a.tieBreak)}.` });
-  rec.push({
+/** The recommendation section: the summary, the ranking table, what would make an option feasible, warnings. */
+function recommendationSection(advice: AdviceResult, units: UnitSystem, summary: string): Section {
+  const blocks: Block[] = [{ kind: 'p', text: summary, strong: true }];
+  if (advice.tieBreak) blocks.push({ kind: 'p', text: `Tie: ${advice.tieBreak}.` });
+  blocks.push({
     kind: 'table',
     head: ['rank', 'option', 'feasible', 'score', 'life', 'friction power', 'length', 'outside diameter'],
     numeric: [0, 3, 4, 5, 6, 7],
-    rows: a.ranking.map((r) => [
+    rows: advice.ranking.map((r) => [
       String(r.rank),
       OPTION_NAMES[r.option],
       r.feasible ? { text: 'yes', mark: 'pass' } : { text: 'NO', mark: 'fail' },
       r.score.toFixed(2),
-      r.option === 'journal' ? (r.feasible ? 'full film: no wear life' : '—') : fmt(r.figures.lifeHours, 'h', u),
-      fmt(r.figures.frictionPower, 'W', u),
-      fmt(r.figures.length, 'm', u),
-      fmt(r.figures.outerDiameter, 'm', u),
+      r.option === 'journal' ? (r.feasible ? 'full film: no wear life' : '—') : fmt(r.figures.lifeHours, 'h', units),
+      fmt(r.figures.frictionPower, 'W', units),
+      fmt(r.figures.length, 'm', units),
+      fmt(r.figures.outerDiameter, 'm', units),
     ]),
   });
-  rec.push({
+  blocks.push({
     kind: 'p',
     text: 'Feasibility is decided by the checks; among feasible options the score, the sum of rule points (rules/*.json, common practice) weighted by the case priorities (priority / 3), decides the rank.',
   });
-  if (a.toMakeFeasible.length)
-    rec.push(
+  if (advice.toMakeFeasible.length)
+    blocks.push(
       { kind: 'sub', title: 'What would make an option feasible' },
-      { kind: 'list', items: a.toMakeFeasible.map(describe) },
+      { kind: 'list', items: advice.toMakeFeasible.map(describe) },
     );
-  if (a.warnings.length)
-    rec.push({ kind: 'sub', title: 'Warnings' }, { kind: 'list', items: a.warnings.map(describeWarning) });
-  sections.push({ id: 'recommendation', title: 'Recommendation and ranking', blocks: rec });
+  if (advice.warnings.length)
+    blocks.push({ kind: 'sub', title: 'Warnings' }, { kind: 'list', items: advice.warnings.map(describeWarning) });
+  return { id: 'recommendation', title: 'Recommendation and ranking', blocks };
+}
 
-  for (const r of a.ranking) {
-    const blocks: Block[] = [
-      {
-        kind: 'p',
-        text: `Rank ${r.rank}${r.feasible ? '' : ', not feasible'}. Design found${r.feasible ? '' : ' (nearest miss)'}: ${designText(r, u)}.`,
-      },
-    ];
-    if (r.option === 'bushing') {
-      const m = shownMaterial(a);
-      blocks.push({ kind: 'sub', title: 'Checks' });
-      if (m)
-        blocks.push({
-          kind: 'table',
-          head: CHECK_HEAD,
-          rows: checkRows(m.checks, u),
-          caption: `Checks of ${m.name} at ${fmt(m.length, 'm', u)} long`,
-        });
-      blocks.push({ kind: 'sub', title: 'Every material class checked' });
-      blocks.push({
-        kind: 'table',
-        head: [
-          'material',
-          'length',
-          'mean pressure',
-          'PV',
-          'wear life (short – typical – long)',
-          'feasible',
-          'failing checks',
-        ],
-        rows: a.checks.bushing.materials.map((x) => [
-          `${x.name} (${x.id})`,
-          fmt(x.length, 'm', u),
-          fmt(x.pressure, 'Pa', u),
-          fmt(x.pv, 'Pa*m/s', u),
-          `${fmt(x.lifeBand.short, 'h', u)} – ${fmt(x.lifeBand.typical, 'h', u)} – ${fmt(x.lifeBand.long, 'h', u)}`,
-          x.feasible ? { text: 'yes', mark: 'pass' } : { text: 'NO', mark: 'fail' },
-          x.checks
-            .filter((k) => !k.pass && !k.advisory)
-            .map((k) => k.label)
-            .join('; ') || '—',
-        ]),
-      });
-      blocks.push({ kind: 'p', text: describe(a.checks.bushing.bestReason) });
-      blocks.push({ kind: 'chart', chart: chartFor('bushing-wear') });
-    } else if (r.option === 'rolling') {
-      const ro = a.checks.rolling;
-      const k = ro.candidates.find((x) => x.id === r.design['bearing']);
-      blocks.push({ kind: 'sub', title: 'Checks' });
-      if (k)
-        blocks.push({
-          kind: 'table',
-          head: CHECK_HEAD,
-          rows: checkRows(k.checks, u),
-          caption: `Checks of ${k.designation}`,
-        });
-      blocks.push({ kind: 'sub', title: 'Every candidate checked' });
-      blocks.push({
-        kind: 'table',
-        head: ['bearing', 'C', 'C0', 'P', 'L10h', 'L10mh', 's0', 'feasible'],
-        rows: ro.candidates.map((x) => [
-          `${x.designation} (${x.id})`,
-          fmt(x.dynamicRating, 'N', u),
-          fmt(x.staticRating, 'N', u),
-          fmt(x.equivalentLoad, 'N', u),
-          fmt(x.L10h, 'h', u),
-          fmt(x.L10mh, 'h', u),
-          x.s0 === null ? '—' : fmtValue(x.s0, '1', u),
-          x.feasible ? { text: 'yes', mark: 'pass' } : { text: 'NO', mark: 'fail' },
-        ]),
-      });
-      blocks.push({ kind: 'chart', chart: chartFor('rolling-life') });
-    } else {
-      const j = a.checks.journal;
-      blocks.push({ kind: 'sub', title: 'Checks' });
-      blocks.push({
-        kind: 'table',
-        head: CHECK_HEAD,
-        rows: checkRows(j.checks, u),
-        caption: 'Checks of the chosen journal design',
-      });
-      blocks.push({
-        kind: 'p',
-        text: `Operating state at the governing point: eccentricity ratio ${fmtValue(j.eccentricityRatio, '1', u)}, minimum film ${fmt(j.minFilmThickness, 'm', u)}, attitude angle ${fmtValue(j.attitudeAngle, 'deg', u)}°, friction coefficient ${fmtValue(j.frictionCoefficient, '1', u)}, power loss ${fmt(j.powerLoss, 'W', u)}, flow ${fmt(j.flow, 'm^3/s', u)}, effective temperature ${fmt(j.effectiveTemperature, 'degC', u)}; ${j.sweep.length} designs were compared in the sweep of length, clearance and oil grade.`,
-      });
-      blocks.push(
-        { kind: 'chart', chart: chartFor('journal-film') },
-        { kind: 'chart', chart: chartFor('journal-temperature') },
-        { kind: 'chart', chart: chartFor('journal-pressure') },
-      );
-    }
-    const pro = r.reasons.filter((x) => x.points > 0);
-    const con = r.reasons.filter((x) => x.points < 0);
-    if (pro.length || con.length)
-      blocks.push(
-        { kind: 'sub', title: 'Points for and against' },
-        { kind: 'list', items: [...pro, ...con].map(reasonText) },
-      );
-    const lost = whyLost(r, winner, a, u);
-    if (r !== winner || !r.feasible)
-      blocks.push(
-        { kind: 'sub', title: 'Why it lost' },
-        lost.length ? { kind: 'list', items: lost } : { kind: 'p', text: 'It ranks below the options above.' },
-      );
-    sections.push({ id: `option-${r.option}`, title: `${r.rank}. ${OPTION_NAMES[r.option]}`, pageBreak: true, blocks });
-  }
-
-  const sheet: Block[] = [];
+/** The calculation sheet: every option's calculation lines, in the fixed option order. */
+function sheetSection(advice: AdviceResult, units: UnitSystem): Section {
+  const blocks: Block[] = [];
   for (const o of OPTIONS) {
-    const lines = a.checks[o].sheet;
-    sheet.push({ kind: 'sub', title: OPTION_NAMES[o] });
-    sheet.push(
+    const lines = advice.checks[o].sheet;
+    blocks.push({ kind: 'sub', title: OPTION_NAMES[o] });
+    blocks.push(
       lines.length
-        ? { kind: 'table', head: ['figure', 'formula', 'with values', 'result', 'source'], rows: sheetRows(lines, u) }
+        ? {
+            kind: 'table',
+            head: ['figure', 'formula', 'with values', 'result', 'source'],
+            rows: sheetRows(lines, units),
+          }
         : { kind: 'p', text: 'No calculation lines (nothing could be sized).' },
     );
   }
-  sections.push({ id: 'sheet', title: 'Calculation sheet', pageBreak: true, blocks: sheet });
+  return { id: 'sheet', title: 'Calculation sheet', pageBreak: true, blocks };
+}
 
+/** The methods section: each option's method, and every source of a limit the note's checks name. */
+function methodsSection(advice: AdviceResult): Section {
   const sources = [
     ...new Set([
-      ...(shownMaterial(a)?.checks.map((k) => k.source) ?? []),
-      ...a.checks.rolling.candidates.flatMap((k) => k.checks.map((x) => x.source)),
-      ...a.checks.journal.checks.map((k) => k.source),
+      ...(shownMaterial(advice)?.checks.map((k) => k.source) ?? []),
+      ...advice.checks.rolling.candidates.flatMap((k) => k.checks.map((x) => x.source)),
+      ...advice.checks.journal.checks.map((k) => k.source),
     ]),
   ].sort();
-  sections.push({
+  return {
     id: 'methods',
     title: 'Methods and references',
     blocks: [
@@ -444,15 +278,41 @@ export function buildNote(loaded: LoadedCase, a: AdviceResult, opts: NoteOptions
       { kind: 'sub', title: 'Sources of the limits in this note' },
       { kind: 'list', items: sources },
     ],
-  });
-  sections.push({ id: 'cautions', title: 'Cautions', blocks: [{ kind: 'list', items: CAUTIONS }] });
-  sections.push({
-    id: 'signoff',
-    title: 'Sign-off',
-    blocks: [
-      { kind: 'p', text: 'To be completed by hand. The note is not released until it is checked and approved.' },
-      { kind: 'signoff', roles: ['Prepared', 'Checked', 'Approved'] },
-    ],
-  });
-  return { title: c.title, date: noteDate(opts.now), units: u, summary, sections };
+  };
+}
+
+/** The closing sections: the cautions, and the sign-off block completed by hand. */
+function closingSections(): Section[] {
+  return [
+    { id: 'cautions', title: 'Cautions', blocks: [{ kind: 'list', items: CAUTIONS }] },
+    {
+      id: 'signoff',
+      title: 'Sign-off',
+      blocks: [
+        { kind: 'p', text: 'To be completed by hand. The note is not released until it is checked and approved.' },
+        { kind: 'signoff', roles: ['Prepared', 'Checked', 'Approved'] },
+      ],
+    },
+  ];
+}
+
+/** Build the note from a loaded case and the advice on it. */
+export function buildNote(loaded: LoadedCase, advice: AdviceResult, opts: NoteOptions): NoteModel {
+  const units = opts.units;
+  const winner = advice.ranking[0]!;
+  const summary = advice.recommendation
+    ? `Recommended: ${OPTION_NAMES[advice.recommendation].toLowerCase()}: ${designText(winner, units)}.`
+    : 'No option is feasible for this duty as given: see what would make one feasible.';
+  const charts = noteCharts(advice, loaded.case, units, opts.journalCurves);
+  const chartById = (id: string): NoteChart => charts.find((ch) => ch.id === id)!;
+  const sections: Section[] = [
+    dutySection(loaded, units, opts.caseFile),
+    assumptionsSection(advice),
+    recommendationSection(advice, units, summary),
+    ...advice.ranking.map((r) => optionSection(r, advice, units, chartById)),
+    sheetSection(advice, units),
+    methodsSection(advice),
+    ...closingSections(),
+  ];
+  return { title: loaded.case.title, date: noteDate(opts.now), units, summary, sections };
 }

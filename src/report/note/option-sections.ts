@@ -1,0 +1,224 @@
+import { describe } from '../findings/index.js';
+import type { AdviceResult, RankedOption } from '../../advise/engine.js';
+import type { CheckRecord } from '../../core/check.js';
+import { fmt, fmtValue, type UnitSystem } from '../units.js';
+import { shownMaterial, type NoteChart } from './charts.js';
+import type { Block, Cell, Mark, Section } from './model.js';
+
+/**
+ * The note's section for each option (its design, its checks, what was compared, the points
+ * for and against it and why it lost), and the option texts the rest of the note shares: the
+ * option's display name and the one-line description of the design found.
+ */
+
+export const OPTION_NAMES = {
+  bushing: 'Plain bushing',
+  rolling: 'Rolling bearing',
+  journal: 'Oil-film journal bearing',
+} as const;
+
+/** A chart of the note, by its stable id. */
+export type ChartById = (id: string) => NoteChart;
+
+const pct = (m: number) => `${m >= 0 ? '+' : ''}${(m * 100).toFixed(0)} %`;
+
+function checkRows(checks: CheckRecord[], u: UnitSystem): Cell[][] {
+  return checks.map((k) => {
+    const adv = k.advisory === true;
+    const mark: Mark = adv ? (k.pass ? 'advice' : 'advice-exceeded') : k.pass ? 'pass' : 'fail';
+    const label = { pass: 'pass', fail: 'FAIL', advice: 'advice: ok', 'advice-exceeded': 'advice: exceeded' }[mark];
+    return [
+      k.label,
+      fmt(k.value, k.unit, u),
+      `${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)}`,
+      pct(k.margin),
+      { text: label, mark },
+      k.source,
+    ];
+  });
+}
+const CHECK_HEAD = ['check', 'value', 'limit', 'margin', 'result', 'source of the limit'];
+
+/** The design an option found, in one line (also the note's summary of the winner). */
+export function designText(r: RankedOption, u: UnitSystem): string {
+  const d = r.design;
+  const m = (k: string) => (typeof d[k] === 'number' ? fmt(d[k] as number, 'm', u) : '—');
+  switch (r.option) {
+    case 'bushing':
+      return d['material']
+        ? `${d['name']} (${d['material']}), ${m('length')} long, outside diameter ${m('outerDiameter')}`
+        : 'no material could be sized';
+    case 'rolling':
+      return d['bearing']
+        ? `${d['designation']} (${d['bearing']}), ${m('bore')} bore × ${m('outerDiameter')} outside × ${m('width')} wide, basic dynamic load rating C ${fmt(d['dynamicRating'] as number, 'N', u)} (${d['ratingSource']})`
+        : 'no candidate bearing';
+    case 'journal':
+      return `${m('length')} long (L/D ${fmtValue(d['lengthToDiameter'] as number, '1', u)}), radial clearance ${fmt(d['radialClearance'] as number, 'm', u)}, ${d['oil']}`;
+  }
+}
+
+function reasonText(x: RankedOption['reasons'][number]): string {
+  const w = x.priority ? ` (${x.basePoints} × ${x.weight} for the ${x.priority} priority)` : '';
+  return `${x.points > 0 ? '+' : '−'}${Math.abs(x.points).toFixed(2)}: ${x.because}${w} [rule ${x.rule}, ${x.file}]`;
+}
+
+/** Why an option lost: its exclusions, failed checks, and the points that separate it from the winner. */
+function whyLost(r: RankedOption, winner: RankedOption, a: AdviceResult, u: UnitSystem): string[] {
+  const out: string[] = [];
+  if (!r.feasible) {
+    for (const e of r.excluded) out.push(`Excluded: ${describe(e)}`);
+    for (const k of r.failed)
+      out.push(
+        `Fails: ${k.label}: ${fmt(k.value, k.unit, u)} against ${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)} (margin ${pct(k.margin)}; ${k.source}).`,
+      );
+    return out;
+  }
+  if (r === winner) return out;
+  out.push(
+    `Feasible, but scores ${r.score.toFixed(2)} against ${winner.score.toFixed(2)} for the ${OPTION_NAMES[winner.option].toLowerCase()}.`,
+  );
+  if (a.tieBreak && r.score === winner.score) out.push(`Tie: ${a.tieBreak}.`);
+  const cons = r.reasons.filter((x) => x.points < 0);
+  if (cons.length) out.push(...cons.map((x) => `Counts against it: ${reasonText(x)}`));
+  return out;
+}
+
+/** The bushing's checks, every material class the kernel checked, and the wear chart. */
+function bushingBlocks(advice: AdviceResult, units: UnitSystem, chartById: ChartById): Block[] {
+  const blocks: Block[] = [];
+  const shown = shownMaterial(advice);
+  blocks.push({ kind: 'sub', title: 'Checks' });
+  if (shown)
+    blocks.push({
+      kind: 'table',
+      head: CHECK_HEAD,
+      rows: checkRows(shown.checks, units),
+      caption: `Checks of ${shown.name} at ${fmt(shown.length, 'm', units)} long`,
+    });
+  blocks.push({ kind: 'sub', title: 'Every material class checked' });
+  blocks.push({
+    kind: 'table',
+    head: [
+      'material',
+      'length',
+      'mean pressure',
+      'PV',
+      'wear life (short – typical – long)',
+      'feasible',
+      'failing checks',
+    ],
+    rows: advice.checks.bushing.materials.map((x) => [
+      `${x.name} (${x.id})`,
+      fmt(x.length, 'm', units),
+      fmt(x.pressure, 'Pa', units),
+      fmt(x.pv, 'Pa*m/s', units),
+      `${fmt(x.lifeBand.short, 'h', units)} – ${fmt(x.lifeBand.typical, 'h', units)} – ${fmt(x.lifeBand.long, 'h', units)}`,
+      x.feasible ? { text: 'yes', mark: 'pass' } : { text: 'NO', mark: 'fail' },
+      x.checks
+        .filter((k) => !k.pass && !k.advisory)
+        .map((k) => k.label)
+        .join('; ') || '—',
+    ]),
+  });
+  blocks.push({ kind: 'p', text: describe(advice.checks.bushing.bestReason) });
+  blocks.push({ kind: 'chart', chart: chartById('bushing-wear') });
+  return blocks;
+}
+
+/** The chosen bearing's checks, every candidate the kernel checked, and the life chart. */
+function rollingBlocks(ranked: RankedOption, advice: AdviceResult, units: UnitSystem, chartById: ChartById): Block[] {
+  const blocks: Block[] = [];
+  const rolling = advice.checks.rolling;
+  const chosen = rolling.candidates.find((x) => x.id === ranked.design['bearing']);
+  blocks.push({ kind: 'sub', title: 'Checks' });
+  if (chosen)
+    blocks.push({
+      kind: 'table',
+      head: CHECK_HEAD,
+      rows: checkRows(chosen.checks, units),
+      caption: `Checks of ${chosen.designation}`,
+    });
+  blocks.push({ kind: 'sub', title: 'Every candidate checked' });
+  blocks.push({
+    kind: 'table',
+    head: ['bearing', 'C', 'C0', 'P', 'L10h', 'L10mh', 's0', 'feasible'],
+    rows: rolling.candidates.map((x) => [
+      `${x.designation} (${x.id})`,
+      fmt(x.dynamicRating, 'N', units),
+      fmt(x.staticRating, 'N', units),
+      fmt(x.equivalentLoad, 'N', units),
+      fmt(x.L10h, 'h', units),
+      fmt(x.L10mh, 'h', units),
+      x.s0 === null ? '—' : fmtValue(x.s0, '1', units),
+      x.feasible ? { text: 'yes', mark: 'pass' } : { text: 'NO', mark: 'fail' },
+    ]),
+  });
+  blocks.push({ kind: 'chart', chart: chartById('rolling-life') });
+  return blocks;
+}
+
+/** The journal design's checks, its operating state at the governing point, and its charts. */
+function journalBlocks(advice: AdviceResult, units: UnitSystem, chartById: ChartById): Block[] {
+  const j = advice.checks.journal;
+  return [
+    { kind: 'sub', title: 'Checks' },
+    {
+      kind: 'table',
+      head: CHECK_HEAD,
+      rows: checkRows(j.checks, units),
+      caption: 'Checks of the chosen journal design',
+    },
+    {
+      kind: 'p',
+      text: `Operating state at the governing point: eccentricity ratio ${fmtValue(j.eccentricityRatio, '1', units)}, minimum film ${fmt(j.minFilmThickness, 'm', units)}, attitude angle ${fmtValue(j.attitudeAngle, 'deg', units)}°, friction coefficient ${fmtValue(j.frictionCoefficient, '1', units)}, power loss ${fmt(j.powerLoss, 'W', units)}, flow ${fmt(j.flow, 'm^3/s', units)}, effective temperature ${fmt(j.effectiveTemperature, 'degC', units)}; ${j.sweep.length} designs were compared in the sweep of length, clearance and oil grade.`,
+    },
+    { kind: 'chart', chart: chartById('journal-film') },
+    { kind: 'chart', chart: chartById('journal-temperature') },
+    { kind: 'chart', chart: chartById('journal-pressure') },
+  ];
+}
+
+/** The rule points for and against an option, and, below the winner or when infeasible, why it lost. */
+function standingBlocks(ranked: RankedOption, advice: AdviceResult, units: UnitSystem): Block[] {
+  const blocks: Block[] = [];
+  const winner = advice.ranking[0]!;
+  const pro = ranked.reasons.filter((x) => x.points > 0);
+  const con = ranked.reasons.filter((x) => x.points < 0);
+  if (pro.length || con.length)
+    blocks.push(
+      { kind: 'sub', title: 'Points for and against' },
+      { kind: 'list', items: [...pro, ...con].map(reasonText) },
+    );
+  const lost = whyLost(ranked, winner, advice, units);
+  if (ranked !== winner || !ranked.feasible)
+    blocks.push(
+      { kind: 'sub', title: 'Why it lost' },
+      lost.length ? { kind: 'list', items: lost } : { kind: 'p', text: 'It ranks below the options above.' },
+    );
+  return blocks;
+}
+
+/** One option's section of the note, on its own printed page. */
+export function optionSection(
+  ranked: RankedOption,
+  advice: AdviceResult,
+  units: UnitSystem,
+  chartById: ChartById,
+): Section {
+  const blocks: Block[] = [
+    {
+      kind: 'p',
+      text: `Rank ${ranked.rank}${ranked.feasible ? '' : ', not feasible'}. Design found${ranked.feasible ? '' : ' (nearest miss)'}: ${designText(ranked, units)}.`,
+    },
+  ];
+  if (ranked.option === 'bushing') blocks.push(...bushingBlocks(advice, units, chartById));
+  else if (ranked.option === 'rolling') blocks.push(...rollingBlocks(ranked, advice, units, chartById));
+  else blocks.push(...journalBlocks(advice, units, chartById));
+  blocks.push(...standingBlocks(ranked, advice, units));
+  return {
+    id: `option-${ranked.option}`,
+    title: `${ranked.rank}. ${OPTION_NAMES[ranked.option]}`,
+    pageBreak: true,
+    blocks,
+  };
+}
