@@ -8,8 +8,9 @@
  * cloud point and for ν ≥ about 2 mm²/s (the 0.7 offset form); extrapolation beyond
  * the two points is the usual engineering practice but loses accuracy.
  *
- * Dynamic viscosity μ = ν·ρ(T), with ρ(T) = ρ15·(1 − α·(T − 15 °C)) and α ≈ 0.00065 /K
- * (from memory: mineral oil density falls about 0.065 %/K).
+ * Dynamic viscosity μ = ν·ρ(T), with ρ(T) = ρ15·(1 − α·(T − 15 °C)); ρ15 density at 15 °C,
+ * kg/m³, and α the volumetric coefficient, 1/K, both from data/lubricants.json (α there is
+ * 0.00065 /K, from memory: mineral oil density falls about 0.065 %/K).
  */
 
 import type { OilGrade } from '../data/load.js';
@@ -41,13 +42,13 @@ export function waltherViscosity(k: WaltherConstants, tC: number): number {
 }
 
 /** Kinematic viscosity of an oil grade at tC (°C), mm²/s. */
-export function kinematicViscosity(oil: OilGrade, tC: number): number {
+export function kinematicViscosity(oil: Pick<OilGrade, 'nu40' | 'nu100'>, tC: number): number {
   return waltherViscosity(waltherConstants(40, oil.nu40, 100, oil.nu100), tC);
 }
 
-/** Density at tC (°C), kg/m³; alpha the volumetric coefficient, 1/K. */
-export function density(oil: OilGrade, tC: number, alpha = 0.00065): number {
-  return oil.density15 * (1 - alpha * (tC - 15));
+/** Density at tC (°C), kg/m³: ρ15·(1 − α·(T − 15)), α the grade's densityCoefficient, 1/K. */
+export function density(oil: OilGrade, tC: number): number {
+  return oil.density15 * (1 - oil.densityCoefficient * (tC - 15));
 }
 
 /** Dynamic viscosity at tC (°C), Pa·s: μ = ν·ρ with ν converted from mm²/s to m²/s. */

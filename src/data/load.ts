@@ -76,8 +76,13 @@ const oilGradeSchema = z.object({
   specificHeat: positive,
   source: z.string().min(1),
 });
-/** An oil grade row of data/lubricants.json (the one definition of an oil grade). */
-export type OilGrade = z.infer<typeof oilGradeSchema>;
+/** An oil grade row as written in data/lubricants.json. */
+export type OilGradeRow = z.infer<typeof oilGradeSchema>;
+/**
+ * An oil grade as the kernels take it (the one definition of an oil grade): its row of
+ * data/lubricants.json and the table's volumetric coefficient of density with temperature, 1/K.
+ */
+export type OilGrade = OilGradeRow & { densityCoefficient: number };
 const lubricantsSchema = z.object({
   description: z.string(),
   units: z.record(z.string(), z.string()),
@@ -93,7 +98,9 @@ export function lubricants(): LubricantTable {
   return loadTable('lubricants.json', lubricantsSchema);
 }
 
-/** The oil grade row for an ISO VG number, or undefined. */
+/** The oil grade for an ISO VG number, with the table's density coefficient, or undefined. */
 export function oilGrade(grade: number): OilGrade | undefined {
-  return lubricants().grades.find((g) => g.grade === grade);
+  const table = lubricants();
+  const row = table.grades.find((g) => g.grade === grade);
+  return row && { ...row, densityCoefficient: table.densityTemperatureCoefficient.value };
 }

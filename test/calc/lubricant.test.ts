@@ -64,4 +64,10 @@ describe('Walther law (ASTM D341, from memory)', () => {
     expect(dynamicViscosity(oil, t)).toBeCloseTo(kinematicViscosity(oil, t) * 1e-6 * density(oil, t), 12);
     expect(density(oil, 15 + 100)).toBeCloseTo(oil.density15 * (1 - 0.065), 9);
   });
+
+  it("takes the density coefficient from the grade (the table's one figure), not a constant of its own", () => {
+    const oil = oilGrade(100)!;
+    expect(oil.densityCoefficient).toBe(0.00065);
+    expect(density({ ...oil, densityCoefficient: 0.0008 }, 15 + 100)).toBeCloseTo(oil.density15 * (1 - 0.08), 9);
+  });
 });

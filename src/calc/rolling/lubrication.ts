@@ -91,7 +91,7 @@ function caseViscosity(c: CaseSI, supply: BearingSupply, tC: number, notes: Note
     grade = lub.defaultGrade.grade;
     notes.assume(assumedFinding('lubrication.oilGrade', 'rolling.default-grade', { grade }));
   }
-  let oil = oilGrade(grade);
+  let oil: { nu40: number; nu100: number } | undefined = oilGrade(grade);
   if (!oil) {
     notes.warn(finding('rolling.grade-not-in-table', { grade, fallback: lub.greaseBaseOil.grade }));
     oil = oilGrade(lub.greaseBaseOil.grade) ?? lub.grades[0]!;
