@@ -29,8 +29,7 @@ export function designOf(r: JournalResult, c: CaseSI): JournalDesign {
     c.lubrication.viscosity === undefined &&
     c.lubrication.oilGrade === undefined &&
     (c.lubrication.supply === 'oil-bath' || c.lubrication.supply === 'oil-feed');
-  const g = /^ISO VG (\d+)$/.exec(r.oil);
-  if (sweptOil && g) d.grade = Number(g[1]);
+  if (sweptOil && r.oilGrade !== null) d.grade = r.oilGrade;
   return d;
 }
 
