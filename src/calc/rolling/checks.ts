@@ -1,7 +1,7 @@
 import { makeCheck, type CheckRecord } from '../../core/check.js';
 import { KAPPA_MIN } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
-import type { CandidateFigures, EvalContext } from './evaluate.js';
+import type { CandidateFigures, EvalContext } from './context.js';
 
 /**
  * The checks of one candidate, from its figures: life, lubrication, load ratio, static safety

@@ -1,6 +1,5 @@
 import type { CaseSI } from '../../case/types.js';
 import { finding, type Finding } from '../../core/finding.js';
-import type { RollingFactors } from '../../data/rolling.js';
 import { AISO_CAP, KAPPA_MAX, KAPPA_MIN, aIso, ratedViscosity } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import { candidateChecks } from './checks.js';
@@ -13,9 +12,9 @@ import {
 } from './equivalent-load.js';
 import type { Notes } from './findings.js';
 import { basicRatingLife, lifeExponent, lifeHours, requiredDynamicRating } from './life.js';
-import type { Lubrication } from './lubrication.js';
 import { criticalSwingAngle, frictionPower, frictionTorque, relubricationInterval, speedFactor } from './speed.js';
 import type { RollingCandidate } from './types.js';
+import type { EvalContext } from './context.js';
 
 /**
  * One candidate's figures: its loads, lives, lubrication, static safety, speed, friction,
@@ -28,35 +27,6 @@ import type { RollingCandidate } from './types.js';
  * [3] Speed factor n·dm, friction M = μ·P·d/2, grease interval t_f, swing for full element
  *     overlap (speed.ts; common practice and a bearing-maker technical guide).
  */
-
-/** What every candidate of one case is evaluated in: the case, its factors, points and lubricant. */
-export interface EvalContext {
-  c: CaseSI;
-  f: RollingFactors;
-  points: LoadPoint[];
-  /** Highest point speed, rev/s. */
-  maxSpeed: number;
-  /** Service factor f_d, 1. */
-  serviceFactor: number;
-  s0Row: RollingFactors['staticSafety'][number];
-  cont: RollingFactors['contamination'][number];
-  /** Reliability factor a1, 1, and the reliability it is worked for, %. */
-  a1: number;
-  reliabilityUsed: number;
-  lubrication: Lubrication;
-}
-
-/** The figures the checks read, SI (lives h, L10 10⁶ rev, ndm mm·r/min). */
-export interface CandidateFigures {
-  /** Duty-mean dynamic equivalent load with f_d, N. */
-  P: number;
-  L10: number | null;
-  kappa: number | null;
-  L10mh: number | null;
-  s0: number | null;
-  ndm: number;
-  relubricationHours: number | null;
-}
 
 /** A point's dynamic equivalent load without f_d (P, for friction) and with it (Pf, for life), N. */
 type PointLoad = DynamicLoadResult & { Pf: number } & LoadPoint;

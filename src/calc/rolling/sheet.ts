@@ -4,7 +4,7 @@ import { AISO_CAP, AISO_CONSTANTS, KAPPA_MAX, KAPPA_MIN } from './aiso.js';
 import { KIND } from './candidates.js';
 import type { LoadPoint } from './conditions.js';
 import { dynamicEquivalentLoad } from './equivalent-load.js';
-import type { EvalContext } from './evaluate.js';
+import type { EvalContext } from './context.js';
 import { frictionTorque } from './speed.js';
 import type { RollingCandidate } from './types.js';
 

@@ -1,4 +1,4 @@
-import type { Prompter } from './run.js';
+import type { Prompter } from './types.js';
 
 /** Streams for the prompts; left out, the process's terminal. Tests pass their own. */
 export interface PromptContext {

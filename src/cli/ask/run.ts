@@ -15,35 +15,13 @@ import {
   type Question,
 } from './questions.js';
 import { applyAnswers, freeName, newDocument, readSaved, renderCase, writeAtomic, type AskState } from './save.js';
-import type { AskDeps, AskHooks, AskOptions } from './types.js';
+import type { AskDeps, AskHooks, AskOptions, Prompter, PromptSpec } from './types.js';
 
 /**
  * The prompt runner: asks the next unanswered question, saves after every answer,
  * and finishes with validation and advice. The prompts themselves come in through
  * `Prompter`, so tests drive it without a terminal.
  */
-
-/** One prompt. `input` re-asks until validate returns true; `select` offers choices; `confirm` yes/no. */
-export type PromptSpec =
-  | {
-      kind: 'input';
-      message: string;
-      help: string;
-      default: string;
-      validate: (text: string) => true | string;
-      /** Called with the text as it is typed, so an interrupt loses nothing. */
-      onDraft: (text: string) => void;
-    }
-  | {
-      kind: 'select';
-      message: string;
-      help: string;
-      default: string;
-      choices: { value: string; name: string; description?: string }[];
-    }
-  | { kind: 'confirm'; message: string; help: string; default: boolean };
-
-export type Prompter = (spec: PromptSpec) => Promise<string | boolean>;
 
 /** Exit code after Ctrl-C: 128 + SIGINT (2), the shell's convention for "stopped by the user" — not bad input (2). */
 export const EXIT_INTERRUPTED = 130;

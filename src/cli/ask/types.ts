@@ -1,4 +1,24 @@
-import type { Prompter } from './run.js';
+/** One prompt. `input` re-asks until validate returns true; `select` offers choices; `confirm` yes/no. */
+export type PromptSpec =
+  | {
+      kind: 'input';
+      message: string;
+      help: string;
+      default: string;
+      validate: (text: string) => true | string;
+      /** Called with the text as it is typed, so an interrupt loses nothing. */
+      onDraft: (text: string) => void;
+    }
+  | {
+      kind: 'select';
+      message: string;
+      help: string;
+      default: string;
+      choices: { value: string; name: string; description?: string }[];
+    }
+  | { kind: 'confirm'; message: string; help: string; default: boolean };
+
+export type Prompter = (spec: PromptSpec) => Promise<string | boolean>;
 
 /** What `ask` needs from the rest of the program. */
 export interface AskDeps {

@@ -1,5 +1,5 @@
 import { escapeHtml as h } from './escape.js';
-import type { Block, Cell, NoteModel } from './model.js';
+import type { Block, Cell, NoteModel } from './document.js';
 import { lineChart } from './svg.js';
 
 /**

@@ -20,4 +20,5 @@ export async function renderNote(
   return (await import('./html.js')).renderHtml(model);
 }
 
-export { buildNote, noteDate, type NoteModel, type NoteOptions } from './model.js';
+export { buildNote, noteDate, type NoteOptions } from './model.js';
+export type { NoteModel } from './document.js';

@@ -1,5 +1,5 @@
 import { escapeMd } from './escape.js';
-import type { Block, Cell, NoteModel } from './model.js';
+import type { Block, Cell, NoteModel } from './document.js';
 
 /**
  * The note as GitHub-flavoured Markdown: headings, pipe tables, lists. Charts are not drawn

@@ -3,7 +3,7 @@ import type { AdviceResult, RankedOption } from '../../advise/engine.js';
 import type { CheckRecord } from '../../core/check.js';
 import { fmt, fmtValue, type UnitSystem } from '../units.js';
 import { shownMaterial, type NoteChart } from './charts.js';
-import type { Block, Cell, Mark, Section } from './model.js';
+import type { Block, Cell, Mark, Section } from './document.js';
 
 /**
  * The note's section for each option (its design, its checks, what was compared, the points

@@ -1,4 +1,4 @@
-import type { Prompter, PromptSpec } from '../../../src/cli/ask/run.js';
+import type { Prompter, PromptSpec } from '../../../src/cli/ask/types.js';
 
 /** A scripted answer: text typed then Enter ('' = Enter alone), a choice, yes/no, or Ctrl-C (optionally after typing). */
 export type Step = string | boolean | { interrupt: true; typed?: string };

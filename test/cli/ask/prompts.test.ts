@@ -15,7 +15,8 @@ import { describe, expect, it } from 'vitest';
 import { parseCaseText } from '../../../src/case/load.js';
 import { checkAnswer, questionById } from '../../../src/cli/ask/questions.js';
 import { inquirerPrompter } from '../../../src/cli/ask/prompts.js';
-import { runAsk, type Prompter } from '../../../src/cli/ask/run.js';
+import { runAsk } from '../../../src/cli/ask/run.js';
+import type { Prompter } from '../../../src/cli/ask/types.js';
 
 /** The prompt inquirer runs for a question of type 'input' (its registry of built-in prompts). */
 const input = inquirer.prompt.prompts['input']!;

@@ -1,0 +1,38 @@
+import type { CaseSI } from '../../case/types.js';
+import type { RollingFactors } from '../../data/rolling.js';
+import type { LoadPoint } from './conditions.js';
+import type { Lubrication } from './lubrication.js';
+
+/*
+ * The data passed between the rolling kernel's steps: the case's context every candidate is
+ * evaluated in (evaluate.ts) and the figures its checks read (checks.ts). Not public.
+ */
+
+/** What every candidate of one case is evaluated in: the case, its factors, points and lubricant. */
+export interface EvalContext {
+  c: CaseSI;
+  f: RollingFactors;
+  points: LoadPoint[];
+  /** Highest point speed, rev/s. */
+  maxSpeed: number;
+  /** Service factor f_d, 1. */
+  serviceFactor: number;
+  s0Row: RollingFactors['staticSafety'][number];
+  cont: RollingFactors['contamination'][number];
+  /** Reliability factor a1, 1, and the reliability it is worked for, %. */
+  a1: number;
+  reliabilityUsed: number;
+  lubrication: Lubrication;
+}
+
+/** The figures the checks read, SI (lives h, L10 10⁶ rev, ndm mm·r/min). */
+export interface CandidateFigures {
+  /** Duty-mean dynamic equivalent load with f_d, N. */
+  P: number;
+  L10: number | null;
+  kappa: number | null;
+  L10mh: number | null;
+  s0: number | null;
+  ndm: number;
+  relubricationHours: number | null;
+}
