@@ -3,8 +3,6 @@ import type { Assumption, CaseSI, Priority } from './types.js';
 import type { CaseFile } from './schema.js';
 import { PRIORITIES } from './schema.js';
 
-/** One problem in a case: the field (dotted path) and what is wrong with it. */
-
 /**
  * Defaults applied to a case that leaves a value out. Each is recorded as an
  * assumption so every output lists it. Values marked "common practice" are
@@ -39,93 +37,18 @@ export function completeCase(
   knownMaterials: string[],
 ): { case: CaseSI; assumed: Assumption[]; problems: Problem[] } {
   const assumed: Assumption[] = [];
-  const problems: Problem[] = [];
   const take = <T>(field: string, given: T | undefined, d: { value: T; reason: string }, show = String(d.value)): T => {
     if (given !== undefined) return given;
     assumed.push({ field, value: show, reason: d.reason });
     return d.value;
   };
 
-  const shaft = file.shaft;
+  const problems = [...motionProblems(file), ...choiceProblems(file, knownGrades, knownMaterials)];
+  const { shaft } = file;
   const hasDuty = file.duty !== undefined;
-  if (shaft.speed !== undefined && shaft.oscillation !== undefined) {
-    problems.push({ field: 'shaft', message: 'gives both speed and oscillation; expected one of them' });
-  }
-  if (
-    shaft.speed === undefined &&
-    shaft.oscillation === undefined &&
-    !(hasDuty && file.duty!.every((p) => p.speed !== undefined))
-  ) {
-    problems.push({
-      field: 'shaft.speed',
-      message: 'missing; expected a speed such as "1500 rpm", or shaft.oscillation, or a speed on every duty point',
-    });
-  }
-  if (shaft.oscillation && hasDuty && file.duty!.some((p) => p.speed !== undefined)) {
-    problems.push({
-      field: 'duty',
-      message:
-        'operating points give speeds but the shaft oscillates; expected no speed on the points of an oscillating shaft',
-    });
-  }
   const radial = file.load?.radial;
-  if (radial === undefined && !hasDuty) {
-    problems.push({
-      field: 'load.radial',
-      message: 'missing; expected a force such as "3.2 kN" or "720 lbf" (or a duty list)',
-    });
-  }
-  if (hasDuty) {
-    const sum = file.duty!.reduce((s, p) => s + p.share, 0);
-    if (Math.abs(sum - 1) > 0.005) {
-      problems.push({ field: 'duty', message: `shares add up to ${+sum.toFixed(4)}; expected them to add up to 1` });
-    }
-  }
-
   const lub = file.lubrication ?? {};
-  if (lub.oil !== undefined && lub.viscosity !== undefined) {
-    problems.push({ field: 'lubrication', message: 'gives both oil and viscosity; expected one of them' });
-  }
-  if (lub.oil !== undefined && !knownGrades.includes(lub.oil)) {
-    problems.push({
-      field: 'lubrication.oil',
-      message: `got ISO VG ${lub.oil}; expected one of the grades in data/lubricants.json: ${knownGrades.map((g) => `VG ${g}`).join(', ')}`,
-    });
-  }
-  const mat = file.bushing?.material;
-  if (typeof mat === 'string' && !knownMaterials.includes(mat)) {
-    problems.push({
-      field: 'bushing.material',
-      message: `got "${mat}"; expected one of the materials in data/bushing-materials.json: ${knownMaterials.join(', ')}, or an inline material`,
-    });
-  }
-  if (typeof mat === 'object') {
-    const lo = mat.wearFactorLow ?? mat.wearFactor;
-    const hi = mat.wearFactorHigh ?? mat.wearFactor;
-    if (!(lo <= mat.wearFactor && mat.wearFactor <= hi)) {
-      problems.push({
-        field: 'bushing.material',
-        message: 'wear factors out of order; expected wearFactorLow ≤ wearFactor ≤ wearFactorHigh',
-      });
-    }
-  }
-  if (file.journal?.radialClearance !== undefined && file.journal.clearanceRatio !== undefined) {
-    problems.push({ field: 'journal', message: 'gives both radialClearance and clearanceRatio; expected one of them' });
-  }
-  const r = file.rolling;
-  if (r && (r.dynamicRating === undefined) !== (r.staticRating === undefined)) {
-    problems.push({
-      field: 'rolling',
-      message: 'gives only one of dynamicRating and staticRating; expected both supplier ratings or neither',
-    });
-  }
   const d = shaft.diameter;
-  if (file.space.maxOuterDiameter <= d) {
-    problems.push({
-      field: 'space.maxOuterDiameter',
-      message: `got ${fmtMm(file.space.maxOuterDiameter)}, not more than the shaft diameter ${fmtMm(d)}; expected a housing bore larger than the shaft`,
-    });
-  }
 
   const priorities = {} as Record<Priority, number>;
   for (const p of PRIORITIES) {
@@ -188,6 +111,103 @@ export function completeCase(
   if (file.rolling) c.rolling = stripUndefined(file.rolling);
   if (file.journal) c.journal = stripUndefined(file.journal);
   return { case: c, assumed, problems };
+}
+
+/** Problems of the motion and the load: speed or oscillation (not both), a radial load, duty shares adding up to 1. */
+function motionProblems(file: CaseFile): Problem[] {
+  const problems: Problem[] = [];
+  const shaft = file.shaft;
+  const hasDuty = file.duty !== undefined;
+  if (shaft.speed !== undefined && shaft.oscillation !== undefined) {
+    problems.push({ field: 'shaft', message: 'gives both speed and oscillation; expected one of them' });
+  }
+  if (
+    shaft.speed === undefined &&
+    shaft.oscillation === undefined &&
+    !(hasDuty && file.duty!.every((p) => p.speed !== undefined))
+  ) {
+    problems.push({
+      field: 'shaft.speed',
+      message: 'missing; expected a speed such as "1500 rpm", or shaft.oscillation, or a speed on every duty point',
+    });
+  }
+  if (shaft.oscillation && hasDuty && file.duty!.some((p) => p.speed !== undefined)) {
+    problems.push({
+      field: 'duty',
+      message:
+        'operating points give speeds but the shaft oscillates; expected no speed on the points of an oscillating shaft',
+    });
+  }
+  const radial = file.load?.radial;
+  if (radial === undefined && !hasDuty) {
+    problems.push({
+      field: 'load.radial',
+      message: 'missing; expected a force such as "3.2 kN" or "720 lbf" (or a duty list)',
+    });
+  }
+  if (hasDuty) {
+    const sum = file.duty!.reduce((s, p) => s + p.share, 0);
+    if (Math.abs(sum - 1) > 0.005) {
+      problems.push({ field: 'duty', message: `shares add up to ${+sum.toFixed(4)}; expected them to add up to 1` });
+    }
+  }
+
+  return problems;
+}
+
+/**
+ * Problems of the choices a case names: one of oil and viscosity, a known grade and material,
+ * wear factors in order, one form of journal clearance, both supplier ratings or neither, a
+ * housing larger than the shaft.
+ */
+function choiceProblems(file: CaseFile, knownGrades: number[], knownMaterials: string[]): Problem[] {
+  const problems: Problem[] = [];
+  const lub = file.lubrication ?? {};
+  if (lub.oil !== undefined && lub.viscosity !== undefined) {
+    problems.push({ field: 'lubrication', message: 'gives both oil and viscosity; expected one of them' });
+  }
+  if (lub.oil !== undefined && !knownGrades.includes(lub.oil)) {
+    problems.push({
+      field: 'lubrication.oil',
+      message: `got ISO VG ${lub.oil}; expected one of the grades in data/lubricants.json: ${knownGrades.map((g) => `VG ${g}`).join(', ')}`,
+    });
+  }
+  const mat = file.bushing?.material;
+  if (typeof mat === 'string' && !knownMaterials.includes(mat)) {
+    problems.push({
+      field: 'bushing.material',
+      message: `got "${mat}"; expected one of the materials in data/bushing-materials.json: ${knownMaterials.join(', ')}, or an inline material`,
+    });
+  }
+  if (typeof mat === 'object') {
+    const lo = mat.wearFactorLow ?? mat.wearFactor;
+    const hi = mat.wearFactorHigh ?? mat.wearFactor;
+    if (!(lo <= mat.wearFactor && mat.wearFactor <= hi)) {
+      problems.push({
+        field: 'bushing.material',
+        message: 'wear factors out of order; expected wearFactorLow ≤ wearFactor ≤ wearFactorHigh',
+      });
+    }
+  }
+  if (file.journal?.radialClearance !== undefined && file.journal.clearanceRatio !== undefined) {
+    problems.push({ field: 'journal', message: 'gives both radialClearance and clearanceRatio; expected one of them' });
+  }
+  const r = file.rolling;
+  if (r && (r.dynamicRating === undefined) !== (r.staticRating === undefined)) {
+    problems.push({
+      field: 'rolling',
+      message: 'gives only one of dynamicRating and staticRating; expected both supplier ratings or neither',
+    });
+  }
+  const d = file.shaft.diameter;
+  if (file.space.maxOuterDiameter <= d) {
+    problems.push({
+      field: 'space.maxOuterDiameter',
+      message: `got ${fmtMm(file.space.maxOuterDiameter)}, not more than the shaft diameter ${fmtMm(d)}; expected a housing bore larger than the shaft`,
+    });
+  }
+
+  return problems;
 }
 
 function stripUndefined<T extends object>(o: T): T {
