@@ -126,16 +126,40 @@ export function solveReynolds(
   if (!(eps > 0 && eps < 1)) throw new Error(`reynolds: eccentricity ratio must be in (0, 1), got ${eps}`);
   if (!(lengthToDiameter > 0 && Number.isFinite(lengthToDiameter)))
     throw new Error(`reynolds: L/D must be positive and finite, got ${lengthToDiameter}`);
-  const { nTheta: n, nZeta: m, theta, thetaFace } = mesh;
+  const { nTheta: n, nZeta: m } = mesh;
   const omega = opts.omega ?? defaultOmega(mesh, lengthToDiameter);
   const tol = opts.tol ?? PSOR_TOLERANCE;
   const maxIter = opts.maxIter ?? 20000;
   const floor = opts.cavitation === false ? -Infinity : 0;
+  const coeff = stencil(eps, lengthToDiameter, mesh);
+  const p = startField(mesh, opts.initial);
+  for (let iter = 0; iter < maxIter; iter++) {
+    if (sweep(p, coeff, mesh, omega, floor, tol))
+      return { eccentricity: eps, lengthToDiameter, mesh, p, iterations: iter + 1 };
+  }
+  throw new Error(
+    `reynolds: PSOR did not converge in ${maxIter} sweeps (ε = ${eps}, L/D = ${lengthToDiameter}, mesh ${n}×${m})`,
+  );
+}
+
+/** The five-point stencil of row i: east, west and axial weights, 1/(diagonal), and the wedge source 6(h̄f − h̄b). */
+interface Stencil {
+  aE: Float64Array;
+  aW: Float64Array;
+  aZ: Float64Array;
+  inv: Float64Array;
+  b: Float64Array;
+}
+
+/**
+ * Finite-volume coefficients of the dimensionless Reynolds equation [1]: flux weights
+ * h̄³/Δθ at the θ faces and (D/L)²·Δθ·h̄³/Δζ² axially, for eccentricity ratio `eps` and
+ * `lengthToDiameter` L/D. They depend on i only (an aligned bearing: h̄ independent of ζ).
+ */
+function stencil(eps: number, lengthToDiameter: number, mesh: Mesh): Stencil {
+  const { nTheta: n, nZeta: m, theta, thetaFace } = mesh;
   const lambda = 1 / (lengthToDiameter * lengthToDiameter); // (D/L)²
   const dz = 1 / m;
-  const stride = m + 1;
-
-  // Coefficients depend on i only (aligned bearing: h̄ independent of ζ).
   const aE = new Float64Array(n);
   const aW = new Float64Array(n);
   const aZ = new Float64Array(n);
@@ -154,51 +178,59 @@ export function solveReynolds(
     inv[i] = 1 / (e + w + 2 * z);
     b[i] = 6 * (hf - hb);
   }
+  return { aE, aW, aZ, inv, b };
+}
 
+/** The starting pressure field p̄ (row-major, (nθ+1)×(nζ+1)): `initial` when it fits the mesh, else zero; boundary rows zero. */
+function startField(mesh: Mesh, initial: Float64Array | undefined): Float64Array {
+  const { nTheta: n, nZeta: m } = mesh;
+  const stride = m + 1;
   const p = new Float64Array((n + 1) * stride);
-  if (opts.initial && opts.initial.length === p.length) p.set(opts.initial);
+  if (initial && initial.length === p.length) p.set(initial);
   // Boundary rows stay zero: i = 0, i = n (inlet line), j = m (ends).
   for (let j = 0; j <= m; j++) {
     p[j] = 0;
     p[n * stride + j] = 0;
   }
   for (let i = 0; i <= n; i++) p[i * stride + m] = 0;
+  return p;
+}
 
-  let iter = 0;
-  for (; iter < maxIter; iter++) {
-    let maxDelta = 0;
-    let maxP = 0;
-    for (let i = 1; i < n; i++) {
-      const e = aE[i]!;
-      const w = aW[i]!;
-      const z = aZ[i]!;
-      const d = inv[i]!;
-      const bi = b[i]!;
-      const row = i * stride;
-      const rowE = row + stride;
-      const rowW = row - stride;
-      for (let j = 0; j < m; j++) {
-        const k = row + j;
-        const south = j === 0 ? p[k + 1]! : p[k - 1]!; // symmetry ghost at mid-length
-        const gs = (e * p[rowE + j]! + w * p[rowW + j]! + z * (p[k + 1]! + south) - bi) * d;
-        const old = p[k]!;
-        let v = old + omega * (gs - old);
-        if (v < floor) v = floor;
-        p[k] = v;
-        const dv = v > old ? v - old : old - v;
-        if (dv > maxDelta) maxDelta = dv;
-        if (v > maxP) maxP = v;
-        else if (-v > maxP) maxP = -v;
-      }
-    }
-    if (maxP > 0 && maxDelta <= tol * maxP) {
-      iter++;
-      return { eccentricity: eps, lengthToDiameter, mesh, p, iterations: iter };
+/**
+ * One projected SOR sweep over the interior of `p`, in place: Gauss–Seidel value, relaxed by
+ * `omega`, held at or above `floor` (0: Swift–Stieber cavitation; −∞: none), a symmetry ghost
+ * at mid-length. True when the largest change is within `tol` of the largest pressure.
+ */
+function sweep(p: Float64Array, coeff: Stencil, mesh: Mesh, omega: number, floor: number, tol: number): boolean {
+  const { nTheta: n, nZeta: m } = mesh;
+  const { aE, aW, aZ, inv, b } = coeff;
+  const stride = m + 1;
+  let maxDelta = 0;
+  let maxP = 0;
+  for (let i = 1; i < n; i++) {
+    const e = aE[i]!;
+    const w = aW[i]!;
+    const z = aZ[i]!;
+    const d = inv[i]!;
+    const bi = b[i]!;
+    const row = i * stride;
+    const rowE = row + stride;
+    const rowW = row - stride;
+    for (let j = 0; j < m; j++) {
+      const k = row + j;
+      const south = j === 0 ? p[k + 1]! : p[k - 1]!; // symmetry ghost at mid-length
+      const gs = (e * p[rowE + j]! + w * p[rowW + j]! + z * (p[k + 1]! + south) - bi) * d;
+      const old = p[k]!;
+      let v = old + omega * (gs - old);
+      if (v < floor) v = floor;
+      p[k] = v;
+      const dv = v > old ? v - old : old - v;
+      if (dv > maxDelta) maxDelta = dv;
+      if (v > maxP) maxP = v;
+      else if (-v > maxP) maxP = -v;
     }
   }
-  throw new Error(
-    `reynolds: PSOR did not converge in ${maxIter} sweeps (ε = ${eps}, L/D = ${lengthToDiameter}, mesh ${n}×${m})`,
-  );
+  return maxP > 0 && maxDelta <= tol * maxP;
 }
 
 /**
@@ -218,7 +250,40 @@ export function solveReynolds(
  * located by a parabola through the three highest mid-plane nodes.
  */
 export function performance(sol: FilmSolution): DimensionlessPerformance {
-  const { mesh, p, eccentricity: eps, lengthToDiameter } = sol;
+  const { eccentricity: eps, lengthToDiameter } = sol;
+  const { wr, wt, wbar, frictionVariable, frictionVariableFilm } = loadAndFriction(sol);
+  const flowVariable = inletFlow(sol);
+  const peak = pressurePeak(sol);
+  const deg = 180 / Math.PI;
+  return {
+    eccentricity: eps,
+    lengthToDiameter,
+    sommerfeld: 2 / (Math.PI * wbar),
+    attitudeDeg: (Math.atan2(wt, wr) * 180) / Math.PI,
+    frictionVariable,
+    frictionVariableFilm,
+    flowVariable,
+    sideFlowRatio: sideFlow(sol) / flowVariable,
+    pressureRatio: wbar / (4 * peak.pMax),
+    peakAngleDeg: peak.theta * deg,
+    filmEndDeg: filmEnd(sol, peak.node) * deg,
+    loadRadial: wr,
+    loadTangential: wt,
+  };
+}
+
+/**
+ * Load components W̄r, W̄t, W̄ and the friction variable (r/c)f, over the whole film and
+ * over its unruptured part only (frictionVariableFilm), from the integrals of performance().
+ */
+function loadAndFriction(sol: FilmSolution): {
+  wr: number;
+  wt: number;
+  wbar: number;
+  frictionVariable: number;
+  frictionVariableFilm: number;
+} {
+  const { mesh, p, eccentricity: eps } = sol;
   const { nTheta: n, nZeta: m, theta, thetaFace, wTheta, wZeta } = mesh;
   const stride = m + 1;
   let sr = 0;
@@ -250,8 +315,6 @@ export function performance(sol: FilmSolution): DimensionlessPerformance {
   const wr = -2 * sr;
   const wt = 2 * st;
   const wbar = Math.hypot(wr, wt);
-  const sommerfeld = 2 / (Math.PI * wbar);
-  const attitudeDeg = (Math.atan2(wt, wr) * 180) / Math.PI;
   const couette = (4 * Math.PI) / Math.sqrt(1 - eps * eps);
   const frictionVariable = (couette + 2 * poiseuille) / wbar;
   // Film fraction: the pressure mid-plane nodes at the ends are zero by the boundary
@@ -262,8 +325,14 @@ export function performance(sol: FilmSolution): DimensionlessPerformance {
     if (p[i * stride + m - 1]! > 0) couetteFilmFix += (wTheta[i]! * wZeta[m]!) / h;
   }
   const frictionVariableFilm = (2 * (couetteFilm + couetteFilmFix) + 2 * poiseuille) / wbar;
+  return { wr, wt, wbar, frictionVariable, frictionVariableFilm };
+}
 
-  // Inlet flow: ∂p̄/∂θ at θ = 0+ from the quadratic through (0,0), (θ1,p1), (θ2,p2).
+/** Inlet flow variable Q/(rcNL): ∂p̄/∂θ at θ = 0+ from the quadratic through (0,0), (θ1,p1), (θ2,p2). */
+function inletFlow(sol: FilmSolution): number {
+  const { mesh, p, eccentricity: eps } = sol;
+  const { nZeta: m, theta, wZeta } = mesh;
+  const stride = m + 1;
   const t1 = theta[1]!;
   const t2 = theta[2]!;
   const h0 = 1 + eps;
@@ -274,9 +343,14 @@ export function performance(sol: FilmSolution): DimensionlessPerformance {
     const g = (p1 * t2 * t2 - p2 * t1 * t1) / (t1 * t2 * (t2 - t1));
     inflow += wZeta[j]! * (h0 / 2 - (h0 * h0 * h0 * g) / 12);
   }
-  const flowVariable = 2 * Math.PI * inflow; // π ∫_{-1}^{1} = 2π ∫_0^1
+  return 2 * Math.PI * inflow; // π ∫_{-1}^{1} = 2π ∫_0^1
+}
 
-  // Side flow through both ends: ∂p̄/∂ζ at ζ = 1 by the backward second-order difference.
+/** Side flow variable Qs/(rcNL) through both ends: ∂p̄/∂ζ at ζ = 1 by the backward second-order difference. */
+function sideFlow(sol: FilmSolution): number {
+  const { mesh, p, eccentricity: eps, lengthToDiameter } = sol;
+  const { nTheta: n, nZeta: m, theta, wTheta } = mesh;
+  const stride = m + 1;
   const dz = 1 / m;
   let side = 0;
   for (let i = 0; i <= n; i++) {
@@ -286,9 +360,17 @@ export function performance(sol: FilmSolution): DimensionlessPerformance {
     const g = (-4 * a + bb) / (2 * dz);
     side += wTheta[i]! * h * h * h * g;
   }
-  const sideFlow = (-Math.PI / 6) * (1 / (lengthToDiameter * lengthToDiameter)) * side;
+  return (-Math.PI / 6) * (1 / (lengthToDiameter * lengthToDiameter)) * side;
+}
 
-  // Peak at mid-plane (j = 0), refined by a parabola through the highest node and its neighbours.
+/**
+ * Peak pressure p̄max at mid-plane (j = 0) and its angle θ, rad, refined by a parabola through
+ * the highest node and its neighbours; `node` is the highest node's index i.
+ */
+function pressurePeak(sol: FilmSolution): { pMax: number; theta: number; node: number } {
+  const { mesh, p } = sol;
+  const { nTheta: n, nZeta: m, theta } = mesh;
+  const stride = m + 1;
   let iMax = 1;
   for (let i = 1; i < n; i++) if (p[i * stride]! > p[iMax * stride]!) iMax = i;
   let pMax = p[iMax * stride]!;
@@ -313,32 +395,22 @@ export function performance(sol: FilmSolution): DimensionlessPerformance {
       }
     }
   }
-  // Film end at mid-plane: first zero after the peak, linear between the last full node and it.
-  let filmEnd = 2 * Math.PI;
-  for (let i = iMax + 1; i <= n; i++) {
-    if (p[i * stride]! <= 0) {
-      // The pressure leaves zero with zero slope (Swift–Stieber): place the end one
-      // half interval past the last full node, a first-order estimate.
-      filmEnd = (theta[i - 1]! + theta[i]!) / 2;
-      break;
-    }
+  return { pMax, theta: peakTheta, node: iMax };
+}
+
+/**
+ * Film end at mid-plane, rad: the first zero after the peak node `peakNode`. The pressure
+ * leaves zero with zero slope (Swift–Stieber): the end is placed one half interval past the
+ * last full node, a first-order estimate; 2π when the film never ruptures.
+ */
+function filmEnd(sol: FilmSolution, peakNode: number): number {
+  const { mesh, p } = sol;
+  const { nTheta: n, nZeta: m, theta } = mesh;
+  const stride = m + 1;
+  for (let i = peakNode + 1; i <= n; i++) {
+    if (p[i * stride]! <= 0) return (theta[i - 1]! + theta[i]!) / 2;
   }
-  const deg = 180 / Math.PI;
-  return {
-    eccentricity: eps,
-    lengthToDiameter,
-    sommerfeld,
-    attitudeDeg,
-    frictionVariable,
-    frictionVariableFilm,
-    flowVariable,
-    sideFlowRatio: sideFlow / flowVariable,
-    pressureRatio: wbar / (4 * pMax),
-    peakAngleDeg: peakTheta * deg,
-    filmEndDeg: filmEnd * deg,
-    loadRadial: wr,
-    loadTangential: wt,
-  };
+  return 2 * Math.PI;
 }
 
 /** Solve and reduce in one call. */
