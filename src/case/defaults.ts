@@ -1,3 +1,4 @@
+import { num } from '../core/format.js';
 import type { Problem } from '../core/errors.js';
 import type { Assumption, CaseSI, Priority } from './types.js';
 import type { CaseFile } from './schema.js';
@@ -215,5 +216,5 @@ function stripUndefined<T extends object>(o: T): T {
 }
 
 function fmtMm(m: number): string {
-  return `${+(m * 1000).toPrecision(4)} mm`;
+  return `${num(m * 1000)} mm`;
 }

@@ -1,4 +1,5 @@
 import { CaseError } from '../core/errors.js';
+import { num } from '../core/format.js';
 import { readFileSync, statSync } from 'node:fs';
 import { parse as parseYaml, YAMLParseError } from 'yaml';
 import { caseFileSchema } from './schema.js';
@@ -114,7 +115,7 @@ export function validateCase(raw: unknown, source = '(case)'): LoadedCase {
   if (typeof visc === 'string' && /St\b|m\^?2\/s/.test(visc)) {
     done.assumed.push({
       field: 'lubrication.viscosity',
-      value: `${visc} read as ${+(done.case.lubrication.viscosity! * 1000).toPrecision(4)} mPa*s`,
+      value: `${visc} read as ${num(done.case.lubrication.viscosity! * 1000)} mPa*s`,
       reason: `a kinematic viscosity is made dynamic with a density of ${KINEMATIC_TO_DYNAMIC_DENSITY} kg/m^3 (typical mineral oil near 40 degC, from memory); give Pa*s to avoid it`,
     });
   }

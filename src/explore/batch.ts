@@ -1,3 +1,4 @@
+import { num } from '../core/format.js';
 import { OPTIONS } from '../core/options.js';
 import { CaseError } from '../core/errors.js';
 import { readdirSync, statSync } from 'node:fs';
@@ -37,7 +38,7 @@ export function caseFiles(dir: string): string[] {
     .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
 }
 
-const mm = (m: unknown) => (typeof m === 'number' ? `${+(m * 1e3).toPrecision(4)} mm` : '');
+const mm = (m: unknown) => (typeof m === 'number' ? `${num(m * 1e3)} mm` : '');
 
 /** The winner's design in words, e.g. "sintered-bronze, L 40 mm" or "6208". */
 function designText(a: AdviceResult): string {
@@ -50,7 +51,7 @@ function designText(a: AdviceResult): string {
     case 'rolling':
       return `${d['designation'] ?? d['bearing']}${d['ratingSource'] ? ` (ratings: ${d['ratingSource']})` : ''}`;
     case 'journal':
-      return `L ${mm(d['length'])}, c ${typeof d['radialClearance'] === 'number' ? `${+(d['radialClearance'] * 1e6).toPrecision(3)} µm` : ''}, ${d['oil']}`;
+      return `L ${mm(d['length'])}, c ${typeof d['radialClearance'] === 'number' ? `${num(d['radialClearance'] * 1e6, 3)} µm` : ''}, ${d['oil']}`;
   }
 }
 

@@ -1,3 +1,4 @@
+import { num } from '../core/format.js';
 import { governingMargin } from '../core/check.js';
 import type { CaseSI } from '../case/types.js';
 import { checkJournal, type JournalResult } from '../calc/journal/index.js';
@@ -15,8 +16,8 @@ export interface JournalDesign {
   label: string;
 }
 
-const mm = (m: number) => `${+(m * 1e3).toPrecision(3)} mm`;
-const um = (m: number) => `${+(m * 1e6).toPrecision(3)} µm`;
+const mm = (m: number) => `${num(m * 1e3, 3)} mm`;
+const um = (m: number) => `${num(m * 1e6, 3)} µm`;
 
 /** The design a journal check found (or the one the case fixed). */
 export function designOf(r: JournalResult, c: CaseSI): JournalDesign {
