@@ -15,10 +15,11 @@ export const median = (t) => [...t].sort((x, y) => x - y)[Math.floor(t.length / 
 
 /**
  * Time each entry of `commands` ({ name, args, ok? }) over `runs` interleaved rounds, after one
- * warm-up round. Returns { name: { median, fastest, all } }.
+ * warm-up round (`warmup: false` when the caller has just run each command itself).
+ * Returns { name: { median, fastest, all } }.
  */
-export function interleaved(commands, runs, cwd) {
-  for (const c of commands) once(c.args, { cwd, ok: c.ok });
+export function interleaved(commands, runs, cwd, { warmup = true } = {}) {
+  if (warmup) for (const c of commands) once(c.args, { cwd, ok: c.ok });
   const times = commands.map(() => []);
   for (let i = 0; i < runs; i++) commands.forEach((c, k) => times[k].push(once(c.args, { cwd, ok: c.ok })));
   return Object.fromEntries(

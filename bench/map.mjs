@@ -1,8 +1,9 @@
 // Selection-map benchmark (run on demand, not part of the test suite). Build first: npm run build
-// Usage: node bench/map.mjs [runs] [case]
+// Usage: node bench/map.mjs [runs] [case] [--quick]
 // Prints: whole-process time of a 60×60 map (SVG out) against bare `node -e 0`, per-point
 // costs of each part in-process, and the agreement of the map's winners with full advise()
-// (journal design sweep at every point) on a 12×12 sub-grid.
+// (journal design sweep at every point) on a 12×12 sub-grid. --quick: a 30×30 map, per-point
+// costs over 10×10 points instead of 20×20, agreement on a 6×6 sub-grid.
 import { interleaved } from './lib.mjs';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -19,8 +20,13 @@ import { ruleRunner } from '../dist/explore/rule-runner.js';
 import { checkDesign, designOf } from '../dist/explore/journal-design.js';
 import { scaleCase } from '../dist/explore/scale.js';
 
-const runs = Number(process.argv[2] ?? 5) || 5;
-const file = process.argv[3] ?? 'examples/irrigation-pump-lineshaft.yaml';
+const quick = process.argv.includes('--quick');
+const [runsArg, fileArg] = process.argv.slice(2).filter((a) => !a.startsWith('--'));
+const runs = Number(runsArg ?? 5) || 5;
+const file = fileArg ?? 'examples/irrigation-pump-lineshaft.yaml';
+const grid = quick ? 30 : 60; // the map
+const side = quick ? 10 : 20; // per-point grid
+const sub = quick ? 6 : 12; // agreement sub-grid
 const root = fileURLToPath(new URL('..', import.meta.url));
 const main = join(root, 'dist/bundle/shaftwise.mjs');
 const out = mkdtempSync(join(tmpdir(), 'shaftwise-bench-'));
@@ -28,19 +34,20 @@ const out = mkdtempSync(join(tmpdir(), 'shaftwise-bench-'));
 const w = interleaved(
   [
     { name: 'bare', args: ['-e', '0'] },
-    { name: 'map', args: [main, 'map', file, '--grid', '60', '--out', join(out, 'm.svg'), '--force'] },
+    { name: 'map', args: [main, 'map', file, '--grid', String(grid), '--out', join(out, 'm.svg'), '--force'] },
     { name: 'advise', args: [main, 'advise', file] },
   ],
   runs,
   root,
 );
 const bare = w.bare.median;
-const map60 = w.map.median;
+const mapMs = w.map.median;
 const adv = w.advise.median;
 console.log(`== whole process, median of ${runs} interleaved rounds ==`);
 console.log(`node -e 0:                 ${bare.toFixed(0)} ms`);
 console.log(`shaftwise advise:          ${adv.toFixed(0)} ms  (${(adv / bare).toFixed(1)}x)`);
-console.log(`shaftwise map --grid 60:   ${map60.toFixed(0)} ms  (${(map60 / bare).toFixed(1)}x; budget 3000 ms)`);
+const budget = grid === 60 ? '; budget 3000 ms' : '';
+console.log(`shaftwise map --grid ${grid}:   ${mapMs.toFixed(0)} ms  (${(mapMs / bare).toFixed(1)}x${budget})`);
 
 // Per-point costs, in-process, warm.
 const l = loadCaseFile(join(root, file));
@@ -48,8 +55,8 @@ const c = l.case;
 const rules = loadRules();
 const now = () => performance.now();
 const pts = [];
-for (let i = 0; i < 20; i++)
-  for (let j = 0; j < 20; j++) pts.push(scaleCase(c, 0.1 * 100 ** (i / 19), 0.1 * 100 ** (j / 19)));
+for (let i = 0; i < side; i++)
+  for (let j = 0; j < side; j++) pts.push(scaleCase(c, 0.1 * 100 ** (i / (side - 1)), 0.1 * 100 ** (j / (side - 1))));
 const per = (label, f) => {
   for (const p of pts.slice(0, 50)) f(p);
   const t = now();
@@ -84,29 +91,29 @@ await perAsync('advise, reused Engine + memo (checks given)', (p) =>
 console.log(`memo: ${memo.stats.runs} engine runs, ${memo.stats.hits} hits`);
 await perAsync('advise, full (what a naive map would do)', (p) => advise(p, [], rules));
 
-// In-process 60x60 and agreement with full advise on a 12x12 sub-grid.
+// In-process map and agreement with full advise on a 12x12 (quick: 6x6) sub-grid.
 let t = now();
-const m = await computeMap(c, l.assumed, { grid: 60 });
+const m = await computeMap(c, l.assumed, { grid });
 console.log(
-  `\n== computeMap 60x60 in-process (warm tables): ${(now() - t).toFixed(0)} ms, ${m.journal.designs.length} journal designs ==`,
+  `\n== computeMap ${grid}x${grid} in-process (warm tables): ${(now() - t).toFixed(0)} ms, ${m.journal.designs.length} journal designs ==`,
 );
 t = now();
-const m12 = await computeMap(c, l.assumed, { grid: 12 });
+const msub = await computeMap(c, l.assumed, { grid: sub });
 let same = 0;
 const differ = [];
-for (let i = 0; i < 12; i++)
-  for (let j = 0; j < 12; j++) {
+for (let i = 0; i < sub; i++)
+  for (let j = 0; j < sub; j++) {
     const a = await advise(
-      scaleCase(c, m12.loads[i] / m12.reference.load, m12.speeds[j] / m12.reference.speed),
+      scaleCase(c, msub.loads[i] / msub.reference.load, msub.speeds[j] / msub.reference.speed),
       [],
       rules,
     );
-    if (a.recommendation === m12.cells[i][j].winner) same++;
+    if (a.recommendation === msub.cells[i][j].winner) same++;
     else
       differ.push(
-        `${Math.round(m12.loads[i])} N ${Math.round(m12.speeds[j] * 60)} r/min: map ${m12.cells[i][j].winner}, full ${a.recommendation}`,
+        `${Math.round(msub.loads[i])} N ${Math.round(msub.speeds[j] * 60)} r/min: map ${msub.cells[i][j].winner}, full ${a.recommendation}`,
       );
   }
-console.log(`agreement with full advise() on 12x12: ${same}/144 cells (${(now() - t).toFixed(0)} ms)`);
+console.log(`agreement with full advise() on ${sub}x${sub}: ${same}/${sub * sub} cells (${(now() - t).toFixed(0)} ms)`);
 for (const x of differ) console.log(`  differs: ${x}`);
 rmSync(out, { recursive: true, force: true });
