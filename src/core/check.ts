@@ -35,18 +35,18 @@ export interface CheckRecord {
 }
 
 /** Mark a check as advice: it is reported but does not gate feasibility. */
-export function advisory(k: CheckRecord): CheckRecord {
+export function advisory(record: CheckRecord): CheckRecord {
   // Written out field by field: one fixed object shape is several times faster than a spread in sweeps.
   return {
-    id: k.id,
-    label: k.label,
-    value: k.value,
-    limit: k.limit,
-    unit: k.unit,
-    margin: k.margin,
-    pass: k.pass,
-    source: k.source,
-    sense: k.sense,
+    id: record.id,
+    label: record.label,
+    value: record.value,
+    limit: record.limit,
+    unit: record.unit,
+    margin: record.margin,
+    pass: record.pass,
+    source: record.source,
+    sense: record.sense,
     advisory: true,
   };
 }

@@ -20,15 +20,15 @@ import type { CandidateFigures, EvalContext } from './context.js';
 const LOAD_RATIO_MAX = 0.5;
 
 /** Checks of what the bearing carries [1, 2]: L10mh ≥ target, κ ≥ 0.1, P/C ≤ 0.5, s0, Fa/C0 in the X/Y table. */
-function loadChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): CheckRecord[] {
+function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
   const checks: CheckRecord[] = [];
-  if (fig.L10mh !== null && x.c.life.hours > 0) {
+  if (fig.L10mh !== null && ctx.c.life.hours > 0) {
     checks.push(
       makeCheck(
         'rolling-life',
         'modified rating life L10mh',
         fig.L10mh,
-        x.c.life.hours,
+        ctx.c.life.hours,
         'h',
         'min',
         'ISO 281:2007, modified rating life L10m = a1·a_ISO·L10 (cl. 9, from memory); target from the case',
@@ -53,7 +53,7 @@ function loadChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): Ch
       makeCheck(
         'load-ratio',
         'dynamic equivalent load P/C',
-        fig.P / s.C,
+        fig.P / spec.C,
         LOAD_RATIO_MAX,
         '1',
         'max',
@@ -65,17 +65,17 @@ function loadChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): Ch
     checks.push(
       makeCheck(
         'static-safety',
-        `static safety s0 = C0/P0 (${x.s0Row.guidance})`,
+        `static safety s0 = C0/P0 (${ctx.s0Row.guidance})`,
         fig.s0,
-        s.type === 'ball' ? x.s0Row.ball : x.s0Row.roller,
+        spec.type === 'ball' ? ctx.s0Row.ball : ctx.s0Row.roller,
         '1',
         'min',
-        `ISO 76 s0 = C0/P0; limit: ${x.s0Row.source}`,
+        `ISO 76 s0 = C0/P0; limit: ${ctx.s0Row.source}`,
       ),
     );
   }
-  const table = x.f.xyDeepGrooveBall;
-  const faC0 = s.type === 'ball' ? x.points.reduce((m, q) => Math.max(m, q.Fa / s.C0), 0) : 0;
+  const table = ctx.f.xyDeepGrooveBall;
+  const faC0 = spec.type === 'ball' ? ctx.points.reduce((m, q) => Math.max(m, q.Fa / spec.C0), 0) : 0;
   if (faC0 > 0) {
     checks.push(
       makeCheck(
@@ -93,10 +93,10 @@ function loadChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): Ch
 }
 
 /** Checks of what the surroundings allow [2]: n·dm for the supply, outside diameter and width, grease life of a sealed bearing. */
-function fitChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): CheckRecord[] {
+function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
   const checks: CheckRecord[] = [];
-  const { c, f, lubrication } = x;
-  const lim = f.speedLimits.find((l) => l.type === s.type && l.supply === lubrication.supply);
+  const { c, f, lubrication } = ctx;
+  const lim = f.speedLimits.find((l) => l.type === spec.type && l.supply === lubrication.supply);
   if (fig.ndm > 0 && lim) {
     checks.push(
       makeCheck(
@@ -111,12 +111,12 @@ function fitChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): Che
     );
   }
   const spaceSource = 'case space; bearing dimensions ISO 15 (from memory) or supplier';
-  if (s.outerDiameter !== null && c.space.maxOuterDiameter > 0) {
+  if (spec.outerDiameter !== null && c.space.maxOuterDiameter > 0) {
     checks.push(
       makeCheck(
         'space-outer-diameter',
         'bearing outside diameter against the housing room',
-        s.outerDiameter,
+        spec.outerDiameter,
         c.space.maxOuterDiameter,
         'm',
         'max',
@@ -124,12 +124,12 @@ function fitChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): Che
       ),
     );
   }
-  if (s.width !== null && c.space.maxLength > 0) {
+  if (spec.width !== null && c.space.maxLength > 0) {
     checks.push(
       makeCheck(
         'space-width',
         'bearing width against the axial room',
-        s.width,
+        spec.width,
         c.space.maxLength,
         'm',
         'max',
@@ -146,7 +146,7 @@ function fitChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): Che
         c.life.hours,
         'h',
         'min',
-        f.relubrication.find((q) => q.type === s.type)!.source,
+        f.relubrication.find((q) => q.type === spec.type)!.source,
       ),
     );
   }
@@ -154,6 +154,6 @@ function fitChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): Che
 }
 
 /** Every check of one candidate, in a fixed order: what it carries, then what its surroundings allow. */
-export function candidateChecks(s: CandidateSpec, fig: CandidateFigures, x: EvalContext): CheckRecord[] {
-  return [...loadChecks(s, fig, x), ...fitChecks(s, fig, x)];
+export function candidateChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
+  return [...loadChecks(spec, fig, ctx), ...fitChecks(spec, fig, ctx)];
 }

@@ -37,20 +37,20 @@ type PointLoad = DynamicLoadResult & { Pf: number } & LoadPoint;
  * A point the method cannot rate excludes the bearing (its reason kept once).
  */
 function pointLoads(
-  s: CandidateSpec,
-  x: EvalContext,
+  spec: CandidateSpec,
+  ctx: EvalContext,
   notes: Notes,
 ): { per: PointLoad[]; exclusions: Finding[]; heaviest: PointLoad; P: number; n: number } {
-  const table = x.f.xyDeepGrooveBall;
+  const table = ctx.f.xyDeepGrooveBall;
   const exclusions: Finding[] = [];
   // Reasons are told apart as they read (the load kernel's own sentence), as they always were.
   const excludedFor = new Set<string>();
-  const per = x.points.map((q): PointLoad => {
-    const r = dynamicEquivalentLoad(s.type, q.Fr, q.Fa, s.C0, table);
+  const per = ctx.points.map((q): PointLoad => {
+    const r = dynamicEquivalentLoad(spec.type, q.Fr, q.Fa, spec.C0, table);
     if (r.exclusion && !excludedFor.has(r.exclusion)) {
       excludedFor.add(r.exclusion);
       exclusions.push(
-        s.type === 'ball'
+        spec.type === 'ball'
           ? finding('rolling.axial-beyond-table', { faC0: r.faC0, lastRow: table.rows[table.rows.length - 1]!.faC0 })
           : finding('rolling.roller-axial-load', { axial: q.Fa }),
       );
@@ -58,19 +58,19 @@ function pointLoads(
     if (r.range === 'below' && r.faC0 !== null && r.faC0 > 0 && r.Y > 0) {
       notes.warn(
         finding('rolling.fa-c0-below-table', {
-          designation: s.designation,
+          designation: spec.designation,
           faC0: r.faC0,
           firstRow: table.rows[0]!.faC0,
         }),
-        `${s.designation} ${r.faC0.toFixed(4)}`,
+        `${spec.designation} ${r.faC0.toFixed(4)}`,
       );
     }
-    return { ...r, Pf: x.serviceFactor * r.P, n: q.n, t: q.t, Fr: q.Fr, Fa: q.Fa };
+    return { ...r, Pf: ctx.serviceFactor * r.P, n: q.n, t: q.t, Fr: q.Fr, Fa: q.Fa };
   });
   const heaviest = per.reduce((a, b) => (b.Pf > a.Pf ? b : a), per[0]!);
   const mean = spectrumMean(
     per.map((q) => ({ P: q.Pf, n: q.n, t: q.t })),
-    lifeExponent(s.type),
+    lifeExponent(spec.type),
   );
   return { per, exclusions, heaviest, P: mean.P, n: mean.n };
 }
@@ -80,31 +80,31 @@ function pointLoads(
  * viscosity ν1 and κ = ν/ν1, a_ISO(κ, e_C·Cu/P) and L10mh = a1·a_ISO·L10h (h). Where κ or
  * a_ISO leave the method's range, it is said.
  */
-function lives(s: CandidateSpec, x: EvalContext, P: number, n: number, notes: Notes) {
-  const L10 = basicRatingLife(s.C, P, lifeExponent(s.type));
+function lives(spec: CandidateSpec, ctx: EvalContext, P: number, n: number, notes: Notes) {
+  const L10 = basicRatingLife(spec.C, P, lifeExponent(spec.type));
   const L10h = L10 !== null ? lifeHours(L10, n) : null;
-  const nu1 = ratedViscosity(n, s.dm);
-  const kappa = nu1 !== null ? x.lubrication.viscosity / nu1 : null;
+  const nu1 = ratedViscosity(n, spec.dm);
+  const kappa = nu1 !== null ? ctx.lubrication.viscosity / nu1 : null;
   let aISO: number | null = null;
   if (kappa !== null && P > 0) {
-    const a = aIso(s.type, kappa, (x.cont.eC * s.Cu) / P);
+    const a = aIso(spec.type, kappa, (ctx.cont.eC * spec.Cu) / P);
     aISO = a.aISO;
-    const designation = s.designation;
+    const designation = spec.designation;
     if (a.kappaRange === 'above')
       notes.warn(finding('rolling.kappa-above-range', { designation, kappa, kappaMax: KAPPA_MAX }));
     if (a.kappaRange === 'below')
       notes.warn(finding('rolling.kappa-below-range', { designation, kappa, kappaMin: KAPPA_MIN }));
     if (a.capped) notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }));
   }
-  if (s.dm >= EC_GUIDANCE_DM)
+  if (spec.dm >= EC_GUIDANCE_DM)
     notes.warn(
       finding('rolling.pitch-diameter-large', {
-        designation: s.designation,
-        pitchDiameter: s.dm,
+        designation: spec.designation,
+        pitchDiameter: spec.dm,
         guidanceBelow: EC_GUIDANCE_DM,
       }),
     );
-  const L10mh = L10h !== null && aISO !== null ? x.a1 * aISO * L10h : null;
+  const L10mh = L10h !== null && aISO !== null ? ctx.a1 * aISO * L10h : null;
   return { L10, L10h, nu1, kappa, aISO, L10mh };
 }
 
@@ -113,14 +113,14 @@ function lives(s: CandidateSpec, x: EvalContext, P: number, n: number, notes: No
  * duty of the friction torque Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W), with
  * Mi = μ·Pi·d/2 and Pi without f_d; on grease, the interval t_f (h) at the highest speed.
  */
-function running(s: CandidateSpec, x: EvalContext, per: PointLoad[], notes: Notes) {
-  const ndm = speedFactor(x.maxSpeed, s.dm);
-  const mu = x.f.friction.find((q) => q.type === s.type)!.mu;
+function running(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: Notes) {
+  const ndm = speedFactor(ctx.maxSpeed, spec.dm);
+  const mu = ctx.f.friction.find((q) => q.type === spec.type)!.mu;
   let sumT = 0;
   let sumM = 0;
   let sumW = 0;
   for (const q of per) {
-    const M = frictionTorque(mu, q.P, s.bore);
+    const M = frictionTorque(mu, q.P, spec.bore);
     sumT += q.t;
     sumM += q.t * M;
     sumW += q.t * frictionPower(M, q.n);
@@ -128,10 +128,11 @@ function running(s: CandidateSpec, x: EvalContext, per: PointLoad[], notes: Note
   const torque = sumT > 0 ? sumM / sumT : 0;
   const power = sumT > 0 ? sumW / sumT : 0;
   let relub: number | null = null;
-  if (x.lubrication.supply === 'grease') {
-    const kf = x.f.relubrication.find((q) => q.type === s.type)!.kf;
-    relub = relubricationInterval(x.maxSpeed, s.bore, kf, x.lubrication.temperature);
-    if (relub === 0) notes.warn(finding('rolling.grease-too-fast', { designation: s.designation, speed: x.maxSpeed }));
+  if (ctx.lubrication.supply === 'grease') {
+    const kf = ctx.f.relubrication.find((q) => q.type === spec.type)!.kf;
+    relub = relubricationInterval(ctx.maxSpeed, spec.bore, kf, ctx.lubrication.temperature);
+    if (relub === 0)
+      notes.warn(finding('rolling.grease-too-fast', { designation: spec.designation, speed: ctx.maxSpeed }));
   }
   return { ndm, torque, power, relub };
 }
@@ -141,16 +142,16 @@ function running(s: CandidateSpec, x: EvalContext, per: PointLoad[], notes: Note
  * 720°/(Z·(1 − Dw/dm)) (rad) [3]; a smaller swing is said (false brinelling). Null when the
  * shaft rotates.
  */
-function swingAngle(s: CandidateSpec, c: CaseSI, notes: Notes): number | null {
+function swingAngle(spec: CandidateSpec, c: CaseSI, notes: Notes): number | null {
   if (!c.shaft.oscillation) return null;
-  const swing = criticalSwingAngle(s.Z, s.Dw, s.dm);
+  const swing = criticalSwingAngle(spec.Z, spec.Dw, spec.dm);
   if (c.shaft.oscillation.angle < swing) {
     notes.warn(
       finding('rolling.swing-too-small', {
-        designation: s.designation,
+        designation: spec.designation,
         swing: c.shaft.oscillation.angle,
         fullOverlapSwing: swing,
-        elements: s.Z,
+        elements: spec.Z,
       }),
     );
   }
@@ -162,15 +163,15 @@ function swingAngle(s: CandidateSpec, c: CaseSI, notes: Notes): number | null {
  * checks. It is feasible when nothing excludes it and every check passes. Static safety
  * s0 = C0/P0 uses the peak static equivalent load P0 over the points, without f_d [2].
  */
-export function evaluate(s: CandidateSpec, x: EvalContext, notes: Notes): RollingCandidate {
-  const loads = pointLoads(s, x, notes);
-  const life = lives(s, x, loads.P, loads.n, notes);
-  const P0 = x.points.reduce((m, q) => Math.max(m, staticEquivalentLoad(s.type, q.Fr, q.Fa)), 0);
-  const s0 = P0 > 0 ? s.C0 / P0 : null;
-  const run = running(s, x, loads.per, notes);
-  const swing = swingAngle(s, x.c, notes);
+export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): RollingCandidate {
+  const loads = pointLoads(spec, ctx, notes);
+  const life = lives(spec, ctx, loads.P, loads.n, notes);
+  const P0 = ctx.points.reduce((m, q) => Math.max(m, staticEquivalentLoad(spec.type, q.Fr, q.Fa)), 0);
+  const s0 = P0 > 0 ? spec.C0 / P0 : null;
+  const run = running(spec, ctx, loads.per, notes);
+  const swing = swingAngle(spec, ctx.c, notes);
   const checks = candidateChecks(
-    s,
+    spec,
     {
       P: loads.P,
       L10: life.L10,
@@ -180,31 +181,31 @@ export function evaluate(s: CandidateSpec, x: EvalContext, notes: Notes): Rollin
       ndm: run.ndm,
       relubricationHours: run.relub,
     },
-    x,
+    ctx,
   );
   return {
-    id: s.id,
-    type: s.type,
-    kind: s.kind,
-    series: s.series,
-    designation: s.designation,
-    bore: s.bore,
-    outerDiameter: s.outerDiameter,
-    width: s.width,
-    dynamicRating: s.C,
-    staticRating: s.C0,
-    fatigueLimit: s.Cu,
-    ratingSource: s.ratingSource,
-    pitchDiameter: s.dm,
-    elementDiameter: s.Dw,
-    elementCount: s.Z,
+    id: spec.id,
+    type: spec.type,
+    kind: spec.kind,
+    series: spec.series,
+    designation: spec.designation,
+    bore: spec.bore,
+    outerDiameter: spec.outerDiameter,
+    width: spec.width,
+    dynamicRating: spec.C,
+    staticRating: spec.C0,
+    fatigueLimit: spec.Cu,
+    ratingSource: spec.ratingSource,
+    pitchDiameter: spec.dm,
+    elementDiameter: spec.Dw,
+    elementCount: spec.Z,
     X: loads.heaviest.X,
     Y: loads.heaviest.Y,
     equivalentLoad: loads.P,
     staticEquivalentLoad: P0,
     L10: life.L10,
     L10h: life.L10h,
-    a1: x.a1,
+    a1: ctx.a1,
     aISO: life.aISO,
     kappa: life.kappa,
     L10mh: life.L10mh,
@@ -212,10 +213,10 @@ export function evaluate(s: CandidateSpec, x: EvalContext, notes: Notes): Rollin
     ndm: run.ndm,
     frictionTorque: run.torque,
     frictionPower: run.power,
-    requiredDynamicRating: requiredDynamicRating(loads.P, loads.n, x.c.life.hours, lifeExponent(s.type), x.a1),
+    requiredDynamicRating: requiredDynamicRating(loads.P, loads.n, ctx.c.life.hours, lifeExponent(spec.type), ctx.a1),
     relubricationHours: run.relub,
-    temperature: x.lubrication.temperature,
-    viscosity: x.lubrication.viscosity,
+    temperature: ctx.lubrication.temperature,
+    viscosity: ctx.lubrication.viscosity,
     ratedViscosity: life.nu1,
     criticalSwingAngle: swing,
     exclusions: loads.exclusions,

@@ -39,15 +39,17 @@ const EXPONENT_TEXT: Record<RollingCandidate['type'], ExponentText> = {
 type SheetPoint = LoadPoint & { P: number };
 
 /** The dynamic equivalent load line: one point written out, or the duty mean over several. */
-function loadLine(k: RollingCandidate, x: EvalContext, per: SheetPoint[]): SheetLine {
-  const ex = EXPONENT_TEXT[k.type];
+function loadLine(candidate: RollingCandidate, ctx: EvalContext, per: SheetPoint[]): SheetLine {
+  const ex = EXPONENT_TEXT[candidate.type];
   if (per.length <= 1) {
-    const q = x.points[0];
+    const q = ctx.points[0];
     return {
-      label: `Dynamic equivalent load P (${k.designation})`,
+      label: `Dynamic equivalent load P (${candidate.designation})`,
       formula: 'P = f_d·(X·Fr + Y·Fa)',
-      substituted: q ? `P = ${x.serviceFactor}·(${fig(k.X)}·${fig(q.Fr)} N + ${fig(k.Y)}·${fig(q.Fa)} N)` : 'P = 0',
-      value: k.equivalentLoad,
+      substituted: q
+        ? `P = ${ctx.serviceFactor}·(${fig(candidate.X)}·${fig(q.Fr)} N + ${fig(candidate.Y)}·${fig(q.Fa)} N)`
+        : 'P = 0',
+      value: candidate.equivalentLoad,
       unit: 'N',
       source: 'ISO 281:2007 (X, Y table); service factor common practice',
     };
@@ -57,48 +59,48 @@ function loadLine(k: RollingCandidate, x: EvalContext, per: SheetPoint[]): Sheet
   const weight = (q: SheetPoint): string => (byRevolutions ? `${fig(q.n * 60)}·${fig(q.t)}` : fig(q.t));
   const numerator = many
     ? `Σ over ${per.length} points of Pi^${ex.power}·${byRevolutions ? 'ni·ti' : 'ti'}`
-    : per.map((q) => `${fig(x.serviceFactor * q.P)}^${ex.power}·${weight(q)}`).join(' + ');
+    : per.map((q) => `${fig(ctx.serviceFactor * q.P)}^${ex.power}·${weight(q)}`).join(' + ');
   const denominator = many ? (byRevolutions ? 'Σ ni·ti' : 'Σ ti') : per.map(weight).join(' + ');
   return {
-    label: `Dynamic equivalent load P (${k.designation})`,
-    formula: `P = (Σ Pi^p·${byRevolutions ? 'ni·ti / Σ ni·ti' : 'ti / Σ ti'})^(1/p), Pi = f_d·(X·Fr + Y·Fa), p = ${ex.p}, f_d = ${x.serviceFactor}${byRevolutions ? ', n in r/min' : ''}`,
+    label: `Dynamic equivalent load P (${candidate.designation})`,
+    formula: `P = (Σ Pi^p·${byRevolutions ? 'ni·ti / Σ ni·ti' : 'ti / Σ ti'})^(1/p), Pi = f_d·(X·Fr + Y·Fa), p = ${ex.p}, f_d = ${ctx.serviceFactor}${byRevolutions ? ', n in r/min' : ''}`,
     substituted: `P = [(${numerator})/(${denominator})]^(${ex.inverse})`,
-    value: k.equivalentLoad,
+    value: candidate.equivalentLoad,
     unit: 'N',
     source: 'ISO 281:2007 (X, Y table; variable load); service factor common practice',
   };
 }
 
 /** L10, L10h and the dynamic rating needed for the life target, where they apply; n mean speed, rev/s. */
-function lifeLines(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
-  const ex = EXPONENT_TEXT[k.type];
+function lifeLines(candidate: RollingCandidate, ctx: EvalContext, n: number): SheetLine[] {
+  const ex = EXPONENT_TEXT[candidate.type];
   const lines: SheetLine[] = [];
-  if (k.L10 !== null) {
+  if (candidate.L10 !== null) {
     lines.push({
       label: 'Basic rating life L10',
       formula: 'L10 = (C/P)^p',
-      substituted: `L10 = (${fig(k.dynamicRating)} N / ${fig(k.equivalentLoad)} N)^${ex.power}`,
-      value: k.L10,
+      substituted: `L10 = (${fig(candidate.dynamicRating)} N / ${fig(candidate.equivalentLoad)} N)^${ex.power}`,
+      value: candidate.L10,
       unit: '10^6 rev',
       source: 'ISO 281:2007',
     });
   }
-  if (k.L10h !== null && k.L10 !== null) {
+  if (candidate.L10h !== null && candidate.L10 !== null) {
     lines.push({
       label: 'Basic rating life L10h',
       formula: 'L10h = 10^6·L10/(60·n)',
-      substituted: `L10h = 10^6·${fig(k.L10)}/(60·${fig(n * 60)} r/min)`,
-      value: k.L10h,
+      substituted: `L10h = 10^6·${fig(candidate.L10)}/(60·${fig(n * 60)} r/min)`,
+      value: candidate.L10h,
       unit: 'h',
       source: 'ISO 281:2007',
     });
   }
-  if (k.requiredDynamicRating !== null && x.c.life.hours > 0) {
+  if (candidate.requiredDynamicRating !== null && ctx.c.life.hours > 0) {
     lines.push({
-      label: `Basic dynamic rating needed for the life target (${KIND[k.type]}, p = ${ex.p})`,
+      label: `Basic dynamic rating needed for the life target (${KIND[candidate.type]}, p = ${ex.p})`,
       formula: 'C_req = P·(L_req/a1)^(1/p), L_req = 60·n·h/10^6 (n in r/min)',
-      substituted: `C_req = ${fig(k.equivalentLoad)} N·(60·${fig(n * 60)} r/min·${fig(x.c.life.hours)} h/10^6/${fig(k.a1)})^(${ex.inverse})`,
-      value: k.requiredDynamicRating,
+      substituted: `C_req = ${fig(candidate.equivalentLoad)} N·(60·${fig(n * 60)} r/min·${fig(ctx.c.life.hours)} h/10^6/${fig(candidate.a1)})^(${ex.inverse})`,
+      value: candidate.requiredDynamicRating,
       unit: 'N',
       source: 'ISO 281:2007, from L10 = (C/P)^p with a1 (a_ISO taken as 1)',
     });
@@ -107,24 +109,24 @@ function lifeLines(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] 
 }
 
 /** ν1 and κ, where the shaft turns; n mean speed, rev/s. */
-function viscosityLines(k: RollingCandidate, n: number): SheetLine[] {
-  if (k.ratedViscosity === null || k.kappa === null) return [];
+function viscosityLines(candidate: RollingCandidate, n: number): SheetLine[] {
+  if (candidate.ratedViscosity === null || candidate.kappa === null) return [];
   const rpm = n * 60;
   const slow = rpm < 1000;
   return [
     {
       label: 'Rated viscosity ν1',
       formula: slow ? 'ν1 = 45000·n^-0.83·dm^-0.5 (mm²/s, r/min, mm)' : 'ν1 = 4500·n^-0.5·dm^-0.5 (mm²/s, r/min, mm)',
-      substituted: `ν1 = ${slow ? '45000' : '4500'}·${fig(rpm)}^${slow ? '-0.83' : '-0.5'}·${fig(k.pitchDiameter * 1000)}^-0.5 mm²/s`,
-      value: k.ratedViscosity,
+      substituted: `ν1 = ${slow ? '45000' : '4500'}·${fig(rpm)}^${slow ? '-0.83' : '-0.5'}·${fig(candidate.pitchDiameter * 1000)}^-0.5 mm²/s`,
+      value: candidate.ratedViscosity,
       unit: 'm^2/s',
       source: 'ISO 281:2007 (from memory)',
     },
     {
       label: 'Viscosity ratio κ',
       formula: 'κ = ν/ν1, ν at the operating temperature',
-      substituted: `κ = ν(${fig(k.temperature)} °C)/ν1 = ${fig(k.viscosity * 1e6)} mm²/s / ${fig(k.ratedViscosity * 1e6)} mm²/s`,
-      value: k.kappa,
+      substituted: `κ = ν(${fig(candidate.temperature)} °C)/ν1 = ${fig(candidate.viscosity * 1e6)} mm²/s / ${fig(candidate.ratedViscosity * 1e6)} mm²/s`,
+      value: candidate.kappa,
       unit: '1',
       source: 'ISO 281:2007',
     },
@@ -140,25 +142,25 @@ function aIsoFormula(type: RollingCandidate['type']): string {
 }
 
 /** e_C·Cu/P and a_ISO, where a_ISO applies. */
-function aIsoLines(k: RollingCandidate, x: EvalContext): SheetLine[] {
-  if (k.aISO === null) return [];
-  const eCCuP = (x.cont.eC * k.fatigueLimit) / k.equivalentLoad;
-  const kappaUsed = Math.min(KAPPA_MAX, Math.max(KAPPA_MIN, k.kappa ?? 0));
+function aIsoLines(candidate: RollingCandidate, ctx: EvalContext): SheetLine[] {
+  if (candidate.aISO === null) return [];
+  const eCCuP = (ctx.cont.eC * candidate.fatigueLimit) / candidate.equivalentLoad;
+  const kappaUsed = Math.min(KAPPA_MAX, Math.max(KAPPA_MIN, candidate.kappa ?? 0));
   const args = `a_ISO(κ = ${fig(kappaUsed)}, e_C·Cu/P = ${fig(eCCuP)})`;
   return [
     {
       label: 'Contamination and fatigue-limit term e_C·Cu/P',
       formula: 'e_C·Cu/P',
-      substituted: `${fig(x.cont.eC)}·${fig(k.fatigueLimit)} N/${fig(k.equivalentLoad)} N`,
+      substituted: `${fig(ctx.cont.eC)}·${fig(candidate.fatigueLimit)} N/${fig(candidate.equivalentLoad)} N`,
       value: eCCuP,
       unit: '1',
-      source: `ISO 281:2007 (from memory); e_C for "${x.cont.level}" (${x.cont.source})`,
+      source: `ISO 281:2007 (from memory); e_C for "${ctx.cont.level}" (${ctx.cont.source})`,
     },
     {
       label: 'Life modification factor a_ISO',
-      formula: `${aIsoFormula(k.type)}, y and z per κ band, κ held to ${KAPPA_MIN}–${KAPPA_MAX}, a_ISO ≤ ${AISO_CAP}`,
-      substituted: k.aISO >= AISO_CAP ? `min(${AISO_CAP}, ${args})` : args,
-      value: k.aISO,
+      formula: `${aIsoFormula(candidate.type)}, y and z per κ band, κ held to ${KAPPA_MIN}–${KAPPA_MAX}, a_ISO ≤ ${AISO_CAP}`,
+      substituted: candidate.aISO >= AISO_CAP ? `min(${AISO_CAP}, ${args})` : args,
+      value: candidate.aISO,
       unit: '1',
       source: 'ISO 281:2007 (from memory)',
     },
@@ -166,33 +168,33 @@ function aIsoLines(k: RollingCandidate, x: EvalContext): SheetLine[] {
 }
 
 /** a1, L10mh, s0 and n·dm. */
-function ratingLines(k: RollingCandidate, x: EvalContext): SheetLine[] {
+function ratingLines(candidate: RollingCandidate, ctx: EvalContext): SheetLine[] {
   const lines: SheetLine[] = [
     {
       label: 'Reliability factor a1',
       formula: 'a1 = 0.95·[ln(100/R)/ln(100/90)]^(2/3) + 0.05, R in %',
-      substituted: `a1 = 0.95·[ln(100/${fig(x.reliabilityUsed)})/ln(100/90)]^(2/3) + 0.05`,
-      value: k.a1,
+      substituted: `a1 = 0.95·[ln(100/${fig(ctx.reliabilityUsed)})/ln(100/90)]^(2/3) + 0.05`,
+      value: candidate.a1,
       unit: '1',
       source: 'ISO 281:2007',
     },
   ];
-  if (k.L10mh !== null && k.L10h !== null && k.aISO !== null) {
+  if (candidate.L10mh !== null && candidate.L10h !== null && candidate.aISO !== null) {
     lines.push({
       label: 'Modified rating life L10mh',
       formula: 'L10mh = a1·a_ISO·L10h',
-      substituted: `L10mh = ${fig(k.a1)}·${fig(k.aISO)}·${fig(k.L10h)} h`,
-      value: k.L10mh,
+      substituted: `L10mh = ${fig(candidate.a1)}·${fig(candidate.aISO)}·${fig(candidate.L10h)} h`,
+      value: candidate.L10mh,
       unit: 'h',
       source: 'ISO 281:2007',
     });
   }
-  if (k.s0 !== null) {
+  if (candidate.s0 !== null) {
     lines.push({
       label: 'Static safety s0',
-      formula: k.type === 'ball' ? 's0 = C0/P0, P0 = max(0.6·Fr + 0.5·Fa, Fr)' : 's0 = C0/P0, P0 = Fr',
-      substituted: `s0 = ${fig(k.staticRating)} N / ${fig(k.staticEquivalentLoad)} N`,
-      value: k.s0,
+      formula: candidate.type === 'ball' ? 's0 = C0/P0, P0 = max(0.6·Fr + 0.5·Fa, Fr)' : 's0 = C0/P0, P0 = Fr',
+      substituted: `s0 = ${fig(candidate.staticRating)} N / ${fig(candidate.staticEquivalentLoad)} N`,
+      value: candidate.s0,
       unit: '1',
       source: 'ISO 76 (from memory)',
     });
@@ -200,8 +202,8 @@ function ratingLines(k: RollingCandidate, x: EvalContext): SheetLine[] {
   lines.push({
     label: 'Speed factor n·dm',
     formula: 'n·dm (highest point speed, r/min × mm)',
-    substituted: `${fig(x.maxSpeed * 60)} r/min × ${fig(k.pitchDiameter * 1000)} mm`,
-    value: k.ndm,
+    substituted: `${fig(ctx.maxSpeed * 60)} r/min × ${fig(candidate.pitchDiameter * 1000)} mm`,
+    value: candidate.ndm,
     unit: 'mm*r/min',
     source: 'common practice',
   });
@@ -209,11 +211,11 @@ function ratingLines(k: RollingCandidate, x: EvalContext): SheetLine[] {
 }
 
 /** Friction torque and power: M = μ·Pi·d/2 per point (Pi without f_d), time means over the duty. */
-function frictionLines(k: RollingCandidate, x: EvalContext, per: SheetPoint[]): SheetLine[] {
-  const mu = x.f.friction.find((q) => q.type === k.type)!.mu;
+function frictionLines(candidate: RollingCandidate, ctx: EvalContext, per: SheetPoint[]): SheetLine[] {
+  const mu = ctx.f.friction.find((q) => q.type === candidate.type)!.mu;
   const sumT = per.reduce((acc, q) => acc + Math.max(0, q.t), 0);
   const pBar = sumT > 0 ? per.reduce((acc, q) => acc + Math.max(0, q.t) * Math.max(0, q.P), 0) / sumT : 0;
-  const Mi = (q: SheetPoint): number => frictionTorque(mu, q.P, k.bore);
+  const Mi = (q: SheetPoint): number => frictionTorque(mu, q.P, candidate.bore);
   const term = (q: SheetPoint): string => `${fig(Mi(q))} N·m·2π·${fig(Math.max(0, q.n))} rev/s`;
   const several = per.length > 1;
   let power: string;
@@ -227,8 +229,8 @@ function frictionLines(k: RollingCandidate, x: EvalContext, per: SheetPoint[]): 
       formula: several
         ? 'M = μ·P̄·d/2, P̄ = Σ ti·Pi/Σ ti, Pi = X·Fr + Y·Fa (without f_d)'
         : 'M = μ·P·d/2, P = X·Fr + Y·Fa (without f_d)',
-      substituted: `M = ${mu}·${fig(pBar)} N·${fig(k.bore)} m/2`,
-      value: k.frictionTorque,
+      substituted: `M = ${mu}·${fig(pBar)} N·${fig(candidate.bore)} m/2`,
+      value: candidate.frictionTorque,
       unit: 'N*m',
       source: 'common practice (from memory)',
     },
@@ -236,7 +238,7 @@ function frictionLines(k: RollingCandidate, x: EvalContext, per: SheetPoint[]): 
       label: several ? 'Friction power N_R (time mean over the duty)' : 'Friction power N_R',
       formula: several ? 'N_R = Σ ti·Mi·2π·ni/Σ ti, Mi = μ·Pi·d/2' : 'N_R = M·2π·n',
       substituted: power,
-      value: k.frictionPower,
+      value: candidate.frictionPower,
       unit: 'W',
       source: 'mechanics',
     },
@@ -244,20 +246,20 @@ function frictionLines(k: RollingCandidate, x: EvalContext, per: SheetPoint[]): 
 }
 
 /** The grease interval (grease life of a sealed bearing), on grease. */
-function greaseLines(k: RollingCandidate, x: EvalContext): SheetLine[] {
-  if (k.relubricationHours === null) return [];
-  const kf = x.f.relubrication.find((q) => q.type === k.type)!.kf;
-  const rpm = x.maxSpeed * 60;
-  const dMm = k.bore * 1000;
-  const hot = k.temperature > 70 ? `·0.5^((${fig(k.temperature)} − 70)/15)` : '';
+function greaseLines(candidate: RollingCandidate, ctx: EvalContext): SheetLine[] {
+  if (candidate.relubricationHours === null) return [];
+  const kf = ctx.f.relubrication.find((q) => q.type === candidate.type)!.kf;
+  const rpm = ctx.maxSpeed * 60;
+  const dMm = candidate.bore * 1000;
+  const hot = candidate.temperature > 70 ? `·0.5^((${fig(candidate.temperature)} − 70)/15)` : '';
   const core = `${kf}·[14·10^6/(${fig(rpm)}·√${fig(dMm)}) − 4·${fig(dMm)}]${hot}`;
   return [
     {
-      label: x.lubrication.sealed ? 'Grease life (sealed bearing)' : 'Grease relubrication interval',
+      label: ctx.lubrication.sealed ? 'Grease life (sealed bearing)' : 'Grease relubrication interval',
       formula:
         't_f = k_f·[14·10^6/(n·√d) − 4·d]·0.5^((T − 70)/15 if T > 70), n highest speed in r/min, d bore in mm, T in °C; no positive interval gives 0',
-      substituted: `t_f = ${k.relubricationHours === 0 ? `max(0, ${core})` : core}`,
-      value: k.relubricationHours,
+      substituted: `t_f = ${candidate.relubricationHours === 0 ? `max(0, ${core})` : core}`,
+      value: candidate.relubricationHours,
       unit: 'h',
       source: "a rolling-bearing maker's general technical guide on grease relubrication (seen; not named here)",
     },
@@ -265,21 +267,21 @@ function greaseLines(k: RollingCandidate, x: EvalContext): SheetLine[] {
 }
 
 /**
- * The calculation sheet of candidate k in context x, n the duty's mean speed (rev/s): load,
+ * The calculation sheet of `candidate` in its case context `ctx`, `n` the duty's mean speed (rev/s): load,
  * lives, viscosity, a_ISO, ratings and safety, friction, grease, in that order.
  */
-export function rollingSheet(k: RollingCandidate, x: EvalContext, n: number): SheetLine[] {
-  const per = x.points.map((q) => ({
+export function rollingSheet(candidate: RollingCandidate, ctx: EvalContext, n: number): SheetLine[] {
+  const per = ctx.points.map((q) => ({
     ...q,
-    P: dynamicEquivalentLoad(k.type, q.Fr, q.Fa, k.staticRating, x.f.xyDeepGrooveBall).P,
+    P: dynamicEquivalentLoad(candidate.type, q.Fr, q.Fa, candidate.staticRating, ctx.f.xyDeepGrooveBall).P,
   }));
   return [
-    loadLine(k, x, per),
-    ...lifeLines(k, x, n),
-    ...viscosityLines(k, n),
-    ...aIsoLines(k, x),
-    ...ratingLines(k, x),
-    ...frictionLines(k, x, per),
-    ...greaseLines(k, x),
+    loadLine(candidate, ctx, per),
+    ...lifeLines(candidate, ctx, n),
+    ...viscosityLines(candidate, n),
+    ...aIsoLines(candidate, ctx),
+    ...ratingLines(candidate, ctx),
+    ...frictionLines(candidate, ctx, per),
+    ...greaseLines(candidate, ctx),
   ];
 }

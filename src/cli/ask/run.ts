@@ -70,10 +70,10 @@ export interface Session {
 }
 
 /** Save the session: the case keys answered so far, and the steering state in the header comment. */
-function save(s: Session, done: boolean): void {
-  applyAnswers(s.document, s.answers, QUESTIONS);
-  s.state.steer = steeringAnswers(s.answers);
-  writeAtomic(s.file, renderCase(s.document, s.state, displayPath(s.file, s.cwd), done));
+function save(session: Session, done: boolean): void {
+  applyAnswers(session.document, session.answers, QUESTIONS);
+  session.state.steer = steeringAnswers(session.answers);
+  writeAtomic(session.file, renderCase(session.document, session.state, displayPath(session.file, session.cwd), done));
 }
 
 /** The file as the user should type it: relative to the working directory when inside it, quoted for a shell when needed. */
@@ -84,39 +84,40 @@ function displayPath(file: string, cwd: string): string {
 }
 
 /** Ask every unanswered question, saving as it goes. Returns false when interrupted. */
-export async function runQuestions(s: Session, prompt: Prompter, say: (line: string) => void): Promise<boolean> {
+export async function runQuestions(session: Session, prompt: Prompter, say: (line: string) => void): Promise<boolean> {
   let section = '';
-  for (let next = nextQuestion(s.answers); next; next = nextQuestion(s.answers)) {
+  for (let next = nextQuestion(session.answers); next; next = nextQuestion(session.answers)) {
     const q = next.question;
     if (q.section !== section) {
       section = q.section;
       say(`\n${section}`);
     }
     if (next.stale) say(`  The saved answer is not usable (${next.stale.reason}); please answer again.`);
-    const draft = s.state.draft?.id === q.id ? s.state.draft.text : undefined;
-    const def = draft ?? (next.stale && typeof next.stale.value === 'string' ? next.stale.value : q.default(s.answers));
+    const draft = session.state.draft?.id === q.id ? session.state.draft.text : undefined;
+    const def =
+      draft ?? (next.stale && typeof next.stale.value === 'string' ? next.stale.value : q.default(session.answers));
     if (draft !== undefined) say(`  (what you had typed last time is offered as the default)`);
     let typed = '';
     try {
-      const got = await prompt(specFor(q, s.answers, def, (t) => (typed = t)));
-      const c = checkAnswer(q, got === '' ? def : got, s.answers);
+      const got = await prompt(specFor(q, session.answers, def, (t) => (typed = t)));
+      const c = checkAnswer(q, got === '' ? def : got, session.answers);
       // The prompt validated already; a prompter that did not is caught here, not in the file.
       if (!c.ok) throw new Error(`prompt returned an answer that does not pass: ${c.message}`);
-      s.answers[q.id] = c.value;
-      delete s.state.draft;
-      save(s, false);
+      session.answers[q.id] = c.value;
+      delete session.state.draft;
+      save(session, false);
     } catch (e) {
       if (!isInterrupt(e)) throw e;
-      if (q.kind !== 'choice' && typed.trim() !== '') s.state.draft = { id: q.id, text: typed };
-      save(s, false);
+      if (q.kind !== 'choice' && typed.trim() !== '') session.state.draft = { id: q.id, text: typed };
+      save(session, false);
       return false;
     }
   }
   return true;
 }
 
-function resumeHint(s: Session): string {
-  return `shaftwise ask --resume ${displayPath(s.file, s.cwd)}`;
+function resumeHint(session: Session): string {
+  return `shaftwise ask --resume ${displayPath(session.file, session.cwd)}`;
 }
 
 /** Open the session: a fresh file (never over an existing one) or the file to resume. */

@@ -57,9 +57,9 @@ export function designText(r: RankedOption, u: UnitSystem): string {
   }
 }
 
-function reasonText(x: RankedOption['reasons'][number]): string {
-  const w = x.priority ? ` (${x.basePoints} × ${x.weight} for the ${x.priority} priority)` : '';
-  return `${x.points > 0 ? '+' : '−'}${Math.abs(x.points).toFixed(2)}: ${x.because}${w} [rule ${x.rule}, ${x.file}]`;
+function reasonText(reason: RankedOption['reasons'][number]): string {
+  const w = reason.priority ? ` (${reason.basePoints} × ${reason.weight} for the ${reason.priority} priority)` : '';
+  return `${reason.points > 0 ? '+' : '−'}${Math.abs(reason.points).toFixed(2)}: ${reason.because}${w} [rule ${reason.rule}, ${reason.file}]`;
 }
 
 /** Why an option lost: its exclusions, failed checks, and the points that separate it from the winner. */
