@@ -6,7 +6,7 @@ import { loadRules, type LoadedRule } from '../advise/load-rules.js';
 import { checkJournal } from '../calc/journal/index.js';
 import { logAxis } from './axes.js';
 import { bestOf, designOf, type JournalDesign } from './journal-design.js';
-import { ruleRunner } from './rule-runner.js';
+import { ruleRunner, type RuleRunner } from './rule-runner.js';
 import { referencePoint, scaleCase, type ReferencePoint } from './scale.js';
 
 /**
@@ -100,9 +100,11 @@ function bracket(nodes: number[], i: number): number[] {
   return [nodes.length - 1];
 }
 
-export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOptions): Promise<MapResult> {
-  const rules = opts.rules ?? loadRules();
-  const ref = referencePoint(c);
+/** The load and speed ranges of the map (given, or 0.1× to 10× the governing point) and their log axes. */
+function mapAxes(
+  ref: ReferencePoint,
+  opts: MapOptions,
+): { load: [number, number]; speed: [number, number]; loads: number[]; speeds: number[] } {
   if (!(ref.load > 0) || !(ref.speed > 0)) {
     throw new Error(
       'map: the case needs a positive load and speed at its governing point to centre the map (give --load and --speed)',
@@ -110,70 +112,129 @@ export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOpti
   }
   const load = opts.load ?? [ref.load / 10, ref.load * 10];
   const speed = opts.speed ?? [ref.speed / 10, ref.speed * 10];
-  const n = opts.grid;
-  const loads = logAxis(load[0], load[1], n);
-  const speeds = logAxis(speed[0], speed[1], n);
-  const runner = ruleRunner(rules, { memo: true });
-  const at = (i: number, j: number) => scaleCase(c, loads[i]! / ref.load, speeds[j]! / ref.speed);
+  const loads = logAxis(load[0], load[1], opts.grid);
+  const speeds = logAxis(speed[0], speed[1], opts.grid);
+  return { load, speed, loads, speeds };
+}
 
-  // The case itself, in full.
-  const full = await advise(c, assumed, rules);
-
-  // Journal design sweep at the coarse nodes.
-  const nodes = nodeIndices(n, opts.journalNodes ?? 5);
+/**
+ * checkJournal's full design sweep at every coarse node (nodes × nodes): the distinct designs
+ * found, in order of first finding, and for each node (row node, column node) the index of
+ * its design among them.
+ */
+function sweepJournalNodes(
+  nodes: number[],
+  caseAt: (loadIndex: number, speedIndex: number) => CaseSI,
+): { designs: JournalDesign[]; nodeDesign: number[][] } {
   const designs: JournalDesign[] = [];
   const keyOf = (d: JournalDesign) => `${d.length}|${d.radialClearance}|${d.grade ?? ''}`;
   const seen = new Map<string, number>();
-  const nodeDesign: number[][] = nodes.map((i) =>
-    nodes.map((j) => {
-      const cc = at(i, j);
-      const d = designOf(checkJournal(cc, { pressureProfile: false, sheet: false }), cc);
-      const k = keyOf(d);
-      if (!seen.has(k)) {
-        seen.set(k, designs.length);
-        designs.push(d);
+  const nodeDesign: number[][] = nodes.map((loadIndex) =>
+    nodes.map((speedIndex) => {
+      const nodeCase = caseAt(loadIndex, speedIndex);
+      const design = designOf(checkJournal(nodeCase, { pressureProfile: false, sheet: false }), nodeCase);
+      const key = keyOf(design);
+      if (!seen.has(key)) {
+        seen.set(key, designs.length);
+        designs.push(design);
       }
-      return seen.get(k)!;
+      return seen.get(key)!;
     }),
   );
+  return { designs, nodeDesign };
+}
 
+/** What the cell grid needs besides the axes: the case at a cell, the rules and the journal nodes. */
+interface CellInputs {
+  cellsPerAxis: number;
+  caseAt: (loadIndex: number, speedIndex: number) => CaseSI;
+  rules: LoadedRule[];
+  runRules: RuleRunner['run'];
+  nodes: number[];
+  designs: JournalDesign[];
+  nodeDesign: number[][];
+  onProgress?: (done: number, total: number) => void;
+}
+
+/**
+ * Every cell of the map, row by row (load index, then speed index): the case scaled to the
+ * cell, its journal bearing evaluated with its nearest node's design, and the three options
+ * ranked by advise(). Reports progress after each row.
+ */
+async function mapCells(inputs: CellInputs): Promise<MapCell[][]> {
+  const { cellsPerAxis, caseAt, rules, nodes, designs, nodeDesign } = inputs;
   const cells: MapCell[][] = [];
-  const total = n * n;
-  for (let i = 0; i < n; i++) {
+  const total = cellsPerAxis * cellsPerAxis;
+  for (let loadIndex = 0; loadIndex < cellsPerAxis; loadIndex++) {
     const row: MapCell[] = [];
-    const bi = bracket(nodes, i);
-    for (let j = 0; j < n; j++) {
-      const bj = bracket(nodes, j);
-      const ids = [nodeDesign[nearest(nodes, i, bi)]![nearest(nodes, j, bj)]!];
-      const cc = at(i, j);
+    const loadBracket = bracket(nodes, loadIndex);
+    for (let speedIndex = 0; speedIndex < cellsPerAxis; speedIndex++) {
+      const speedBracket = bracket(nodes, speedIndex);
+      const loadNode = nearest(nodes, loadIndex, loadBracket);
+      const speedNode = nearest(nodes, speedIndex, speedBracket);
+      const designIds = [nodeDesign[loadNode]![speedNode]!];
+      const cellCase = caseAt(loadIndex, speedIndex);
       const journal = bestOf(
-        cc,
-        ids.map((k) => designs[k]!),
+        cellCase,
+        designIds.map((id) => designs[id]!),
       ).result;
-      const a = await advise(cc, [], rules, {
+      const advice = await advise(cellCase, [], rules, {
         checks: { journal },
         kernel: { sheet: false },
-        runRules: runner.run,
+        runRules: inputs.runRules,
         traces: false,
       });
-      row.push(summary(a));
+      row.push(summary(advice));
     }
     cells.push(row);
-    opts.onProgress?.((i + 1) * n, total);
+    inputs.onProgress?.((loadIndex + 1) * cellsPerAxis, total);
   }
+  return cells;
+}
 
+/** The map's notes: axes, scaling of the duty, what is kept, the journal approximation, oscillation. */
+function mapNotes(c: CaseSI, ref: ReferencePoint, nodesPerAxis: number): string[] {
   const notes = [
     `Axes: radial load and speed of the governing point (largest radial load ${fmtN(ref.load)}, highest speed ${fmtRpm(ref.speed)} of the case); log scales.`,
     ref.spectrum
       ? "Duty spectrum: every operating point's load and speed is scaled by the cell's factor relative to the governing point; shares are kept."
       : 'Single operating point: the cell is the case at that load and speed.',
     'Kept from the case: shaft diameter, space, lubrication, environment, life target and priorities. Axial load is scaled with the radial load.',
-    `Journal bearing: full design sweep at ${nodes.length} × ${nodes.length} coarse nodes; each cell evaluates the design of its nearest node, so the journal region may be slightly smaller than a fresh design at every cell would give.`,
+    `Journal bearing: full design sweep at ${nodesPerAxis} × ${nodesPerAxis} coarse nodes; each cell evaluates the design of its nearest node, so the journal region may be slightly smaller than a fresh design at every cell would give.`,
   ];
   if (c.shaft.oscillation)
     notes.push(
       'Oscillating shaft: speed is the equivalent rotational speed θ·f/π; the frequency is scaled, the swing kept.',
     );
+  return notes;
+}
+
+/** The selection map of a case (see the module comment): axes, every cell, the case itself and notes. */
+export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOptions): Promise<MapResult> {
+  const rules = opts.rules ?? loadRules();
+  const ref = referencePoint(c);
+  const { load, speed, loads, speeds } = mapAxes(ref, opts);
+  const runner = ruleRunner(rules, { memo: true });
+  const caseAt = (i: number, j: number) => scaleCase(c, loads[i]! / ref.load, speeds[j]! / ref.speed);
+
+  // The case itself, in full.
+  const full = await advise(c, assumed, rules);
+
+  // Journal design sweep at the coarse nodes, then every cell.
+  const nodes = nodeIndices(opts.grid, opts.journalNodes ?? 5);
+  const { designs, nodeDesign } = sweepJournalNodes(nodes, caseAt);
+  const cells = await mapCells({
+    cellsPerAxis: opts.grid,
+    caseAt,
+    rules,
+    runRules: runner.run,
+    nodes,
+    designs,
+    nodeDesign,
+    onProgress: opts.onProgress,
+  });
+
+  const notes = mapNotes(c, ref, nodes.length);
   return {
     title: c.title,
     loads,

@@ -35,140 +35,214 @@ function defs(): string {
 
 const n3 = (x: number) => +x.toFixed(2);
 
-/** The map as a standalone SVG document (no scripts, no external references). */
-export function mapSvg(m: MapResult): string {
-  const X0 = 86,
-    Y0 = 48,
-    W = 480,
-    H = 480;
-  const nx = m.speeds.length,
-    ny = m.loads.length;
-  const cw = W / nx,
-    ch = H / ny;
-  const lx = (v: number) =>
-    X0 +
-    ((Math.log(v) - Math.log(m.speeds[0]!)) / (Math.log(m.speeds[nx - 1]!) - Math.log(m.speeds[0]!))) * (W - cw) +
-    cw / 2;
-  const ly = (v: number) =>
-    Y0 +
-    H -
-    ch / 2 -
-    ((Math.log(v) - Math.log(m.loads[0]!)) / (Math.log(m.loads[ny - 1]!) - Math.log(m.loads[0]!))) * (H - ch);
+/** Plot geometry: the plot's origin and size, px; cells per axis and cell size; value → position on each axis. */
+interface MapLayout {
+  left: number;
+  top: number;
+  width: number;
+  height: number;
+  columns: number;
+  rows: number;
+  cellWidth: number;
+  cellHeight: number;
+  /** Horizontal position of a speed, rev/s (log axis, cell centres at the ends). */
+  speedX: (speed: number) => number;
+  /** Vertical position of a load, N (log axis, cell centres at the ends, increasing upwards). */
+  loadY: (load: number) => number;
+}
+
+/** The plot geometry of a map: a 480 × 480 px plot, one cell per speed (across) and load (up). */
+function mapLayout(m: MapResult): MapLayout {
+  const left = 86,
+    top = 48,
+    width = 480,
+    height = 480;
+  const columns = m.speeds.length,
+    rows = m.loads.length;
+  const cellWidth = width / columns,
+    cellHeight = height / rows;
+  const speedX = (v: number) =>
+    left +
+    ((Math.log(v) - Math.log(m.speeds[0]!)) / (Math.log(m.speeds[columns - 1]!) - Math.log(m.speeds[0]!))) *
+      (width - cellWidth) +
+    cellWidth / 2;
+  const loadY = (v: number) =>
+    top +
+    height -
+    cellHeight / 2 -
+    ((Math.log(v) - Math.log(m.loads[0]!)) / (Math.log(m.loads[rows - 1]!) - Math.log(m.loads[0]!))) *
+      (height - cellHeight);
+  return { left, top, width, height, columns, rows, cellWidth, cellHeight, speedX, loadY };
+}
+
+/** Top-left corner of cell (load index, speed index), px. */
+function cellCorner(layout: MapLayout, loadIndex: number, speedIndex: number): { x: number; y: number } {
+  return {
+    x: layout.left + speedIndex * layout.cellWidth,
+    y: layout.top + layout.height - (loadIndex + 1) * layout.cellHeight,
+  };
+}
+
+/** The opening tag, title, pattern definitions, white background and heading. */
+function svgHead(m: MapResult, layout: MapLayout): string[] {
+  const totalHeight = layout.top + layout.height + 150;
+  return [
+    `<svg xmlns="http://www.w3.org/2000/svg" width="820" height="${totalHeight}" viewBox="0 0 820 ${totalHeight}" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
+    `<title>${esc(`Selection map: ${m.title}`)}</title>`,
+    defs(),
+    `<rect width="820" height="${totalHeight}" fill="#ffffff"/>`,
+    `<text x="${layout.left}" y="22" font-size="15" font-weight="bold">${esc(`Where each option wins: ${m.title}`)}</text>`,
+  ];
+}
+
+/** Each cell filled with its winner's pattern, and the winner's letter when cells are at least 14 px. */
+function cellFills(m: MapResult, layout: MapLayout): string[] {
   const out: string[] = [];
-  out.push(
-    `<svg xmlns="http://www.w3.org/2000/svg" width="820" height="${Y0 + H + 150}" viewBox="0 0 820 ${Y0 + H + 150}" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
-  );
-  out.push(`<title>${esc(`Selection map: ${m.title}`)}</title>`);
-  out.push(defs());
-  out.push(`<rect width="820" height="${Y0 + H + 150}" fill="#ffffff"/>`);
-  out.push(
-    `<text x="${X0}" y="22" font-size="15" font-weight="bold">${esc(`Where each option wins: ${m.title}`)}</text>`,
-  );
-  // Cells.
+  const { cellWidth: cw, cellHeight: ch } = layout;
   const letters = cw >= 14 && ch >= 14;
-  for (let i = 0; i < ny; i++) {
-    for (let j = 0; j < nx; j++) {
-      const c = m.cells[i]![j]!;
-      const k = c.winner ?? 'none';
-      const x = X0 + j * cw,
-        y = Y0 + H - (i + 1) * ch;
+  for (let i = 0; i < layout.rows; i++) {
+    for (let j = 0; j < layout.columns; j++) {
+      const cell = m.cells[i]![j]!;
+      const fill = cell.winner ?? 'none';
+      const { x, y } = cellCorner(layout, i, j);
       out.push(
-        `<rect x="${n3(x)}" y="${n3(y)}" width="${n3(cw + 0.05)}" height="${n3(ch + 0.05)}" fill="url(#f-${k})"/>`,
+        `<rect x="${n3(x)}" y="${n3(y)}" width="${n3(cw + 0.05)}" height="${n3(ch + 0.05)}" fill="url(#f-${fill})"/>`,
       );
-      if (letters && c.winner)
+      if (letters && cell.winner)
         out.push(
-          `<text x="${n3(x + cw / 2)}" y="${n3(y + ch / 2 + 4)}" text-anchor="middle" font-size="10" fill="${STYLE[c.winner].ink}">${LETTER[c.winner]}</text>`,
+          `<text x="${n3(x + cw / 2)}" y="${n3(y + ch / 2 + 4)}" text-anchor="middle" font-size="10" fill="${STYLE[cell.winner].ink}">${LETTER[cell.winner]}</text>`,
         );
     }
   }
-  // Feasible-region borders: an edge wherever feasibility changes between neighbours.
-  OPTIONS.forEach((o, k) => {
+  return out;
+}
+
+/** Each option's feasible-region border (an edge wherever feasibility changes between neighbours), white under black. */
+function feasibleBorders(m: MapResult, layout: MapLayout): string[] {
+  const out: string[] = [];
+  const { rows, columns, cellWidth: cw, cellHeight: ch } = layout;
+  OPTIONS.forEach((option, optionIndex) => {
     let d = '';
-    const f = (i: number, j: number) => (i >= 0 && j >= 0 && i < ny && j < nx ? m.cells[i]![j]!.feasible[k] : false);
-    for (let i = 0; i < ny; i++)
-      for (let j = 0; j < nx; j++) {
-        if (!f(i, j)) continue;
-        const x = X0 + j * cw,
-          y = Y0 + H - (i + 1) * ch;
-        if (!f(i + 1, j)) d += `M${n3(x)} ${n3(y)}H${n3(x + cw)}`;
-        if (!f(i - 1, j)) d += `M${n3(x)} ${n3(y + ch)}H${n3(x + cw)}`;
-        if (!f(i, j - 1)) d += `M${n3(x)} ${n3(y)}V${n3(y + ch)}`;
-        if (!f(i, j + 1)) d += `M${n3(x + cw)} ${n3(y)}V${n3(y + ch)}`;
+    const feasible = (i: number, j: number) =>
+      i >= 0 && j >= 0 && i < rows && j < columns ? m.cells[i]![j]!.feasible[optionIndex] : false;
+    for (let i = 0; i < rows; i++)
+      for (let j = 0; j < columns; j++) {
+        if (!feasible(i, j)) continue;
+        const { x, y } = cellCorner(layout, i, j);
+        if (!feasible(i + 1, j)) d += `M${n3(x)} ${n3(y)}H${n3(x + cw)}`;
+        if (!feasible(i - 1, j)) d += `M${n3(x)} ${n3(y + ch)}H${n3(x + cw)}`;
+        if (!feasible(i, j - 1)) d += `M${n3(x)} ${n3(y)}V${n3(y + ch)}`;
+        if (!feasible(i, j + 1)) d += `M${n3(x + cw)} ${n3(y)}V${n3(y + ch)}`;
       }
     if (d) {
       out.push(`<path d="${d}" fill="none" stroke="#ffffff" stroke-width="3.2" stroke-linecap="square"/>`);
       out.push(
-        `<path d="${d}" fill="none" stroke="#111111" stroke-width="1.6"${DASH[o] ? ` stroke-dasharray="${DASH[o]}"` : ''}/>`,
+        `<path d="${d}" fill="none" stroke="#111111" stroke-width="1.6"${DASH[option] ? ` stroke-dasharray="${DASH[option]}"` : ''}/>`,
       );
     }
   });
-  out.push(`<rect x="${X0}" y="${Y0}" width="${W}" height="${H}" fill="none" stroke="#222" stroke-width="1"/>`);
-  // Axes with log ticks.
-  for (const t of logTicks(m.speeds[0]! * 60, m.speeds[nx - 1]! * 60)) {
-    const x = n3(lx(t.value / 60));
-    out.push(`<line x1="${x}" y1="${Y0 + H}" x2="${x}" y2="${Y0 + H + (t.major ? 7 : 4)}" stroke="#222"/>`);
-    out.push(`<text x="${x}" y="${Y0 + H + 20}" text-anchor="middle">${esc(String(t.value))}</text>`);
+  return out;
+}
+
+/** The plot frame, the speed axis (r/min) and the load axis, each with log ticks and a title. */
+function axesWithTicks(m: MapResult, layout: MapLayout): string[] {
+  const { left, top, width, height } = layout;
+  const out: string[] = [];
+  out.push(
+    `<rect x="${left}" y="${top}" width="${width}" height="${height}" fill="none" stroke="#222" stroke-width="1"/>`,
+  );
+  for (const t of logTicks(m.speeds[0]! * 60, m.speeds[layout.columns - 1]! * 60)) {
+    const x = n3(layout.speedX(t.value / 60));
+    out.push(`<line x1="${x}" y1="${top + height}" x2="${x}" y2="${top + height + (t.major ? 7 : 4)}" stroke="#222"/>`);
+    out.push(`<text x="${x}" y="${top + height + 20}" text-anchor="middle">${esc(String(t.value))}</text>`);
   }
   out.push(
-    `<text x="${X0 + W / 2}" y="${Y0 + H + 40}" text-anchor="middle">speed of the governing point, r/min (log scale)</text>`,
+    `<text x="${left + width / 2}" y="${top + height + 40}" text-anchor="middle">speed of the governing point, r/min (log scale)</text>`,
   );
-  for (const t of logTicks(m.loads[0]!, m.loads[ny - 1]!)) {
-    const y = n3(ly(t.value));
-    out.push(`<line x1="${X0 - (t.major ? 7 : 4)}" y1="${y}" x2="${X0}" y2="${y}" stroke="#222"/>`);
-    out.push(`<text x="${X0 - 10}" y="${n3(y + 4)}" text-anchor="end">${esc(fmtLoad(t.value))}</text>`);
+  for (const t of logTicks(m.loads[0]!, m.loads[layout.rows - 1]!)) {
+    const y = n3(layout.loadY(t.value));
+    out.push(`<line x1="${left - (t.major ? 7 : 4)}" y1="${y}" x2="${left}" y2="${y}" stroke="#222"/>`);
+    out.push(`<text x="${left - 10}" y="${n3(y + 4)}" text-anchor="end">${esc(fmtLoad(t.value))}</text>`);
   }
   out.push(
-    `<text transform="translate(20 ${Y0 + H / 2}) rotate(-90)" text-anchor="middle">radial load of the governing point (log scale)</text>`,
+    `<text transform="translate(20 ${top + height / 2}) rotate(-90)" text-anchor="middle">radial load of the governing point (log scale)</text>`,
   );
-  // The case.
-  const inRange = caseCell(m) !== null;
-  if (inRange) {
-    const cx = n3(lx(m.reference.speed)),
-      cy = n3(ly(m.reference.load));
-    out.push(
-      `<circle cx="${cx}" cy="${cy}" r="8" fill="#ffffff" stroke="#000" stroke-width="2"/><path d="M${cx - 5} ${cy}H${cx + 5}M${cx} ${cy - 5}V${cy + 5}" stroke="#000" stroke-width="2"/>`,
-    );
-  }
-  // Legend.
-  const LX = X0 + W + 24;
-  let y = Y0 + 6;
-  out.push(`<text x="${LX}" y="${y}" font-weight="bold">Winner (fill)</text>`);
+  return out;
+}
+
+/** The case's marker (circle and cross) at its governing point; none when the case is outside the map. */
+function caseMarker(m: MapResult, layout: MapLayout, inRange: boolean): string[] {
+  if (!inRange) return [];
+  const cx = n3(layout.speedX(m.reference.speed)),
+    cy = n3(layout.loadY(m.reference.load));
+  return [
+    `<circle cx="${cx}" cy="${cy}" r="8" fill="#ffffff" stroke="#000" stroke-width="2"/><path d="M${cx - 5} ${cy}H${cx + 5}M${cx} ${cy - 5}V${cy + 5}" stroke="#000" stroke-width="2"/>`,
+  ];
+}
+
+/** The legend right of the plot: winner fills, feasible-region borders, and the case with its full advice. */
+function mapLegend(m: MapResult, layout: MapLayout, inRange: boolean): string[] {
+  const out: string[] = [];
+  const legendX = layout.left + layout.width + 24;
+  let y = layout.top + 6;
+  out.push(`<text x="${legendX}" y="${y}" font-weight="bold">Winner (fill)</text>`);
   for (const k of [...OPTIONS, 'none'] as const) {
     y += 24;
     out.push(
-      `<rect x="${LX}" y="${y - 13}" width="22" height="16" fill="url(#f-${k})" stroke="#222" stroke-width="0.6"/>`,
+      `<rect x="${legendX}" y="${y - 13}" width="22" height="16" fill="url(#f-${k})" stroke="#222" stroke-width="0.6"/>`,
     );
-    out.push(`<text x="${LX + 30}" y="${y}">${k === 'none' ? '' : `${LETTER[k]} `}${esc(STYLE[k].label)}</text>`);
+    out.push(`<text x="${legendX + 30}" y="${y}">${k === 'none' ? '' : `${LETTER[k]} `}${esc(STYLE[k].label)}</text>`);
   }
   y += 34;
-  out.push(`<text x="${LX}" y="${y}" font-weight="bold">Feasible region (border)</text>`);
+  out.push(`<text x="${legendX}" y="${y}" font-weight="bold">Feasible region (border)</text>`);
   for (const o of OPTIONS) {
     y += 22;
     out.push(
-      `<line x1="${LX}" y1="${y - 4}" x2="${LX + 22}" y2="${y - 4}" stroke="#111" stroke-width="1.6"${DASH[o] ? ` stroke-dasharray="${DASH[o]}"` : ''}/>`,
+      `<line x1="${legendX}" y1="${y - 4}" x2="${legendX + 22}" y2="${y - 4}" stroke="#111" stroke-width="1.6"${DASH[o] ? ` stroke-dasharray="${DASH[o]}"` : ''}/>`,
     );
-    out.push(`<text x="${LX + 30}" y="${y}">${o}</text>`);
+    out.push(`<text x="${legendX + 30}" y="${y}">${o}</text>`);
   }
   y += 34;
   out.push(
-    `<circle cx="${LX + 11}" cy="${y - 4}" r="7" fill="#fff" stroke="#000" stroke-width="2"/><path d="M${LX + 7} ${y - 4}H${LX + 15}M${LX + 11} ${y - 8}V${y}" stroke="#000" stroke-width="2"/>`,
+    `<circle cx="${legendX + 11}" cy="${y - 4}" r="7" fill="#fff" stroke="#000" stroke-width="2"/><path d="M${legendX + 7} ${y - 4}H${legendX + 15}M${legendX + 11} ${y - 8}V${y}" stroke="#000" stroke-width="2"/>`,
   );
-  out.push(`<text x="${LX + 30}" y="${y}">the case${inRange ? '' : ' (outside the map)'}</text>`);
+  out.push(`<text x="${legendX + 30}" y="${y}">the case${inRange ? '' : ' (outside the map)'}</text>`);
   out.push(
-    `<text x="${LX + 30}" y="${y + 16}">${esc(`${fmtLoad(m.reference.load)}, ${fmtSpeed(m.reference.speed)}`)}</text>`,
+    `<text x="${legendX + 30}" y="${y + 16}">${esc(`${fmtLoad(m.reference.load)}, ${fmtSpeed(m.reference.speed)}`)}</text>`,
   );
   out.push(
-    `<text x="${LX + 30}" y="${y + 32}">${esc(`full advice: ${m.atCase.recommendation ?? 'none feasible'}`)}</text>`,
+    `<text x="${legendX + 30}" y="${y + 32}">${esc(`full advice: ${m.atCase.recommendation ?? 'none feasible'}`)}</text>`,
   );
-  // Notes under the plot.
-  let ny0 = Y0 + H + 62;
+  return out;
+}
+
+/** The map's notes under the plot, wrapped at 120 characters. */
+function notesUnder(m: MapResult, layout: MapLayout): string[] {
+  const out: string[] = [];
+  let y = layout.top + layout.height + 62;
   for (const note of m.notes) {
     for (const line of wrap(note, 120)) {
-      out.push(`<text x="${X0 - 60}" y="${ny0}" font-size="10.5" fill="#333">${esc(line)}</text>`);
-      ny0 += 13;
+      out.push(`<text x="${layout.left - 60}" y="${y}" font-size="10.5" fill="#333">${esc(line)}</text>`);
+      y += 13;
     }
   }
-  out.push('</svg>');
+  return out;
+}
+
+/** The map as a standalone SVG document (no scripts, no external references). */
+export function mapSvg(m: MapResult): string {
+  const layout = mapLayout(m);
+  const inRange = caseCell(m) !== null;
+  const out = [
+    ...svgHead(m, layout),
+    ...cellFills(m, layout),
+    ...feasibleBorders(m, layout),
+    ...axesWithTicks(m, layout),
+    ...caseMarker(m, layout, inRange),
+    ...mapLegend(m, layout, inRange),
+    ...notesUnder(m, layout),
+    '</svg>',
+  ];
   return out.join('\n') + '\n';
 }
 

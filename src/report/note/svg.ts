@@ -176,8 +176,20 @@ function legendColumns(spec: ChartSpec): number {
   return longest * 6.2 + 44 <= PW / 2 ? 2 : 1;
 }
 
-/** The chart as an SVG element (a string). Sizes scale with the page: width 100 %, fixed aspect ratio. */
-export function lineChart(spec: ChartSpec): string {
+/** A chart's scales and positions: its element id, the axis scales, and value → page position on each axis. */
+interface ChartFrame {
+  /** The spec's id with anything but letters, digits and dashes made a dash. */
+  id: string;
+  xScale: Scale;
+  yScale: Scale;
+  /** Horizontal page position of an x value, px. */
+  toX: (value: number) => number;
+  /** Vertical page position of a y value, px. */
+  toY: (value: number) => number;
+}
+
+/** The scales of a chart, each axis ranging over its series' points and its reference lines. */
+function chartFrame(spec: ChartSpec): ChartFrame {
   const id = spec.id.replace(/[^a-zA-Z0-9-]/g, '-');
   const xs = [
     ...spec.series.flatMap((s) => s.points.map((p) => p[0])),
@@ -187,23 +199,34 @@ export function lineChart(spec: ChartSpec): string {
     ...spec.series.flatMap((s) => s.points.map((p) => p[1])),
     ...spec.refs.filter((r) => r.axis === 'y').map((r) => r.value),
   ];
-  const sx = makeScale(spec.x, xs, PW, false);
-  const sy = makeScale(spec.y, ys, PH, true);
-  const X = (v: number) => M.left + sx.to(v);
-  const Y = (v: number) => M.top + sy.to(v);
+  const xScale = makeScale(spec.x, xs, PW, false);
+  const yScale = makeScale(spec.y, ys, PH, true);
+  return {
+    id,
+    xScale,
+    yScale,
+    toX: (v: number) => M.left + xScale.to(v),
+    toY: (v: number) => M.top + yScale.to(v),
+  };
+}
+
+/** The opening tag (height grown by the legend rows), title, clip path, white background and heading. */
+function chartHead(spec: ChartSpec, id: string): string[] {
   const legendRows = Math.ceil((spec.series.length + spec.refs.length) / legendColumns(spec));
   const totalH = H + 8 + legendRows * LEGEND_ROW;
-  const out: string[] = [];
   const title = `${spec.title}`;
-  out.push(
+  return [
     `<svg xmlns="http://www.w3.org/2000/svg" class="chart" id="chart-${id}" viewBox="0 0 ${W} ${totalH}" width="100%" role="img" aria-labelledby="chart-${id}-title" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
     `<title id="chart-${id}-title">${escapeHtml(title)}</title>`,
     `<defs><clipPath id="clip-${id}"><rect x="${M.left}" y="${M.top}" width="${PW}" height="${PH}"/></clipPath></defs>`,
     `<rect x="0" y="0" width="${W}" height="${totalH}" fill="#fff"/>`,
     `<text x="${M.left}" y="20" font-size="14" font-weight="bold" fill="#111">${escapeHtml(title)}</text>`,
-  );
+  ];
+}
 
-  // Grid and ticks.
+/** Grid lines (minor and major), the plot frame, tick marks with their values, and the two axis labels. */
+function gridAndAxes(spec: ChartSpec, frame: ChartFrame): string[] {
+  const { xScale: sx, yScale: sy, toX: X, toY: Y } = frame;
   const grid: string[] = [];
   const ticks: string[] = [];
   const xt = sx.log
@@ -226,34 +249,37 @@ export function lineChart(spec: ChartSpec): string {
     ticks.push(`<line x1="${M.left - 5}" y1="${r1(Y(v))}" x2="${M.left}" y2="${r1(Y(v))}" stroke="#333"/>`);
     ticks.push(`<text x="${M.left - 8}" y="${r1(Y(v) + 4)}" text-anchor="end" fill="#222">${tickText(v)}</text>`);
   }
-  out.push(`<g class="grid">${grid.join('')}</g>`);
-  out.push(`<rect x="${M.left}" y="${M.top}" width="${PW}" height="${PH}" fill="none" stroke="#333"/>`);
-  out.push(`<g class="ticks">${ticks.join('')}</g>`);
   const unit = (a: Axis) => (a.unit ? ` [${escapeHtml(a.unit)}]` : '');
-  out.push(
+  return [
+    `<g class="grid">${grid.join('')}</g>`,
+    `<rect x="${M.left}" y="${M.top}" width="${PW}" height="${PH}" fill="none" stroke="#333"/>`,
+    `<g class="ticks">${ticks.join('')}</g>`,
     `<text class="axis-label" x="${M.left + PW / 2}" y="${H - 12}" text-anchor="middle" fill="#111">${escapeHtml(spec.x.label)}${unit(spec.x)}${sx.log ? ' (log scale)' : ''}</text>`,
     `<text class="axis-label" transform="translate(16 ${M.top + PH / 2}) rotate(-90)" text-anchor="middle" fill="#111">${escapeHtml(spec.y.label)}${unit(spec.y)}${sy.log ? ' (log scale)' : ''}</text>`,
-  );
+  ];
+}
 
-  // Limit lines, then the series, clipped to the plot area.
+/** The limit lines, then each series' line and markers (points a log axis cannot show left out), clipped to the plot. */
+function plotBody(spec: ChartSpec, frame: ChartFrame): string {
+  const { xScale: sx, yScale: sy, toX: X, toY: Y } = frame;
   const body: string[] = [];
-  spec.refs.forEach((r, k) => {
-    const dash = REF_DASHES[k % REF_DASHES.length];
-    if (r.axis === 'y') {
-      const y = r1(Y(r.value));
+  spec.refs.forEach((ref, refIndex) => {
+    const dash = REF_DASHES[refIndex % REF_DASHES.length];
+    if (ref.axis === 'y') {
+      const y = r1(Y(ref.value));
       body.push(
         `<line class="ref" x1="${M.left}" y1="${y}" x2="${M.left + PW}" y2="${y}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${dash}"/>`,
       );
     } else {
-      const x = r1(X(r.value));
+      const x = r1(X(ref.value));
       body.push(
         `<line class="ref" x1="${x}" y1="${M.top}" x2="${x}" y2="${M.top + PH}" stroke="${REF_COLOUR}" stroke-width="1.6" stroke-dasharray="${dash}"/>`,
       );
     }
   });
-  spec.series.forEach((s, k) => {
-    const st = STYLES[k % STYLES.length]!;
-    const pts = s.points.filter(
+  spec.series.forEach((series, seriesIndex) => {
+    const st = STYLES[seriesIndex % STYLES.length]!;
+    const pts = series.points.filter(
       (p) => Number.isFinite(p[0]) && Number.isFinite(p[1]) && (!sx.log || p[0] > 0) && (!sy.log || p[1] > 0),
     );
     if (!pts.length) return;
@@ -261,12 +287,14 @@ export function lineChart(spec: ChartSpec): string {
     body.push(
       `<path class="series" d="${d}" fill="none" stroke="${st.colour}" stroke-width="2.2"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`,
     );
-    if (s.markers !== false)
+    if (series.markers !== false)
       body.push(...markerIndices(pts.length).map((i) => marker(st.marker, X(pts[i]![0]), Y(pts[i]![1]), st.colour)));
   });
-  out.push(`<g clip-path="url(#clip-${id})">${body.join('')}</g>`);
+  return `<g clip-path="url(#clip-${frame.id})">${body.join('')}</g>`;
+}
 
-  // Legend below the plot, in two columns: it never hides a line.
+/** The legend below the plot (it never hides a line): series, then limit lines, in one or two columns. */
+function chartLegend(spec: ChartSpec): string {
   const entries: string[] = [];
   const rows = [
     ...spec.series.map((s, k) => ({ name: s.name, kind: 'series' as const, k })),
@@ -292,7 +320,18 @@ export function lineChart(spec: ChartSpec): string {
     const name = row.name.length > room ? row.name.slice(0, room - 1) + '…' : row.name;
     entries.push(`<text x="${r1(lx + 36)}" y="${y}" fill="#111" font-size="11.5">${escapeHtml(name)}</text>`);
   });
-  out.push(`<g class="legend">${entries.join('')}</g>`);
-  out.push('</svg>');
+  return `<g class="legend">${entries.join('')}</g>`;
+}
+
+/** The chart as an SVG element (a string). Sizes scale with the page: width 100 %, fixed aspect ratio. */
+export function lineChart(spec: ChartSpec): string {
+  const frame = chartFrame(spec);
+  const out = [
+    ...chartHead(spec, frame.id),
+    ...gridAndAxes(spec, frame),
+    plotBody(spec, frame),
+    chartLegend(spec),
+    '</svg>',
+  ];
   return out.join('\n');
 }
