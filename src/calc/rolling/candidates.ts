@@ -6,6 +6,7 @@ import { estimatedFatigueLimit } from './aiso.js';
 import type { Notes } from './findings.js';
 import { estimateBallGeometry, estimateRollerGeometry } from './geometry.js';
 import type { RollingType } from './life.js';
+import type { RollingCandidate } from './types.js';
 import { ballDynamicRating, ballStaticRating, rollerDynamicRating, rollerStaticRating } from './ratings.js';
 
 /**
@@ -24,16 +25,11 @@ import { ballDynamicRating, ballStaticRating, rollerDynamicRating, rollerStaticR
 /** Kind of each bearing type, in the words of the trade. */
 export const KIND = { ball: 'deep-groove ball', roller: 'cylindrical roller' } as const;
 
-/** One bearing to evaluate. Lengths m, ratings N. */
-export interface CandidateSpec {
-  id: string;
-  type: RollingType;
-  kind: string;
-  series: string;
-  designation: string;
-  bore: number;
-  outerDiameter: number | null;
-  width: number | null;
+/** One bearing to evaluate: its identity and size as the result reports them (m), its ratings (N). */
+export interface CandidateSpec extends Pick<
+  RollingCandidate,
+  'id' | 'type' | 'kind' | 'series' | 'designation' | 'bore' | 'outerDiameter' | 'width'
+> {
   /** Basic dynamic rating C, static rating C0, fatigue load limit Cu, N. */
   C: number;
   C0: number;
