@@ -3,6 +3,10 @@ import type { Problem } from '../core/errors.js';
 import type { Assumption, CaseSI, Priority } from './types.js';
 import type { CaseFile } from './schema.js';
 import { PRIORITIES } from './schema.js';
+import { BALL_KINDS } from '../core/rolling-kinds.js';
+
+/** A supplier bore within this of the shaft diameter is the shaft diameter, m (a unit conversion's rounding). */
+const BORE_MATCH = 1e-5;
 
 /**
  * Defaults applied to a case that leaves a value out. Each is recorded as an
@@ -201,6 +205,18 @@ function choiceProblems(file: CaseFile, knownGrades: number[], knownMaterials: s
     });
   }
   const d = file.shaft.diameter;
+  if (r?.bore !== undefined && Math.abs(r.bore - d) > BORE_MATCH) {
+    problems.push({
+      field: 'rolling.bore',
+      message: `got ${fmtMm(r.bore)}; expected the shaft diameter ${fmtMm(d)} (the bearing's bore sits on the shaft)`,
+    });
+  }
+  if (r?.kind !== undefined && r.type !== undefined && BALL_KINDS.has(r.kind) !== (r.type === 'ball')) {
+    problems.push({
+      field: 'rolling.type',
+      message: `got "${r.type}" for a ${r.kind} bearing; expected "${BALL_KINDS.has(r.kind) ? 'ball' : 'roller'}" or no type`,
+    });
+  }
   if (file.space.maxOuterDiameter <= d) {
     problems.push({
       field: 'space.maxOuterDiameter',

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { parseQuantity, QuantityError, type Kind } from './quantity.js';
+import { ARRANGEMENTS, FORMS, ROLLING_KINDS } from '../core/rolling-kinds.js';
 
 /**
  * The duty-case file schema (a contract: external tools write these keys).
@@ -231,6 +232,14 @@ export const caseFileSchema = mapping({
   }).optional(),
   rolling: mapping({
     type: choice(['ball', 'roller'] as const).optional(),
+    kind: choice(ROLLING_KINDS).optional(),
+    form: choice(FORMS).optional(),
+    contactAngle: quantity('angle', 'nonnegative', {
+      max: Math.PI / 3,
+      say: 'a nominal contact angle from 0 deg to 60 deg, written with its unit (40 deg)',
+    }).optional(),
+    arrangement: choice(ARRANGEMENTS).optional(),
+    bore: quantity('length', 'positive', { max: 10, say: 'a bearing bore up to 10 m' }).optional(),
     dynamicRating: quantity('force', 'positive', FORCE).optional(),
     staticRating: quantity('force', 'positive', FORCE).optional(),
     fatigueLimit: quantity('force', 'positive', FORCE).optional(),

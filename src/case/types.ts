@@ -1,3 +1,4 @@
+import type { Arrangement, KindForm, RollingKind } from '../core/rolling-kinds.js';
 import type { BushingMaterial } from '../data/bushing.js';
 /**
  * The duty case as understood, in SI base units. This is what the calculation
@@ -73,6 +74,15 @@ export interface CaseSI {
   bushing?: { length?: number; material?: string | BushingMaterial };
   rolling?: {
     type?: 'ball' | 'roller';
+    /** Kind in the trade's name; restricts the candidates to it (and names the supplier bearing's kind). */
+    kind?: RollingKind;
+    /** Construction within the kind (rib form of a cylindrical roller bearing, needle roller construction). */
+    form?: KindForm;
+    /** Nominal contact angle, rad. */
+    contactAngle?: number;
+    arrangement?: Arrangement;
+    /** Supplier bearing bore, m (must be the shaft diameter). */
+    bore?: number;
     /** Supplier basic dynamic load rating C, N. */
     dynamicRating?: number;
     /** Supplier basic static load rating C0, N. */

@@ -5,10 +5,14 @@ import { spectrumMean } from './equivalent-load.js';
 import type { Notes } from './findings.js';
 import { lifeExponent } from './life.js';
 import type { RollingCandidate } from './types.js';
+import { governingMargin } from '../../core/check.js';
+import { kindTraits } from '../../data/rolling.js';
+import { ROLLING_KINDS } from './kinds.js';
 
 /**
- * Choosing among the evaluated candidates: the best is the smallest feasible one; when none
- * is feasible, why each is not is said; and when there is no candidate at all, the result's
+ * Choosing among the evaluated candidates: the best is the least costly feasible kind, then the
+ * smallest (common practice; cost classes in data/rolling-kinds.json); when none is feasible,
+ * why the nearest miss of each kind is not is said; and when there is no candidate at all, the result's
  * equivalent load is an upper bound over the deep-groove ball X/Y table.
  *
  * References
@@ -23,26 +27,38 @@ function orderNullLast(a: number | null, b: number | null): number {
   return a - b;
 }
 
+/** Cost class of a candidate (data/rolling-kinds.json, common practice): its kind's, one more for a matched pair. */
+export function costClass(k: Pick<RollingCandidate, 'kind' | 'arrangement'>): number {
+  const t = kindTraits().find((x) => x.kind === k.kind);
+  return (t?.costClass ?? 2) + (k.arrangement === 'single' ? 0 : 1);
+}
+
 /**
- * The best candidate: of the feasible ones, the smallest by outside diameter, then width
- * (unknown sizes last); on a tie the supplier's bearing, then a ball bearing. Null when none
- * is feasible; then each candidate's exclusions and failing checks are said.
+ * The order practice chooses in: the supplier's own bearing first (it is the one asked
+ * about), then the least costly kind, then the smallest outside diameter, then the narrowest
+ * (unknown sizes last), then a ball bearing.
+ */
+export function choiceOrder(a: RollingCandidate, b: RollingCandidate): number {
+  return (
+    (a.ratingSource === 'supplier' ? -1 : 0) - (b.ratingSource === 'supplier' ? -1 : 0) ||
+    costClass(a) - costClass(b) ||
+    orderNullLast(a.outerDiameter, b.outerDiameter) ||
+    orderNullLast(a.width, b.width) ||
+    (a.type === 'ball' ? -1 : 0) - (b.type === 'ball' ? -1 : 0)
+  );
+}
+
+/**
+ * The best candidate: of the feasible ones, the first in the order practice chooses in
+ * (choiceOrder). Null when none is feasible; then why the nearest miss of each kind is not
+ * suitable is said.
  */
 export function bestCandidate(candidates: RollingCandidate[], notes: Notes): RollingCandidate | null {
-  const feasible = candidates
-    .filter((k) => k.feasible)
-    .sort(
-      (a, b) =>
-        orderNullLast(a.outerDiameter, b.outerDiameter) ||
-        orderNullLast(a.width, b.width) ||
-        (a.ratingSource === 'supplier' ? -1 : 0) - (b.ratingSource === 'supplier' ? -1 : 0) ||
-        (a.type === 'ball' ? -1 : 0) - (b.type === 'ball' ? -1 : 0),
-    );
-  const best = feasible[0] ?? null;
+  const best = candidates.filter((k) => k.feasible).sort(choiceOrder)[0] ?? null;
   if (best) return best;
   if (candidates.length === 0) notes.warn(finding('rolling.no-candidate'));
-  for (const k of candidates) {
-    const failing = k.checks.filter((x) => !x.pass);
+  for (const k of leadOfEachKind(candidates)) {
+    const failing = k.checks.filter((x) => !x.pass && !x.advisory);
     notes.warn(
       finding('rolling.not-suitable', {
         designation: k.designation,
@@ -55,6 +71,26 @@ export function bestCandidate(candidates: RollingCandidate[], notes: Notes): Rol
     );
   }
   return null;
+}
+
+/**
+ * One candidate per kind, in the order of the kinds: the first feasible one in the order
+ * practice chooses in, else the nearest miss (nothing excludes it outright, then the largest
+ * governing margin). What a person reads first; every candidate stays in the result.
+ */
+export function leadOfEachKind(candidates: RollingCandidate[]): RollingCandidate[] {
+  const out: RollingCandidate[] = [];
+  for (const kind of ROLLING_KINDS) {
+    const of = candidates.filter((k) => k.kind === kind);
+    const lead =
+      of.filter((k) => k.feasible).sort(choiceOrder)[0] ??
+      [...of].sort(
+        (a, b) =>
+          a.exclusions.length - b.exclusions.length || governingMargin(b.checks) - governingMargin(a.checks),
+      )[0];
+    if (lead) out.push(lead);
+  }
+  return out;
 }
 
 /**

@@ -1,6 +1,7 @@
 import type { AssumedFinding, Finding } from '../../core/finding.js';
 import type { CheckRecord, SheetLine } from '../../core/check.js';
 import type { RollingType } from './life.js';
+import type { Arrangement, KindForm, RollingKind } from './kinds.js';
 
 /**
  * Result of the rolling-bearing check (a contract read by the CLI, the rules and the
@@ -12,9 +13,17 @@ export interface RollingCandidate {
   /** Stable id: "supplier" for the case's own bearing, else the ISO 15 row id (e.g. "dgb-02-40"). */
   id: string;
   type: RollingType;
-  /** Kind in words, e.g. "deep-groove ball". */
-  kind: string;
-  /** Dimension series ("02", "03"), or "supplier". */
+  /** Kind in the trade's name (a contract), e.g. "deep-groove ball", "tapered roller". */
+  kind: RollingKind;
+  /** Construction within the kind (rib form of a cylindrical roller bearing, needle roller construction), or null. */
+  form: KindForm | null;
+  /** Single bearing, or a matched pair acting as one support (a contract). */
+  arrangement: Arrangement;
+  /** Nominal contact angle, degrees (0 for the radial kinds; a contract in degrees). */
+  contactAngle: number;
+  /** Which directions of axial load the support takes. */
+  axialCapacity: 'none' | 'one direction' | 'both directions';
+  /** Dimension series ("02", "302", "drawn cup"), or "supplier". */
   series: string;
   /** Generic designation in words. */
   designation: string;
@@ -36,9 +45,12 @@ export interface RollingCandidate {
   /** Estimated rolling-element diameter, m, and count (for the oscillation criterion, and the ratings when estimated). */
   elementDiameter: number;
   elementCount: number;
-  /** X and Y of the heaviest operating point. */
+  /** X and Y of the heaviest operating point, and its limit e of Fa/Fr (null where the kind has none). */
   X: number;
   Y: number;
+  e: number | null;
+  /** Largest axial load the bearing carries, N: the case's, plus the induced force of an opposed partner for a single-row angular-contact or tapered bearing. */
+  axialLoad: number;
   /** Dynamic equivalent load (duty-spectrum mean, times service factor), N. */
   equivalentLoad: number;
   /** Peak static equivalent load P0, N. */
@@ -56,6 +68,8 @@ export interface RollingCandidate {
   L10mh: number | null;
   /** Static safety factor C0/P0 (null with no load). */
   s0: number | null;
+  /** True when the shaft turns so slowly that no rating life is claimed: static safety governs. */
+  staticOnly: boolean;
   /** Speed factor at the highest point speed, mm·r/min. */
   ndm: number;
   /** Friction torque, N·m: time-weighted mean over the duty's operating points, Σ ti·Mi/Σ ti. */
