@@ -77,7 +77,8 @@ export interface AIsoResult {
  * so the caller warns. At κ = 0.1 the bracket term (x − y/κ^z) is within 10⁻⁴ of
  * zero with the published constants, so a_ISO ≈ 0.1 whatever e_C·Cu/P; a negative
  * rounding residue is held at zero. When the bracket reaches zero or below (large
- * e_C·Cu/P) the formula runs to infinity and the cap of 50 applies.
+ * e_C·Cu/P) the formula runs to infinity and the cap of 50 applies. A load ratio that is
+ * not a number is read as 0 (a_ISO = 0.1, the conservative end), never as the cap.
  */
 export function aIso(type: RollingType, kappa: number, eCCuP: number): AIsoResult {
   const k = AISO_CONSTANTS[type];
@@ -94,8 +95,12 @@ export function aIso(type: RollingType, kappa: number, eCCuP: number): AIsoResul
   const y = k.y[band]!;
   const z = k.z[band]!;
   const term = Math.max(0, k.x - y / Math.pow(kUsed, z));
-  const load = Math.max(0, eCCuP);
-  const bracket = 1 - Math.pow(term, k.inner) * Math.pow(load, k.load);
+  // A load ratio that is not a number (0/0: no load and no Cu) is read as 0, the floor
+  // a_ISO = 0.1, never as the cap; a zero term or a zero load ratio gives the floor even
+  // beside an infinite factor (0·∞ would be NaN and read as the cap).
+  const load = Number.isNaN(eCCuP) ? 0 : Math.max(0, eCCuP);
+  const product = term === 0 || load === 0 ? 0 : Math.pow(term, k.inner) * Math.pow(load, k.load);
+  const bracket = 1 - product;
   if (!(bracket > 0)) return { aISO: AISO_CAP, kappaUsed: kUsed, kappaRange, capped: true };
   const raw = 0.1 * Math.pow(bracket, k.outer);
   if (!Number.isFinite(raw) || raw > AISO_CAP) return { aISO: AISO_CAP, kappaUsed: kUsed, kappaRange, capped: true };
