@@ -1,17 +1,26 @@
+import type { Shock } from '../../case/types.js';
+import { rollingRunning } from '../../data/rolling-running.js';
+import type { BearingSupply } from './lubrication.js';
+import type { KindForm, RollingKind } from './kinds.js';
+import type { RollingType } from './life.js';
+
 /**
- * Speed, friction and grease-life figures of a rolling bearing.
+ * Speed figures of a rolling bearing, the speed limit of each kind and the static-safety
+ * guidance (the friction moment is in friction.ts, grease life in grease.ts).
  *
  * References
- * [1] Speed factor n·dm against limits per lubrication (common practice; limits in
- *     data/rolling-factors.json).
+ * [1] Speed factor n·dm against limits per kind and supply (common practice; limits in
+ *     data/rolling-running.json, each row with its source).
  * [2] Friction torque with a constant coefficient referred to the bore,
- *     M = μ·P·d/2 (common practice, from memory; coefficients in data/rolling-factors.json).
- * [3] Grease relubrication interval t_f = k_f·[14·10⁶/(n·√d) − 4·d] h, n r/min, d bore mm,
- *     halved for each 15 °C above 70 °C (a rolling-bearing maker's general technical guide
- *     on grease relubrication, seen; not named here).
+ *     M = μ·P·d/2 (common practice, from memory). Superseded by frictionMoment (friction.ts).
+ * [3] A bearing maker's grease relubrication chart formula (seen; not named here). Superseded
+ *     by greaseLife and regreasingInterval (grease.ts).
  * [4] Small-swing criterion for oscillating bearings: the angle a ring must swing for
  *     each rolling element to roll onto the track of its neighbour (kinematics of the
  *     cage; criterion common practice).
+ * [5] Static safety s0 = C0/P0 guidance per shock level and ball/roller: values of our own,
+ *     common practice, ranges as in Brändlein, Eschmann, Hasbargen & Weigand, Ball and Roller
+ *     Bearings, 3rd ed., Wiley 1999 (from memory); rows in data/rolling-running.json.
  */
 
 /**
@@ -23,6 +32,7 @@ export function speedFactor(n: number, dm: number): number {
 }
 
 /**
+ * @deprecated Use frictionMoment (friction.ts), which has a viscous and a load term.
  * Friction torque, N·m [2]: M = μ·P·d/2. μ friction coefficient referred to the bore
  * (dimensionless), P load, N, d bore, m. Valid for moderate loads (P ≈ 0.1·C) and
  * normal lubrication; it ignores the load-independent (viscous) share, which dominates
@@ -38,6 +48,7 @@ export function frictionPower(M: number, n: number): number {
 }
 
 /**
+ * @deprecated Use greaseLife / regreasingInterval (grease.ts), an open published method.
  * Grease relubrication interval, hours [3]:
  *   t_f = k_f·[14·10⁶/(n·√d) − 4·d] · 0.5^(max(0, T − 70)/15)
  * n r/min inside (given in rev/s), d bore mm inside (given in m), k_f type factor,
@@ -68,4 +79,43 @@ export function relubricationInterval(n: number, d: number, kf: number, tC: numb
 export function criticalSwingAngle(Z: number, Dw: number, dm: number): number {
   const gamma = Dw / dm;
   return (2 * ((2 * Math.PI) / Z)) / (1 - gamma);
+}
+
+/** A speed limit: n·dm, mm·r/min, and where it comes from. */
+export interface SpeedLimit {
+  ndm: number;
+  source: string;
+}
+
+/**
+ * Speed limit of a kind on a supply [1], as n·dm in mm·r/min (compare with speedFactor).
+ * A row for the kind's form is taken where the table has one (the drawn-cup needle roller
+ * bearing), else the kind's general row. The limits are common practice for bearings of
+ * normal precision with a pressed or moulded cage; a sealed bearing with contact seals runs
+ * below them. Throws when the table has no row for the kind (a data defect).
+ */
+export function speedLimit(kind: RollingKind, supply: BearingSupply, form: KindForm | null = null): SpeedLimit {
+  const rows = rollingRunning().speedLimits.filter((r) => r.kind === kind);
+  const row = rows.find((r) => form !== null && r.form === form) ?? rows.find((r) => r.form === null);
+  if (!row) throw new Error(`no speed limit for ${kind}`);
+  return { ndm: row.ndm[supply], source: row.source };
+}
+
+/** Static-safety guidance: the least s0 = C0/P0 for a shock level, its label and its source. */
+export interface StaticSafetyGuidance {
+  label: string;
+  min: number;
+  source: string;
+}
+
+/**
+ * Least static safety s0 = C0/P0 [5] for the case's shock level and a ball or roller kind
+ * (C0 basic static rating, P0 static equivalent load, both N; ISO 76:2006 defines C0 by the
+ * contact stress that leaves a permanent deformation of about 1/10 000 of the element
+ * diameter, from memory). The label is our own wording of the shock level.
+ */
+export function staticSafetyGuidance(shock: Shock, type: RollingType): StaticSafetyGuidance {
+  const row = rollingRunning().staticSafety.find((r) => r.shock === shock);
+  if (!row) throw new Error(`no static-safety guidance for shock level ${shock}`);
+  return { label: row.label, min: row[type], source: row.source };
 }

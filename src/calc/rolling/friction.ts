@@ -1,0 +1,131 @@
+import { rollingRunning, type FrictionRow } from '../../data/rolling-running.js';
+import type { Arrangement, KindForm, RollingKind } from './kinds.js';
+import type { BearingSupply } from './lubrication.js';
+
+/**
+ * Friction moment of a rolling bearing as the sum of a viscous (load-independent) term and a
+ * load term, the model of Palmgren as the rolling-bearing analysis textbooks give it:
+ *
+ * References (factors and their sources in data/rolling-running.json → friction)
+ * [1] Palmgren, A., Ball and Roller Bearing Engineering, 3rd ed., Burbank, 1959; Harris, T. A.
+ *     & Kotzalas, M. N., Rolling Bearing Analysis, 5th ed. (Essential Concepts of Bearing
+ *     Technology), CRC 2007, chapter on friction (the formulas and factors from memory; the
+ *     split into a moment due to the lubricant and one due to load, seen in its nomenclature).
+ *       M_v = 10⁻⁷·f0·(ν·n)^(2/3)·dm³   for ν·n ≥ 2000
+ *       M_v = 160·10⁻⁷·f0·dm³           for ν·n < 2000
+ *     (ν mm²/s, n r/min, dm mm, M_v N·mm; the two meet at ν·n = 2000, since 2000^(2/3) ≈ 159);
+ *       M_l = f1·P1·dm,  f1 = z·(P0/C0)^y,  P1 = max(k_a·Fa + k_r·Fr, Fr)
+ *     and, for a cylindrical roller bearing carrying axial load on its ribs, a rib term
+ *     k_rib·Fa·dm added to M_l (order of magnitude, from memory).
+ * [2] The supply picks the column of f0: grease (after the grease has settled), oil bath, and
+ *     fed oil taken as the oil-jet column (conservative: a feed passes more oil than a bath).
+ *
+ * Valid for bearings running under steady load with a full film or nearly so; seals, starting
+ * torque and a fresh, churning grease fill are not included.
+ */
+
+export interface FrictionInput {
+  kind: RollingKind;
+  form: KindForm | null;
+  arrangement: Arrangement;
+  supply: BearingSupply;
+  /** Kinematic viscosity of the oil (or the grease's base oil) at operating temperature, m²/s. */
+  nu: number;
+  /** Speed, rev/s. */
+  n: number;
+  /** Pitch diameter, m. */
+  dm: number;
+  /** Radial and axial load on the support (the pair, for a pair), N. */
+  Fr: number;
+  Fa: number;
+  /** Static equivalent load of the most loaded bearing, N; absent: max(Fr, 0.6·Fr + 0.5·Fa) per bearing. */
+  P0?: number;
+  /** Basic static rating of one bearing, N. */
+  C0: number;
+}
+
+/** The loads one bearing of the support carries, N. */
+export interface BearingShare {
+  Fr: number;
+  Fa: number;
+}
+
+export interface FrictionMoment {
+  /** Load-independent (viscous) moment, N·m, summed over the bearings of the support. */
+  viscous: number;
+  /** Load moment, N·m, summed likewise. */
+  load: number;
+  /** viscous + load, N·m. */
+  total: number;
+  /** The factors used: f0 of the supply, and f1 and P1 (N) of each bearing. */
+  f0: number;
+  f1: number[];
+  P1: number[];
+}
+
+/**
+ * How a support's loads fall on its bearings: one bearing alone; a back-to-back or
+ * face-to-face pair sharing the radial load, one bearing taking the axial load in the
+ * direction given; a tandem pair sharing both (common practice).
+ */
+export function bearingShares(arrangement: Arrangement, Fr: number, Fa: number): BearingShare[] {
+  if (arrangement === 'single') return [{ Fr, Fa }];
+  if (arrangement === 'pair tandem')
+    return [
+      { Fr: Fr / 2, Fa: Fa / 2 },
+      { Fr: Fr / 2, Fa: Fa / 2 },
+    ];
+  return [
+    { Fr: Fr / 2, Fa },
+    { Fr: Fr / 2, Fa: 0 },
+  ];
+}
+
+/**
+ * Viscous moment of one bearing, N·m [1]: 10⁻⁷·f0·(ν·n)^(2/3)·dm³ N·mm for ν·n ≥ 2000,
+ * 160·10⁻⁷·f0·dm³ below (ν mm²/s, n r/min, dm mm inside; given in SI: ν m²/s, n rev/s, dm m).
+ * 0 when the bearing does not turn.
+ */
+export function viscousMoment(f0: number, nu: number, n: number, dm: number): number {
+  if (!(n > 0)) return 0;
+  const nuN = Math.max(0, nu) * 1e6 * n * 60;
+  const dmMm = dm * 1000;
+  const nmm = nuN >= 2000 ? 1e-7 * f0 * Math.pow(nuN, 2 / 3) * dmMm ** 3 : 160e-7 * f0 * dmMm ** 3;
+  return nmm / 1000;
+}
+
+/** The load P1 the load term takes, N [1]: max(k_a·Fa + k_r·Fr, Fr). */
+export function frictionLoad(row: Pick<FrictionRow, 'faFactor' | 'frFactor'>, Fr: number, Fa: number): number {
+  return Math.max(row.faFactor * Fa + row.frFactor * Fr, Fr);
+}
+
+/** f1 = z·(P0/C0)^y [1] (y = 0 for the roller kinds: f1 = z). */
+export function loadFactor(row: Pick<FrictionRow, 'z' | 'y'>, P0: number, C0: number): number {
+  if (row.y === 0) return row.z;
+  return row.z * Math.pow(C0 > 0 ? Math.max(0, P0) / C0 : 0, row.y);
+}
+
+/**
+ * Friction moment of a support, N·m [1][2]: M = Σ (M_v + M_l) over its bearings
+ * (bearingShares). Loads are taken as magnitudes.
+ */
+export function frictionMoment(x: FrictionInput): FrictionMoment {
+  const row = rollingRunning().friction.find((r) => r.kind === x.kind);
+  if (!row) throw new Error(`no friction factors for ${x.kind}`);
+  const f0 = row.f0[x.supply];
+  const shares = bearingShares(x.arrangement, Math.abs(x.Fr), Math.abs(x.Fa));
+  const f1: number[] = [];
+  const P1: number[] = [];
+  let viscous = 0;
+  let load = 0;
+  for (const s of shares) {
+    const P0 = x.P0 ?? Math.max(s.Fr, 0.6 * s.Fr + 0.5 * s.Fa);
+    const f = loadFactor(row, P0, x.C0);
+    const p = frictionLoad(row, s.Fr, s.Fa);
+    f1.push(f);
+    P1.push(p);
+    viscous += viscousMoment(f0, x.nu, x.n, x.dm);
+    load += f * p * x.dm + row.ribFactor * s.Fa * x.dm;
+  }
+  return { viscous, load, total: viscous + load, f0, f1, P1 };
+}
