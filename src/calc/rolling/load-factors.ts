@@ -1,0 +1,442 @@
+import { loadFactors, type KeyedAngle, type LoadFactors } from '../../data/rolling-load-factors.js';
+import { interpolate, type Interpolated } from './interpolate.js';
+import type { Arrangement, KindForm, RollingKind } from './kinds.js';
+
+/**
+ * Dynamic and static equivalent loads of radial rolling bearings, kind by kind, and the
+ * directions in which each kind carries axial load.
+ *
+ *   P = X·Fr + Y·Fa (ISO 281:2007 cl. 6.2, 7.2),   P0 = max(X0·Fr + Y0·Fa, Fr) (ISO 76:2006)
+ *
+ * Fr radial load, N; Fa axial load, N (≥ 0, its direction is the caller's concern);
+ * X, Y, X0, Y0 dimensionless; e the limit of Fa/Fr where the factors change. The factors are in
+ * data/rolling-load-factors.json with their sources (ISO 281:2007 Table 3 for ball bearings,
+ * Table 7 for roller bearings, ISO 76:2006 for the static factors; values from memory).
+ *
+ * Double-row factors apply to the two-row kinds (self-aligning ball, spherical roller) and to a
+ * matched pair back-to-back or face-to-face (ISO 281 treats such a pair as one double-row
+ * bearing); a pair in tandem takes the single-row factors, with C0 that of the pair.
+ */
+
+export interface BearingLoadSpec {
+  kind: RollingKind;
+  form: KindForm | null;
+  arrangement: Arrangement;
+  /** Nominal contact angle α, degrees (0 for the radial-contact kinds). */
+  contactAngle: number;
+  /** Basic static load rating of the whole support (both bearings of a pair), N. */
+  C0: number;
+  /** ISO 76 factor f0 of a ball kind (for the key f0·Fa/C0); null for roller kinds or unknown. */
+  f0: number | null;
+  /** Balls per row of one bearing, and ball diameter in m: the key Fa/(i·Z·Dw²) when f0 is not known. */
+  Z?: number;
+  Dw?: number;
+  /** Bore, outside diameter and width of one bearing, m (the permissible rib load of a cylindrical roller bearing). */
+  d?: number;
+  D?: number;
+  B?: number;
+}
+
+export interface DynamicLoad {
+  /** Dynamic equivalent load, N (for an excluded case indicative only). */
+  P: number;
+  X: number;
+  Y: number;
+  /** Limit of Fa/Fr, or null where the kind has none (cylindrical and needle roller). */
+  e: number | null;
+  /** What the table was entered with (i·f0·Fa/C0, or Fa/(i·Z·Dw²) in N/mm²), or null. */
+  key: number | null;
+  /** Where the key lies against the table: 'below' uses the first row, 'above' the last. */
+  range: 'below' | 'inside' | 'above';
+  /** Set when the method stops: the bearing is not rated for this load this way. */
+  exclusion: { code: string; values: Record<string, number | string | null> } | null;
+}
+
+export type AxialCapacity = 'none' | 'one direction' | 'both directions';
+
+/** The two bearings of a pair face each other and together locate the shaft both ways. */
+function opposed(a: Arrangement): boolean {
+  return a === 'pair back-to-back' || a === 'pair face-to-face';
+}
+
+/** True where the double-row factors apply (see the file comment). */
+export function actsAsDoubleRow(kind: RollingKind, arrangement: Arrangement): boolean {
+  return kind === 'self-aligning ball' || kind === 'spherical roller' || opposed(arrangement);
+}
+
+/**
+ * Directions in which a support of this kind, form and arrangement carries axial load
+ * (construction of the kinds; common practice): deep-groove ball, self-aligning ball and
+ * spherical roller both ways; single-row angular-contact ball and tapered roller, and a
+ * tandem pair of them, one way, an opposed pair both ways; cylindrical roller with ribs on one
+ * ring none, ribs on both rings one way (both with a loose rib, or as an opposed pair);
+ * needle roller none.
+ */
+export function axialCapacity(kind: RollingKind, form: KindForm | null, arrangement: Arrangement): AxialCapacity {
+  switch (kind) {
+    case 'deep-groove ball':
+    case 'self-aligning ball':
+    case 'spherical roller':
+      return 'both directions';
+    case 'angular-contact ball':
+    case 'tapered roller':
+      return opposed(arrangement) ? 'both directions' : 'one direction';
+    case 'cylindrical roller':
+      if (form === 'ribs on both rings and a loose rib') return 'both directions';
+      if (form === 'ribs on both rings') return opposed(arrangement) ? 'both directions' : 'one direction';
+      return 'none';
+    case 'needle roller':
+      return 'none';
+  }
+}
+
+/** e and the factors either side of it. */
+interface Factors {
+  e: number;
+  belowX: number;
+  belowY: number;
+  aboveX: number;
+  aboveY: number;
+}
+
+const cot = (deg: number) => 1 / Math.tan((deg * Math.PI) / 180);
+const tan = (deg: number) => Math.tan((deg * Math.PI) / 180);
+const lerp = (a: number, b: number, t: number) => a + t * (b - a);
+
+/** Apply the factors: below-e pair when Fa ≤ e·Fr (Fa/Fr ≤ e), the above-e pair otherwise. */
+function apply(
+  f: Factors,
+  Fr: number,
+  Fa: number,
+  key: number | null,
+  range: DynamicLoad['range'],
+  exclusion: DynamicLoad['exclusion'],
+): DynamicLoad {
+  const below = Fa <= f.e * Fr;
+  const X = below ? f.belowX : f.aboveX;
+  const Y = below ? f.belowY : f.aboveY;
+  return { P: X * Fr + Y * Fa, X, Y, e: f.e, key, range, exclusion };
+}
+
+/**
+ * The relative axial load the ball tables are entered with (ISO 281:2007 Table 3):
+ * i·f0·Fa/C0 with C0 of the whole support, or, when f0 is not known, Fa/(i·Z·Dw²) in N/mm²
+ * (the same numbers for a radial-contact bearing: C0 = f0·i·Z·Dw²·cos α, ISO 76).
+ * Radial contact (deep-groove ball): every row shares the axial load, i cancels in f0·Fa/C0.
+ * Angular contact: one row carries it, so a pair back-to-back or face-to-face enters with
+ * 2·f0·Fa/C0 (the key of one of its bearings), a tandem pair with f0·Fa/C0 (each takes half).
+ * Null when neither f0 nor Z and Dw are known.
+ */
+export function relativeAxialLoad(b: BearingLoadSpec, Fa: number): number | null {
+  const pair = b.arrangement !== 'single';
+  const rowsSharing = b.kind === 'angular-contact ball' ? (b.arrangement === 'pair tandem' ? 2 : 1) : pair ? 2 : 1;
+  if (b.f0 !== null && b.f0 > 0 && b.C0 > 0) {
+    const i = b.kind === 'angular-contact ball' && opposed(b.arrangement) ? 2 : 1;
+    return (i * b.f0 * Fa) / b.C0;
+  }
+  if (b.Z !== undefined && b.Z > 0 && b.Dw !== undefined && b.Dw > 0) {
+    return Fa / (rowsSharing * b.Z * b.Dw * b.Dw) / 1e6;
+  }
+  return null;
+}
+
+/** e, X, Y of a radial-contact ball bearing at the key, with where the key lies. */
+function radialBallFactors(t: LoadFactors, key: number): { f: Factors; at: Interpolated } {
+  const rows = t.radialBall.rows;
+  const at = interpolate(
+    rows.map((r) => ({ x: r.key, y: r.e })),
+    key,
+  );
+  const Y = interpolate(
+    rows.map((r) => ({ x: r.key, y: r.Y })),
+    key,
+  ).value;
+  return { f: { e: at.value, belowX: 1, belowY: 0, aboveX: t.radialBall.xAboveE, aboveY: Y }, at };
+}
+
+/** Factors of one tabulated contact angle with key-dependent rows (5, 10, 15°). */
+function keyedAngleFactors(keys: number[], a: KeyedAngle, key: number, double: boolean): Factors {
+  const col = (ys: number[]) =>
+    interpolate(
+      keys.map((x, i) => ({ x, y: ys[i]! })),
+      key,
+    ).value;
+  return double
+    ? {
+        e: col(a.double.e),
+        belowX: 1,
+        belowY: col(a.double.yBelowE),
+        aboveX: a.double.xAboveE,
+        aboveY: col(a.double.yAboveE),
+      }
+    : { e: col(a.single.e), belowX: 1, belowY: 0, aboveX: a.single.xAboveE, aboveY: col(a.single.Y) };
+}
+
+/**
+ * e, X, Y of an angular-contact ball bearing: by the key-dependent rows for 5 to 15°, fixed
+ * values for 20 to 45°, linear between tabulated angles (ISO 281:2007 Table 3, which allows
+ * linear interpolation for loads and contact angles between its entries; from memory).
+ * Null outside 5° … 45°.
+ */
+export function angularContactFactors(
+  t: LoadFactors,
+  alpha: number,
+  key: number,
+  double: boolean,
+): { f: Factors; range: DynamicLoad['range'] } | null {
+  const keys = t.angularContactKeyed.keys;
+  const at = interpolate(
+    keys.map((x) => ({ x, y: x })),
+    key,
+  );
+  const entries: { angle: number; f: () => Factors }[] = [
+    ...t.angularContactKeyed.angles.map((a) => ({ angle: a.angle, f: () => keyedAngleFactors(keys, a, key, double) })),
+    ...t.angularContactFixed.rows.map((r) => ({
+      angle: r.angle,
+      f: (): Factors =>
+        double
+          ? { e: r.e, belowX: 1, belowY: r.doubleYBelowE, aboveX: r.doubleX, aboveY: r.doubleY }
+          : { e: r.e, belowX: 1, belowY: 0, aboveX: r.singleX, aboveY: r.singleY },
+    })),
+  ];
+  const first = entries[0]!;
+  const last = entries[entries.length - 1]!;
+  if (!(alpha >= first.angle - 1e-9 && alpha <= last.angle + 1e-9)) return null;
+  const j = Math.max(
+    1,
+    entries.findIndex((x) => x.angle >= alpha - 1e-9),
+  );
+  const lo = entries[j - 1]!;
+  const hi = entries[j]!;
+  const s = Math.min(1, Math.max(0, (alpha - lo.angle) / (hi.angle - lo.angle)));
+  const a = lo.f();
+  const b = hi.f();
+  const f: Factors = {
+    e: lerp(a.e, b.e, s),
+    belowX: lerp(a.belowX, b.belowX, s),
+    belowY: lerp(a.belowY, b.belowY, s),
+    aboveX: lerp(a.aboveX, b.aboveX, s),
+    aboveY: lerp(a.aboveY, b.aboveY, s),
+  };
+  const isKeyed = (angle: number) => t.angularContactKeyed.angles.some((k) => k.angle === angle);
+  const keyed = (s < 1 && isKeyed(lo.angle)) || (s > 0 && isKeyed(hi.angle));
+  return { f, range: keyed ? at.range : 'inside' };
+}
+
+/** Factors from the closed forms in α (self-aligning ball; tapered and spherical roller). */
+function closedFormFactors(t: LoadFactors, kind: RollingKind, alpha: number, double: boolean): Factors {
+  if (kind === 'self-aligning ball') {
+    const s = t.selfAligningBall;
+    return {
+      e: s.eTan * tan(alpha),
+      belowX: 1,
+      belowY: s.yBelowECot * cot(alpha),
+      aboveX: s.xAboveE,
+      aboveY: s.yAboveECot * cot(alpha),
+    };
+  }
+  const r = t.radialRoller;
+  return double
+    ? {
+        e: r.eTan * tan(alpha),
+        belowX: 1,
+        belowY: r.double.yBelowECot * cot(alpha),
+        aboveX: r.double.xAboveE,
+        aboveY: r.double.yAboveECot * cot(alpha),
+      }
+    : {
+        e: r.eTan * tan(alpha),
+        belowX: 1,
+        belowY: 0,
+        aboveX: r.single.xAboveE,
+        aboveY: r.single.yAboveECot * cot(alpha),
+      };
+}
+
+/** Nominal contact angles, degrees, for which the closed forms are taken (ISO 281 radial bearings: α ≤ 45°). */
+const CLOSED_FORM_ANGLES = { min: 0, max: 45 } as const;
+
+/**
+ * Dynamic equivalent load P = X·Fr + Y·Fa of one support (ISO 281:2007 cl. 6.2 and 7.2).
+ * Fr, Fa in N (≥ 0); n speed in rev/s, used only for the permissible rib load of a cylindrical
+ * roller bearing. The exclusion codes:
+ * - rolling.no-axial-capacity: Fa > 0 on a kind/form that carries none;
+ * - rolling.axial-load-beyond-table: a deep-groove ball bearing's key above the table's last row
+ *   (the standard gives no factors there; the permissible axial load depends on the design);
+ * - rolling.load-key-unknown: a ball kind that needs the key, without f0 nor Z and Dw;
+ * - rolling.contact-angle-outside-table: α outside what the table or formula covers;
+ * - rolling.rib-axial-load-exceeded: Fa above the permissible rib load (see rib-axial-load.ts).
+ * Cylindrical and needle roller bearings: P = Fr; ISO 281 gives no X, Y for α = 0 roller
+ * bearings under axial load and leaves it to the maker (from memory); within the permissible
+ * rib load the axial load is taken not to shorten raceway fatigue life (common practice).
+ */
+export function dynamicLoad(b: BearingLoadSpec, Fr: number, Fa: number, n?: number): DynamicLoad {
+  const t = loadFactors();
+  const alpha = b.contactAngle;
+  const double = actsAsDoubleRow(b.kind, b.arrangement);
+  const excl = (code: string, values: Record<string, number | string | null>) => ({ code, values });
+  switch (b.kind) {
+    case 'deep-groove ball': {
+      const key = relativeAxialLoad(b, Fa);
+      if (key === null) {
+        const f = radialBallFactors(t, 0).f;
+        return apply(f, Fr, Fa, null, 'inside', Fa > 0 ? excl('rolling.load-key-unknown', { kind: b.kind }) : null);
+      }
+      const { f, at } = radialBallFactors(t, key);
+      if (!(Fa > 0)) return apply(f, Fr, 0, key, 'inside', null);
+      const keyMax = t.radialBall.rows[t.radialBall.rows.length - 1]!.key;
+      const exclusion =
+        at.range === 'above'
+          ? excl('rolling.axial-load-beyond-table', { kind: b.kind, key, keyMax, f0: b.f0, Fa, C0: b.C0 })
+          : null;
+      return apply(f, Fr, Fa, key, at.range, exclusion);
+    }
+    case 'angular-contact ball': {
+      const key = relativeAxialLoad(b, Fa);
+      const needsKey = alpha < t.angularContactFixed.rows[0]!.angle && Fa > 0;
+      const k = key ?? 0;
+      const got = angularContactFactors(t, alpha, k, double);
+      if (!got) {
+        const lo = t.angularContactKeyed.angles[0]!.angle;
+        const hi = t.angularContactFixed.rows[t.angularContactFixed.rows.length - 1]!.angle;
+        const clamped = angularContactFactors(t, Math.min(hi, Math.max(lo, alpha)), k, double)!;
+        return apply(
+          clamped.f,
+          Fr,
+          Fa,
+          key,
+          'inside',
+          excl('rolling.contact-angle-outside-table', { kind: b.kind, contactAngle: alpha, min: lo, max: hi }),
+        );
+      }
+      if (needsKey && key === null)
+        return apply(got.f, Fr, Fa, null, 'inside', excl('rolling.load-key-unknown', { kind: b.kind }));
+      return apply(got.f, Fr, Fa, key, Fa > 0 ? got.range : 'inside', null);
+    }
+    case 'self-aligning ball':
+    case 'tapered roller':
+    case 'spherical roller': {
+      const { min, max } = CLOSED_FORM_ANGLES;
+      const inside = alpha > min && alpha <= max;
+      const f = closedFormFactors(t, b.kind, inside ? alpha : Math.min(max, Math.max(1, alpha)), double);
+      const exclusion = inside
+        ? null
+        : excl('rolling.contact-angle-outside-table', { kind: b.kind, contactAngle: alpha, min, max });
+      return apply(f, Fr, Fa, null, 'inside', exclusion);
+    }
+    case 'cylindrical roller':
+    case 'needle roller': {
+      const base: DynamicLoad = { P: Fr, X: 1, Y: 0, e: null, key: null, range: 'inside', exclusion: null };
+      if (!(Fa > 0)) return base;
+      if (axialCapacity(b.kind, b.form, b.arrangement) === 'none')
+        return { ...base, exclusion: excl('rolling.no-axial-capacity', { kind: b.kind, form: b.form, Fa }) };
+      const rib = permissibleRibAxialLoad({ d: b.d, D: b.D, B: b.B, n, Fr });
+      if (Fa > rib.FaPerm)
+        return {
+          ...base,
+          exclusion: excl('rolling.rib-axial-load-exceeded', {
+            Fa,
+            FaPerm: rib.FaPerm,
+            heatLimit: Number.isFinite(rib.heatLimit) ? rib.heatLimit : null,
+            radialLimit: rib.radialLimit,
+            governing: rib.governing,
+            n: n ?? null,
+          }),
+        };
+      return base;
+    }
+  }
+}
+
+export interface RibAxialLoadInput {
+  /** Bore, outside diameter and width of the bearing, m (undefined: the heat limit is not checked). */
+  d?: number;
+  D?: number;
+  B?: number;
+  /** Speed, rev/s (undefined or 0: no heat limit). */
+  n?: number;
+  /** Radial load, N. */
+  Fr: number;
+  /** How well the bearing's heat is carried away (default 'normal'). */
+  cooling?: 'poor' | 'normal' | 'good';
+}
+
+/**
+ * Permissible axial load of a cylindrical roller bearing carrying axial load on its ribs
+ * (Brändlein, Eschmann, Hasbargen, Weigand, Ball and Roller Bearings: Theory, Design and
+ * Application, 3rd ed., Wiley 1999, axial load carrying capacity of cylindrical roller
+ * bearings; the form and kS from memory):
+ *   heat limit  Fa,heat = kS·kB·dM^1.5·n^-0.6   (N, with dM = (d + D)/2 in mm, n in r/min)
+ *   guidance    Fa,radial = s·Fr                 (s = 0.4, common practice)
+ *   Fa,perm = min(Fa,heat, Fa,radial)
+ * kS by the heat dissipation (poor 7.5, normal 15, good 22), kB by the width ratio
+ * B/((D − d)/2) standing for the book's factor by bearing series (our own assumption, in
+ * data/rolling-load-factors.json). d, D, B in m, n in rev/s, Fr in N. Valid for continuous axial
+ * load with oil or grease of adequate viscosity; short shocks may exceed it. Without d, D, B or
+ * with n = 0 only the radial guidance limit applies.
+ */
+export function permissibleRibAxialLoad(x: RibAxialLoadInput): {
+  FaPerm: number;
+  heatLimit: number;
+  radialLimit: number;
+  governing: 'heat' | 'radial load';
+} {
+  const t = loadFactors().ribAxialLoad;
+  const radialLimit = t.radialShare * Math.max(0, x.Fr);
+  let heatLimit = Infinity;
+  const { d, D, B, n } = x;
+  if (d !== undefined && D !== undefined && B !== undefined && D > d && n !== undefined && n > 0) {
+    const ratio = B / ((D - d) / 2);
+    const kB = (t.kB.find((r) => ratio <= r.widthRatioUpTo) ?? t.kB[t.kB.length - 1]!).kB;
+    const kS = t.kS[x.cooling ?? 'normal'];
+    const dM_mm = ((d + D) / 2) * 1000;
+    heatLimit = kS * kB * Math.pow(dM_mm, 1.5) * Math.pow(n * 60, -0.6);
+  }
+  return heatLimit < radialLimit
+    ? { FaPerm: heatLimit, heatLimit, radialLimit, governing: 'heat' }
+    : { FaPerm: radialLimit, heatLimit, radialLimit, governing: 'radial load' };
+}
+
+/**
+ * Static equivalent load P0 = max(X0·Fr + Y0·Fa, Fr) of one support (ISO 76:2006; factors from
+ * memory): radial-contact ball X0 = 0.6, Y0 = 0.5; angular-contact ball X0 = 0.5 single row
+ * (and tandem), 1 double row (opposed pair), Y0 by contact angle from the table, linear between
+ * angles and held at its ends; self-aligning ball X0 = 1, Y0 = 0.44·cot α; tapered and
+ * spherical roller single row X0 = 0.5, Y0 = 0.22·cot α, double row X0 = 1, Y0 = 0.44·cot α;
+ * cylindrical and needle roller P0 = Fr. Fr, Fa in N. An α outside 0 < α ≤ 45° is held to
+ * 1° … 45° (indicative only: dynamicLoad excludes such a bearing).
+ */
+export function staticLoad(b: BearingLoadSpec, Fr: number, Fa: number): { P0: number; X0: number; Y0: number } {
+  const s = loadFactors().static;
+  const double = actsAsDoubleRow(b.kind, b.arrangement);
+  const alpha = Math.min(45, Math.max(1, b.contactAngle));
+  let X0 = 1;
+  let Y0 = 0;
+  switch (b.kind) {
+    case 'deep-groove ball':
+      X0 = s.radialBall.X0;
+      Y0 = s.radialBall.Y0;
+      break;
+    case 'angular-contact ball': {
+      X0 = double ? s.angularContactX0.double : s.angularContactX0.single;
+      const rows = s.angularContact.map((r) => ({ x: r.angle, y: double ? r.doubleY0 : r.singleY0 }));
+      Y0 = interpolate(rows, b.contactAngle).value;
+      break;
+    }
+    case 'self-aligning ball':
+      X0 = s.selfAligningBall.X0;
+      Y0 = s.selfAligningBall.y0Cot * cot(alpha);
+      break;
+    case 'tapered roller':
+    case 'spherical roller': {
+      const r = double ? s.radialRoller.double : s.radialRoller.single;
+      X0 = r.X0;
+      Y0 = r.y0Cot * cot(alpha);
+      break;
+    }
+    case 'cylindrical roller':
+    case 'needle roller':
+      return { P0: Fr, X0: 1, Y0: 0 };
+  }
+  return { P0: Math.max(X0 * Fr + Y0 * Fa, Fr), X0, Y0 };
+}
