@@ -110,6 +110,9 @@ describe('static threshold (10 r/min, common practice)', () => {
   });
 });
 
+/** The value type an arbitrary draws. */
+type Drawn<A> = A extends fc.Arbitrary<infer T> ? T : never;
+
 const bearingArb = fc.record({
   type: fc.constantFrom('ball' as const, 'roller' as const),
   C: fc.double({ min: 5e3, max: 5e5, noNaN: true }),
@@ -118,7 +121,7 @@ const bearingArb = fc.record({
   eC: fc.double({ min: 0.05, max: 1, noNaN: true }),
   a1: fc.double({ min: 0.2, max: 1, noNaN: true }),
 });
-const toBearing = (b: fc.Infer<typeof bearingArb>): SpectrumBearing => ({ ...b, Cu: b.C * b.cuRatio });
+const toBearing = (b: Drawn<typeof bearingArb>): SpectrumBearing => ({ ...b, Cu: b.C * b.cuRatio });
 /** A turning, loaded point: P from 2 % to 50 % of C, 10 to 6000 r/min, ν 2 to 1000 mm²/s. */
 const pointArb = fc.record({
   pc: fc.double({ min: 0.02, max: 0.5, noNaN: true }),
@@ -126,7 +129,7 @@ const pointArb = fc.record({
   t: fc.double({ min: 0.01, max: 1, noNaN: true }),
   nu: fc.double({ min: 2, max: 1000, noNaN: true }),
 });
-const toPoint = (q: fc.Infer<typeof pointArb>, C: number): SpectrumPointIn => ({
+const toPoint = (q: Drawn<typeof pointArb>, C: number): SpectrumPointIn => ({
   P: q.pc * C,
   n: rpm(q.r),
   t: q.t,
