@@ -82,6 +82,13 @@ describe('edges of the method', () => {
     expect(a.kappaRange).toBe('below');
     expect(Number.isFinite(a.aISO)).toBe(true);
   });
+  it('a load ratio that is not a number (0/0) gives the floor 0.1, not the cap of 50', () => {
+    expect(aIso('ball', 2, NaN)).toMatchObject({ aISO: 0.1, capped: false });
+    expect(aIso('roller', 2, NaN)).toMatchObject({ aISO: 0.1, capped: false });
+  });
+  it('roller at κ = 0.1 (term held at zero) stays at the floor even for an unbounded load ratio (0·∞)', () => {
+    expect(aIso('roller', 0.1, Infinity)).toMatchObject({ aISO: 0.1, capped: false });
+  });
   it('a large e_C·Cu/P drives the bracket to zero or below: capped at 50, finite', () => {
     const a = aIso('ball', 4, 10);
     expect(a.aISO).toBe(AISO_CAP);
