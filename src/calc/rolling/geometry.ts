@@ -1,12 +1,28 @@
-import type { GeometryEstimateFactors } from '../../data/rolling.js';
+import type { KindRatingRow } from '../../data/rolling-ratings.js';
 import type { BallGeometry, RollerGeometry } from './ratings.js';
 
 /**
+ * The first estimate's factors (deep-groove ball and cylindrical roller only), kept for the
+ * callers of estimateBallGeometry and estimateRollerGeometry; estimateKindGeometry below and
+ * data/rolling-ratings.json replace them.
+ */
+export interface GeometryEstimateFactors {
+  ballDiameterFactor: number;
+  ballGammaMax: number;
+  ballFillAngle_deg: number;
+  rollerDiameterFactor: number;
+  rollerLengthFactor: number;
+  rollerPitchFactor: number;
+}
+
+/**
  * Internal geometry estimated from boundary dimensions, for bearings without a
- * supplier's rating (common practice, from memory; the factors live in
- * data/rolling-factors.json → geometryEstimate). A supplier's rating replaces the
+ * supplier's rating (common practice, from memory). A supplier's rating replaces the
  * estimate; the estimate is meant for concept-stage sizing only.
  *
+ * First estimate (estimateBallGeometry, estimateRollerGeometry; superseded by
+ * estimateKindGeometry, which is on the safe side of published geometries):
+
  * Deep-groove ball bearing (Conrad assembly):
  *   dm = (d + D)/2
  *   Dw = k_b·(D − d)/2, k_b = 0.6, held to Dw ≤ γ_max·dm (γ_max = 0.30, the end of the
@@ -35,4 +51,71 @@ export function estimateRollerGeometry(d: number, D: number, B: number, f: Geome
   const Lwe = f.rollerLengthFactor * B;
   const Z = Math.max(3, Math.floor((Math.PI * dm) / (f.rollerPitchFactor * Dwe) + 1e-9));
   return { Dwe, Lwe, Dpw: dm, Z, i: 1, alpha: 0 };
+}
+
+/** The estimated internal geometry of one bearing of a kind; lengths in m, angles in rad. */
+export interface KindGeometry {
+  /** Pitch diameter of the rolling-element set Dpw, m. */
+  dm: number;
+  /** Ball diameter Dw, or mean roller diameter Dwe, m. */
+  Dw: number;
+  /** Effective roller length Lwe per row, m; null for balls. */
+  Lwe: number | null;
+  /** Rolling elements per row. */
+  Z: number;
+  /** Rows of rolling elements in one bearing. */
+  rows: number;
+  /** Contact angle α, rad. */
+  alpha: number;
+  /** Roller set bore Fw of a needle roller bearing, m (null for the other kinds). */
+  Fw: number | null;
+}
+
+/**
+ * Internal geometry of one bearing of a kind from its boundary dimensions (common practice,
+ * from memory; the fractions and their reasons are in data/rolling-ratings.json → kinds):
+ *   S   = (D − Fw)/2 for needle rollers (Fw = d + f_Fw·(D − d) unless given), else (D − d)/2
+ *   dm  = Fw + Dw for needle rollers, else (d + D)/2
+ *   Dw  = min(k_e·S, γ_max·dm)      element diameter; γ_max holds small thick-ringed sizes
+ *                                    to the element proportions they are actually built with
+ *   Z   = floor(φ/(2·asin(Dw/dm))) + 1   Conrad fill over an arc φ (deep-groove ball), or
+ *   Z   = floor(π·dm/(s·Dw))             pitch s·Dw (cage bars) for the other kinds; Z ≥ 3
+ *   Lwe = max(k_L·B − ΔL, k_L·B/2)        rollers (B = total width T for tapered rollers)
+ * d, D, B, Fw in m; contactAngle in rad (the row's default when null). Valid for radial
+ * bearings of the common dimension series (ISO 15, ISO 355, ISO 1206); a supplier's
+ * geometry or rating replaces it.
+ */
+export function estimateKindGeometry(
+  row: KindRatingRow,
+  d: number,
+  D: number,
+  B: number,
+  contactAngle: number | null,
+  rollerSetBore: number | null,
+): KindGeometry {
+  let Fw: number | null = null;
+  let inner = d;
+  if (row.rollerSetBoreFraction !== null) {
+    Fw = rollerSetBore ?? d + row.rollerSetBoreFraction * (D - d);
+    inner = Fw;
+  }
+  const section = (D - inner) / 2;
+  const dmGuess = (inner + D) / 2;
+  let Dw = row.elementFraction * section;
+  // Needles: the rollers run on Fw, so their pitch circle is Fw + Dw, not the middle of the section.
+  let dm = Fw !== null ? Fw + Dw : dmGuess;
+  if (Dw > row.gammaMax * dm) {
+    Dw = Fw !== null ? (row.gammaMax * Fw) / (1 - row.gammaMax) : row.gammaMax * dm;
+    if (Fw !== null) dm = Fw + Dw;
+  }
+  const Z =
+    row.fillAngle_deg !== null
+      ? Math.floor((row.fillAngle_deg * Math.PI) / 180 / (2 * Math.asin(Dw / dm)) + 1e-9) + 1
+      : Math.max(3, Math.floor((Math.PI * dm) / (row.pitchFactor! * Dw) + 1e-9));
+  const Lwe =
+    row.lengthFraction !== null
+      ? Math.max(row.lengthFraction * B - (row.lengthAllowance_mm ?? 0) / 1000, 0.5 * row.lengthFraction * B)
+      : null;
+  const alpha = contactAngle ?? (row.contactAngle_deg * Math.PI) / 180;
+  return { dm, Dw, Lwe, Z: Math.max(3, Z), rows: row.rowsPerBearing, alpha, Fw };
 }
