@@ -45,7 +45,7 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
   const shock = shockFactors(c, f, notes);
   const lubrication = bearingLubrication(c, notes);
   const life = lifeFactors(c, f, notes);
-  const specs = candidateSpecs(c, f, notes);
+  const specs = candidateSpecs(c, notes);
 
   const ctx: EvalContext = {
     c,
@@ -53,7 +53,7 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     points: duty.points,
     maxSpeed: duty.maxSpeed,
     serviceFactor: shock.serviceFactor,
-    s0Row: shock.s0Row,
+    s0Guidance: shock.s0Guidance,
     cont: life.cont,
     a1: life.a1,
     reliabilityUsed: life.reliabilityUsed,

@@ -1,28 +1,33 @@
-import { makeCheck, type CheckRecord } from '../../core/check.js';
+import { advisory, makeCheck, type CheckRecord } from '../../core/check.js';
 import { KAPPA_MIN } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import type { CandidateFigures, EvalContext } from './context.js';
+import { speedLimit } from './speed.js';
+import { rollingRunning } from '../../data/rolling-running.js';
 
 /**
- * The checks of one candidate, from its figures: life, lubrication, load ratio, static safety
- * and the X/Y table (what the bearing carries), then speed, space and grease life (what its
- * surroundings allow). Each is a check record (src/core/check.ts); a check that does not apply
- * (no rotation, no life target, no size known) is left out.
+ * The checks of one candidate, from its figures: life, lubrication, load ratio and static
+ * safety (what the bearing carries), then speed, space and grease life (what its surroundings
+ * allow). Each is a check record (src/core/check.ts); a check that does not apply (no rotation,
+ * no life target, no size known) is left out.
  *
  * References
- * [1] ISO 281:2007: modified rating life (cl. 9), the a_ISO range of κ, P ≤ 0.5·C, the X/Y
- *     table (from memory; data/rolling-factors.json).
- * [2] ISO 76 s0 = C0/P0; the s0 limits, speed limits and grease-interval rule with their
- *     sources in data/rolling-factors.json.
+ * [1] ISO 281:2007: modified rating life (cl. 9), the a_ISO range of κ, P ≤ 0.5·C (from memory).
+ * [2] ISO 76 s0 = C0/P0; the s0 guidance and speed limits per kind with their sources
+ *     (data/rolling-running.json).
  */
 
 /** P/C above this is beyond the rating-life equation's intent (ISO 281:2007, from memory). */
 const LOAD_RATIO_MAX = 0.5;
 
-/** Checks of what the bearing carries [1, 2]: L10mh ≥ target, κ ≥ 0.1, P/C ≤ 0.5, s0, Fa/C0 in the X/Y table. */
+/**
+ * Checks of what the bearing carries [1, 2]: L10mh ≥ target (not for a shaft too slow for a
+ * rating life: static safety governs it), κ ≥ 0.1 (advice: below it the method's limiting value
+ * is taken; it never rules a bearing out), P/C ≤ 0.5, s0 ≥ the guidance for the shock level.
+ */
 function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
   const checks: CheckRecord[] = [];
-  if (fig.L10mh !== null && ctx.c.life.hours > 0) {
+  if (fig.L10mh !== null && ctx.c.life.hours > 0 && !fig.staticOnly) {
     checks.push(
       makeCheck(
         'rolling-life',
@@ -31,24 +36,26 @@ function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext
         ctx.c.life.hours,
         'h',
         'min',
-        'ISO 281:2007, modified rating life L10m = a1·a_ISO·L10 (cl. 9, from memory); target from the case',
+        'ISO 281:2007, modified rating life L10m = a1·a_ISO·L10, a_ISO per operating point (cl. 9, from memory); target from the case',
       ),
     );
   }
-  if (fig.kappa !== null) {
+  if (fig.kappa !== null && !fig.staticOnly) {
     checks.push(
-      makeCheck(
-        'viscosity-ratio',
-        'viscosity ratio κ = ν/ν1 within the a_ISO method',
-        fig.kappa,
-        KAPPA_MIN,
-        '1',
-        'min',
-        'ISO 281:2007, a_ISO valid for 0.1 ≤ κ ≤ 4 (from memory)',
+      advisory(
+        makeCheck(
+          'viscosity-ratio',
+          'viscosity ratio κ = ν/ν1 within the a_ISO method (below it the method’s limiting value is taken)',
+          fig.kappa,
+          KAPPA_MIN,
+          '1',
+          'min',
+          'ISO 281:2007, a_ISO valid for 0.1 ≤ κ ≤ 4 (from memory)',
+        ),
       ),
     );
   }
-  if (fig.L10 !== null && fig.P > 0) {
+  if (fig.L10 !== null && fig.P > 0 && !fig.staticOnly) {
     checks.push(
       makeCheck(
         'load-ratio',
@@ -62,46 +69,32 @@ function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext
     );
   }
   if (fig.s0 !== null) {
+    const g = ctx.s0Guidance(spec.type);
     checks.push(
       makeCheck(
         'static-safety',
-        `static safety s0 = C0/P0 (${ctx.s0Row.guidance})`,
+        `static safety s0 = C0/P0 (${g.label})`,
         fig.s0,
-        spec.type === 'ball' ? ctx.s0Row.ball : ctx.s0Row.roller,
+        g.min,
         '1',
         'min',
-        `ISO 76 s0 = C0/P0; limit: ${ctx.s0Row.source}`,
-      ),
-    );
-  }
-  const table = ctx.f.xyDeepGrooveBall;
-  const faC0 = spec.type === 'ball' ? ctx.points.reduce((m, q) => Math.max(m, q.Fa / spec.C0), 0) : 0;
-  if (faC0 > 0) {
-    checks.push(
-      makeCheck(
-        'axial-load-table',
-        'relative axial load Fa/C0 within the X/Y table',
-        faC0,
-        table.rows[table.rows.length - 1]!.faC0,
-        '1',
-        'max',
-        table.source,
+        `ISO 76 s0 = C0/P0; limit: ${g.source}`,
       ),
     );
   }
   return checks;
 }
 
-/** Checks of what the surroundings allow [2]: n·dm for the supply, outside diameter and width, grease life of a sealed bearing. */
+/** Checks of what the surroundings allow [2]: n·dm for the kind and supply, outside diameter and width, grease life of a sealed bearing. */
 function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
   const checks: CheckRecord[] = [];
-  const { c, f, lubrication } = ctx;
-  const lim = f.speedLimits.find((l) => l.type === spec.type && l.supply === lubrication.supply);
-  if (fig.ndm > 0 && lim) {
+  const { c, lubrication } = ctx;
+  const lim = speedLimit(spec.kind, lubrication.supply, spec.form);
+  if (fig.ndm > 0) {
     checks.push(
       makeCheck(
         'speed-factor',
-        `speed factor n·dm (${lubrication.supply})`,
+        `speed factor n·dm (${spec.kind}, ${lubrication.supply})`,
         fig.ndm,
         lim.ndm,
         'mm*r/min',
@@ -110,7 +103,7 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext)
       ),
     );
   }
-  const spaceSource = 'case space; bearing dimensions ISO 15 (from memory) or supplier';
+  const spaceSource = 'case space; bearing dimensions ISO 15, ISO 355 and the needle roller standards (from memory) or supplier';
   if (spec.outerDiameter !== null && c.space.maxOuterDiameter > 0) {
     checks.push(
       makeCheck(
@@ -128,7 +121,7 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext)
     checks.push(
       makeCheck(
         'space-width',
-        'bearing width against the axial room',
+        spec.arrangement === 'single' ? 'bearing width against the axial room' : 'width of the pair against the axial room',
         spec.width,
         c.space.maxLength,
         'm',
@@ -137,16 +130,16 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext)
       ),
     );
   }
-  if (lubrication.sealed && fig.relubricationHours !== null && c.life.hours > 0) {
+  if (lubrication.sealed && fig.greaseHours !== null && c.life.hours > 0 && !fig.staticOnly) {
     checks.push(
       makeCheck(
         'grease-life',
-        'grease life of the sealed bearing (relubrication-interval formula)',
-        fig.relubricationHours,
+        'grease life L10 of the sealed bearing',
+        fig.greaseHours,
         c.life.hours,
         'h',
         'min',
-        f.relubrication.find((q) => q.type === spec.type)!.source,
+        rollingRunning().greaseLife.source,
       ),
     );
   }

@@ -2,7 +2,8 @@ import type { CaseSI } from '../../case/types.js';
 import { assumedFinding, finding } from '../../core/finding.js';
 import type { RollingFactors } from '../../data/rolling.js';
 import { operatingPoints, pointSpeed } from '../duty.js';
-import { RELIABILITY_RANGE, reliabilityFactor } from './life.js';
+import { RELIABILITY_RANGE, reliabilityFactor, type RollingType } from './life.js';
+import { staticSafetyGuidance, type StaticSafetyGuidance } from './speed.js';
 import type { Notes } from './findings.js';
 
 /**
@@ -64,13 +65,13 @@ export function dutyPoints(c: CaseSI, notes: Notes): DutyPoints {
 export interface ShockFactors {
   /** Service factor f_d on the dynamic equivalent load, 1. */
   serviceFactor: number;
-  /** Static-safety guidance for the shock level (limits s0 for ball and roller). */
-  s0Row: RollingFactors['staticSafety'][number];
+  /** Static-safety guidance for the shock level, per type: the least s0, its label and source. */
+  s0Guidance: (type: RollingType) => StaticSafetyGuidance;
 }
 
 /**
- * The service factor f_d and the static-safety row for the case's shock level [2]. An unknown
- * level takes the first service-factor row and the "light" static-safety row.
+ * The service factor f_d and the static-safety guidance for the case's shock level [2]. An
+ * unknown level takes the first service-factor row.
  */
 export function shockFactors(c: CaseSI, f: RollingFactors, notes: Notes): ShockFactors {
   const sf = f.serviceFactors.find((s) => s.shock === c.load.shock) ?? f.serviceFactors[0]!;
@@ -81,8 +82,7 @@ export function shockFactors(c: CaseSI, f: RollingFactors, notes: Notes): ShockF
       source: sf.source,
     }),
   );
-  const s0Row = f.staticSafety.find((s) => s.shock === c.load.shock) ?? f.staticSafety[1]!;
-  return { serviceFactor: sf.serviceFactor, s0Row };
+  return { serviceFactor: sf.serviceFactor, s0Guidance: (type) => staticSafetyGuidance(c.load.shock, type) };
 }
 
 /**

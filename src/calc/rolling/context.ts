@@ -1,6 +1,6 @@
 import type { CaseSI } from '../../case/types.js';
 import type { RollingFactors } from '../../data/rolling.js';
-import type { LoadPoint } from './conditions.js';
+import type { LoadPoint, ShockFactors } from './conditions.js';
 import type { Lubrication } from './lubrication.js';
 
 /*
@@ -17,7 +17,8 @@ export interface EvalContext {
   maxSpeed: number;
   /** Service factor f_d, 1. */
   serviceFactor: number;
-  s0Row: RollingFactors['staticSafety'][number];
+  /** Static-safety guidance for the case's shock level: the smallest s0 per type, its label and source. */
+  s0Guidance: ShockFactors['s0Guidance'];
   cont: RollingFactors['contamination'][number];
   /** Reliability factor a1, 1, and the reliability it is worked for, %. */
   a1: number;
@@ -30,9 +31,16 @@ export interface CandidateFigures {
   /** Duty-mean dynamic equivalent load with f_d, N. */
   P: number;
   L10: number | null;
+  /** Lowest viscosity ratio over the turning points, 1. */
   kappa: number | null;
   L10mh: number | null;
   s0: number | null;
   ndm: number;
-  relubricationHours: number | null;
+  /** Grease life (sealed) or relubrication interval (open), h; null on oil or when not turning. */
+  greaseHours: number | null;
+  /** No point turns fast enough for a rating life: static safety governs. */
+  staticOnly: boolean;
+  /** Largest axial load the bearing carries (partner's induced force included) and largest radial load, N. */
+  axialLoad: number;
+  radialLoad: number;
 }

@@ -1,145 +1,188 @@
 import type { CaseSI } from '../../case/types.js';
+import { allLimitsPass } from '../../core/check.js';
 import { finding, type Finding } from '../../core/finding.js';
-import { AISO_CAP, KAPPA_MAX, KAPPA_MIN, aIso, ratedViscosity } from './aiso.js';
+import { AISO_CAP, KAPPA_MAX, KAPPA_MIN } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import { candidateChecks } from './checks.js';
 import { EC_GUIDANCE_DM, type LoadPoint } from './conditions.js';
-import {
-  dynamicEquivalentLoad,
-  spectrumMean,
-  staticEquivalentLoad,
-  type DynamicLoadResult,
-} from './equivalent-load.js';
-import type { Notes } from './findings.js';
-import { basicRatingLife, lifeExponent, lifeHours, requiredDynamicRating } from './life.js';
-import { criticalSwingAngle, frictionPower, frictionTorque, relubricationInterval, speedFactor } from './speed.js';
-import type { RollingCandidate } from './types.js';
 import type { EvalContext } from './context.js';
+import type { Notes } from './findings.js';
+import { frictionMoment } from './friction.js';
+import { regreasingInterval } from './grease.js';
+import { lifeExponent, requiredDynamicRating } from './life.js';
+import { axialCapacity, dynamicLoad, staticLoad, type BearingLoadSpec, type DynamicLoad } from './load-factors.js';
+import { spectrumLife, type SpectrumLife } from './spectrum.js';
+import { criticalSwingAngle, frictionPower, speedFactor } from './speed.js';
+import { inducedAxialForce } from './tapered-pair.js';
+import type { RollingCandidate } from './types.js';
 
 /**
  * One candidate's figures: its loads, lives, lubrication, static safety, speed, friction,
- * grease interval and oscillation criterion, then its checks (src/calc/rolling/checks.ts).
+ * grease life and oscillation criterion, then its checks (src/calc/rolling/checks.ts).
  *
  * References
- * [1] ISO 281:2007: P = X·Fr + Y·Fa, the duty mean P, L10 = (C/P)^p, L10h, κ = ν/ν1, a_ISO,
- *     L10mh = a1·a_ISO·L10h (the kernels in equivalent-load.ts, life.ts, aiso.ts).
- * [2] ISO 76: P0 and s0 = C0/P0.
- * [3] Speed factor n·dm, friction M = μ·P·d/2, grease interval t_f, swing for full element
- *     overlap (speed.ts; common practice and a bearing-maker technical guide).
+ * [1] ISO 281:2007: P = X·Fr + Y·Fa with X, Y, e per kind (load-factors.ts), the duty mean P,
+ *     L10 = (C/P)^p, a_ISO per operating point and the lives combined over the duty
+ *     (spectrum.ts).
+ * [2] ISO 76: P0 = X0·Fr + Y0·Fa per kind and s0 = C0/P0.
+ * [3] Induced axial force of a single-row tapered roller or angular-contact ball bearing
+ *     under radial load, carried by the bearing that locates it (tapered-pair.ts).
+ * [4] Speed factor n·dm, friction moment, grease life, swing for full element overlap
+ *     (speed.ts, friction.ts, grease.ts).
  */
 
-/** A point's dynamic equivalent load without f_d (P, for friction) and with it (Pf, for life), N. */
-type PointLoad = DynamicLoadResult & { Pf: number } & LoadPoint;
+/** A point's loads: the axial load the bearing carries (N), its dynamic equivalent load without f_d (P) and with it (Pf), N. */
+type PointLoad = DynamicLoad & { Pf: number; FaBearing: number } & LoadPoint;
+
+/** The load kernels' view of a candidate. */
+function loadSpecOf(spec: CandidateSpec): BearingLoadSpec {
+  return {
+    kind: spec.kind,
+    form: spec.form,
+    arrangement: spec.arrangement,
+    contactAngle: spec.contactAngle,
+    C0: spec.C0,
+    f0: spec.f0,
+    Z: spec.Z,
+    Dw: spec.Dw,
+    d: spec.bore,
+    D: spec.outerDiameter ?? undefined,
+    B: spec.width ?? undefined,
+  };
+}
+
+/**
+ * Whether the candidate is a single-row bearing with a contact angle that must be located by
+ * an opposed bearing at the shaft's other support (single angular-contact ball or tapered
+ * roller bearing, or a tandem pair): its partner's induced axial force then loads it [3].
+ */
+export function needsOpposedPartner(spec: Pick<CandidateSpec, 'kind' | 'arrangement' | 'contactAngle'>): boolean {
+  return (
+    (spec.kind === 'tapered roller' || spec.kind === 'angular-contact ball') &&
+    (spec.arrangement === 'single' || spec.arrangement === 'pair tandem') &&
+    spec.contactAngle > 0
+  );
+}
+
+/**
+ * Axial load the bearing carries at one point, N [3]: the case's Fa, plus, for a bearing that
+ * needs an opposed partner, that partner's induced force. The partner is taken as the same
+ * bearing under the same radial load (the two supports of a symmetric shaft), mounted so that
+ * the case's thrust runs into this bearing: by the rules for two bearings that locate each
+ * other, this one then carries Fa + 0.5·Fr/Y.
+ */
+function bearingAxialLoad(spec: CandidateSpec, ls: BearingLoadSpec, Fr: number, Fa: number): number {
+  if (!needsOpposedPartner(spec) || !(Fr > 0)) return Fa;
+  // Y above e is what the induced force is worked with: the factors at a large axial load.
+  const Y = dynamicLoad(ls, Fr, 10 * Fr + Fa).Y;
+  return Y > 0 ? Fa + inducedAxialForce(Fr, Y) : Fa;
+}
 
 /**
  * Dynamic equivalent load at each point [1], Pi = X·Fr + Y·Fa, and with the service factor
- * Pf,i = f_d·Pi; the duty mean P = (Σ Pf,i^p·ni·ti / Σ ni·ti)^(1/p) and mean speed n, rev/s.
- * A point the method cannot rate excludes the bearing (its reason kept once).
+ * Pf,i = f_d·Pi. A point the method cannot rate excludes the bearing (its reason kept once).
  */
 function pointLoads(
   spec: CandidateSpec,
   ctx: EvalContext,
   notes: Notes,
-): { per: PointLoad[]; exclusions: Finding[]; heaviest: PointLoad; P: number; n: number } {
-  const table = ctx.f.xyDeepGrooveBall;
+): { per: PointLoad[]; exclusions: Finding[]; heaviest: PointLoad } {
+  const ls = loadSpecOf(spec);
   const exclusions: Finding[] = [];
-  // Reasons are told apart as they read (the load kernel's own sentence), as they always were.
   const excludedFor = new Set<string>();
   const per = ctx.points.map((q): PointLoad => {
-    const r = dynamicEquivalentLoad(spec.type, q.Fr, q.Fa, spec.C0, table);
-    if (r.exclusion && !excludedFor.has(r.exclusion)) {
-      excludedFor.add(r.exclusion);
-      exclusions.push(
-        spec.type === 'ball'
-          ? finding('rolling.axial-beyond-table', { faC0: r.faC0, lastRow: table.rows[table.rows.length - 1]!.faC0 })
-          : finding('rolling.roller-axial-load', { axial: q.Fa }),
-      );
+    const FaBearing = bearingAxialLoad(spec, ls, q.Fr, q.Fa);
+    const r = dynamicLoad(ls, q.Fr, FaBearing, q.n);
+    if (r.exclusion && !excludedFor.has(r.exclusion.code)) {
+      excludedFor.add(r.exclusion.code);
+      exclusions.push(finding(r.exclusion.code, r.exclusion.values));
     }
-    if (r.range === 'below' && r.faC0 !== null && r.faC0 > 0 && r.Y > 0) {
-      notes.warn(
-        finding('rolling.fa-c0-below-table', {
-          designation: spec.designation,
-          faC0: r.faC0,
-          firstRow: table.rows[0]!.faC0,
-        }),
-        `${spec.designation} ${r.faC0.toFixed(4)}`,
-      );
-    }
-    return { ...r, Pf: ctx.serviceFactor * r.P, n: q.n, t: q.t, Fr: q.Fr, Fa: q.Fa };
+    if (r.range === 'below' && r.key !== null && r.key > 0 && r.Y > 0)
+      notes.warn(finding('rolling.key-below-table', { designation: spec.designation, key: r.key }));
+    return { ...r, Pf: ctx.serviceFactor * r.P, FaBearing, n: q.n, t: q.t, Fr: q.Fr, Fa: q.Fa };
   });
   const heaviest = per.reduce((a, b) => (b.Pf > a.Pf ? b : a), per[0]!);
-  const mean = spectrumMean(
-    per.map((q) => ({ P: q.Pf, n: q.n, t: q.t })),
-    lifeExponent(spec.type),
-  );
-  return { per, exclusions, heaviest, P: mean.P, n: mean.n };
+  if (needsOpposedPartner(spec) && per.some((q) => q.FaBearing > q.Fa))
+    notes.warn(finding('rolling.opposed-partner', {}), 'opposed-partner');
+  return { per, exclusions, heaviest };
 }
 
 /**
- * Lives and lubrication [1]: L10 (10⁶ rev), L10h (h) at the mean speed n (rev/s), rated
- * viscosity ν1 and κ = ν/ν1, a_ISO(κ, e_C·Cu/P) and L10mh = a1·a_ISO·L10h (h). Where κ or
- * a_ISO leave the method's range, it is said.
+ * Lives over the duty [1]: each point's a_ISO from its own κ and e_C·Cu/Pi, the point lives
+ * combined by the linear damage rule (spectrum.ts). Where κ or a_ISO leave the method's
+ * range it is said; κ below 0.1 informs, it never rules a bearing out.
  */
-function lives(spec: CandidateSpec, ctx: EvalContext, P: number, n: number, notes: Notes) {
-  const L10 = basicRatingLife(spec.C, P, lifeExponent(spec.type));
-  const L10h = L10 !== null ? lifeHours(L10, n) : null;
-  const nu1 = ratedViscosity(n, spec.dm);
-  const kappa = nu1 !== null ? ctx.lubrication.viscosity / nu1 : null;
-  let aISO: number | null = null;
-  if (kappa !== null && P > 0) {
-    const a = aIso(spec.type, kappa, (ctx.cont.eC * spec.Cu) / P);
-    aISO = a.aISO;
-    const designation = spec.designation;
-    if (a.kappaRange === 'above')
-      notes.warn(finding('rolling.kappa-above-range', { designation, kappa, kappaMax: KAPPA_MAX }));
-    if (a.kappaRange === 'below')
-      notes.warn(finding('rolling.kappa-below-range', { designation, kappa, kappaMin: KAPPA_MIN }));
-    if (a.capped) notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }));
+function lives(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: Notes): SpectrumLife {
+  const life = spectrumLife(
+    per.map((q) => ({ P: q.Pf, n: q.n, t: q.t, nu: ctx.lubrication.viscosity })),
+    { type: spec.type, C: spec.C, Cu: spec.Cu, dm: spec.dm, eC: ctx.cont.eC, a1: ctx.a1 },
+  );
+  const designation = spec.designation;
+  for (const q of life.points) {
+    if (q.static || q.kappa === null) continue;
+    if (q.kappaRange === 'above')
+      notes.warn(finding('rolling.kappa-above-range', { designation, kappa: q.kappa, kappaMax: KAPPA_MAX }));
+    if (q.kappaRange === 'below')
+      notes.warn(finding('rolling.kappa-below-range', { designation, kappa: q.kappa, kappaMin: KAPPA_MIN }));
+    if (q.capped) notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }));
   }
   if (spec.dm >= EC_GUIDANCE_DM)
     notes.warn(
-      finding('rolling.pitch-diameter-large', {
-        designation: spec.designation,
-        pitchDiameter: spec.dm,
-        guidanceBelow: EC_GUIDANCE_DM,
-      }),
+      finding('rolling.pitch-diameter-large', { designation, pitchDiameter: spec.dm, guidanceBelow: EC_GUIDANCE_DM }),
     );
-  const L10mh = L10h !== null && aISO !== null ? ctx.a1 * aISO * L10h : null;
-  return { L10, L10h, nu1, kappa, aISO, L10mh };
+  return life;
 }
 
 /**
- * Speed, friction and grease [3]: n·dm at the highest speed (mm·r/min); the time means over the
- * duty of the friction torque Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W), with
- * Mi = μ·Pi·d/2 and Pi without f_d; on grease, the interval t_f (h) at the highest speed.
+ * Speed, friction and grease [4]: n·dm at the highest speed (mm·r/min); the time means over the
+ * duty of the friction moment Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W), Mi from the
+ * point's loads without f_d; on grease, the grease life (sealed) or relubrication interval
+ * (open) at the highest speed, h.
  */
-function running(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: Notes) {
+function running(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], P: number, notes: Notes) {
   const ndm = speedFactor(ctx.maxSpeed, spec.dm);
-  const mu = ctx.f.friction.find((q) => q.type === spec.type)!.mu;
   let sumT = 0;
   let sumM = 0;
   let sumW = 0;
-  for (const q of per) {
-    const M = frictionTorque(mu, q.P, spec.bore);
+  const moments = per.map((q) => {
+    const m = frictionMoment({
+      kind: spec.kind,
+      form: spec.form,
+      arrangement: spec.arrangement,
+      supply: ctx.lubrication.supply,
+      nu: ctx.lubrication.viscosity,
+      n: q.n,
+      dm: spec.dm,
+      Fr: q.Fr,
+      Fa: q.FaBearing,
+      C0: spec.C0,
+    });
     sumT += q.t;
-    sumM += q.t * M;
-    sumW += q.t * frictionPower(M, q.n);
+    sumM += q.t * m.total;
+    sumW += q.t * frictionPower(m.total, q.n);
+    return m;
+  });
+  let grease: number | null = null;
+  if (ctx.lubrication.supply === 'grease' && ctx.maxSpeed > 0) {
+    const input = {
+      kind: spec.kind,
+      form: spec.form,
+      n: ctx.maxSpeed,
+      d: spec.bore,
+      D: spec.outerDiameter ?? 2 * spec.dm - spec.bore,
+      temperature: ctx.lubrication.temperature,
+      load: { P, C: spec.C },
+    };
+    const r = regreasingInterval(input);
+    grease = ctx.lubrication.sealed ? r.life.l10Hours : r.hours;
+    for (const f of r.life.findings) notes.warn(f);
   }
-  const torque = sumT > 0 ? sumM / sumT : 0;
-  const power = sumT > 0 ? sumW / sumT : 0;
-  let relub: number | null = null;
-  if (ctx.lubrication.supply === 'grease') {
-    const kf = ctx.f.relubrication.find((q) => q.type === spec.type)!.kf;
-    relub = relubricationInterval(ctx.maxSpeed, spec.bore, kf, ctx.lubrication.temperature);
-    if (relub === 0)
-      notes.warn(finding('rolling.grease-too-fast', { designation: spec.designation, speed: ctx.maxSpeed }));
-  }
-  return { ndm, torque, power, relub };
+  return { ndm, moments, torque: sumT > 0 ? sumM / sumT : 0, power: sumT > 0 ? sumW / sumT : 0, grease };
 }
 
 /**
  * For an oscillating shaft, the smallest swing for full rolling-element overlap,
- * 720°/(Z·(1 − Dw/dm)) (rad) [3]; a smaller swing is said (false brinelling). Null when the
+ * 720°/(Z·(1 − Dw/dm)) (rad) [4]; a smaller swing is said (false brinelling). Null when the
  * shaft rotates.
  */
 function swingAngle(spec: CandidateSpec, c: CaseSI, notes: Notes): number | null {
@@ -159,27 +202,37 @@ function swingAngle(spec: CandidateSpec, c: CaseSI, notes: Notes): number | null
 }
 
 /**
- * One candidate, evaluated [1–3]: every figure of RollingCandidate (SI; lives h) and its
- * checks. It is feasible when nothing excludes it and every check passes. Static safety
- * s0 = C0/P0 uses the peak static equivalent load P0 over the points, without f_d [2].
+ * One candidate, evaluated [1–4]: every figure of RollingCandidate (SI; lives h) and its
+ * checks. It is feasible when nothing excludes it and every check that decides passes. Static
+ * safety s0 = C0/P0 uses the peak static equivalent load P0 over the points, without f_d [2].
  */
 export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): RollingCandidate {
   const loads = pointLoads(spec, ctx, notes);
-  const life = lives(spec, ctx, loads.P, loads.n, notes);
-  const P0 = ctx.points.reduce((m, q) => Math.max(m, staticEquivalentLoad(spec.type, q.Fr, q.Fa)), 0);
+  const life = lives(spec, ctx, loads.per, notes);
+  const ls = loadSpecOf(spec);
+  const P0 = loads.per.reduce((m, q) => Math.max(m, staticLoad(ls, q.Fr, q.FaBearing).P0), 0);
   const s0 = P0 > 0 ? spec.C0 / P0 : null;
-  const run = running(spec, ctx, loads.per, notes);
+  const run = running(spec, ctx, loads.per, life.P, notes);
   const swing = swingAngle(spec, ctx.c, notes);
+  // The lowest κ over the turning points: the point that is lubricated least well.
+  const kappa = life.points.reduce<number | null>(
+    (m, q) => (q.kappa === null || q.static ? m : m === null ? q.kappa : Math.min(m, q.kappa)),
+    null,
+  );
+  const axialLoad = loads.per.reduce((m, q) => Math.max(m, q.FaBearing), 0);
   const checks = candidateChecks(
     spec,
     {
-      P: loads.P,
+      P: life.P,
       L10: life.L10,
-      kappa: life.kappa,
+      kappa,
       L10mh: life.L10mh,
       s0,
       ndm: run.ndm,
-      relubricationHours: run.relub,
+      greaseHours: run.grease,
+      staticOnly: life.staticOnly,
+      axialLoad,
+      radialLoad: loads.per.reduce((m, q) => Math.max(m, q.Fr), 0),
     },
     ctx,
   );
@@ -187,6 +240,10 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
     id: spec.id,
     type: spec.type,
     kind: spec.kind,
+    form: spec.form,
+    arrangement: spec.arrangement,
+    contactAngle: spec.contactAngle,
+    axialCapacity: axialCapacity(spec.kind, spec.form, spec.arrangement),
     series: spec.series,
     designation: spec.designation,
     bore: spec.bore,
@@ -201,26 +258,48 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
     elementCount: spec.Z,
     X: loads.heaviest.X,
     Y: loads.heaviest.Y,
-    equivalentLoad: loads.P,
+    e: loads.heaviest.e,
+    axialLoad,
+    equivalentLoad: life.P,
     staticEquivalentLoad: P0,
     L10: life.L10,
     L10h: life.L10h,
     a1: ctx.a1,
-    aISO: life.aISO,
-    kappa: life.kappa,
+    aISO: life.aISOEquivalent,
+    kappa,
     L10mh: life.L10mh,
     s0,
+    staticOnly: life.staticOnly,
     ndm: run.ndm,
     frictionTorque: run.torque,
     frictionPower: run.power,
-    requiredDynamicRating: requiredDynamicRating(loads.P, loads.n, ctx.c.life.hours, lifeExponent(spec.type), ctx.a1),
-    relubricationHours: run.relub,
+    requiredDynamicRating: life.staticOnly
+      ? null
+      : requiredDynamicRating(life.P, life.n, ctx.c.life.hours, lifeExponent(spec.type), ctx.a1),
+    relubricationHours: run.grease,
     temperature: ctx.lubrication.temperature,
     viscosity: ctx.lubrication.viscosity,
-    ratedViscosity: life.nu1,
+    ratedViscosity: kappa !== null && kappa > 0 ? ctx.lubrication.viscosity / kappa : null,
     criticalSwingAngle: swing,
+    points: loads.per.map((q, i) => ({
+      Fr: q.Fr,
+      Fa: q.FaBearing,
+      n: q.n,
+      t: q.t,
+      X: q.X,
+      Y: q.Y,
+      e: q.e,
+      key: q.key,
+      P: q.P,
+      kappa: life.points[i]!.kappa,
+      aISO: life.points[i]!.aISO,
+      L10mh: life.points[i]!.L10mh,
+      static: life.points[i]!.static,
+      frictionViscous: run.moments[i]!.viscous,
+      frictionLoad: run.moments[i]!.load,
+    })),
     exclusions: loads.exclusions,
-    feasible: loads.exclusions.length === 0 && checks.every((k) => k.pass),
+    feasible: loads.exclusions.length === 0 && allLimitsPass(checks),
     checks,
   };
 }

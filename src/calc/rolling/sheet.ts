@@ -1,7 +1,7 @@
 import type { SheetLine } from '../../core/check.js';
 import { num } from '../../core/format.js';
 import { AISO_CAP, AISO_CONSTANTS, KAPPA_MAX, KAPPA_MIN } from './aiso.js';
-import { KIND } from './candidates.js';
+
 import type { LoadPoint } from './conditions.js';
 import { dynamicEquivalentLoad } from './equivalent-load.js';
 import type { EvalContext } from './context.js';
@@ -97,7 +97,7 @@ function lifeLines(candidate: RollingCandidate, ctx: EvalContext, n: number): Sh
   }
   if (candidate.requiredDynamicRating !== null && ctx.c.life.hours > 0) {
     lines.push({
-      label: `Basic dynamic rating needed for the life target (${KIND[candidate.type]}, p = ${ex.p})`,
+      label: `Basic dynamic rating needed for the life target (${candidate.kind}, p = ${ex.p})`,
       formula: 'C_req = P·(L_req/a1)^(1/p), L_req = 60·n·h/10^6 (n in r/min)',
       substituted: `C_req = ${fig(candidate.equivalentLoad)} N·(60·${fig(n * 60)} r/min·${fig(ctx.c.life.hours)} h/10^6/${fig(candidate.a1)})^(${ex.inverse})`,
       value: candidate.requiredDynamicRating,

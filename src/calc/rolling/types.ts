@@ -96,10 +96,37 @@ export interface RollingCandidate {
   ratedViscosity: number | null;
   /** Smallest swing angle for full rolling-element overlap, rad (oscillating shafts only). */
   criticalSwingAngle: number | null;
+  /** Each operating point as the bearing sees it (for the calculation sheet), in the duty's order. */
+  points: CandidatePoint[];
   /** Reasons that rule the bearing out regardless of the checks (worded by src/report/findings). */
   exclusions: Finding[];
   feasible: boolean;
   checks: CheckRecord[];
+}
+
+/** One operating point of one candidate, SI (N, rev/s, N·m); null where it does not apply. */
+export interface CandidatePoint {
+  Fr: number;
+  /** Axial load the bearing carries (the case's, plus an opposed partner's induced force), N. */
+  Fa: number;
+  n: number;
+  t: number;
+  X: number;
+  Y: number;
+  e: number | null;
+  /** What the kind's X/Y table is entered with (f0·Fa/C0 for a deep-groove ball bearing), or null. */
+  key: number | null;
+  /** Dynamic equivalent load without the service factor, N. */
+  P: number;
+  kappa: number | null;
+  aISO: number | null;
+  /** The point's own modified life, h (null when static or unloaded). */
+  L10mh: number | null;
+  /** True when the point turns too slowly for a rating life. */
+  static: boolean;
+  /** Friction moment, N·m: viscous and load terms. */
+  frictionViscous: number;
+  frictionLoad: number;
 }
 
 export interface RollingResult {

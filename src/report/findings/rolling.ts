@@ -15,19 +15,27 @@ const degrees = (rad: FindingValue | undefined): string => fig((Number(rad) * 18
 
 /** Why a candidate is ruled out whatever its checks say (the load kernel's reasons). */
 const exclusionWording: Record<string, Wording> = {
-  'rolling.axial-beyond-table': (v) =>
-    `relative axial load Fa/C0 = ${Number(v['faC0']).toFixed(3)} is beyond the ISO 281 X/Y table (last row ${raw(v['lastRow'])}); a deep-groove ball bearing is not rated this way for such thrust: consider an angular-contact or thrust arrangement`,
-  'rolling.roller-axial-load': (v) =>
-    `axial load ${Number(v['axial']).toFixed(0)} N: a radial cylindrical roller bearing (ribs on one ring) takes no axial load`,
+  'rolling.axial-load-beyond-table': (v) =>
+    `${raw(v['kind'])} bearing: f0·Fa/C0 = ${fig(v['key'])} with Fa = ${fig(v['Fa'])} N is beyond the end of the ISO 281 X/Y table (${fig(v['keyMax'])}): the standard does not rate it for this thrust; an angular-contact or tapered roller bearing is the usual answer`,
+  'rolling.no-axial-capacity': (v) =>
+    `axial load ${Number(v['Fa']).toFixed(0)} N: a ${raw(v['kind'])} bearing${v['form'] ? ` (${raw(v['form'])})` : ''} takes no axial load`,
+  'rolling.rib-axial-load-exceeded': (v) =>
+    `axial load ${Number(v['Fa']).toFixed(0)} N exceeds what the ribs of the cylindrical roller bearing carry, ${Number(v['FaPerm']).toFixed(0)} N (${raw(v['governing'])} limit governs)`,
+  'rolling.contact-angle-outside-table': (v) =>
+    `${raw(v['kind'])} bearing: contact angle ${fig(v['contactAngle'])}° is outside the factors of ISO 281 (${fig(v['min'])}°–${fig(v['max'])}°): not rated here`,
+  'rolling.load-key-unknown': (v) =>
+    `${raw(v['kind'])} bearing: its X/Y table needs f0, which is not known here: not rated for axial load`,
 };
-
 const exclusionWords = (f: Finding): string => {
   const w = exclusionWording[f.code];
   if (!w) throw new Error(`no wording for exclusion ${f.code}`);
   return w(f.values);
 };
 
-/** An ISO 15 size the space rules out: its size and which room it exceeds. */
+/** How many of the sizes the space rules out are named (the rest are counted). */
+const SPACE_EXCLUDED_SHOWN = 4;
+
+/** A size the space rules out: its size and which room it exceeds. */
 const sizeOutsideSpace: Wording = (v) => {
   const over = [
     v['tooBig'] ? `D > ${fig(Number(v['maxOuterDiameter']) * 1000)} mm` : '',
@@ -62,12 +70,14 @@ const caseFindings: Record<string, Wording> = {
   'rolling.diameter-not-positive': (v) =>
     `shaft diameter ${raw(v['diameter'])} m is not a positive number: no bearing can be chosen`,
   'rolling.bore-not-standard': (v) =>
-    `shaft diameter ${fig(Number(v['diameter']) * 1000)} mm is not a standard bore in the ISO 15 table; nearest bores: ${list<number>(v['nearest']).map(tableMm).join(' and ')} mm`,
+    `shaft diameter ${fig(Number(v['diameter']) * 1000)} mm is not a bore (or needle roller set bore) of the ISO 15, ISO 355 or needle roller tables; nearest: ${list<number>(v['nearest']).map(tableMm).join(' and ')} mm`,
   'rolling.supplier-ratings-incomplete': () =>
     'a supplier bearing needs both a positive dynamic rating C and static rating C0; the supplier values given are not used',
   'rolling.space-excluded': (v) => {
     const sizes = list<Finding>(v['sizes']);
-    return `${sizes.length} ISO 15 size(s) of this bore excluded by the space available: ${sizes.map((s) => sizeOutsideSpace(s.values)).join('; ')}`;
+    const shown = sizes.slice(0, SPACE_EXCLUDED_SHOWN);
+    const more = sizes.length - shown.length;
+    return `${sizes.length} bearing(s) of this bore excluded by the space available: ${shown.map((s) => sizeOutsideSpace(s.values)).join('; ')}${more > 0 ? `; and ${more} more` : ''}`;
   },
   'rolling.supplier-ratio-unusual': (v) =>
     `supplier ratings C0/C = ${fig(v['ratio'])}: unusual for a deep-groove ball bearing, whose C0 is normally below C (common practice); check the datasheet and the bearing type`,
@@ -76,18 +86,28 @@ const caseFindings: Record<string, Wording> = {
   'rolling.supplier-no-width': () =>
     'supplier bearing width not given and no ISO 15 row of its bore: the space check on width is left out',
   'rolling.no-candidate': () =>
-    'no rolling bearing candidate: none of the ISO 15 sizes of this bore fits, and no supplier bearing is given',
+    'no rolling bearing candidate: none of the bearings of this bore in the tables fits, and no supplier bearing is given',
   'rolling.no-life-target': () => 'no life target (life.hours ≤ 0): the life check is left out',
 };
 
 /** Cautions about one candidate, each naming it first. */
 const candidateFindings: Record<string, Wording> = {
-  'rolling.fa-c0-below-table': (v) =>
-    `${raw(v['designation'])}: Fa/C0 = ${Number(v['faC0']).toFixed(4)} is below the first row of the ISO 281 X/Y table (${raw(v['firstRow'])}); e and Y of that row are used (Y would be somewhat larger): not extrapolated`,
+  'rolling.key-below-table': (v) =>
+    `${raw(v['designation'])}: f0·Fa/C0 = ${Number(v['key']).toFixed(4)} is below the first row of the ISO 281 X/Y table; e and Y of that row are used (Y would be somewhat larger): not extrapolated`,
+  'rolling.opposed-partner': () =>
+    'a single-row angular-contact ball or tapered roller bearing (or a tandem pair) must be located by an opposed bearing at the shaft’s other support: that partner is taken as the same bearing under the same radial load, so this one carries the case’s axial load plus the partner’s induced force 0.5·Fr/Y (ISO 281 practice for two bearings that locate each other); a shaft model with both supports replaces this',
+  'rolling.grease-life-cool-held': (v) =>
+    `bearing at ${fig(v['temperature'])} °C: the grease-life law is held at its ${fig(v['used'])} °C value (below it other causes limit grease life)`,
+  'rolling.grease-hot': (v) =>
+    `bearing at ${fig(v['temperature'])} °C, above ${fig(v['limit'])} °C: mineral-oil greases oxidise fast; a high-temperature grease or oil is needed`,
+  'rolling.grease-speed-beyond-limit': (v) =>
+    `speed factor n·dm = ${fig(v['ndm'])} mm·r/min is beyond the kind's grease limit ${fig(v['limit'])} mm·r/min: grease life is short and uncertain; oil is the usual answer`,
+  'rolling.grease-heavy-load': (v) =>
+    `load ratio P/C = ${fig(v['ratio'])} above ${fig(v['threshold'])}: grease life is shortened (one halving per 0.1 of P/C, common practice)`,
   'rolling.kappa-above-range': (v) =>
     `${raw(v['designation'])}: viscosity ratio κ = ${fig(v['kappa'])} > ${raw(v['kappaMax'])} is taken as ${raw(v['kappaMax'])}, as ISO 281:2007 says`,
   'rolling.kappa-below-range': (v) =>
-    `${raw(v['designation'])}: viscosity ratio κ = ${fig(v['kappa'])} < ${raw(v['kappaMin'])} is outside the a_ISO method of ISO 281:2007; a_ISO at κ = ${raw(v['kappaMin'])} is shown for orientation only and the lubrication check fails`,
+    `${raw(v['designation'])}: viscosity ratio κ = ${fig(v['kappa'])} < ${raw(v['kappaMin'])} is outside the a_ISO method of ISO 281:2007; the method's limiting value (a_ISO at κ = ${raw(v['kappaMin'])}) is taken: a warning, not a failure of the bearing; a thicker oil or an EP grease improves it`,
   'rolling.aiso-capped': (v) => `${raw(v['designation'])}: a_ISO reached its cap of ${raw(v['cap'])} (ISO 281:2007)`,
   'rolling.pitch-diameter-large': (v) => {
     const guidance = fig(Number(v['guidanceBelow']) * 1000);
@@ -165,11 +185,24 @@ export const rollingWording: KernelWording = {
     }),
     'rolling.supplier-dimensions': (v) => ({
       value: `${fig(Number(v['outerDiameter']) * 1000)} × ${fig(Number(v['width']) * 1000)} mm`,
-      reason: `supplier bearing dimensions not given: taken from the ISO 15 row "${raw(v['row'])}" of the same bore`,
+      reason: `supplier bearing dimensions not given: taken from the table's "${raw(v['row'])}" of the same kind and bore`,
     }),
-    'rolling.estimated-ratings': (v) => ({
-      value: 'C and C0 estimated from ISO 15 boundary dimensions',
-      reason: `internal geometry estimated (${raw(v['geometrySource'])}); C by ISO 281:2007, C0 by ISO 76 from that geometry; a supplier's rating replaces the estimate`,
+    'rolling.estimated-ratings': () => ({
+      value: 'C and C0 estimated from boundary dimensions',
+      reason:
+        "internal geometry estimated per kind from d, D and B (fractions and their sources in data/rolling-ratings.json, kept at or below the ratings of published internal geometries); C by ISO 281:2007, C0 by ISO 76 from that geometry; a supplier's rating replaces the estimate",
+    }),
+    'rolling.supplier-kind': (v) => ({
+      value: raw(v['kind']),
+      reason: 'the supplier bearing has no kind given: the kind of its type (or a deep-groove ball bearing) is taken',
+    }),
+    'rolling.supplier-form': (v) => ({
+      value: raw(v['form']),
+      reason: `the supplier ${raw(v['kind'])} bearing has no form given: the form that claims least is taken`,
+    }),
+    'rolling.supplier-contact-angle': (v) => ({
+      value: `${fig(v['contactAngle'])}°`,
+      reason: `the supplier ${raw(v['kind'])} bearing has no contact angle given: a usual angle of the kind is taken (common practice, from memory)`,
     }),
     'rolling.estimated-fatigue-limit': () => ({
       value: 'Cu = C0/22 (ball), C0/8.2 (roller); above dm = 100 mm × (100/dm)^0.5 (ball), × (100/dm)^0.3 (roller)',
