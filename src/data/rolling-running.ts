@@ -85,7 +85,8 @@ export type StaticSafetyRow = z.infer<typeof staticSafetyRowSchema>;
 const speedLimitRowSchema = z.object({ kind, form: form.nullable(), ndm: perSupply, source });
 export type SpeedLimitRow = z.infer<typeof speedLimitRowSchema>;
 
-const runningSchema = z.object({
+/** The schema of data/rolling-running.json (the tests validate the shipped file with it). */
+export const runningSchema = z.object({
   description: z.string(),
   units: z.record(z.string(), z.string()),
   greaseLife: greaseLifeSchema,
