@@ -21,8 +21,8 @@ export interface GeometryEstimateFactors {
  * estimate; the estimate is meant for concept-stage sizing only.
  *
  * First estimate (estimateBallGeometry, estimateRollerGeometry; superseded by
- * estimateKindGeometry, which is on the safe side of published geometries):
-
+ * estimateKindGeometry, which is on the safe side of published geometries; these factors
+ * are 12–37 % generous on small bores):
  * Deep-groove ball bearing (Conrad assembly):
  *   dm = (d + D)/2
  *   Dw = k_b·(D − d)/2, k_b = 0.6, held to Dw ≤ γ_max·dm (γ_max = 0.30, the end of the
