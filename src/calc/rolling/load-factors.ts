@@ -102,6 +102,20 @@ interface Factors {
 const cot = (deg: number) => 1 / Math.tan((deg * Math.PI) / 180);
 const tan = (deg: number) => Math.tan((deg * Math.PI) / 180);
 const lerp = (a: number, b: number, t: number) => a + t * (b - a);
+/** The factors with X = 1 below e (every kind). */
+const factors = (e: number, belowY: number, aboveX: number, aboveY: number): Factors => ({
+  e,
+  belowX: 1,
+  belowY,
+  aboveX,
+  aboveY,
+});
+/** Linear interpolation of a column ys over keys xs at x (the end value outside, with its range). */
+const col = (xs: readonly number[], ys: readonly number[], x: number): Interpolated =>
+  interpolate(
+    xs.map((k, i) => ({ x: k, y: ys[i]! })),
+    x,
+  );
 
 /** Apply the factors: below-e pair when Fa ≤ e·Fr (Fa/Fr ≤ e), the above-e pair otherwise. */
 function apply(
@@ -142,34 +156,27 @@ export function relativeAxialLoad(b: BearingLoadSpec, Fa: number): number | null
 
 /** e, X, Y of a radial-contact ball bearing at the key, with where the key lies. */
 function radialBallFactors(t: LoadFactors, key: number): { f: Factors; at: Interpolated } {
-  const rows = t.radialBall.rows;
-  const at = interpolate(
-    rows.map((r) => ({ x: r.key, y: r.e })),
+  const keys = t.radialBall.rows.map((r) => r.key);
+  const at = col(
+    keys,
+    t.radialBall.rows.map((r) => r.e),
     key,
   );
-  const Y = interpolate(
-    rows.map((r) => ({ x: r.key, y: r.Y })),
+  const Y = col(
+    keys,
+    t.radialBall.rows.map((r) => r.Y),
     key,
   ).value;
-  return { f: { e: at.value, belowX: 1, belowY: 0, aboveX: t.radialBall.xAboveE, aboveY: Y }, at };
+  return { f: factors(at.value, 0, t.radialBall.xAboveE, Y), at };
 }
 
 /** Factors of one tabulated contact angle with key-dependent rows (5, 10, 15°). */
 function keyedAngleFactors(keys: number[], a: KeyedAngle, key: number, double: boolean): Factors {
-  const col = (ys: number[]) =>
-    interpolate(
-      keys.map((x, i) => ({ x, y: ys[i]! })),
-      key,
-    ).value;
+  const at = (ys: number[]) => col(keys, ys, key).value;
+  const d = a.double;
   return double
-    ? {
-        e: col(a.double.e),
-        belowX: 1,
-        belowY: col(a.double.yBelowE),
-        aboveX: a.double.xAboveE,
-        aboveY: col(a.double.yAboveE),
-      }
-    : { e: col(a.single.e), belowX: 1, belowY: 0, aboveX: a.single.xAboveE, aboveY: col(a.single.Y) };
+    ? factors(at(d.e), at(d.yBelowE), d.xAboveE, at(d.yAboveE))
+    : factors(at(a.single.e), 0, a.single.xAboveE, at(a.single.Y));
 }
 
 /**
@@ -185,18 +192,12 @@ export function angularContactFactors(
   double: boolean,
 ): { f: Factors; range: DynamicLoad['range'] } | null {
   const keys = t.angularContactKeyed.keys;
-  const at = interpolate(
-    keys.map((x) => ({ x, y: x })),
-    key,
-  );
+  const at = col(keys, keys, key);
   const entries: { angle: number; f: () => Factors }[] = [
     ...t.angularContactKeyed.angles.map((a) => ({ angle: a.angle, f: () => keyedAngleFactors(keys, a, key, double) })),
     ...t.angularContactFixed.rows.map((r) => ({
       angle: r.angle,
-      f: (): Factors =>
-        double
-          ? { e: r.e, belowX: 1, belowY: r.doubleYBelowE, aboveX: r.doubleX, aboveY: r.doubleY }
-          : { e: r.e, belowX: 1, belowY: 0, aboveX: r.singleX, aboveY: r.singleY },
+      f: () => (double ? factors(r.e, r.doubleYBelowE, r.doubleX, r.doubleY) : factors(r.e, 0, r.singleX, r.singleY)),
     })),
   ];
   const first = entries[0]!;
@@ -211,13 +212,12 @@ export function angularContactFactors(
   const s = Math.min(1, Math.max(0, (alpha - lo.angle) / (hi.angle - lo.angle)));
   const a = lo.f();
   const b = hi.f();
-  const f: Factors = {
-    e: lerp(a.e, b.e, s),
-    belowX: lerp(a.belowX, b.belowX, s),
-    belowY: lerp(a.belowY, b.belowY, s),
-    aboveX: lerp(a.aboveX, b.aboveX, s),
-    aboveY: lerp(a.aboveY, b.aboveY, s),
-  };
+  const f = factors(
+    lerp(a.e, b.e, s),
+    lerp(a.belowY, b.belowY, s),
+    lerp(a.aboveX, b.aboveX, s),
+    lerp(a.aboveY, b.aboveY, s),
+  );
   const isKeyed = (angle: number) => t.angularContactKeyed.angles.some((k) => k.angle === angle);
   const keyed = (s < 1 && isKeyed(lo.angle)) || (s > 0 && isKeyed(hi.angle));
   return { f, range: keyed ? at.range : 'inside' };
@@ -225,32 +225,14 @@ export function angularContactFactors(
 
 /** Factors from the closed forms in α (self-aligning ball; tapered and spherical roller). */
 function closedFormFactors(t: LoadFactors, kind: RollingKind, alpha: number, double: boolean): Factors {
-  if (kind === 'self-aligning ball') {
-    const s = t.selfAligningBall;
-    return {
-      e: s.eTan * tan(alpha),
-      belowX: 1,
-      belowY: s.yBelowECot * cot(alpha),
-      aboveX: s.xAboveE,
-      aboveY: s.yAboveECot * cot(alpha),
-    };
-  }
+  const c = cot(alpha);
+  const sa = t.selfAligningBall;
   const r = t.radialRoller;
+  if (kind === 'self-aligning ball')
+    return factors(sa.eTan * tan(alpha), sa.yBelowECot * c, sa.xAboveE, sa.yAboveECot * c);
   return double
-    ? {
-        e: r.eTan * tan(alpha),
-        belowX: 1,
-        belowY: r.double.yBelowECot * cot(alpha),
-        aboveX: r.double.xAboveE,
-        aboveY: r.double.yAboveECot * cot(alpha),
-      }
-    : {
-        e: r.eTan * tan(alpha),
-        belowX: 1,
-        belowY: 0,
-        aboveX: r.single.xAboveE,
-        aboveY: r.single.yAboveECot * cot(alpha),
-      };
+    ? factors(r.eTan * tan(alpha), r.double.yBelowECot * c, r.double.xAboveE, r.double.yAboveECot * c)
+    : factors(r.eTan * tan(alpha), 0, r.single.xAboveE, r.single.yAboveECot * c);
 }
 
 /** Nominal contact angles, degrees, for which the closed forms are taken (ISO 281 radial bearings: α ≤ 45°). */
@@ -265,7 +247,7 @@ const CLOSED_FORM_ANGLES = { min: 0, max: 45 } as const;
  *   (the standard gives no factors there; the permissible axial load depends on the design);
  * - rolling.load-key-unknown: a ball kind that needs the key, without f0 nor Z and Dw;
  * - rolling.contact-angle-outside-table: α outside what the table or formula covers;
- * - rolling.rib-axial-load-exceeded: Fa above the permissible rib load (see rib-axial-load.ts).
+ * - rolling.rib-axial-load-exceeded: Fa above permissibleRibAxialLoad (below).
  * Cylindrical and needle roller bearings: P = Fr; ISO 281 gives no X, Y for α = 0 roller
  * bearings under axial load and leaves it to the maker (from memory); within the permissible
  * rib load the axial load is taken not to shorten raceway fatigue life (common practice).
@@ -293,25 +275,14 @@ export function dynamicLoad(b: BearingLoadSpec, Fr: number, Fa: number, n?: numb
     }
     case 'angular-contact ball': {
       const key = relativeAxialLoad(b, Fa);
-      const needsKey = alpha < t.angularContactFixed.rows[0]!.angle && Fa > 0;
-      const k = key ?? 0;
-      const got = angularContactFactors(t, alpha, k, double);
-      if (!got) {
-        const lo = t.angularContactKeyed.angles[0]!.angle;
-        const hi = t.angularContactFixed.rows[t.angularContactFixed.rows.length - 1]!.angle;
-        const clamped = angularContactFactors(t, Math.min(hi, Math.max(lo, alpha)), k, double)!;
-        return apply(
-          clamped.f,
-          Fr,
-          Fa,
-          key,
-          'inside',
-          excl('rolling.contact-angle-outside-table', { kind: b.kind, contactAngle: alpha, min: lo, max: hi }),
-        );
-      }
-      if (needsKey && key === null)
-        return apply(got.f, Fr, Fa, null, 'inside', excl('rolling.load-key-unknown', { kind: b.kind }));
-      return apply(got.f, Fr, Fa, key, Fa > 0 ? got.range : 'inside', null);
+      const [min, max] = [t.angularContactKeyed.angles[0]!.angle, t.angularContactFixed.rows.at(-1)!.angle];
+      const got = angularContactFactors(t, Math.min(max, Math.max(min, alpha)), key ?? 0, double)!;
+      let exclusion: DynamicLoad['exclusion'] = null;
+      if (!(alpha >= min && alpha <= max))
+        exclusion = excl('rolling.contact-angle-outside-table', { kind: b.kind, contactAngle: alpha, min, max });
+      else if (key === null && Fa > 0 && alpha < t.angularContactFixed.rows[0]!.angle)
+        exclusion = excl('rolling.load-key-unknown', { kind: b.kind });
+      return apply(got.f, Fr, Fa, key, Fa > 0 && !exclusion ? got.range : 'inside', exclusion);
     }
     case 'self-aligning ball':
     case 'tapered roller':
