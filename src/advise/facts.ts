@@ -135,6 +135,10 @@ export function rollingFigures(r: RollingResult, c: CaseSI): OptionFigures {
     feasible: r.feasible,
     design: {
       bearing: k.id,
+      kind: k.kind,
+      form: k.form,
+      arrangement: k.arrangement,
+      contactAngle: k.contactAngle,
       designation: k.designation,
       bore: k.bore,
       outerDiameter: k.outerDiameter,

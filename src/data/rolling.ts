@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { loadTable } from './load.js';
-import { ROLLING_KINDS } from '../core/rolling-kinds.js';
+import { FORMS, ROLLING_KINDS } from '../core/rolling-kinds.js';
 
 /**
  * Tables for the rolling-bearing check: ISO 15 boundary dimensions
@@ -149,6 +149,8 @@ const kindTraitSchema = z.object({
   misalignment_arcmin: positive,
   costClass: z.number().int().min(1).max(4),
   speedClass: z.number().int().min(1).max(3),
+  costClassByForm: z.partialRecord(z.enum(FORMS), z.number().int().min(1).max(4)).optional(),
+  preference: z.number().int().min(1).max(ROLLING_KINDS.length),
   source,
 });
 export type KindTraits = z.infer<typeof kindTraitSchema>;

@@ -1,10 +1,11 @@
 import type { RollingResult } from '../calc/rolling/types.js';
 import { describe } from './findings/index.js';
+import { num } from '../core/format.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 import { checksTable, heading, mark, paint } from './text.js';
 
-const KIND = { ball: 'deep-groove ball', roller: 'cylindrical roller' } as const;
+const KIND = { ball: 'ball', roller: 'roller' } as const;
 const P_TEXT = { ball: '3', roller: '10/3' } as const;
 
 /** The rolling-bearing check for a person: candidates with lives, then each candidate's checks. */
@@ -29,12 +30,20 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
       out.push(`  ${KIND[t]} bearings (p = ${P_TEXT[t]}): basic dynamic rating needed ${range}.`);
     }
   }
+  // One row per kind (its choice, else its nearest miss): every candidate stays in the JSON.
+  const shown = r.kinds.map((f) => r.candidates.find((k) => k.id === f.id)!).filter(Boolean);
+  const best0 = r.candidates.find((k) => k.id === r.best);
+  if (best0 && !shown.includes(best0)) shown.unshift(best0);
   if (r.candidates.length) {
+    out.push(
+      `${r.candidates.length} candidates of ${r.kinds.length} kinds fit the space; each kind's choice (or nearest miss) is shown, every candidate is in --format json.`,
+    );
     out.push(
       table(
         [
           '',
           'bearing',
+          'kind',
           'd × D × B',
           'C',
           'C needed',
@@ -48,9 +57,10 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
           'n·dm',
           'friction',
         ],
-        r.candidates.map((k) => [
+        shown.map((k) => [
           mark(k.feasible),
           k.id,
+          k.arrangement === 'single' ? k.kind : `${k.kind}, ${k.arrangement.replace('pair ', 'pair ')}`,
           `${fmt(k.bore, 'm', units)} × ${k.outerDiameter === null ? '—' : fmt(k.outerDiameter, 'm', units)} × ${k.width === null ? '—' : fmt(k.width, 'm', units)}`,
           fmt(k.dynamicRating, 'N', units),
           k.requiredDynamicRating === null ? '—' : fmt(k.requiredDynamicRating, 'N', units),
@@ -69,20 +79,21 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
   } else {
     out.push('No candidate: see the warnings.');
   }
-  const best = r.candidates.find((k) => k.id === r.best);
+  const best = best0;
   out.push(
     paint.bold(
       best
-        ? `Best: ${best.designation} (${best.id}), the smallest meeting life, static safety, speed and space.`
+        ? `Best: ${best.designation} (${best.id}).`
         : 'None: no candidate meets life, static safety, speed and space.',
     ),
   );
+  if (r.choice) out.push(describe(r.choice));
   out.push(
     'Ratings marked "estimated" come from boundary dimensions by the ISO 281 / ISO 76 formulas; a supplier\'s rating replaces them. "C needed": the basic dynamic rating each candidate needs for the life target with a1 (a_ISO taken as 1), from its own P and p; "friction": friction power, time mean over the duty.',
   );
-  for (const k of r.candidates) {
+  for (const k of shown) {
     out.push(
-      `\n${paint.bold(k.designation)} (${k.id}) — X = ${k.X}, Y = ${k.Y}, P = ${fmt(k.equivalentLoad, 'N', units)}, P0 = ${fmt(k.staticEquivalentLoad, 'N', units)}, ν = ${(k.viscosity * 1e6).toPrecision(3)} mm²/s at ${fmt(k.temperature, 'degC', units)}`,
+      `\n${paint.bold(k.designation)} (${k.id}) — X = ${num(k.X, 3)}, Y = ${num(k.Y, 3)}${k.e !== null ? `, e = ${num(k.e, 3)}` : ''}, Fa = ${fmt(k.axialLoad, 'N', units)}, P = ${fmt(k.equivalentLoad, 'N', units)}, P0 = ${fmt(k.staticEquivalentLoad, 'N', units)}, ν = ${(k.viscosity * 1e6).toPrecision(3)} mm²/s at ${fmt(k.temperature, 'degC', units)}`,
     );
     if (k.exclusions.length) out.push(k.exclusions.map((e) => `  ruled out: ${describe(e)}`).join('\n'));
     out.push(checksTable(k.checks, units));

@@ -8,7 +8,7 @@ import { evaluate } from './evaluate.js';
 import { newNotes } from './findings.js';
 import { lifeExponent, requiredDynamicRating, type RollingType } from './life.js';
 import { bearingLubrication } from './lubrication.js';
-import { bestCandidate, equivalentLoadBound } from './select.js';
+import { bestCandidate, choiceFinding, equivalentLoadBound, kindFacts, leadOfEachKind } from './select.js';
 import { rollingSheet } from './sheet.js';
 import type { RollingResult } from './types.js';
 
@@ -85,6 +85,9 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     requiredDynamicRatingFor: requiredC !== null ? { type: leadType, p: lifeExponent(leadType) } : null,
     candidates,
     best: best ? best.id : null,
+    kinds: leadOfEachKind(candidates).map(kindFacts),
+    chosen: best ? kindFacts(best) : null,
+    choice: choiceFinding(best, candidates),
     feasible: best !== null,
     assumed: notes.assumed,
     warnings: notes.warnings,

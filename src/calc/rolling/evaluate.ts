@@ -11,7 +11,7 @@ import { frictionMoment } from './friction.js';
 import { regreasingInterval } from './grease.js';
 import { lifeExponent, requiredDynamicRating } from './life.js';
 import { axialCapacity, dynamicLoad, staticLoad, type BearingLoadSpec, type DynamicLoad } from './load-factors.js';
-import { spectrumLife, type SpectrumLife } from './spectrum.js';
+import { STATIC_SPEED_LIMIT, spectrumLife, type SpectrumLife } from './spectrum.js';
 import { criticalSwingAngle, frictionPower, speedFactor } from './speed.js';
 import { inducedAxialForce } from './tapered-pair.js';
 import type { RollingCandidate } from './types.js';
@@ -118,6 +118,7 @@ function lives(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: N
     { type: spec.type, C: spec.C, Cu: spec.Cu, dm: spec.dm, eC: ctx.cont.eC, a1: ctx.a1 },
   );
   const designation = spec.designation;
+  if (life.staticOnly) notes.warn(finding('rolling.static-only', { speed: ctx.maxSpeed, limit: STATIC_SPEED_LIMIT }));
   for (const q of life.points) {
     if (q.static || q.kappa === null) continue;
     if (q.kappaRange === 'above')

@@ -1,4 +1,4 @@
-import { assumedFinding, finding } from '../../core/finding.js';
+import { assumedFinding, finding, type Finding } from '../../core/finding.js';
 import type { XYTable } from '../../data/rolling.js';
 import type { LoadPoint } from './conditions.js';
 import { spectrumMean } from './equivalent-load.js';
@@ -28,20 +28,27 @@ function orderNullLast(a: number | null, b: number | null): number {
 }
 
 /** Cost class of a candidate (data/rolling-kinds.json, common practice): its kind's, one more for a matched pair. */
-export function costClass(k: Pick<RollingCandidate, 'kind' | 'arrangement'>): number {
+export function costClass(k: Pick<RollingCandidate, 'kind' | 'form' | 'arrangement'>): number {
   const t = kindTraits().find((x) => x.kind === k.kind);
-  return (t?.costClass ?? 2) + (k.arrangement === 'single' ? 0 : 1);
+  const byForm = k.form !== null ? t?.costClassByForm?.[k.form] : undefined;
+  return (byForm ?? t?.costClass ?? 2) + (k.arrangement === 'single' ? 0 : 1);
+}
+
+/** Where practice reaches for a kind when several pass at the same cost (data/rolling-kinds.json, common practice). */
+function preference(k: Pick<RollingCandidate, 'kind'>): number {
+  return kindTraits().find((x) => x.kind === k.kind)?.preference ?? ROLLING_KINDS.length;
 }
 
 /**
  * The order practice chooses in: the supplier's own bearing first (it is the one asked
- * about), then the least costly kind, then the smallest outside diameter, then the narrowest
- * (unknown sizes last), then a ball bearing.
+ * about), then the least costly kind, then the kind practice reaches for first, then the
+ * smallest outside diameter, then the narrowest (unknown sizes last), then a ball bearing.
  */
 export function choiceOrder(a: RollingCandidate, b: RollingCandidate): number {
   return (
     (a.ratingSource === 'supplier' ? -1 : 0) - (b.ratingSource === 'supplier' ? -1 : 0) ||
     costClass(a) - costClass(b) ||
+    preference(a) - preference(b) ||
     orderNullLast(a.outerDiameter, b.outerDiameter) ||
     orderNullLast(a.width, b.width) ||
     (a.type === 'ball' ? -1 : 0) - (b.type === 'ball' ? -1 : 0)
@@ -118,4 +125,60 @@ export function equivalentLoadBound(points: LoadPoint[], serviceFactor: number, 
     }),
   );
   return P;
+}
+
+/** What the rules and the advice see of one kind: its lead candidate and the traits that decide between kinds. */
+export interface KindFacts {
+  kind: RollingCandidate['kind'];
+  /** The kind's lead candidate (leadOfEachKind). */
+  id: string;
+  feasible: boolean;
+  axialCapacity: RollingCandidate['axialCapacity'];
+  /** Misalignment the kind tolerates, minutes of arc (common practice, data/rolling-kinds.json). */
+  misalignment_arcmin: number;
+  /** Radial section height (D − d)/2, m (null when D is unknown). */
+  sectionHeight: number | null;
+  costClass: number;
+  speedClass: number;
+}
+
+/** The facts of a candidate's kind (common-practice traits from data/rolling-kinds.json). */
+export function kindFacts(k: RollingCandidate): KindFacts {
+  const t = kindTraits().find((x) => x.kind === k.kind);
+  return {
+    kind: k.kind,
+    id: k.id,
+    feasible: k.feasible,
+    axialCapacity: k.axialCapacity,
+    misalignment_arcmin: t?.misalignment_arcmin ?? 0,
+    sectionHeight: k.outerDiameter === null ? null : (k.outerDiameter - k.bore) / 2,
+    costClass: costClass(k),
+    speedClass: t?.speedClass ?? 2,
+  };
+}
+
+/**
+ * Why the best candidate's kind was picked, as a finding: it is the least costly kind that
+ * meets every check (then the smallest), and each less costly or equally costly kind that
+ * does not, with its first reason. Null when nothing is feasible.
+ */
+export function choiceFinding(best: RollingCandidate | null, candidates: RollingCandidate[]): Finding | null {
+  if (!best) return null;
+  const passedOver = leadOfEachKind(candidates)
+    .filter((k) => k.kind !== best.kind && !k.feasible && costClass(k) <= costClass(best))
+    .map((k) => {
+      const failing = k.checks.find((x) => !x.pass && !x.advisory);
+      return finding('rolling.passed-over', {
+        kind: k.kind,
+        exclusion: k.exclusions[0] ?? null,
+        failing: failing ? failing.label : null,
+      });
+    });
+  return finding('rolling.kind-chosen', {
+    kind: best.kind,
+    arrangement: best.arrangement,
+    costClass: costClass(best),
+    axialCapacity: best.axialCapacity,
+    passedOver,
+  });
 }

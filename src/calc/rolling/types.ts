@@ -2,6 +2,7 @@ import type { AssumedFinding, Finding } from '../../core/finding.js';
 import type { CheckRecord, SheetLine } from '../../core/check.js';
 import type { RollingType } from './life.js';
 import type { Arrangement, KindForm, RollingKind } from './kinds.js';
+import type { KindFacts } from './select.js';
 
 /**
  * Result of the rolling-bearing check (a contract read by the CLI, the rules and the
@@ -145,6 +146,12 @@ export interface RollingResult {
   requiredDynamicRatingFor: { type: RollingType; p: number } | null;
   candidates: RollingCandidate[];
   best: string | null;
+  /** One lead candidate per kind offered (the feasible choice of that kind, else its nearest miss), with the traits that decide between kinds. */
+  kinds: KindFacts[];
+  /** The best candidate's kind facts (null when nothing is feasible). */
+  chosen: KindFacts | null;
+  /** Why the best kind was picked over the less costly ones (worded by the report); null when nothing is feasible. */
+  choice: Finding | null;
   feasible: boolean;
   /** What the check assumed, and its cautions, as data (worded by src/report/findings/rolling.ts). */
   assumed: AssumedFinding[];

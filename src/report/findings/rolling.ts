@@ -44,6 +44,12 @@ const sizeOutsideSpace: Wording = (v) => {
   return `${raw(v['designation'])} (${tableMm(v['outerDiameter'])}×${tableMm(v['width'])} mm: ${over.filter(Boolean).join(', ')})`;
 };
 
+/** A less costly kind passed over, and its first reason. */
+const passedOver: Wording = (v) => {
+  const why = v['exclusion'] ? exclusionWords(v['exclusion'] as Finding) : `fails ${raw(v['failing'])}`;
+  return `${raw(v['kind'])}: ${why}`;
+};
+
 /** A candidate that is not suitable: its exclusions, then each failing check with value and limit. */
 const notSuitable: Wording = (v) => {
   const values = list<number>(v['values']);
@@ -107,7 +113,9 @@ const candidateFindings: Record<string, Wording> = {
   'rolling.kappa-above-range': (v) =>
     `${raw(v['designation'])}: viscosity ratio κ = ${fig(v['kappa'])} > ${raw(v['kappaMax'])} is taken as ${raw(v['kappaMax'])}, as ISO 281:2007 says`,
   'rolling.kappa-below-range': (v) =>
-    `${raw(v['designation'])}: viscosity ratio κ = ${fig(v['kappa'])} < ${raw(v['kappaMin'])} is outside the a_ISO method of ISO 281:2007; the method's limiting value (a_ISO at κ = ${raw(v['kappaMin'])}) is taken: a warning, not a failure of the bearing; a thicker oil or an EP grease improves it`,
+    `${raw(v['designation'])}: viscosity ratio κ = ${fig(v['kappa'])} < ${raw(v['kappaMin'])} is outside the a_ISO method of ISO 281:2007; the method's limiting value (a_ISO at κ = ${raw(v['kappaMin'])}) is taken: a warning, not a failure of the bearing; a thicker oil (or a higher running viscosity) improves it`,
+  'rolling.static-only': (v) =>
+    `every operating point turns slower than ${fig(Number(v['limit']) * 60)} r/min (the highest is ${fig(Number(v['speed']) * 60)} r/min): the bearing is sized by its static safety s0 = C0/P0 and no rating life is claimed (ISO 281 rates fatigue over revolutions; the limit is common practice)`,
   'rolling.aiso-capped': (v) => `${raw(v['designation'])}: a_ISO reached its cap of ${raw(v['cap'])} (ISO 281:2007)`,
   'rolling.pitch-diameter-large': (v) => {
     const guidance = fig(Number(v['guidanceBelow']) * 1000);
@@ -118,6 +126,12 @@ const candidateFindings: Record<string, Wording> = {
   'rolling.swing-too-small': (v) =>
     `${raw(v['designation'])}: swing ${degrees(v['swing'])}° is smaller than ${degrees(v['fullOverlapSwing'])}°, the swing for each of its ${raw(v['elements'])} rolling elements to roll onto its neighbour's track (720°/(Z·(1 − Dw/dm)), estimated geometry): the same track patches carry every cycle; false brinelling and fretting are the risk and the equivalent-speed life is not reliable`,
   'rolling.not-suitable': notSuitable,
+  'rolling.kind-chosen': (v) => {
+    const over = list<Finding>(v['passedOver']).map((f) => passedOver(f.values));
+    const pair = v['arrangement'] !== 'single' ? ` (${raw(v['arrangement'])})` : '';
+    return `${raw(v['kind'])}${pair} chosen: the least costly kind (cost class ${raw(v['costClass'])}, common practice) that meets every check, then the kind practice reaches for first, then the smallest; axial load: ${raw(v['axialCapacity'])}${over.length ? `. Passed over: ${over.join('; ')}` : ''}`;
+  },
+  'rolling.passed-over': passedOver,
 };
 
 /**
