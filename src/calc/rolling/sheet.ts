@@ -1,136 +1,65 @@
 import type { SheetLine } from '../../core/check.js';
-import { num } from '../../core/format.js';
-import { AISO_CAP, AISO_CONSTANTS, KAPPA_MAX, KAPPA_MIN } from './aiso.js';
-
-import type { LoadPoint } from './conditions.js';
-import { dynamicEquivalentLoad } from './equivalent-load.js';
+import { AISO_CAP, AISO_CONSTANTS, KAPPA_MAX, KAPPA_MIN, ratedViscosity } from './aiso.js';
 import type { EvalContext } from './context.js';
-import { frictionTorque } from './speed.js';
-import type { RollingCandidate } from './types.js';
+import { staticLoad } from './load-factors.js';
+import { EXPONENT_TEXT, SHEET_TERMS_MAX, fig, loadLines, pointLabel, rowsText } from './sheet-load.js';
+import { frictionLines, greaseLines } from './sheet-running.js';
+import { STATIC_SPEED_LIMIT } from './spectrum.js';
+import type { CandidatePoint, RollingCandidate } from './types.js';
 
 /**
  * The calculation sheet of one candidate: each figure with its formula, the formula with the
  * numbers put in, its value and the formula's source. Each line's `substituted` ends in an
  * expression (numbers, or a function of named arguments) whose value is the line's `value`:
  * reports print `substituted = value unit`. The figures are the candidate's own
- * (src/calc/rolling/evaluate.ts); the sheet only writes them out.
+ * (src/calc/rolling/evaluate.ts, with its points); the sheet only writes them out, in the
+ * order: loads (sheet-load.ts), lives, viscosity and a_ISO per point, the lives combined over
+ * the duty, static safety and speed, friction and grease (sheet-running.ts).
  */
 
-/** Largest number of operating points written out term by term on the sheet; more are summed in words. */
-const SHEET_TERMS_MAX = 4;
-
-/** A number on the sheet: num with the zeros of the exponent form kept (1.000e+6), as the sheet has always been written. */
-const fig = (v: number): string => num(v, 4, { exponentZeros: 'keep' });
-
-/** The life exponent p as written on the sheet: as itself, as 1/p and as an exponent. */
-interface ExponentText {
-  p: string;
-  /** 1/p as a plain fraction: "1/10/3" would read as 1/30. */
-  inverse: string;
-  /** p as an exponent: "^10/3" would read as (…^10)/3. */
-  power: string;
-}
-const EXPONENT_TEXT: Record<RollingCandidate['type'], ExponentText> = {
-  ball: { p: '3', inverse: '1/3', power: '3' },
-  roller: { p: '10/3', inverse: '3/10', power: '(10/3)' },
-};
-
-/** A point with its dynamic equivalent load Pi = X·Fr + Y·Fa without f_d, N, as evaluate() works it. */
-type SheetPoint = LoadPoint & { P: number };
-
-/** The dynamic equivalent load line: one point written out, or the duty mean over several. */
-function loadLine(candidate: RollingCandidate, ctx: EvalContext, per: SheetPoint[]): SheetLine {
-  const ex = EXPONENT_TEXT[candidate.type];
-  if (per.length <= 1) {
-    const q = ctx.points[0];
-    return {
-      label: `Dynamic equivalent load P (${candidate.designation})`,
-      formula: 'P = f_d·(X·Fr + Y·Fa)',
-      substituted: q
-        ? `P = ${ctx.serviceFactor}·(${fig(candidate.X)}·${fig(q.Fr)} N + ${fig(candidate.Y)}·${fig(q.Fa)} N)`
-        : 'P = 0',
-      value: candidate.equivalentLoad,
-      unit: 'N',
-      source: 'ISO 281:2007 (X, Y table); service factor common practice',
-    };
-  }
-  const many = per.length > SHEET_TERMS_MAX;
-  const byRevolutions = per.some((q) => q.n > 0 && q.t > 0);
-  const weight = (q: SheetPoint): string => (byRevolutions ? `${fig(q.n * 60)}·${fig(q.t)}` : fig(q.t));
-  const numerator = many
-    ? `Σ over ${per.length} points of Pi^${ex.power}·${byRevolutions ? 'ni·ti' : 'ti'}`
-    : per.map((q) => `${fig(ctx.serviceFactor * q.P)}^${ex.power}·${weight(q)}`).join(' + ');
-  const denominator = many ? (byRevolutions ? 'Σ ni·ti' : 'Σ ti') : per.map(weight).join(' + ');
-  return {
-    label: `Dynamic equivalent load P (${candidate.designation})`,
-    formula: `P = (Σ Pi^p·${byRevolutions ? 'ni·ti / Σ ni·ti' : 'ti / Σ ti'})^(1/p), Pi = f_d·(X·Fr + Y·Fa), p = ${ex.p}, f_d = ${ctx.serviceFactor}${byRevolutions ? ', n in r/min' : ''}`,
-    substituted: `P = [(${numerator})/(${denominator})]^(${ex.inverse})`,
-    value: candidate.equivalentLoad,
-    unit: 'N',
-    source: 'ISO 281:2007 (X, Y table; variable load); service factor common practice',
-  };
-}
-
 /** L10, L10h and the dynamic rating needed for the life target, where they apply; n mean speed, rev/s. */
-function lifeLines(candidate: RollingCandidate, ctx: EvalContext, n: number): SheetLine[] {
-  const ex = EXPONENT_TEXT[candidate.type];
+function lifeLines(c: RollingCandidate, ctx: EvalContext, n: number): SheetLine[] {
+  const ex = EXPONENT_TEXT[c.type];
   const lines: SheetLine[] = [];
-  if (candidate.L10 !== null) {
+  if (c.staticOnly) {
     lines.push({
-      label: 'Basic rating life L10',
+      label: 'No rating life claimed: every point turns slower than the static speed limit; static safety s0 governs',
+      formula: `n < ${fig(STATIC_SPEED_LIMIT * 60)} r/min at every point with a time share`,
+      substituted: `n_max = ${fig(ctx.maxSpeed * 60)} r/min`,
+      value: ctx.maxSpeed * 60,
+      unit: 'r/min',
+      source: 'common practice: a bearing turning slower than about 10 r/min is sized by ISO 76 s0 = C0/P0',
+    });
+    return lines;
+  }
+  if (c.L10 !== null)
+    lines.push({
+      label: `Basic rating life L10 (${c.kind}, p = ${ex.p})`,
       formula: 'L10 = (C/P)^p',
-      substituted: `L10 = (${fig(candidate.dynamicRating)} N / ${fig(candidate.equivalentLoad)} N)^${ex.power}`,
-      value: candidate.L10,
+      substituted: `L10 = (${fig(c.dynamicRating)} N / ${fig(c.equivalentLoad)} N)^${ex.power}`,
+      value: c.L10,
       unit: '10^6 rev',
       source: 'ISO 281:2007',
     });
-  }
-  if (candidate.L10h !== null && candidate.L10 !== null) {
+  if (c.L10h !== null && c.L10 !== null)
     lines.push({
-      label: 'Basic rating life L10h',
-      formula: 'L10h = 10^6·L10/(60·n)',
-      substituted: `L10h = 10^6·${fig(candidate.L10)}/(60·${fig(n * 60)} r/min)`,
-      value: candidate.L10h,
+      label: `Basic rating life L10h (${c.kind})`,
+      formula: 'L10h = 10^6·L10/(60·n), n the time-mean speed in r/min',
+      substituted: `L10h = 10^6·${fig(c.L10)}/(60·${fig(n * 60)} r/min)`,
+      value: c.L10h,
       unit: 'h',
       source: 'ISO 281:2007',
     });
-  }
-  if (candidate.requiredDynamicRating !== null && ctx.c.life.hours > 0) {
+  if (c.requiredDynamicRating !== null && ctx.c.life.hours > 0)
     lines.push({
-      label: `Basic dynamic rating needed for the life target (${candidate.kind}, p = ${ex.p})`,
+      label: `Basic dynamic rating needed for the life target (${c.kind}, p = ${ex.p})`,
       formula: 'C_req = P·(L_req/a1)^(1/p), L_req = 60·n·h/10^6 (n in r/min)',
-      substituted: `C_req = ${fig(candidate.equivalentLoad)} N·(60·${fig(n * 60)} r/min·${fig(ctx.c.life.hours)} h/10^6/${fig(candidate.a1)})^(${ex.inverse})`,
-      value: candidate.requiredDynamicRating,
+      substituted: `C_req = ${fig(c.equivalentLoad)} N·(60·${fig(n * 60)} r/min·${fig(ctx.c.life.hours)} h/10^6/${fig(c.a1)})^(${ex.inverse})`,
+      value: c.requiredDynamicRating,
       unit: 'N',
       source: 'ISO 281:2007, from L10 = (C/P)^p with a1 (a_ISO taken as 1)',
     });
-  }
   return lines;
-}
-
-/** ν1 and κ, where the shaft turns; n mean speed, rev/s. */
-function viscosityLines(candidate: RollingCandidate, n: number): SheetLine[] {
-  if (candidate.ratedViscosity === null || candidate.kappa === null) return [];
-  const rpm = n * 60;
-  const slow = rpm < 1000;
-  return [
-    {
-      label: 'Rated viscosity ν1',
-      formula: slow ? 'ν1 = 45000·n^-0.83·dm^-0.5 (mm²/s, r/min, mm)' : 'ν1 = 4500·n^-0.5·dm^-0.5 (mm²/s, r/min, mm)',
-      substituted: `ν1 = ${slow ? '45000' : '4500'}·${fig(rpm)}^${slow ? '-0.83' : '-0.5'}·${fig(candidate.pitchDiameter * 1000)}^-0.5 mm²/s`,
-      value: candidate.ratedViscosity,
-      unit: 'm^2/s',
-      source: 'ISO 281:2007 (from memory)',
-    },
-    {
-      label: 'Viscosity ratio κ',
-      formula: 'κ = ν/ν1, ν at the operating temperature',
-      substituted: `κ = ν(${fig(candidate.temperature)} °C)/ν1 = ${fig(candidate.viscosity * 1e6)} mm²/s / ${fig(candidate.ratedViscosity * 1e6)} mm²/s`,
-      value: candidate.kappa,
-      unit: '1',
-      source: 'ISO 281:2007',
-    },
-  ];
 }
 
 /** The a_ISO formula of a bearing type, written from its constants (the load exponent 1/3 as a fraction). */
@@ -141,147 +70,213 @@ function aIsoFormula(type: RollingCandidate['type']): string {
   return `a_ISO = 0.1·[1 − (${a.x} − y/κ^z)${inner}·(e_C·Cu/P)^${load}]^${a.outer}`;
 }
 
-/** e_C·Cu/P and a_ISO, where a_ISO applies. */
-function aIsoLines(candidate: RollingCandidate, ctx: EvalContext): SheetLine[] {
-  if (candidate.aISO === null) return [];
-  const eCCuP = (ctx.cont.eC * candidate.fatigueLimit) / candidate.equivalentLoad;
-  const kappaUsed = Math.min(KAPPA_MAX, Math.max(KAPPA_MIN, candidate.kappa ?? 0));
-  const args = `a_ISO(κ = ${fig(kappaUsed)}, e_C·Cu/P = ${fig(eCCuP)})`;
-  return [
+/** ν1, κ and a_ISO of the turning points: each of them up to SHEET_TERMS_MAX, else the one with the lowest κ. */
+function turningLines(c: RollingCandidate, ctx: EvalContext): SheetLine[] {
+  const turning = c.points.flatMap((q, i) => (q.static || q.kappa === null ? [] : [i]));
+  if (turning.length <= SHEET_TERMS_MAX) return turning.flatMap((i) => pointLifeLines(c, ctx, i, false));
+  const lowest = turning.reduce((lo, i) => (c.points[i]!.kappa! < c.points[lo]!.kappa! ? i : lo), turning[0]!);
+  return pointLifeLines(c, ctx, lowest, true);
+}
+
+/** ν1, κ, e_C·Cu/Pi, a_ISO and the point's own modified life, for one turning point. */
+function pointLifeLines(c: RollingCandidate, ctx: EvalContext, i: number, picked: boolean): SheetLine[] {
+  const q = c.points[i]!;
+  const at = pointLabel(i, c.points.length, picked ? 'the lowest κ' : '');
+  const rpm = q.n * 60;
+  const slow = rpm < 1000;
+  const nu1 = ratedViscosity(q.n, c.pitchDiameter);
+  const lines: SheetLine[] = [];
+  if (nu1 === null || q.kappa === null) return lines;
+  lines.push(
     {
-      label: 'Contamination and fatigue-limit term e_C·Cu/P',
-      formula: 'e_C·Cu/P',
-      substituted: `${fig(ctx.cont.eC)}·${fig(candidate.fatigueLimit)} N/${fig(candidate.equivalentLoad)} N`,
+      label: `Rated viscosity ν1${at}`,
+      formula: slow ? 'ν1 = 45000·n^-0.83·dm^-0.5 (mm²/s, r/min, mm)' : 'ν1 = 4500·n^-0.5·dm^-0.5 (mm²/s, r/min, mm)',
+      substituted: `ν1 = ${slow ? '45000' : '4500'}·${fig(rpm)}^${slow ? '-0.83' : '-0.5'}·${fig(c.pitchDiameter * 1000)}^-0.5 mm²/s`,
+      value: nu1,
+      unit: 'm^2/s',
+      source: 'ISO 281:2007 (from memory)',
+    },
+    {
+      label: `Viscosity ratio κ${at}`,
+      formula: 'κ = ν/ν1, ν at the operating temperature',
+      substituted: `κ = ν(${fig(c.temperature)} °C)/ν1 = ${fig(c.viscosity * 1e6)} mm²/s / ${fig(nu1 * 1e6)} mm²/s`,
+      value: q.kappa,
+      unit: '1',
+      source: 'ISO 281:2007',
+    },
+  );
+  if (q.aISO === null) return lines;
+  const Pi = ctx.serviceFactor * q.P;
+  const eCCuP = (ctx.cont.eC * c.fatigueLimit) / Pi;
+  const kappaUsed = Math.min(KAPPA_MAX, Math.max(KAPPA_MIN, q.kappa));
+  const args = `a_ISO(κ = ${fig(kappaUsed)}, e_C·Cu/P = ${fig(eCCuP)})`;
+  const ex = EXPONENT_TEXT[c.type];
+  lines.push(
+    {
+      label: `Contamination and fatigue-limit term e_C·Cu/P${at}`,
+      formula: `e_C·Cu/P, P = f_d·Pi = ${ctx.serviceFactor}·${fig(q.P)} N`,
+      substituted: `${fig(ctx.cont.eC)}·${fig(c.fatigueLimit)} N/${fig(Pi)} N`,
       value: eCCuP,
       unit: '1',
       source: `ISO 281:2007 (from memory); e_C for "${ctx.cont.level}" (${ctx.cont.source})`,
     },
     {
-      label: 'Life modification factor a_ISO',
-      formula: `${aIsoFormula(candidate.type)}, y and z per κ band, κ held to ${KAPPA_MIN}–${KAPPA_MAX}, a_ISO ≤ ${AISO_CAP}`,
-      substituted: candidate.aISO >= AISO_CAP ? `min(${AISO_CAP}, ${args})` : args,
-      value: candidate.aISO,
+      label: `Life modification factor a_ISO${at}`,
+      formula: `${aIsoFormula(c.type)}, y and z per κ band, κ held to ${KAPPA_MIN}–${KAPPA_MAX}, a_ISO ≤ ${AISO_CAP}`,
+      substituted: q.aISO >= AISO_CAP ? `min(${AISO_CAP}, ${args})` : args,
+      value: q.aISO,
       unit: '1',
       source: 'ISO 281:2007 (from memory)',
     },
-  ];
-}
-
-/** a1, L10mh, s0 and n·dm. */
-function ratingLines(candidate: RollingCandidate, ctx: EvalContext): SheetLine[] {
-  const lines: SheetLine[] = [
-    {
-      label: 'Reliability factor a1',
-      formula: 'a1 = 0.95·[ln(100/R)/ln(100/90)]^(2/3) + 0.05, R in %',
-      substituted: `a1 = 0.95·[ln(100/${fig(ctx.reliabilityUsed)})/ln(100/90)]^(2/3) + 0.05`,
-      value: candidate.a1,
-      unit: '1',
-      source: 'ISO 281:2007',
-    },
-  ];
-  if (candidate.L10mh !== null && candidate.L10h !== null && candidate.aISO !== null) {
+  );
+  if (q.L10mh !== null && c.points.length > 1)
     lines.push({
-      label: 'Modified rating life L10mh',
-      formula: 'L10mh = a1·a_ISO·L10h',
-      substituted: `L10mh = ${fig(candidate.a1)}·${fig(candidate.aISO)}·${fig(candidate.L10h)} h`,
-      value: candidate.L10mh,
+      label: `Modified rating life of the point L10mh${at}`,
+      formula: 'L10mh,i = a1·a_ISO,i·(C/Pi)^p·10^6/(60·ni), Pi with f_d, ni in r/min',
+      substituted: `L10mh = ${fig(c.a1)}·${fig(q.aISO)}·(${fig(c.dynamicRating)} N/${fig(Pi)} N)^${ex.power}·10^6/(60·${fig(rpm)} r/min)`,
+      value: q.L10mh,
       unit: 'h',
       source: 'ISO 281:2007',
     });
-  }
-  if (candidate.s0 !== null) {
-    lines.push({
-      label: 'Static safety s0',
-      formula: candidate.type === 'ball' ? 's0 = C0/P0, P0 = max(0.6·Fr + 0.5·Fa, Fr)' : 's0 = C0/P0, P0 = Fr',
-      substituted: `s0 = ${fig(candidate.staticRating)} N / ${fig(candidate.staticEquivalentLoad)} N`,
-      value: candidate.s0,
-      unit: '1',
-      source: 'ISO 76 (from memory)',
-    });
-  }
-  lines.push({
-    label: 'Speed factor n·dm',
-    formula: 'n·dm (highest point speed, r/min × mm)',
-    substituted: `${fig(ctx.maxSpeed * 60)} r/min × ${fig(candidate.pitchDiameter * 1000)} mm`,
-    value: candidate.ndm,
-    unit: 'mm*r/min',
-    source: 'common practice',
-  });
   return lines;
 }
 
-/** Friction torque and power: M = μ·Pi·d/2 per point (Pi without f_d), time means over the duty. */
-function frictionLines(candidate: RollingCandidate, ctx: EvalContext, per: SheetPoint[]): SheetLine[] {
-  const mu = ctx.f.friction.find((q) => q.type === candidate.type)!.mu;
-  const sumT = per.reduce((acc, q) => acc + Math.max(0, q.t), 0);
-  const pBar = sumT > 0 ? per.reduce((acc, q) => acc + Math.max(0, q.t) * Math.max(0, q.P), 0) / sumT : 0;
-  const Mi = (q: SheetPoint): number => frictionTorque(mu, q.P, candidate.bore);
-  const term = (q: SheetPoint): string => `${fig(Mi(q))} N·m·2π·${fig(Math.max(0, q.n))} rev/s`;
-  const several = per.length > 1;
-  let power: string;
-  if (!several) power = per[0] ? `N_R = ${term(per[0])}` : 'N_R = 0';
-  else if (per.length > SHEET_TERMS_MAX) power = `N_R = (Σ over ${per.length} points of ti·Mi·2π·ni)/(Σ ti)`;
-  else
-    power = `N_R = (${per.map((q) => `${fig(q.t)}·${term(q)}`).join(' + ')})/(${per.map((q) => fig(q.t)).join(' + ')})`;
+/** The point lives combined by the linear damage rule (spectrum.ts), and the effective a_ISO. */
+function combinedLines(c: RollingCandidate): SheetLine[] {
+  if (c.L10mh === null) return [];
+  const pts = c.points.filter((q) => Number.isFinite(q.t) && q.t > 0);
+  const lines: SheetLine[] = [];
+  const damaging = (q: CandidatePoint) => q.L10mh !== null && q.L10mh > 0;
+  const source =
+    'ISO 281:2007 modified rating life per point; linear damage rule (Palmgren 1924, Zeitschrift des VDI 68, 339–341; Miner 1945, Journal of Applied Mechanics 12, A159–A164; from memory)';
+  if (pts.length <= 1) {
+    if (c.aISO !== null && c.L10h !== null)
+      lines.push({
+        label: 'Modified rating life L10mh',
+        formula: 'L10mh = a1·a_ISO·L10h',
+        substituted: `L10mh = ${fig(c.a1)}·${fig(c.aISO)}·${fig(c.L10h)} h`,
+        value: c.L10mh,
+        unit: 'h',
+        source: 'ISO 281:2007',
+      });
+    return lines;
+  }
+  {
+    const sumT = pts.reduce((s, q) => s + q.t, 0);
+    const substituted =
+      pts.length > SHEET_TERMS_MAX
+        ? `L10mh = ${fig(sumT)}/${fig(pts.reduce((s, q) => s + (damaging(q) ? q.t / q.L10mh! : 0), 0))}`
+        : `L10mh = (${pts.map((q) => fig(q.t)).join(' + ')})/(${pts
+            .filter(damaging)
+            .map((q) => `${fig(q.t)}/${fig(q.L10mh!)} h`)
+            .join(' + ')})`;
+    const statics = pts.some((q) => q.static);
+    lines.push({
+      label: 'Modified rating life L10mh (point lives combined over the duty)',
+      formula: `L10mh = Σ ti / Σ (ti/L10mh,i), the time-weighted harmonic mean of the point lives${statics ? '; a point slower than 10 r/min consumes no life, its time stays in Σ ti' : ''}${pts.length > SHEET_TERMS_MAX ? `; the sums over ${pts.length} points` : ''}`,
+      substituted,
+      value: c.L10mh,
+      unit: 'h',
+      source,
+    });
+  }
+  if (c.aISO !== null && c.L10h !== null)
+    lines.push({
+      label: 'Effective a_ISO over the duty',
+      formula: 'a_ISO = L10mh/(a1·L10h)',
+      substituted: `a_ISO = ${fig(c.L10mh)} h/(${fig(c.a1)}·${fig(c.L10h)} h)`,
+      value: c.aISO,
+      unit: '1',
+      source: 'ISO 281:2007, L10mh = a1·a_ISO·L10h read backwards',
+    });
+  return lines;
+}
+
+/** P0 at the point where it is largest, and s0 = C0/P0 [ISO 76]. */
+function staticLines(c: RollingCandidate): SheetLine[] {
+  if (c.s0 === null || c.points.length === 0) return [];
+  const spec = {
+    kind: c.kind,
+    form: c.form,
+    arrangement: c.arrangement,
+    contactAngle: c.contactAngle,
+    C0: c.staticRating,
+    f0: null,
+  };
+  const per = c.points.map((q) => ({ q, ...staticLoad(spec, q.Fr, q.Fa) }));
+  const top = per.reduce((a, b) => (b.P0 > a.P0 ? b : a), per[0]!);
+  const i = per.indexOf(top);
+  const at = pointLabel(i, c.points.length, 'the largest');
+  const combined = top.X0 * top.q.Fr + top.Y0 * top.q.Fa;
+  const alpha = c.contactAngle;
+  const cotForm = c.kind !== 'deep-groove ball' && c.kind !== 'angular-contact ball' && top.Y0 > 0 && alpha > 0;
+  const cot = 1 / Math.tan((alpha * Math.PI) / 180);
+  const Y0text = cotForm ? `${fig(top.Y0 / cot)}·${fig(cot)}` : fig(top.Y0);
+  const roller0 = c.kind === 'cylindrical roller' || c.kind === 'needle roller';
   return [
     {
-      label: several ? 'Friction torque M (time mean over the duty)' : 'Friction torque M',
-      formula: several
-        ? 'M = μ·P̄·d/2, P̄ = Σ ti·Pi/Σ ti, Pi = X·Fr + Y·Fa (without f_d)'
-        : 'M = μ·P·d/2, P = X·Fr + Y·Fa (without f_d)',
-      substituted: `M = ${mu}·${fig(pBar)} N·${fig(candidate.bore)} m/2`,
-      value: candidate.frictionTorque,
-      unit: 'N*m',
-      source: 'common practice (from memory)',
+      label: `Static equivalent load P0${c.points.length > 1 ? ' (largest over the points)' : ''}${at}`,
+      formula: roller0
+        ? 'P0 = Fr (α = 0 roller bearing)'
+        : `P0 = X0·Fr + Y0·Fa, not less than Fr${combined < top.q.Fr ? ' (here Fr governs)' : ''}; X0 = ${fig(top.X0)}, Y0 = ${cotForm ? `${fig(top.Y0 / cot)}·cot α` : fig(top.Y0)} (${c.kind}, ${rowsText(c)}${alpha > 0 ? `, α = ${fig(alpha)}°` : ''})`,
+      substituted:
+        roller0 || combined < top.q.Fr
+          ? `P0 = ${fig(top.q.Fr)} N`
+          : `P0 = ${fig(top.X0)}·${fig(top.q.Fr)} N + ${Y0text}·${fig(top.q.Fa)} N`,
+      value: c.staticEquivalentLoad,
+      unit: 'N',
+      source: 'ISO 76:2006 (factors from memory, data/rolling-load-factors.json)',
     },
     {
-      label: several ? 'Friction power N_R (time mean over the duty)' : 'Friction power N_R',
-      formula: several ? 'N_R = Σ ti·Mi·2π·ni/Σ ti, Mi = μ·Pi·d/2' : 'N_R = M·2π·n',
-      substituted: power,
-      value: candidate.frictionPower,
-      unit: 'W',
-      source: 'mechanics',
+      label: c.staticOnly ? 'Static safety s0 (governs: no rating life claimed)' : 'Static safety s0',
+      formula: 's0 = C0/P0',
+      substituted: `s0 = ${fig(c.staticRating)} N / ${fig(c.staticEquivalentLoad)} N`,
+      value: c.s0,
+      unit: '1',
+      source: 'ISO 76:2006',
     },
   ];
 }
 
-/** The grease interval (grease life of a sealed bearing), on grease. */
-function greaseLines(candidate: RollingCandidate, ctx: EvalContext): SheetLine[] {
-  if (candidate.relubricationHours === null) return [];
-  const kf = ctx.f.relubrication.find((q) => q.type === candidate.type)!.kf;
-  const rpm = ctx.maxSpeed * 60;
-  const dMm = candidate.bore * 1000;
-  const hot = candidate.temperature > 70 ? `·0.5^((${fig(candidate.temperature)} − 70)/15)` : '';
-  const core = `${kf}·[14·10^6/(${fig(rpm)}·√${fig(dMm)}) − 4·${fig(dMm)}]${hot}`;
-  return [
-    {
-      label: ctx.lubrication.sealed ? 'Grease life (sealed bearing)' : 'Grease relubrication interval',
-      formula:
-        't_f = k_f·[14·10^6/(n·√d) − 4·d]·0.5^((T − 70)/15 if T > 70), n highest speed in r/min, d bore in mm, T in °C; no positive interval gives 0',
-      substituted: `t_f = ${candidate.relubricationHours === 0 ? `max(0, ${core})` : core}`,
-      value: candidate.relubricationHours,
-      unit: 'h',
-      source: "a rolling-bearing maker's general technical guide on grease relubrication (seen; not named here)",
-    },
-  ];
+/** a1 and n·dm. */
+function reliabilityLine(c: RollingCandidate, ctx: EvalContext): SheetLine {
+  return {
+    label: 'Reliability factor a1',
+    formula: 'a1 = 0.95·[ln(100/R)/ln(100/90)]^(2/3) + 0.05, R in %',
+    substituted: `a1 = 0.95·[ln(100/${fig(ctx.reliabilityUsed)})/ln(100/90)]^(2/3) + 0.05`,
+    value: c.a1,
+    unit: '1',
+    source: 'ISO 281:2007',
+  };
+}
+
+function speedLine(c: RollingCandidate, ctx: EvalContext): SheetLine {
+  return {
+    label: 'Speed factor n·dm',
+    formula: 'n·dm (highest point speed, r/min × mm)',
+    substituted: `${fig(ctx.maxSpeed * 60)} r/min × ${fig(c.pitchDiameter * 1000)} mm`,
+    value: c.ndm,
+    unit: 'mm*r/min',
+    source: 'common practice',
+  };
 }
 
 /**
- * The calculation sheet of `candidate` in its case context `ctx`, `n` the duty's mean speed (rev/s): load,
- * lives, viscosity, a_ISO, ratings and safety, friction, grease, in that order.
+ * The calculation sheet of `candidate` in its case context `ctx`, `n` the duty's mean speed
+ * (rev/s): loads, lives, reliability, viscosity and a_ISO per point, the combined modified
+ * life, static safety, speed, friction, grease, in that order.
  */
 export function rollingSheet(candidate: RollingCandidate, ctx: EvalContext, n: number): SheetLine[] {
-  const per = ctx.points.map((q) => ({
-    ...q,
-    P: dynamicEquivalentLoad(candidate.type, q.Fr, q.Fa, candidate.staticRating, ctx.f.xyDeepGrooveBall).P,
-  }));
+  const lifeClaimed = !candidate.staticOnly;
   return [
-    loadLine(candidate, ctx, per),
+    ...loadLines(candidate, ctx),
     ...lifeLines(candidate, ctx, n),
-    ...viscosityLines(candidate, n),
-    ...aIsoLines(candidate, ctx),
-    ...ratingLines(candidate, ctx),
-    ...frictionLines(candidate, ctx, per),
+    ...(lifeClaimed ? [reliabilityLine(candidate, ctx)] : []),
+    ...(lifeClaimed ? turningLines(candidate, ctx) : []),
+    ...(lifeClaimed ? combinedLines(candidate) : []),
+    ...staticLines(candidate),
+    speedLine(candidate, ctx),
+    ...frictionLines(candidate, ctx),
     ...greaseLines(candidate, ctx),
   ];
 }
