@@ -67,32 +67,10 @@ export type NeedleRow = z.infer<typeof needleRowSchema>;
 const rowsOf = <T extends z.ZodType>(row: T) =>
   z.object({ description: z.string(), units: z.record(z.string(), z.string()), rows: z.array(row).min(1) });
 
-const curveSchema = z.object({
-  note: z.string(),
-  source,
-  rows: z.array(z.object({ gamma: positive, f: positive })).min(2),
-});
-export type FactorCurve = z.infer<typeof curveSchema>;
-
-const xyRowSchema = z.object({ faC0: positive, e: positive, Y: positive });
-export type XYRow = z.infer<typeof xyRowSchema>;
-
-const xyTableSchema = z.object({
-  note: z.string(),
-  xBelowE: positive,
-  yBelowE: nonNegative,
-  xAboveE: positive,
-  source,
-  rows: z.array(xyRowSchema).min(2),
-});
-export type XYTable = z.infer<typeof xyTableSchema>;
-
 const factorsSchema = z.object({
   description: z.string(),
   units: z.record(z.string(), z.string()),
-  xyDeepGrooveBall: xyTableSchema,
   serviceFactors: z.array(z.object({ shock, serviceFactor: positive, source })).length(4),
-  staticSafety: z.array(z.object({ shock, guidance: z.string(), ball: positive, roller: positive, source })).length(4),
   contamination: z
     .array(
       z.object({
@@ -105,24 +83,8 @@ const factorsSchema = z.object({
       }),
     )
     .length(4),
-  speedLimits: z.array(
-    z.object({ type: bearingType, supply: z.enum(['grease', 'oil-bath', 'oil-feed']), ndm: positive, source }),
-  ),
-  friction: z.array(z.object({ type: bearingType, mu: positive, source })),
-  relubrication: z.array(z.object({ type: bearingType, kf: positive, source })),
-  ratingFactors: z.object({ fcBall: curveSchema, f0Ball: curveSchema, fcRoller: curveSchema }),
-  geometryEstimate: z.object({
-    ballDiameterFactor: positive,
-    ballGammaMax: positive,
-    ballFillAngle_deg: positive,
-    rollerDiameterFactor: positive,
-    rollerLengthFactor: positive,
-    rollerPitchFactor: positive,
-    source,
-  }),
 });
 export type RollingFactors = z.infer<typeof factorsSchema>;
-export type GeometryEstimateFactors = RollingFactors['geometryEstimate'];
 
 /** ISO 15 boundary dimensions (data/rolling-boundary-dimensions.json), validated and cached. */
 export function boundaryDimensions(): BoundaryTable {

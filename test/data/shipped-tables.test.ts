@@ -25,12 +25,22 @@ describe('shipped data tables', () => {
     expect(bushingMaterials().length).toBeGreaterThanOrEqual(10);
     expect(bushingFactors().motion.length).toBeGreaterThanOrEqual(2);
   });
-  it('rolling-boundary-dimensions.json and rolling-factors.json', async () => {
-    const { boundaryDimensions, rollingFactors } = await import('../../src/data/rolling.js');
-    expect(Object.keys(boundaryDimensions()).length).toBeGreaterThan(0);
-    const f = rollingFactors();
-    expect(f.xyDeepGrooveBall.rows.length).toBeGreaterThanOrEqual(9); // ISO 281 table, nine Fa/C0 rows
-    expect(f.serviceFactors.map((x) => x.shock)).toEqual(['none', 'light', 'moderate', 'heavy']);
+  it('the rolling dimension tables, factors and kind traits', async () => {
+    const { boundaryDimensions, taperedDimensions, needleDimensions, rollingFactors, kindTraits } =
+      await import('../../src/data/rolling.js');
+    expect(boundaryDimensions().rows.length).toBeGreaterThanOrEqual(160); // 5 series × 32 bores
+    expect(taperedDimensions().rows.length).toBeGreaterThan(0);
+    expect(needleDimensions().rows.length).toBeGreaterThan(0);
+    expect(rollingFactors().serviceFactors.map((x) => x.shock)).toEqual(['none', 'light', 'moderate', 'heavy']);
+    expect(kindTraits()).toHaveLength(7);
+  });
+  it('rolling-load-factors.json, rolling-ratings.json and rolling-running.json', async () => {
+    const { loadFactors } = await import('../../src/data/rolling-load-factors.js');
+    const { ratingTables } = await import('../../src/data/rolling-ratings.js');
+    const { rollingRunning } = await import('../../src/data/rolling-running.js');
+    expect(loadFactors().radialBall.rows.length).toBeGreaterThanOrEqual(9); // ISO 281 table, nine f0·Fa/C0 rows
+    expect(Object.keys(ratingTables().curves).length).toBeGreaterThan(0);
+    expect(rollingRunning().staticSafety).toHaveLength(4);
   });
   it('journal-criteria.json and journal-tables.json', async () => {
     const { journalCriteria } = await import('../../src/data/journal-criteria.js');

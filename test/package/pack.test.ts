@@ -32,7 +32,8 @@ let app = '';
 let packed: { filename: string; integrity: string; files: { path: string }[] };
 
 function run(cmd: string, args: string[], opts: SpawnSyncOptions = {}) {
-  const r = spawnSync(cmd, args, { cwd: app, encoding: 'utf8', env, ...opts });
+  // The JSON of every example together runs past spawnSync's 1 MB default buffer.
+  const r = spawnSync(cmd, args, { cwd: app, encoding: 'utf8', env, maxBuffer: 64 * 1024 * 1024, ...opts });
   return { code: r.status, stdout: String(r.stdout), stderr: String(r.stderr), error: r.error };
 }
 

@@ -1,6 +1,7 @@
 import type { CaseSI } from '../../case/types.js';
 import { finding } from '../../core/finding.js';
 import { rollingFactors } from '../../data/rolling.js';
+import { loadFactors } from '../../data/rolling-load-factors.js';
 import { candidateSpecs } from './candidates.js';
 import { dutyPoints, lifeFactors, shockFactors } from './conditions.js';
 import type { EvalContext } from './context.js';
@@ -67,7 +68,7 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
   const leadType: RollingType = lead ? lead.type : 'ball';
   const equivalentLoad = lead
     ? lead.equivalentLoad
-    : equivalentLoadBound(duty.points, shock.serviceFactor, f.xyDeepGrooveBall, notes);
+    : equivalentLoadBound(duty.points, shock.serviceFactor, loadFactors().radialBall, notes);
   const requiredC = requiredDynamicRating(
     equivalentLoad,
     duty.meanSpeed,

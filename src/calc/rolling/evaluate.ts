@@ -13,7 +13,7 @@ import { lifeExponent, requiredDynamicRating } from './life.js';
 import { axialCapacity, dynamicLoad, staticLoad, type BearingLoadSpec, type DynamicLoad } from './load-factors.js';
 import { STATIC_SPEED_LIMIT, spectrumLife, type SpectrumLife } from './spectrum.js';
 import { criticalSwingAngle, frictionPower, speedFactor } from './speed.js';
-import { inducedAxialForce } from './tapered-pair.js';
+import { inducedAxialForce, inducedAxialForceFromE } from './tapered-pair.js';
 import type { RollingCandidate } from './types.js';
 
 /**
@@ -69,13 +69,15 @@ export function needsOpposedPartner(spec: Pick<CandidateSpec, 'kind' | 'arrangem
  * needs an opposed partner, that partner's induced force. The partner is taken as the same
  * bearing under the same radial load (the two supports of a symmetric shaft), mounted so that
  * the case's thrust runs into this bearing: by the rules for two bearings that locate each
- * other, this one then carries Fa + 0.5·Fr/Y.
+ * other, this one then carries Fa + 0.5·Fr/Y (tapered roller) or Fa + e·Fr (angular-contact ball,
+ * common practice).
  */
 function bearingAxialLoad(spec: CandidateSpec, ls: BearingLoadSpec, Fr: number, Fa: number): number {
   if (!needsOpposedPartner(spec) || !(Fr > 0)) return Fa;
-  // Y above e is what the induced force is worked with: the factors at a large axial load.
-  const Y = dynamicLoad(ls, Fr, 10 * Fr + Fa).Y;
-  return Y > 0 ? Fa + inducedAxialForce(Fr, Y) : Fa;
+  // The factors at a large axial load: Y above e for a tapered roller bearing, e for an angular-contact one.
+  const above = dynamicLoad(ls, Fr, 10 * Fr + Fa);
+  if (spec.kind === 'angular-contact ball') return above.e !== null ? Fa + inducedAxialForceFromE(Fr, above.e) : Fa;
+  return above.Y > 0 ? Fa + inducedAxialForce(Fr, above.Y) : Fa;
 }
 
 /**
@@ -118,18 +120,28 @@ function lives(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: N
     { type: spec.type, C: spec.C, Cu: spec.Cu, dm: spec.dm, eC: ctx.cont.eC, a1: ctx.a1 },
   );
   const designation = spec.designation;
-  if (life.staticOnly) notes.warn(finding('rolling.static-only', { speed: ctx.maxSpeed, limit: STATIC_SPEED_LIMIT }));
+  if (life.staticOnly)
+    notes.warn(
+      finding('rolling.static-only', {
+        speed: ctx.maxSpeed,
+        limit: STATIC_SPEED_LIMIT,
+        revolutions: life.n * 3600 * Math.max(0, ctx.c.life.hours),
+      }),
+      'once',
+    );
   for (const q of life.points) {
     if (q.static || q.kappa === null) continue;
+    // Said once for the first candidate it concerns: across a catalogue of bores the same caution would repeat dozens of times.
     if (q.kappaRange === 'above')
-      notes.warn(finding('rolling.kappa-above-range', { designation, kappa: q.kappa, kappaMax: KAPPA_MAX }));
+      notes.warn(finding('rolling.kappa-above-range', { designation, kappa: q.kappa, kappaMax: KAPPA_MAX }), 'once');
     if (q.kappaRange === 'below')
-      notes.warn(finding('rolling.kappa-below-range', { designation, kappa: q.kappa, kappaMin: KAPPA_MIN }));
-    if (q.capped) notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }));
+      notes.warn(finding('rolling.kappa-below-range', { designation, kappa: q.kappa, kappaMin: KAPPA_MIN }), 'once');
+    if (q.capped) notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }), 'once');
   }
   if (spec.dm >= EC_GUIDANCE_DM)
     notes.warn(
       finding('rolling.pitch-diameter-large', { designation, pitchDiameter: spec.dm, guidanceBelow: EC_GUIDANCE_DM }),
+      'once',
     );
   return life;
 }
@@ -176,7 +188,7 @@ function running(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], P: num
     };
     const r = regreasingInterval(input);
     grease = ctx.lubrication.sealed ? r.life.l10Hours : r.hours;
-    for (const f of r.life.findings) notes.warn(f);
+    for (const f of r.life.findings) notes.warn(f, 'once');
   }
   return { ndm, moments, torque: sumT > 0 ? sumM / sumT : 0, power: sumT > 0 ? sumW / sumT : 0, grease };
 }

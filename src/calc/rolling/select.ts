@@ -1,10 +1,10 @@
 import { assumedFinding, finding, type Finding } from '../../core/finding.js';
-import type { XYTable } from '../../data/rolling.js';
+import type { LoadFactors } from '../../data/rolling-load-factors.js';
 import type { LoadPoint } from './conditions.js';
 import { spectrumMean } from './equivalent-load.js';
 import type { Notes } from './findings.js';
 import { lifeExponent } from './life.js';
-import type { RollingCandidate } from './types.js';
+import type { KindFacts, RollingCandidate } from './types.js';
 import { governingMargin } from '../../core/check.js';
 import { kindTraits } from '../../data/rolling.js';
 import { ROLLING_KINDS } from './kinds.js';
@@ -106,7 +106,12 @@ export function leadOfEachKind(candidates: RollingCandidate[]): RollingCandidate
  * Pi = f_d·Fr when Fa/Fr ≤ the table's smallest e, else f_d·max(Fr, X·Fr + Y_max·Fa) with X
  * above e and the table's largest Y.
  */
-export function equivalentLoadBound(points: LoadPoint[], serviceFactor: number, table: XYTable, notes: Notes): number {
+export function equivalentLoadBound(
+  points: LoadPoint[],
+  serviceFactor: number,
+  table: LoadFactors['radialBall'],
+  notes: Notes,
+): number {
   const eMin = Math.min(...table.rows.map((r) => r.e));
   const yMax = Math.max(...table.rows.map((r) => r.Y));
   const bound = points.map((q) => ({
@@ -118,28 +123,13 @@ export function equivalentLoadBound(points: LoadPoint[], serviceFactor: number, 
   notes.assume(
     assumedFinding('equivalentLoad', 'rolling.load-bound', {
       load: P,
-      xBelowE: table.xBelowE,
+      xBelowE: 1,
       eMin,
       xAboveE: table.xAboveE,
       yMax,
     }),
   );
   return P;
-}
-
-/** What the rules and the advice see of one kind: its lead candidate and the traits that decide between kinds. */
-export interface KindFacts {
-  kind: RollingCandidate['kind'];
-  /** The kind's lead candidate (leadOfEachKind). */
-  id: string;
-  feasible: boolean;
-  axialCapacity: RollingCandidate['axialCapacity'];
-  /** Misalignment the kind tolerates, minutes of arc (common practice, data/rolling-kinds.json). */
-  misalignment_arcmin: number;
-  /** Radial section height (D − d)/2, m (null when D is unknown). */
-  sectionHeight: number | null;
-  costClass: number;
-  speedClass: number;
 }
 
 /** The facts of a candidate's kind (common-practice traits from data/rolling-kinds.json). */

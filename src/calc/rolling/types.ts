@@ -2,7 +2,6 @@ import type { AssumedFinding, Finding } from '../../core/finding.js';
 import type { CheckRecord, SheetLine } from '../../core/check.js';
 import type { RollingType } from './life.js';
 import type { Arrangement, KindForm, RollingKind } from './kinds.js';
-import type { KindFacts } from './select.js';
 
 /**
  * Result of the rolling-bearing check (a contract read by the CLI, the rules and the
@@ -128,6 +127,21 @@ export interface CandidatePoint {
   /** Friction moment, N·m: viscous and load terms. */
   frictionViscous: number;
   frictionLoad: number;
+}
+
+/** What the rules and the advice see of one kind: its lead candidate and the traits that decide between kinds. */
+export interface KindFacts {
+  kind: RollingKind;
+  /** The kind's lead candidate (leadOfEachKind). */
+  id: string;
+  feasible: boolean;
+  axialCapacity: RollingCandidate['axialCapacity'];
+  /** Misalignment the kind tolerates, minutes of arc (common practice, data/rolling-kinds.json). */
+  misalignment_arcmin: number;
+  /** Radial section height (D − d)/2, m (null when D is unknown). */
+  sectionHeight: number | null;
+  costClass: number;
+  speedClass: number;
 }
 
 export interface RollingResult {
