@@ -35,4 +35,8 @@ export const FORMS = [
 export type KindForm = (typeof FORMS)[number];
 
 /** The kinds whose rolling elements are balls (ISO 281 life exponent 3); the others are rollers (10/3). */
-export const BALL_KINDS: ReadonlySet<RollingKind> = new Set(['deep-groove ball', 'angular-contact ball', 'self-aligning ball']);
+export const BALL_KINDS: ReadonlySet<RollingKind> = new Set([
+  'deep-groove ball',
+  'angular-contact ball',
+  'self-aligning ball',
+]);

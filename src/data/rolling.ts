@@ -14,7 +14,6 @@ const positive = z.number().positive();
 const nonNegative = z.number().nonnegative();
 const source = z.string().min(1);
 const shock = z.enum(['none', 'light', 'moderate', 'heavy']);
-const bearingType = z.enum(['ball', 'roller']);
 
 /** ISO 15 radial bearings: one row per dimension series and bore (all kinds of that series share it). */
 export const boundaryRowSchema = z

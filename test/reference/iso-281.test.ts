@@ -7,9 +7,6 @@ import { describe, expect, it } from 'vitest';
 import { ratingTables } from '../../src/data/rolling-ratings.js';
 import { reliabilityFactor } from '../../src/calc/rolling/life.js';
 import { ratingFactor } from '../../src/calc/rolling/ratings.js';
-import { rollingFactors } from '../../src/data/rolling.js';
-
-const f = rollingFactors();
 
 /** ISO 281:2007, Table 3, X/Y for single-row deep-groove ball bearings (from memory). */
 

@@ -23,7 +23,10 @@ import type { RollingCandidate } from './types.js';
  */
 
 /** The kind a supplier bearing given only by its type is read as (the simplest of each type). */
-export const KIND_OF_TYPE: Record<RollingType, RollingKind> = { ball: 'deep-groove ball', roller: 'cylindrical roller' };
+export const KIND_OF_TYPE: Record<RollingType, RollingKind> = {
+  ball: 'deep-groove ball',
+  roller: 'cylindrical roller',
+};
 
 /** Nominal contact angle a supplier bearing of each kind is read with when the case gives none, degrees (common practice, from memory). */
 const DEFAULT_CONTACT_ANGLE: Record<RollingKind, number> = {
@@ -42,21 +45,20 @@ const DEFAULT_FORM: Partial<Record<RollingKind, KindForm>> = {
 };
 
 /** One bearing to evaluate: its identity and size as the result reports them (m), its ratings (N) and geometry. */
-export interface CandidateSpec
-  extends Pick<
-    RollingCandidate,
-    | 'id'
-    | 'type'
-    | 'kind'
-    | 'form'
-    | 'arrangement'
-    | 'contactAngle'
-    | 'series'
-    | 'designation'
-    | 'bore'
-    | 'outerDiameter'
-    | 'width'
-  > {
+export interface CandidateSpec extends Pick<
+  RollingCandidate,
+  | 'id'
+  | 'type'
+  | 'kind'
+  | 'form'
+  | 'arrangement'
+  | 'contactAngle'
+  | 'series'
+  | 'designation'
+  | 'bore'
+  | 'outerDiameter'
+  | 'width'
+> {
   /** Basic dynamic rating C, static rating C0, fatigue load limit Cu, N (of the whole support). */
   C: number;
   C0: number;
@@ -219,7 +221,13 @@ function supplierSpec(c: CaseSI, C: number, C0: number, sameBore: CatalogueEntry
   const pair = id.arrangement !== 'single';
   const Dgeom = D ?? UNKNOWN_OUTER_OVER_BORE * d;
   const Bone = B !== null ? (pair ? B / 2 : B) : (Dgeom - d) / 2;
-  const g = estimateRatings({ ...id, d, D: Dgeom, B: Bone, rollerSetBore: id.kind === 'needle roller' ? d : undefined });
+  const g = estimateRatings({
+    ...id,
+    d,
+    D: Dgeom,
+    B: Bone,
+    rollerSetBore: id.kind === 'needle roller' ? d : undefined,
+  });
   const CuGiven = c.rolling?.fatigueLimit;
   const CuIsGiven = CuGiven !== undefined && CuGiven > 0;
   return {

@@ -119,7 +119,9 @@ function radialEntries(r: BoundaryRow): CatalogueEntry[] {
         out.push(entry({ ...acb, id: `acb${a}-${r.series}-${r.bore_mm}` }, `${kind} ${a}°, ${s}`));
         if (a !== ANGULAR_CONTACT_ANGLES[0]) continue;
         for (const [arrangement, code] of PAIRS)
-          out.push(entry({ ...acb, arrangement, id: `acb${a}-${r.series}-${r.bore_mm}-${code}` }, `${kind} ${a}°, ${s}`));
+          out.push(
+            entry({ ...acb, arrangement, id: `acb${a}-${r.series}-${r.bore_mm}-${code}` }, `${kind} ${a}°, ${s}`),
+          );
       }
     }
     if (kind === 'self-aligning ball')
@@ -174,7 +176,13 @@ function needleEntries(r: NeedleRow): CatalogueEntry[] {
   if (r.form === 'drawn cup')
     return [
       entry(
-        { ...base, form: 'drawn cup', d: Fw, bore: Fw, id: `ndc-${r.rollerSetBore_mm}-${r.outerDiameter_mm}-${r.width_mm}` },
+        {
+          ...base,
+          form: 'drawn cup',
+          d: Fw,
+          bore: Fw,
+          id: `ndc-${r.rollerSetBore_mm}-${r.outerDiameter_mm}-${r.width_mm}`,
+        },
         'needle roller, drawn cup',
       ),
     ];

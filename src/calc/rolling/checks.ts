@@ -103,7 +103,8 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext)
       ),
     );
   }
-  const spaceSource = 'case space; bearing dimensions ISO 15, ISO 355 and the needle roller standards (from memory) or supplier';
+  const spaceSource =
+    'case space; bearing dimensions ISO 15, ISO 355 and the needle roller standards (from memory) or supplier';
   if (spec.outerDiameter !== null && c.space.maxOuterDiameter > 0) {
     checks.push(
       makeCheck(
@@ -121,7 +122,9 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext)
     checks.push(
       makeCheck(
         'space-width',
-        spec.arrangement === 'single' ? 'bearing width against the axial room' : 'width of the pair against the axial room',
+        spec.arrangement === 'single'
+          ? 'bearing width against the axial room'
+          : 'width of the pair against the axial room',
         spec.width,
         c.space.maxLength,
         'm',

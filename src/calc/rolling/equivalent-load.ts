@@ -1,4 +1,3 @@
-
 /**
  * The equivalent mean load and speed of a duty spectrum (ISO 281:2007). The X, Y, e and X0, Y0
  * of each kind are in load-factors.ts.

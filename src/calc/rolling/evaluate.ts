@@ -168,7 +168,8 @@ function running(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], P: num
       dm: spec.dm,
       Fr: q.Fr,
       Fa: q.FaBearing,
-      C0: spec.C0,
+      // The moment's load factor is worked per bearing: one bearing's C0 (a pair's is twice it, ISO 76).
+      C0: spec.arrangement === 'single' ? spec.C0 : spec.C0 / 2,
     });
     sumT += q.t;
     sumM += q.t * m.total;

@@ -1,5 +1,29 @@
 import type { KindRatingRow } from '../../data/rolling-ratings.js';
-import type { BallGeometry, RollerGeometry } from './ratings.js';
+
+export interface BallGeometry {
+  /** Ball diameter Dw, m. */
+  Dw: number;
+  /** Pitch diameter of the ball set Dpw, m. */
+  Dpw: number;
+  /** Number of balls per row. */
+  Z: number;
+  /** Number of rows (1 here). */
+  i: number;
+  /** Nominal contact angle α, rad (0 for a deep-groove bearing under radial load). */
+  alpha: number;
+}
+
+export interface RollerGeometry {
+  /** Roller diameter Dwe, m. */
+  Dwe: number;
+  /** Effective roller length Lwe, m. */
+  Lwe: number;
+  /** Pitch diameter of the roller set Dpw, m. */
+  Dpw: number;
+  Z: number;
+  i: number;
+  alpha: number;
+}
 
 /**
  * The first estimate's factors (deep-groove ball and cylindrical roller only), kept for the

@@ -24,3 +24,6 @@ export function kindType(kind: RollingKind): RollingType {
 export function isPair(a: Arrangement): boolean {
   return a !== 'single';
 }
+
+/** The supply a bearing runs on ("none" in a case is read as sealed-for-life grease). */
+export type BearingSupply = 'grease' | 'oil-bath' | 'oil-feed';

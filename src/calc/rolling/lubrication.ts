@@ -4,6 +4,7 @@ import { lubricants, oilGrade } from '../../data/load.js';
 import { kinematicViscosity } from '../lubricant.js';
 import { finiteOr } from './conditions.js';
 import type { Notes } from './findings.js';
+import type { BearingSupply } from './kinds.js';
 
 /**
  * The lubricant a rolling bearing sees: the supply it runs on, its operating temperature and
@@ -15,8 +16,7 @@ import type { Notes } from './findings.js';
  * [2] Operating temperature from ambient or inlet plus a fixed rise: common practice.
  */
 
-/** The supply a bearing runs on ("none" is read as sealed-for-life grease). */
-export type BearingSupply = 'grease' | 'oil-bath' | 'oil-feed';
+export type { BearingSupply } from './kinds.js';
 
 export interface Lubrication {
   /** No supply in the case: a sealed bearing greased for life. */

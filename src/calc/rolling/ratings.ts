@@ -1,5 +1,7 @@
 import { ratingTables, type KindRatingRow, type RatingTables } from '../../data/rolling-ratings.js';
-import { estimateKindGeometry } from './geometry.js';
+import { estimateKindGeometry, type BallGeometry, type RollerGeometry } from './geometry.js';
+
+export type { BallGeometry, RollerGeometry };
 import { interpolate } from './interpolate.js';
 import { isPair, type Arrangement, type KindForm, type RollingKind } from './kinds.js';
 
@@ -45,31 +47,6 @@ export function ratingFactor(curve: FactorCurve, gamma: number): { factor: numbe
     gamma,
   );
   return { factor: r.value, inTable: r.range === 'inside' };
-}
-
-export interface BallGeometry {
-  /** Ball diameter Dw, m. */
-  Dw: number;
-  /** Pitch diameter of the ball set Dpw, m. */
-  Dpw: number;
-  /** Number of balls per row. */
-  Z: number;
-  /** Number of rows (1 here). */
-  i: number;
-  /** Nominal contact angle α, rad (0 for a deep-groove bearing under radial load). */
-  alpha: number;
-}
-
-export interface RollerGeometry {
-  /** Roller diameter Dwe, m. */
-  Dwe: number;
-  /** Effective roller length Lwe, m. */
-  Lwe: number;
-  /** Pitch diameter of the roller set Dpw, m. */
-  Dpw: number;
-  Z: number;
-  i: number;
-  alpha: number;
 }
 
 const BM_BALL = 1.3;

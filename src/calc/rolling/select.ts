@@ -92,8 +92,7 @@ export function leadOfEachKind(candidates: RollingCandidate[]): RollingCandidate
     const lead =
       of.filter((k) => k.feasible).sort(choiceOrder)[0] ??
       [...of].sort(
-        (a, b) =>
-          a.exclusions.length - b.exclusions.length || governingMargin(b.checks) - governingMargin(a.checks),
+        (a, b) => a.exclusions.length - b.exclusions.length || governingMargin(b.checks) - governingMargin(a.checks),
       )[0];
     if (lead) out.push(lead);
   }

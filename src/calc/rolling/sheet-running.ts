@@ -49,7 +49,8 @@ function viscousLine(
 /** The load term of one point: Σ over the bearings of f1·P1·dm (+ k_rib·Fa·dm), N·m. */
 function loadLine(c: RollingCandidate, row: FrictionRow, q: CandidatePoint, at: string): SheetLine {
   const dm = fig(c.pitchDiameter);
-  const C0 = c.staticRating;
+  // One bearing's C0, as the moment is worked per bearing (a pair's rating is twice it).
+  const C0 = c.arrangement === 'single' ? c.staticRating : c.staticRating / 2;
   const terms = bearingShares(c.arrangement, Math.abs(q.Fr), Math.abs(q.Fa)).map((s) => {
     const P0 = Math.max(s.Fr, 0.6 * s.Fr + 0.5 * s.Fa);
     const P1 = frictionLoad(row, s.Fr, s.Fa);

@@ -1,7 +1,6 @@
 import type { Shock } from '../../case/types.js';
 import { rollingRunning } from '../../data/rolling-running.js';
-import type { BearingSupply } from './lubrication.js';
-import type { KindForm, RollingKind } from './kinds.js';
+import type { BearingSupply, KindForm, RollingKind } from './kinds.js';
 import type { RollingType } from './life.js';
 
 /**

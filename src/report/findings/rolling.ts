@@ -116,7 +116,8 @@ const candidateFindings: Record<string, Wording> = {
     `${raw(v['designation'])} (and any other candidate alike): viscosity ratio κ = ${fig(v['kappa'])} < ${raw(v['kappaMin'])} is outside the a_ISO method of ISO 281:2007; the method's limiting value (a_ISO at κ = ${raw(v['kappaMin'])}) is taken: a warning, not a failure of the bearing; a thicker oil (or a higher running viscosity) improves it`,
   'rolling.static-only': (v) =>
     `every operating point turns slower than ${fig(Number(v['limit']) * 60)} r/min (the highest is ${fig(Number(v['speed']) * 60)} r/min): the bearing is sized by its static safety s0 = C0/P0 and no rating life is claimed (ISO 281 rates fatigue over revolutions; the limit is common practice)${Number(v['revolutions']) > 1e6 ? `; over the life target it still turns ${fig(Number(v['revolutions']) / 1e6)} million revolutions: compare L10 = (C/P)^p with the supplier` : ''}`,
-  'rolling.aiso-capped': (v) => `${raw(v['designation'])} (and any other candidate alike): a_ISO reached its cap of ${raw(v['cap'])} (ISO 281:2007)`,
+  'rolling.aiso-capped': (v) =>
+    `${raw(v['designation'])} (and any other candidate alike): a_ISO reached its cap of ${raw(v['cap'])} (ISO 281:2007)`,
   'rolling.pitch-diameter-large': (v) => {
     const guidance = fig(Number(v['guidanceBelow']) * 1000);
     return `${raw(v['designation'])} (and any larger candidate): pitch diameter ${fig(Number(v['pitchDiameter']) * 1000)} mm ≥ ${guidance} mm; e_C is taken from the dm < ${guidance} mm guidance, which is the lower (conservative) one`;
