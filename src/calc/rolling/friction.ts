@@ -84,13 +84,16 @@ export function bearingShares(arrangement: Arrangement, Fr: number, Fa: number):
 /**
  * Viscous moment of one bearing, N·m [1]: 10⁻⁷·f0·(ν·n)^(2/3)·dm³ N·mm for ν·n ≥ 2000,
  * 160·10⁻⁷·f0·dm³ below (ν mm²/s, n r/min, dm mm inside; given in SI: ν m²/s, n rev/s, dm m).
- * 0 when the bearing does not turn.
+ * 0 when the bearing does not turn. The two branches do not meet: 2000^(2/3) = 158.7, not 160,
+ * so just above ν·n = 2000 the published form would give a smaller moment than just below; the
+ * larger of the two is taken there (at most 0.8 % more, for ν·n up to 2024), so the moment
+ * never falls as the speed rises.
  */
 export function viscousMoment(f0: number, nu: number, n: number, dm: number): number {
   if (!(n > 0)) return 0;
   const nuN = Math.max(0, nu) * 1e6 * n * 60;
   const dmMm = dm * 1000;
-  const nmm = nuN >= 2000 ? 1e-7 * f0 * Math.pow(nuN, 2 / 3) * dmMm ** 3 : 160e-7 * f0 * dmMm ** 3;
+  const nmm = 1e-7 * f0 * Math.max(160, nuN >= 2000 ? Math.pow(nuN, 2 / 3) : 160) * dmMm ** 3;
   return nmm / 1000;
 }
 
