@@ -150,8 +150,19 @@ function entriesInSpace(c: CaseSI, entries: CatalogueEntry[], notes: Notes): Cat
   return fitting;
 }
 
-/** A table entry with C, C0 and Cu estimated from its internal geometry [2, 3]. */
+/** Specs already estimated, per table entry (entries are built once per set of tables): sweeps evaluate thousands of cases. */
+const estimated = new WeakMap<CatalogueEntry, CandidateSpec>();
+
+/** A table entry with C, C0 and Cu estimated from its internal geometry [2, 3] (the same for every case: worked once). */
 function estimatedSpec(e: CatalogueEntry): CandidateSpec {
+  const hit = estimated.get(e);
+  if (hit) return hit;
+  const spec = estimateSpec(e);
+  estimated.set(e, spec);
+  return spec;
+}
+
+function estimateSpec(e: CatalogueEntry): CandidateSpec {
   const type = kindType(e.kind);
   const g = estimateRatings({
     kind: e.kind,
