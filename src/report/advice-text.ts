@@ -31,6 +31,8 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
       : paint.bold('No option is feasible for this duty as given.'),
   );
   if (a.tieBreak) out.push(`Tie: ${describe(a.tieBreak)}.`);
+  if (a.recommendation === 'rolling' && a.checks.rolling.choice)
+    out.push(`Why this kind: ${describe(a.checks.rolling.choice)}.`);
   out.push(
     table(
       ['rank', 'option', 'feasible', 'score', 'life', 'friction power', 'length', 'OD'],

@@ -138,11 +138,17 @@ function rollingBlocks(ranked: RankedOption, advice: AdviceResult, units: UnitSy
       rows: checkRows(chosen.checks, units),
       caption: `Checks of ${chosen.designation}`,
     });
-  blocks.push({ kind: 'sub', title: 'Every candidate checked' });
+  if (rolling.choice) blocks.push({ kind: 'p', text: describe(rolling.choice) });
+  blocks.push({ kind: 'sub', title: 'Each kind checked' });
+  // One bearing per kind (its choice, else its nearest miss); every candidate is in the JSON.
+  const perKind = rolling.kinds
+    .map((f) => rolling.candidates.find((x) => x.id === f.id))
+    .filter((x): x is NonNullable<typeof x> => x !== undefined);
   blocks.push({
     kind: 'table',
     head: ['bearing', 'C', 'C0', 'P', 'L10h', 'L10mh', 's0', 'feasible'],
-    rows: rolling.candidates.map((x) => [
+    caption: `${rolling.candidates.length} candidates of ${rolling.kinds.length} kinds fit the space; each kind's choice, or its nearest miss, is shown`,
+    rows: perKind.map((x) => [
       `${x.designation} (${x.id})`,
       fmt(x.dynamicRating, 'N', units),
       fmt(x.staticRating, 'N', units),
