@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { loadTable } from './load.js';
+import { FORMS, ROLLING_KINDS } from '../core/rolling-kinds.js';
 
 /**
  * Factors for estimating basic load ratings from internal geometry (data/rolling-ratings.json):
@@ -40,10 +41,9 @@ const curveName = z.enum(CURVE_NAMES);
 
 const kindRowSchema = z
   .object({
-    /** A RollingKind of src/calc/rolling/kinds.ts (checked there: data does not import calc). */
-    kind: z.string().min(1),
-    /** A KindForm, or null for the row that serves every form of the kind. */
-    form: z.string().min(1).nullable(),
+    kind: z.enum(ROLLING_KINDS),
+    /** The form the row serves, or null for the row that serves every form of the kind. */
+    form: z.enum(FORMS).nullable(),
     /** ISO 281 rating factor for contemporary bearing steel and manufacture. */
     bm: positive,
     /** Rows of rolling elements in one bearing (2 for self-aligning ball and spherical roller). */

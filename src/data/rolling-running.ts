@@ -1,35 +1,20 @@
 import { z } from 'zod';
 import { loadTable } from './load.js';
+import { FORMS, ROLLING_KINDS } from '../core/rolling-kinds.js';
 
 /**
  * The running figures of a rolling bearing (data/rolling-running.json): the grease-life
  * constants and the half-lives each kind subtracts, the viscous and load factors of the friction
  * moment, static-safety guidance and speed limits per kind and supply. Every row carries a
- * `source`. The kinds, supplies and shock levels are spelt as the case and the kernels spell
- * them (src/calc/rolling/kinds.ts); they are listed again here because the data layer imports
- * nothing from the kernels.
+ * `source`. The kinds and forms are the vocabulary of src/core/rolling-kinds.ts; the supplies
+ * and shock levels are spelt as the case spells them.
  */
 
 const positive = z.number().positive();
 const nonNegative = z.number().nonnegative();
 const source = z.string().min(1);
-const kind = z.enum([
-  'deep-groove ball',
-  'angular-contact ball',
-  'self-aligning ball',
-  'cylindrical roller',
-  'tapered roller',
-  'spherical roller',
-  'needle roller',
-]);
-const form = z.enum([
-  'ribs on one ring',
-  'ribs on both rings',
-  'ribs on both rings and a loose rib',
-  'drawn cup',
-  'machined with inner ring',
-  'machined without inner ring',
-]);
+const kind = z.enum(ROLLING_KINDS);
+const form = z.enum(FORMS);
 /** One figure per way of supplying the lubricant. */
 const perSupply = z.object({ grease: positive, 'oil-bath': positive, 'oil-feed': positive });
 

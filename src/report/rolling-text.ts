@@ -1,19 +1,25 @@
-import type { RollingResult } from '../calc/rolling/types.js';
+import type { RollingCandidate, RollingResult } from '../calc/rolling/types.js';
 import { describe } from './findings/index.js';
 import { num } from '../core/format.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 import { checksTable, heading, mark, paint } from './text.js';
 
-const KIND = { ball: 'ball', roller: 'roller' } as const;
 const P_TEXT = { ball: '3', roller: '10/3' } as const;
+
+/** One candidate per kind (its choice, else its nearest miss): what a person reads; every candidate stays in the JSON. */
+export function kindLeads(r: RollingResult): RollingCandidate[] {
+  return r.kinds
+    .map((f) => r.candidates.find((k) => k.id === f.id))
+    .filter((k): k is RollingCandidate => k !== undefined);
+}
 
 /** The rolling-bearing check for a person: candidates with lives, then each candidate's checks. */
 export function rollingText(r: RollingResult, units: UnitSystem): string {
   const out: string[] = [heading('Rolling-element bearing (ISO 281, ISO 76, ISO 15)')];
   const types = new Set(r.candidates.map((k) => k.type));
   const needed = r.requiredDynamicRatingFor
-    ? `basic dynamic rating needed for the life target ${fmt(r.requiredDynamicRating, 'N', units)} (for a ${KIND[r.requiredDynamicRatingFor.type]} bearing, p = ${P_TEXT[r.requiredDynamicRatingFor.type]}${types.size > 1 ? '; each candidate\'s own in the column "C needed"' : ''})`
+    ? `basic dynamic rating needed for the life target ${fmt(r.requiredDynamicRating, 'N', units)} (for a ${r.requiredDynamicRatingFor.type} bearing, p = ${P_TEXT[r.requiredDynamicRatingFor.type]}${types.size > 1 ? '; each candidate\'s own in the column "C needed"' : ''})`
     : `basic dynamic rating needed for the life target ${fmt(r.requiredDynamicRating, 'N', units)}`;
   out.push(
     `Equivalent dynamic load ${fmt(r.equivalentLoad, 'N', units)} at ${fmt(r.equivalentSpeed, 'rev/s', units)}; ${needed}.`,
@@ -27,13 +33,12 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
       const lo = Math.min(...vals);
       const hi = Math.max(...vals);
       const range = hi - lo <= 1e-9 * hi ? fmt(lo, 'N', units) : `${fmt(lo, 'N', units)} to ${fmt(hi, 'N', units)}`;
-      out.push(`  ${KIND[t]} bearings (p = ${P_TEXT[t]}): basic dynamic rating needed ${range}.`);
+      out.push(`  ${t} bearings (p = ${P_TEXT[t]}): basic dynamic rating needed ${range}.`);
     }
   }
   // One row per kind (its choice, else its nearest miss): every candidate stays in the JSON.
-  const shown = r.kinds.map((f) => r.candidates.find((k) => k.id === f.id)!).filter(Boolean);
-  const best0 = r.candidates.find((k) => k.id === r.best);
-  if (best0 && !shown.includes(best0)) shown.unshift(best0);
+  // The best is its own kind's lead, so it is among these.
+  const shown = kindLeads(r);
   if (r.candidates.length) {
     out.push(
       `${r.candidates.length} candidates of ${r.kinds.length} kinds fit the space; each kind's choice (or nearest miss) is shown, every candidate is in --format json.`,
@@ -60,7 +65,7 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
         shown.map((k) => [
           mark(k.feasible),
           k.id,
-          k.arrangement === 'single' ? k.kind : `${k.kind}, ${k.arrangement.replace('pair ', 'pair ')}`,
+          k.arrangement === 'single' ? k.kind : `${k.kind}, ${k.arrangement}`,
           `${fmt(k.bore, 'm', units)} × ${k.outerDiameter === null ? '—' : fmt(k.outerDiameter, 'm', units)} × ${k.width === null ? '—' : fmt(k.width, 'm', units)}`,
           fmt(k.dynamicRating, 'N', units),
           k.requiredDynamicRating === null ? '—' : fmt(k.requiredDynamicRating, 'N', units),
@@ -79,7 +84,7 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
   } else {
     out.push('No candidate: see the warnings.');
   }
-  const best = best0;
+  const best = r.candidates.find((k) => k.id === r.best);
   out.push(
     paint.bold(
       best

@@ -6,7 +6,7 @@ import { entriesForShaft, standardBores, type CatalogueEntry } from './catalogue
 import type { Notes } from './findings.js';
 import { kindType, type Arrangement, type KindForm, type RollingKind } from './kinds.js';
 import type { RollingType } from './life.js';
-import { estimateRatings } from './ratings.js';
+import { estimateRatings, usualContactAngle } from './ratings.js';
 import type { RollingCandidate } from './types.js';
 
 /**
@@ -23,21 +23,11 @@ import type { RollingCandidate } from './types.js';
  */
 
 /** The kind a supplier bearing given only by its type is read as (the simplest of each type). */
-export const KIND_OF_TYPE: Record<RollingType, RollingKind> = {
+const KIND_OF_TYPE: Record<RollingType, RollingKind> = {
   ball: 'deep-groove ball',
   roller: 'cylindrical roller',
 };
 
-/** Nominal contact angle a supplier bearing of each kind is read with when the case gives none, degrees (common practice, from memory). */
-const DEFAULT_CONTACT_ANGLE: Record<RollingKind, number> = {
-  'deep-groove ball': 0,
-  'angular-contact ball': 40,
-  'self-aligning ball': 10,
-  'cylindrical roller': 0,
-  'tapered roller': 15,
-  'spherical roller': 11,
-  'needle roller': 0,
-};
 /** The form a supplier bearing of a kind with several is read as when the case gives none (the one that claims least). */
 const DEFAULT_FORM: Partial<Record<RollingKind, KindForm>> = {
   'cylindrical roller': 'ribs on one ring',
@@ -210,7 +200,7 @@ function supplierIdentity(
   if (r.form === undefined && form !== null)
     notes.assume(assumedFinding('rolling.form', 'rolling.supplier-form', { kind, form }));
   const arrangement = r.arrangement ?? 'single';
-  const contactAngle = r.contactAngle !== undefined ? (r.contactAngle * 180) / Math.PI : DEFAULT_CONTACT_ANGLE[kind];
+  const contactAngle = r.contactAngle !== undefined ? (r.contactAngle * 180) / Math.PI : usualContactAngle(kind);
   if (r.contactAngle === undefined && contactAngle > 0)
     notes.assume(assumedFinding('rolling.contactAngle', 'rolling.supplier-contact-angle', { kind, contactAngle }));
   return { kind, form, arrangement, contactAngle };

@@ -8,6 +8,7 @@ import {
   type TaperedRow,
 } from '../../data/rolling.js';
 import type { Arrangement, KindForm, RollingKind } from './kinds.js';
+import { usualContactAngle } from './ratings.js';
 
 /**
  * The bearings that exist for a shaft: every kind in every dimension series practice builds it
@@ -21,7 +22,8 @@ import type { Arrangement, KindForm, RollingKind } from './kinds.js';
  * ribs on one ring; 22 and 23 spherical roller bearings, self-aligning ball bearings and
  * cylindrical roller bearings with ribs on one ring. Tapered roller bearings come from the
  * ISO 355 table, single and as pairs back-to-back and face-to-face; needle roller bearings
- * from the drawn-cup and machined tables.
+ * from the drawn-cup and machined tables. The self-aligning ball and spherical roller bearings
+ * take the usual contact angle of their kind (data/rolling-ratings.json).
  *
  * References
  * [1] ISO 15, radial bearings, boundary dimensions (data/rolling-boundary-dimensions.json).
@@ -55,14 +57,10 @@ export interface CatalogueEntry {
 }
 
 /** Bores equal within this, m: the tables hold whole millimetres, a case is converted from its unit. */
-export const BORE_TOLERANCE = 1e-5;
+const BORE_TOLERANCE = 1e-5;
 
 /** Nominal contact angles of the angular-contact ball bearings offered, degrees (common practice: the two usual series). */
 const ANGULAR_CONTACT_ANGLES = [40, 25] as const;
-/** Contact angle of the self-aligning ball bearing, degrees (common practice, from memory: about 10°–13° for series 02/03; the low end gives the larger Y). */
-const SELF_ALIGNING_BALL_ANGLE = 10;
-/** Contact angle of the spherical roller bearing, degrees (common practice, from memory: e = 1.5·tanα ≈ 0.25–0.35 for series 22/23). */
-const SPHERICAL_ROLLER_ANGLE = 11;
 
 const PAIRS: ReadonlyArray<[Arrangement, string]> = [
   ['pair back-to-back', 'bb'],
@@ -126,11 +124,11 @@ function radialEntries(r: BoundaryRow): CatalogueEntry[] {
     }
     if (kind === 'self-aligning ball')
       out.push(
-        entry({ ...one, contactAngle: SELF_ALIGNING_BALL_ANGLE, id: `sab-${r.series}-${r.bore_mm}` }, `${kind}, ${s}`),
+        entry({ ...one, contactAngle: usualContactAngle(kind), id: `sab-${r.series}-${r.bore_mm}` }, `${kind}, ${s}`),
       );
     if (kind === 'spherical roller')
       out.push(
-        entry({ ...one, contactAngle: SPHERICAL_ROLLER_ANGLE, id: `sph-${r.series}-${r.bore_mm}` }, `${kind}, ${s}`),
+        entry({ ...one, contactAngle: usualContactAngle(kind), id: `sph-${r.series}-${r.bore_mm}` }, `${kind}, ${s}`),
       );
     if (kind === 'cylindrical roller') {
       const forms = r.series === '02' || r.series === '03' ? CYLINDRICAL_FORMS : CYLINDRICAL_FORMS.slice(0, 1);

@@ -6,12 +6,38 @@ import { candidateSpecs } from './candidates.js';
 import { dutyPoints, lifeFactors, shockFactors } from './conditions.js';
 import type { EvalContext } from './context.js';
 import { evaluate } from './evaluate.js';
-import { newNotes } from './findings.js';
+import { newNotes, type Notes } from './findings.js';
 import { lifeExponent, requiredDynamicRating, type RollingType } from './life.js';
 import { bearingLubrication } from './lubrication.js';
 import { bestCandidate, choiceFinding, equivalentLoadBound, kindFacts, leadOfEachKind } from './select.js';
 import { rollingSheet } from './sheet.js';
 import type { RollingResult } from './types.js';
+
+/**
+ * What every candidate of the case is evaluated in (operating points, shock and life factors,
+ * lubricant), its steps' assumptions and cautions added to `notes` in the order they run; and
+ * the duty's time-mean speed, rev/s.
+ */
+export function evalContext(c: CaseSI, notes: Notes): { ctx: EvalContext; meanSpeed: number } {
+  const f = rollingFactors();
+  const duty = dutyPoints(c, notes);
+  const shock = shockFactors(c, f, notes);
+  const lubrication = bearingLubrication(c, notes);
+  const life = lifeFactors(c, f, notes);
+  const ctx: EvalContext = {
+    c,
+    f,
+    points: duty.points,
+    maxSpeed: duty.maxSpeed,
+    serviceFactor: shock.serviceFactor,
+    s0Guidance: shock.s0Guidance,
+    cont: life.cont,
+    a1: life.a1,
+    reliabilityUsed: life.reliabilityUsed,
+    lubrication,
+  };
+  return { ctx, meanSpeed: duty.meanSpeed };
+}
 
 /**
  * Rolling-element bearing check of a duty case (pure: reads the data tables, no other I/O).
@@ -41,25 +67,8 @@ import type { RollingResult } from './types.js';
  */
 export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): RollingResult {
   const notes = newNotes();
-  const f = rollingFactors();
-  const duty = dutyPoints(c, notes);
-  const shock = shockFactors(c, f, notes);
-  const lubrication = bearingLubrication(c, notes);
-  const life = lifeFactors(c, f, notes);
+  const { ctx, meanSpeed } = evalContext(c, notes);
   const specs = candidateSpecs(c, notes);
-
-  const ctx: EvalContext = {
-    c,
-    f,
-    points: duty.points,
-    maxSpeed: duty.maxSpeed,
-    serviceFactor: shock.serviceFactor,
-    s0Guidance: shock.s0Guidance,
-    cont: life.cont,
-    a1: life.a1,
-    reliabilityUsed: life.reliabilityUsed,
-    lubrication,
-  };
   const candidates = specs.map((s) => evaluate(s, ctx, notes));
   const best = bestCandidate(candidates, notes);
 
@@ -68,20 +77,14 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
   const leadType: RollingType = lead ? lead.type : 'ball';
   const equivalentLoad = lead
     ? lead.equivalentLoad
-    : equivalentLoadBound(duty.points, shock.serviceFactor, loadFactors().radialBall, notes);
-  const requiredC = requiredDynamicRating(
-    equivalentLoad,
-    duty.meanSpeed,
-    c.life.hours,
-    lifeExponent(leadType),
-    life.a1,
-  );
+    : equivalentLoadBound(ctx.points, ctx.serviceFactor, loadFactors().radialBall, notes);
+  const requiredC = requiredDynamicRating(equivalentLoad, meanSpeed, c.life.hours, lifeExponent(leadType), ctx.a1);
   if (!(c.life.hours > 0)) notes.warn(finding('rolling.no-life-target'));
 
   return {
     option: 'rolling',
     equivalentLoad,
-    equivalentSpeed: duty.meanSpeed,
+    equivalentSpeed: meanSpeed,
     requiredDynamicRating: requiredC,
     requiredDynamicRatingFor: requiredC !== null ? { type: leadType, p: lifeExponent(leadType) } : null,
     candidates,
@@ -92,6 +95,6 @@ export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): Rolling
     feasible: best !== null,
     assumed: notes.assumed,
     warnings: notes.warnings,
-    sheet: lead && opts.sheet !== false ? rollingSheet(lead, ctx, duty.meanSpeed) : [],
+    sheet: lead && opts.sheet !== false ? rollingSheet(lead, ctx, meanSpeed) : [],
   };
 }

@@ -40,7 +40,4 @@ export interface CandidateFigures {
   greaseHours: number | null;
   /** No point turns fast enough for a rating life: static safety governs. */
   staticOnly: boolean;
-  /** Largest axial load the bearing carries (partner's induced force included) and largest radial load, N. */
-  axialLoad: number;
-  radialLoad: number;
 }

@@ -100,7 +100,7 @@ function pointLoads(
       exclusions.push(finding(r.exclusion.code, r.exclusion.values));
     }
     if (r.range === 'below' && r.key !== null && r.key > 0 && r.Y > 0)
-      notes.warn(finding('rolling.key-below-table', { designation: spec.designation, key: r.key }));
+      notes.warn(finding('rolling.key-below-table', { designation: spec.designation, key: r.key }), 'once');
     return { ...r, Pf: ctx.serviceFactor * r.P, FaBearing, n: q.n, t: q.t, Fr: q.Fr, Fa: q.Fa };
   });
   const heaviest = per.reduce((a, b) => (b.Pf > a.Pf ? b : a), per[0]!);
@@ -245,8 +245,6 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
       ndm: run.ndm,
       greaseHours: run.grease,
       staticOnly: life.staticOnly,
-      axialLoad,
-      radialLoad: loads.per.reduce((m, q) => Math.max(m, q.Fr), 0),
     },
     ctx,
   );

@@ -167,6 +167,11 @@ export function kindRow(tables: RatingTables, kind: RollingKind, form: KindForm 
   return row;
 }
 
+/** The nominal contact angle a kind is taken with when none is given, degrees (data/rolling-ratings.json, with its source). */
+export function usualContactAngle(kind: RollingKind): number {
+  return kindRow(ratingTables(), kind, null).contactAngle_deg;
+}
+
 /**
  * Basic load ratings C and C0 (N) of a rolling-bearing support estimated from its boundary
  * dimensions: the internal geometry by estimateKindGeometry (common practice, on the safe

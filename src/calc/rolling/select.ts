@@ -6,8 +6,8 @@ import type { Notes } from './findings.js';
 import { lifeExponent } from './life.js';
 import type { KindFacts, RollingCandidate } from './types.js';
 import { governingMargin } from '../../core/check.js';
-import { kindTraits } from '../../data/rolling.js';
-import { ROLLING_KINDS } from './kinds.js';
+import { kindTraits, type KindTraits } from '../../data/rolling.js';
+import { ROLLING_KINDS, type RollingKind } from './kinds.js';
 
 /**
  * Choosing among the evaluated candidates: the best is the least costly feasible kind, then the
@@ -27,16 +27,27 @@ function orderNullLast(a: number | null, b: number | null): number {
   return a - b;
 }
 
-/** Cost class of a candidate (data/rolling-kinds.json, common practice): its kind's, one more for a matched pair. */
-export function costClass(k: Pick<RollingCandidate, 'kind' | 'form' | 'arrangement'>): number {
-  const t = kindTraits().find((x) => x.kind === k.kind);
-  const byForm = k.form !== null ? t?.costClassByForm?.[k.form] : undefined;
-  return (byForm ?? t?.costClass ?? 2) + (k.arrangement === 'single' ? 0 : 1);
+/** The traits of each kind, by kind, per table read (the sort below asks for them many times). */
+const traitsByTable = new WeakMap<KindTraits[], Map<RollingKind, KindTraits>>();
+
+/** A kind's traits (data/rolling-kinds.json, common practice); a kind missing from the table is a data defect. */
+function traitsOf(kind: RollingKind): KindTraits {
+  const table = kindTraits();
+  let byKind = traitsByTable.get(table);
+  if (!byKind) {
+    byKind = new Map(table.map((t) => [t.kind, t]));
+    traitsByTable.set(table, byKind);
+  }
+  const t = byKind.get(kind);
+  if (!t) throw new Error(`no row for kind "${kind}" in data/rolling-kinds.json`);
+  return t;
 }
 
-/** Where practice reaches for a kind when several pass at the same cost (data/rolling-kinds.json, common practice). */
-function preference(k: Pick<RollingCandidate, 'kind'>): number {
-  return kindTraits().find((x) => x.kind === k.kind)?.preference ?? ROLLING_KINDS.length;
+/** Cost class of a candidate (data/rolling-kinds.json, common practice): its kind's or form's, one more for a matched pair. */
+function costClass(k: Pick<RollingCandidate, 'kind' | 'form' | 'arrangement'>): number {
+  const t = traitsOf(k.kind);
+  const byForm = k.form !== null ? t.costClassByForm?.[k.form] : undefined;
+  return (byForm ?? t.costClass) + (k.arrangement === 'single' ? 0 : 1);
 }
 
 /**
@@ -44,11 +55,11 @@ function preference(k: Pick<RollingCandidate, 'kind'>): number {
  * about), then the least costly kind, then the kind practice reaches for first, then the
  * smallest outside diameter, then the narrowest (unknown sizes last), then a ball bearing.
  */
-export function choiceOrder(a: RollingCandidate, b: RollingCandidate): number {
+function choiceOrder(a: RollingCandidate, b: RollingCandidate): number {
   return (
     (a.ratingSource === 'supplier' ? -1 : 0) - (b.ratingSource === 'supplier' ? -1 : 0) ||
     costClass(a) - costClass(b) ||
-    preference(a) - preference(b) ||
+    traitsOf(a.kind).preference - traitsOf(b.kind).preference ||
     orderNullLast(a.outerDiameter, b.outerDiameter) ||
     orderNullLast(a.width, b.width) ||
     (a.type === 'ball' ? -1 : 0) - (b.type === 'ball' ? -1 : 0)
@@ -133,16 +144,16 @@ export function equivalentLoadBound(
 
 /** The facts of a candidate's kind (common-practice traits from data/rolling-kinds.json). */
 export function kindFacts(k: RollingCandidate): KindFacts {
-  const t = kindTraits().find((x) => x.kind === k.kind);
+  const t = traitsOf(k.kind);
   return {
     kind: k.kind,
     id: k.id,
     feasible: k.feasible,
     axialCapacity: k.axialCapacity,
-    misalignment_arcmin: t?.misalignment_arcmin ?? 0,
+    misalignment_arcmin: t.misalignment_arcmin,
     sectionHeight: k.outerDiameter === null ? null : (k.outerDiameter - k.bore) / 2,
     costClass: costClass(k),
-    speedClass: t?.speedClass ?? 2,
+    speedClass: t.speedClass,
   };
 }
 

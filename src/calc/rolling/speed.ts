@@ -5,19 +5,17 @@ import type { RollingType } from './life.js';
 
 /**
  * Speed figures of a rolling bearing, the speed limit of each kind and the static-safety
- * guidance (the friction moment is in friction.ts, grease life in grease.ts).
+ * guidance (the friction moment is in friction.ts, grease life and the regreasing interval in
+ * grease.ts).
  *
  * References
  * [1] Speed factor n·dm against limits per kind and supply (common practice; limits in
  *     data/rolling-running.json, each row with its source).
- * [2] Friction torque with a constant coefficient referred to the bore,
- *     M = μ·P·d/2 (common practice, from memory). Superseded by frictionMoment (friction.ts).
- * [3] A bearing maker's grease relubrication chart formula (seen; not named here). Superseded
- *     by greaseLife and regreasingInterval (grease.ts).
- * [4] Small-swing criterion for oscillating bearings: the angle a ring must swing for
+ * [2] Friction power from a friction moment: mechanics (the moment itself in friction.ts).
+ * [3] Small-swing criterion for oscillating bearings: the angle a ring must swing for
  *     each rolling element to roll onto the track of its neighbour (kinematics of the
  *     cage; criterion common practice).
- * [5] Static safety s0 = C0/P0 guidance per shock level and ball/roller: values of our own,
+ * [4] Static safety s0 = C0/P0 guidance per shock level and ball/roller: values of our own,
  *     common practice, ranges as in Brändlein, Eschmann, Hasbargen & Weigand, Ball and Roller
  *     Bearings, 3rd ed., Wiley 1999 (from memory); rows in data/rolling-running.json.
  */
@@ -30,42 +28,14 @@ export function speedFactor(n: number, dm: number): number {
   return Math.max(0, n) * 60 * dm * 1000;
 }
 
-/**
- * @deprecated Use frictionMoment (friction.ts), which has a viscous and a load term.
- * Friction torque, N·m [2]: M = μ·P·d/2. μ friction coefficient referred to the bore
- * (dimensionless), P load, N, d bore, m. Valid for moderate loads (P ≈ 0.1·C) and
- * normal lubrication; it ignores the load-independent (viscous) share, which dominates
- * at light load and high speed.
- */
-export function frictionTorque(mu: number, P: number, d: number): number {
-  return (mu * Math.max(0, P) * d) / 2;
-}
-
 /** Friction power, W: N_R = M·ω = M·2π·n, M in N·m, n rev/s. */
 export function frictionPower(M: number, n: number): number {
   return M * 2 * Math.PI * Math.max(0, n);
 }
 
 /**
- * @deprecated Use greaseLife / regreasingInterval (grease.ts), an open published method.
- * Grease relubrication interval, hours [3]:
- *   t_f = k_f·[14·10⁶/(n·√d) − 4·d] · 0.5^(max(0, T − 70)/15)
- * n r/min inside (given in rev/s), d bore mm inside (given in m), k_f type factor,
- * T operating temperature, °C. Returns null when n ≤ 0 (not defined) and 0 when the
- * bracket is not positive (speed too high for grease by this rule: the caller warns).
- */
-export function relubricationInterval(n: number, d: number, kf: number, tC: number): number | null {
-  if (!(n > 0) || !(d > 0)) return null;
-  const rpm = n * 60;
-  const dMm = d * 1000;
-  const base = kf * (14e6 / (rpm * Math.sqrt(dMm)) - 4 * dMm);
-  if (!(base > 0)) return 0;
-  return base * Math.pow(0.5, Math.max(0, tC - 70) / 15);
-}
-
-/**
  * Smallest swing angle, rad, for every rolling element of an oscillating bearing to
- * roll onto the track of its neighbour on both rings [4]. With the inner ring swinging
+ * roll onto the track of its neighbour on both rings [3]. With the inner ring swinging
  * through θ and the outer ring still, the cage turns θ·(1 − γ)/2 relative to the outer
  * ring and θ·(1 + γ)/2 relative to the inner ring, γ = Dw/dm. An element's contact
  * sweeps one element pitch 2π/Z on the outer ring when
@@ -108,7 +78,7 @@ export interface StaticSafetyGuidance {
 }
 
 /**
- * Least static safety s0 = C0/P0 [5] for the case's shock level and a ball or roller kind
+ * Least static safety s0 = C0/P0 [4] for the case's shock level and a ball or roller kind
  * (C0 basic static rating, P0 static equivalent load, both N; ISO 76:2006 defines C0 by the
  * contact stress that leaves a permanent deformation of about 1/10 000 of the element
  * diameter, from memory). The label is our own wording of the shock level.

@@ -99,7 +99,7 @@ const caseFindings: Record<string, Wording> = {
 /** Cautions about one candidate, each naming it first. */
 const candidateFindings: Record<string, Wording> = {
   'rolling.key-below-table': (v) =>
-    `${raw(v['designation'])}: f0·Fa/C0 = ${Number(v['key']).toFixed(4)} is below the first row of the ISO 281 X/Y table; e and Y of that row are used (Y would be somewhat larger): not extrapolated`,
+    `${raw(v['designation'])} (and any other candidate alike): f0·Fa/C0 = ${Number(v['key']).toFixed(4)} is below the first row of the ISO 281 X/Y table; e and Y of that row are used (Y would be somewhat larger): not extrapolated`,
   'rolling.opposed-partner': () =>
     'a single-row angular-contact ball or tapered roller bearing (or a tandem pair) must be located by an opposed bearing at the shaft’s other support: that partner is taken as the same bearing under the same radial load, so this one carries the case’s axial load plus the partner’s induced force 0.5·Fr/Y (ISO 281 practice for two bearings that locate each other); a shaft model with both supports replaces this',
   'rolling.grease-life-cool-held': (v) =>
@@ -217,7 +217,7 @@ export const rollingWording: KernelWording = {
     }),
     'rolling.supplier-contact-angle': (v) => ({
       value: `${fig(v['contactAngle'])}°`,
-      reason: `the supplier ${raw(v['kind'])} bearing has no contact angle given: a usual angle of the kind is taken (common practice, from memory)`,
+      reason: `the supplier ${raw(v['kind'])} bearing has no contact angle given: the usual angle of the kind is taken (data/rolling-ratings.json, from memory)`,
     }),
     'rolling.estimated-fatigue-limit': () => ({
       value: 'Cu = C0/22 (ball), C0/8.2 (roller); above dm = 100 mm × (100/dm)^0.5 (ball), × (100/dm)^0.3 (roller)',

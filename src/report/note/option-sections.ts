@@ -1,4 +1,5 @@
 import { describe } from '../findings/index.js';
+import { kindLeads } from '../rolling-text.js';
 import type { AdviceResult, RankedOption } from '../../advise/engine.js';
 import type { CheckRecord } from '../../core/check.js';
 import { fmt, fmtValue, type UnitSystem } from '../units.js';
@@ -140,10 +141,7 @@ function rollingBlocks(ranked: RankedOption, advice: AdviceResult, units: UnitSy
     });
   if (rolling.choice) blocks.push({ kind: 'p', text: describe(rolling.choice) });
   blocks.push({ kind: 'sub', title: 'Each kind checked' });
-  // One bearing per kind (its choice, else its nearest miss); every candidate is in the JSON.
-  const perKind = rolling.kinds
-    .map((f) => rolling.candidates.find((x) => x.id === f.id))
-    .filter((x): x is NonNullable<typeof x> => x !== undefined);
+  const perKind = kindLeads(rolling);
   blocks.push({
     kind: 'table',
     head: ['bearing', 'C', 'C0', 'P', 'L10h', 'L10mh', 's0', 'feasible'],

@@ -9,15 +9,13 @@ import { describe, expect, it } from 'vitest';
 import { evaluate as evaluateExpression } from '../../helpers/sheet.js';
 import type { CaseSI } from '../../../src/case/types.js';
 import type { SheetLine } from '../../../src/core/check.js';
-import { rollingFactors } from '../../../src/data/rolling.js';
 import { candidateSpecs } from '../../../src/calc/rolling/candidates.js';
-import { dutyPoints, lifeFactors, shockFactors } from '../../../src/calc/rolling/conditions.js';
 import type { EvalContext } from '../../../src/calc/rolling/context.js';
 import { evaluate } from '../../../src/calc/rolling/evaluate.js';
 import { newNotes } from '../../../src/calc/rolling/findings.js';
 import { checkRolling } from '../../../src/calc/rolling/index.js';
+import { evalContext } from '../../../src/calc/rolling/check.js';
 import { lifeExponent, requiredDynamicRating } from '../../../src/calc/rolling/life.js';
-import { bearingLubrication } from '../../../src/calc/rolling/lubrication.js';
 import { rollingSheet } from '../../../src/calc/rolling/sheet.js';
 import type { RollingCandidate } from '../../../src/calc/rolling/types.js';
 
@@ -42,25 +40,10 @@ function drumIdler(over: Partial<CaseSI> = {}): CaseSI {
 /** Every candidate of the case with its sheet, worked as checkRolling works them (check.ts). */
 function sheets(c: CaseSI): { candidate: RollingCandidate; sheet: SheetLine[]; ctx: EvalContext }[] {
   const notes = newNotes();
-  const f = rollingFactors();
-  const duty = dutyPoints(c, notes);
-  const shock = shockFactors(c, f, notes);
-  const life = lifeFactors(c, f, notes);
-  const ctx: EvalContext = {
-    c,
-    f,
-    points: duty.points,
-    maxSpeed: duty.maxSpeed,
-    serviceFactor: shock.serviceFactor,
-    s0Guidance: shock.s0Guidance,
-    cont: life.cont,
-    a1: life.a1,
-    reliabilityUsed: life.reliabilityUsed,
-    lubrication: bearingLubrication(c, notes),
-  };
+  const { ctx, meanSpeed } = evalContext(c, notes);
   return candidateSpecs(c, notes).map((s) => {
     const candidate = evaluate(s, ctx, notes);
-    return { candidate, sheet: rollingSheet(candidate, ctx, duty.meanSpeed), ctx };
+    return { candidate, sheet: rollingSheet(candidate, ctx, meanSpeed), ctx };
   });
 }
 

@@ -1,6 +1,4 @@
-// Kind: formula checks on hand-worked numbers: grease relubrication interval (a rolling-
-// bearing maker's general technical guide, seen; not named here; kept until its callers move
-// to grease.ts), n·dm, friction torque M = μ·P·d/2 (common practice), the small-swing
+// Kind: formula checks on hand-worked numbers: n·dm, friction power M·2π·n, the small-swing
 // criterion (kinematics); speed limits per kind and static-safety guidance (common practice,
 // data/rolling-running.json), and that table against its schema.
 import { readFileSync } from 'node:fs';
@@ -10,36 +8,17 @@ import { ROLLING_KINDS, kindType } from '../../../src/calc/rolling/kinds.js';
 import {
   criticalSwingAngle,
   frictionPower,
-  frictionTorque,
-  relubricationInterval,
   speedFactor,
   speedLimit,
   staticSafetyGuidance,
 } from '../../../src/calc/rolling/speed.js';
 
-describe('grease relubrication interval t_f = k_f·[14e6/(n·√d) − 4d]', () => {
-  it('1500 r/min, d = 40 mm, k_f = 10: 14e6/(1500·6.3246) = 1475.73; − 160 = 1315.73; ×10 = 13 157 h', () => {
-    expect(relubricationInterval(25, 0.04, 10, 60)).toBeCloseTo(13157.3, 0);
-  });
-  it('halves for each 15 °C above 70 °C', () => {
-    const cool = relubricationInterval(25, 0.04, 10, 70)!;
-    expect(relubricationInterval(25, 0.04, 10, 85)! / cool).toBeCloseTo(0.5, 12);
-    expect(relubricationInterval(25, 0.04, 10, 100)! / cool).toBeCloseTo(0.25, 12);
-  });
-  it('too fast for grease by this rule: 0, not negative; no rotation: null', () => {
-    expect(relubricationInterval(20000 / 60, 0.05, 10, 40)).toBe(0);
-    expect(relubricationInterval(0, 0.05, 10, 40)).toBeNull();
-  });
-});
-
 describe('speed factor and friction', () => {
   it('n·dm: 1500 r/min × 60 mm = 90 000 mm·r/min', () => {
     expect(speedFactor(25, 0.06)).toBeCloseTo(90000, 6);
   });
-  it('M = 0.0015·4000 N·0.040 m/2 = 0.12 N·m; at 25 rev/s the power is 0.12·2π·25 = 18.85 W', () => {
-    const M = frictionTorque(0.0015, 4000, 0.04);
-    expect(M).toBeCloseTo(0.12, 12);
-    expect(frictionPower(M, 25)).toBeCloseTo(0.12 * 2 * Math.PI * 25, 12);
+  it('a friction moment of 0.12 N·m at 25 rev/s gives 0.12·2π·25 = 18.85 W', () => {
+    expect(frictionPower(0.12, 25)).toBeCloseTo(0.12 * 2 * Math.PI * 25, 12);
   });
 });
 
