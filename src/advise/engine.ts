@@ -9,6 +9,7 @@ import type { RollingResult } from '../calc/rolling/types.js';
 import { checkJournal, type JournalResult } from '../calc/journal/index.js';
 import {
   bushingFigures,
+  compareFigures,
   dutyFacts,
   journalFigures,
   rollingFigures,
@@ -138,11 +139,11 @@ function lazyChecks(c: CaseSI, opts: AdviseOptions) {
   const journal = () => (cache.journal ??= checkJournal(c, { ...sheet, ...profile }));
   let figs: Figures | undefined;
   const figures = (): Figures =>
-    (figs ??= {
+    (figs ??= compareFigures({
       bushing: bushingFigures(bushing(), c),
       rolling: rollingFigures(rolling(), c),
       journal: journalFigures(journal()),
-    });
+    }));
   return { bushing, rolling, journal, figures };
 }
 

@@ -1,5 +1,5 @@
 import type { Remark } from '../core/finding.js';
-import { type OptionName } from '../core/options.js';
+import { OPTIONS, type OptionName } from '../core/options.js';
 import type { CaseSI } from '../case/types.js';
 import { governingMargin, type CheckRecord } from '../core/check.js';
 import type { BushingResult } from '../calc/bushing/index.js';
@@ -82,7 +82,40 @@ export interface OptionFigures {
   failed: CheckRecord[];
   /** Why the check found nothing feasible, in words. */
   why: Remark[];
+  /** This option's figures against the other options' (filled by compareFigures). */
+  compare?: OptionComparison;
 }
+
+/**
+ * One option's computed figures set against the options that pass their checks (the
+ * "feasible" options), so a rule that claims "its friction is the lowest" or "it is the
+ * smallest" can condition on this case's numbers. Ratios are this option's figure over the
+ * best figure of the feasible options (the option itself counted when it is feasible);
+ * null where this option has no such figure or no feasible option has one.
+ */
+export interface OptionComparison {
+  /** Options (of three) that pass their checks. */
+  feasibleCount: number;
+  /** Mean friction power over the lowest of the feasible options' (1 = the lowest). */
+  frictionToLowest: number | null;
+  /**
+   * True when this option is feasible, at least one other feasible option has a computed
+   * friction power, and this option's is no higher than any of theirs.
+   */
+  frictionLowest: boolean;
+  /** Life (h) over the longest life of the feasible options that compute one (1 = the longest). */
+  lifeToLongest: number | null;
+  /** Axial length over the shortest of the feasible options' (1 = the shortest). */
+  lengthToShortest: number | null;
+  /** Outside diameter over the smallest of the feasible options' (1 = the smallest). */
+  outerDiameterToSmallest: number | null;
+}
+
+/** The material's lubrication need, null where the material row does not state one. */
+const needsOf = (m: object): string | null => {
+  const n = (m as { needs?: unknown }).needs;
+  return typeof n === 'string' ? n : null;
+};
 
 const failing = (checks: CheckRecord[]) => checks.filter((k) => !k.pass && !k.advisory);
 
@@ -103,7 +136,15 @@ export function bushingFigures(r: BushingResult, c: CaseSI): OptionFigures {
     };
   return {
     feasible: r.feasible,
-    design: { material: m.id, name: m.name, length: m.length, outerDiameter: m.outerDiameter },
+    design: {
+      material: m.id,
+      name: m.name,
+      // What lubrication the material needs ('none' | 'grease' | 'oil'), read by the rules that
+      // credit a bushing for running without lubricant.
+      needs: needsOf(m),
+      length: m.length,
+      outerDiameter: m.outerDiameter,
+    },
     lifeHours: m.lifeHours,
     lifeRatio: m.lifeHours / c.life.hours,
     frictionPower: m.meanFrictionPower,
@@ -173,3 +214,46 @@ export function journalFigures(r: JournalResult): OptionFigures {
 }
 
 export type Figures = Record<OptionName, OptionFigures>;
+
+type Measure = 'frictionPower' | 'lifeHours' | 'length' | 'outerDiameter';
+
+/** This option's figure over the best (lowest, or highest for life) of the feasible options'. */
+function ratioToBest(figs: Figures, option: OptionName, key: Measure, best: 'min' | 'max'): number | null {
+  const own = figs[option][key];
+  const pool = OPTIONS.filter((o) => figs[o].feasible)
+    .map((o) => figs[o][key])
+    .filter((x): x is number => typeof x === 'number' && Number.isFinite(x));
+  if (own === null || !Number.isFinite(own) || !pool.length) return null;
+  const ref = best === 'min' ? Math.min(...pool) : Math.max(...pool);
+  if (ref === 0) return own === 0 ? 1 : Number.POSITIVE_INFINITY;
+  return own / ref;
+}
+
+/**
+ * The figures of the three options with each one's comparison with the others filled in
+ * (OptionFigures.compare). Pure: returns new objects, the inputs are left as they were.
+ */
+export function compareFigures(figs: Figures): Figures {
+  const feasible = OPTIONS.filter((o) => figs[o].feasible);
+  const out = {} as Figures;
+  for (const o of OPTIONS) {
+    const f = figs[o];
+    const mine = f.frictionPower;
+    const others = feasible
+      .filter((x) => x !== o)
+      .map((x) => figs[x].frictionPower)
+      .filter((x): x is number => x !== null);
+    out[o] = {
+      ...f,
+      compare: {
+        feasibleCount: feasible.length,
+        frictionToLowest: ratioToBest(figs, o, 'frictionPower', 'min'),
+        frictionLowest: f.feasible && mine !== null && others.length > 0 && others.every((x) => mine <= x),
+        lifeToLongest: ratioToBest(figs, o, 'lifeHours', 'max'),
+        lengthToShortest: ratioToBest(figs, o, 'length', 'min'),
+        outerDiameterToSmallest: ratioToBest(figs, o, 'outerDiameter', 'min'),
+      },
+    };
+  }
+  return out;
+}
