@@ -90,6 +90,10 @@ const lubricantsSchema = z.object({
   /** The grade taken where a case supplies oil but names none (one place for it). */
   defaultGrade: z.object({ grade: positive, source: z.string().min(1) }),
   greaseBaseOil: z.object({ grade: positive, source: z.string() }),
+  /** The viscosity index every grade's ν100 stands for (ASTM D2270 / ISO 2909), and why. */
+  viscosityIndex: z.object({ value: z.number(), source: z.string().min(1) }),
+  /** The grades the journal design sweep tries when a case names none (a subset of `grades`). */
+  sweepGrades: z.object({ grades: z.array(positive).min(1), source: z.string().min(1) }),
   grades: z.array(oilGradeSchema).min(1),
 });
 export type LubricantTable = z.infer<typeof lubricantsSchema>;

@@ -94,7 +94,7 @@ export function fluidOptions(c: CaseSI, crit: JournalCriteria): FluidOption[] {
     return [gradeFluid(base, `grease base oil ISO VG ${base}`)];
   }
   if (c.lubrication.oilGrade !== undefined) return [gradeFluid(c.lubrication.oilGrade)];
-  return lubricants().grades.map((row) => gradeFluid(row.grade));
+  return lubricants().sweepGrades.grades.map((grade) => gradeFluid(grade));
 }
 
 /** The lengths to try, m, and what the case's room did to them. */
