@@ -3,7 +3,7 @@ import { num } from '../core/format.js';
 import { readFileSync, statSync } from 'node:fs';
 import { parse as parseYaml, YAMLParseError } from 'yaml';
 import { caseFileSchema } from './schema.js';
-import { KINEMATIC_TO_DYNAMIC_DENSITY } from './quantity.js';
+import { KINEMATIC_TO_DYNAMIC_DENSITY, readingCase } from './quantity.js';
 import { completeCase } from './defaults.js';
 import type { Assumption, CaseSI } from './types.js';
 import { lubricants } from '../data/load.js';
@@ -97,7 +97,10 @@ export function validateCase(raw: unknown, source = '(case)'): LoadedCase {
       },
     ]);
   }
-  const parsed = caseFileSchema.safeParse(raw);
+  // A bare number for a quantity is refused unless the file says `units: base` (a wrong value of
+  // `units` is the schema's to report; the file's numbers are then refused too).
+  const bare = (raw as { units?: unknown }).units === 'base' ? 'base' : 'refused';
+  const parsed = readingCase(bare, () => caseFileSchema.safeParse(raw));
   if (!parsed.success) {
     const problems = parsed.error.issues.map((i) => ({
       field: i.path.length

@@ -13,8 +13,11 @@ const Qty = (text: string): Qty => (lib ??= requireLib('js-quantities') as typeo
  * "5e-7 mm^3/(N*m)" → one number in the SI unit the kernels use. Parsed once,
  * here; nothing inside the calculation sees a unit string.
  *
- * Plain numbers are taken as already in the internal unit of the kind
- * (SI base units; shaft speed rev/s; temperature °C; life hours).
+ * A bare number (120, or the string "120") carries no unit. A case file refuses it for a
+ * quantity with a dimension, naming the number in the field's usual units (`BareNumbers`
+ * "refused"); a file with `units: base`, written by a program, has its bare numbers read in the
+ * internal unit of the kind ("base": SI base units; shaft speed rev/s; temperature °C, not K;
+ * life hours, as the key says). Other callers (command-line ranges) read them as "base".
  */
 export type Kind =
   | 'length'
@@ -71,6 +74,63 @@ export const KINEMATIC_TO_DYNAMIC_DENSITY = 870;
 
 export class QuantityError extends Error {}
 
+/** How a bare number is read: refused (a case file's default) or in the kind's internal unit (`units: base`). */
+export type BareNumbers = 'refused' | 'base';
+
+/**
+ * The usual unit of each kind, in which a refusal reads the bare number back to its writer, and a
+ * second unit with the factor from the first to it: `120` for a speed → "120 rpm or 2 rev/s".
+ */
+const USUAL: Record<Kind, { unit: string; other: string; to: (x: number) => number }> = {
+  length: { unit: 'mm', other: 'm', to: (x) => x / 1000 },
+  force: { unit: 'N', other: 'kN', to: (x) => x / 1000 },
+  speed: { unit: 'rpm', other: 'rev/s', to: (x) => x / 60 },
+  velocity: { unit: 'm/s', other: 'ft/min', to: (x) => x / FT_MIN },
+  time: { unit: 'h', other: 'min', to: (x) => x * 60 },
+  temperature: { unit: 'degC', other: 'degF', to: (x) => x * 1.8 + 32 },
+  viscosity: { unit: 'mPa*s', other: 'Pa*s', to: (x) => x / 1000 },
+  pressure: { unit: 'MPa', other: 'psi', to: (x) => (x * 1e6) / PSI },
+  pv: { unit: 'MPa*m/s', other: 'psi*ft/min', to: (x) => (x * 1e6) / (PSI * FT_MIN) },
+  angle: { unit: 'deg', other: 'rad', to: (x) => (x * Math.PI) / 180 },
+  frequency: { unit: 'Hz', other: '1/min', to: (x) => x * 60 },
+  wearFactor: { unit: 'mm^3/(N*m)', other: 'm^3/(N*m)', to: (x) => x * 1e-9 },
+};
+
+/** A number as a case file would write it (exponent form outside 1e-3..1e6, six significant figures). */
+function write(x: number): string {
+  if (x === 0) return '0';
+  const a = Math.abs(x);
+  const t = a >= 1e-3 && a < 1e6 ? String(+x.toPrecision(6)) : x.toExponential(5).replace(/\.?0+e/, 'e');
+  return t.replace(/e\+/, 'e');
+}
+
+/** The refusal of a bare number `x` (as given: `shown`) for a quantity of `kind`. */
+function bareNumberError(shown: string, x: number, kind: Kind): QuantityError {
+  const u = USUAL[kind];
+  return new QuantityError(`${shown} has no unit; write ${write(x)} ${u.unit} or ${write(u.to(x))} ${u.other}`);
+}
+
+let caseBareNumbers: BareNumbers = 'refused';
+
+/**
+ * Run `read` (a synchronous schema parse of one case) with bare numbers read as `mode`, and
+ * restore the mode after. The case schema's quantity fields ask `bareNumbersInCase()`.
+ */
+export function readingCase<T>(mode: BareNumbers, read: () => T): T {
+  const was = caseBareNumbers;
+  caseBareNumbers = mode;
+  try {
+    return read();
+  } finally {
+    caseBareNumbers = was;
+  }
+}
+
+/** How the case being read takes bare numbers: "refused" unless it says `units: base`. */
+export function bareNumbersInCase(): BareNumbers {
+  return caseBareNumbers;
+}
+
 /** Rewrite the spellings js-quantities lacks into ones it knows. */
 function normalise(text: string, kind: Kind): { text: string; scale: number } {
   let t = text
@@ -102,20 +162,26 @@ function normalise(text: string, kind: Kind): { text: string; scale: number } {
  * Parse one quantity. Returns the number in the internal unit of `kind`.
  * Throws QuantityError with a message saying what was given and what was expected.
  */
-export function parseQuantity(value: unknown, kind: Kind): number {
+export function parseQuantity(value: unknown, kind: Kind, bare: BareNumbers = 'base'): number {
   const info = KINDS[kind];
   if (typeof value === 'number') {
     if (!Number.isFinite(value))
       throw new QuantityError(
-        `got ${String(value)}; expected a finite number or ${info.noun} such as ${info.examples}`,
+        bare === 'base'
+          ? `got ${String(value)}; expected a finite number or ${info.noun} such as ${info.examples}`
+          : `got ${String(value)}; expected a finite number with a unit: ${info.noun} such as ${info.examples}`,
       );
+    if (bare === 'refused') throw bareNumberError(String(value), value, kind);
     return value;
   }
   if (typeof value !== 'string') {
     throw new QuantityError(`got ${describe(value)}; expected ${info.noun} such as ${info.examples}`);
   }
   const { text, scale } = normalise(value, kind);
-  if (NUMBER.test(text)) return Number(text);
+  if (NUMBER.test(text)) {
+    if (bare === 'refused') throw bareNumberError(`"${value}"`, Number(text), kind);
+    return Number(text);
+  }
   const m = /^([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.+)$/.exec(text);
   const unreadable = () =>
     new QuantityError(

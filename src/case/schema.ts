@@ -1,11 +1,12 @@
 import { z } from 'zod';
-import { parseQuantity, QuantityError, type Kind } from './quantity.js';
+import { bareNumbersInCase, parseQuantity, QuantityError, type Kind } from './quantity.js';
 import { ARRANGEMENTS, FORMS, ROLLING_KINDS } from '../core/rolling-kinds.js';
 
 /**
  * The duty-case file schema (a contract: external tools write these keys).
- * Quantities are strings with units or plain numbers in the internal unit;
- * each is converted to SI here, once. Defaults are not applied here but in
+ * Quantities are strings with units ("40 mm"); a bare number is refused for a quantity with a
+ * dimension unless the file says `units: base` (then it is in the internal unit, see
+ * quantity.ts). Each is converted to SI here, once. Defaults are not applied here but in
  * defaults.ts, which records each one as an assumption.
  */
 
@@ -29,7 +30,7 @@ export function quantity(kind: Kind, bound: Bound = 'positive', range?: Ceiling)
       return z.NEVER;
     }
     try {
-      const n = parseQuantity(v, kind);
+      const n = parseQuantity(v, kind, bareNumbersInCase());
       if (bound === 'positive' && !(n > 0)) {
         ctx.addIssue({ code: 'custom', message: `got ${show(v)}; expected a value greater than zero` });
         return z.NEVER;
@@ -158,6 +159,8 @@ const oilSchema = z.unknown().transform((v, ctx) => {
 });
 
 export const caseFileSchema = mapping({
+  // Bare numbers in SI base units on purpose (files written by programs); load.ts reads it first.
+  units: choice(['base'] as const).optional(),
   title: text('a title for the case'),
   shaft: mapping({
     diameter: quantity('length', 'positive', { max: 5, min: 1e-3, say: 'a shaft diameter from 1 mm to 5 m' }),
