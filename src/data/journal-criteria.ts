@@ -37,23 +37,43 @@ export interface JournalCriteria {
   fixedSpecificHeat: number;
   /** Source text per criterion key (same names as above). */
   sources: Record<string, string>;
+  /** Confidence per criterion key (same names as above): see CONFIDENCES. */
+  confidence: Record<string, Confidence>;
+}
+
+/**
+ * How far a criterion can be trusted: `standard` or `seen` (read in the source), `published`
+ * (a named published work, recalled), `from-memory`, `common-practice`, `low` (a guess to be
+ * confirmed). A limit of `low` confidence informs and never decides feasibility.
+ */
+export const CONFIDENCES = ['standard', 'seen', 'published', 'from-memory', 'common-practice', 'low'] as const;
+export type Confidence = (typeof CONFIDENCES)[number];
+
+/** True when a limit of this confidence may decide feasibility (anything but `low`). */
+export function mayGate(confidence: Confidence | undefined): boolean {
+  return confidence !== 'low';
 }
 
 const entry = z.object({ value: z.number().positive(), source: z.string().min(1) });
+/** A criterion row: its value, its confidence and, where the published form is in other units, that form. */
+const criterion = entry.extend({
+  confidence: z.enum(CONFIDENCES),
+  published: z.object({ value: z.number().positive(), unit: z.string().min(1) }).optional(),
+});
 const list = z.object({ values: z.array(z.number().positive()).min(1), source: z.string().min(1) });
 const criteriaSchema = z.object({
   description: z.string(),
   criteria: z.object({
-    minFilmBase_m: entry,
-    minFilmPerDiameter_1: entry,
-    maxTemperature_degC: entry,
-    maxStartUnitLoad_Pa: entry,
-    designLoadFactor_1: entry,
-    typicalUnitLoadMax_Pa: entry,
-    typicalUnitLoadMin_Pa: entry,
-    lightLoadEccentricity_1: entry,
-    frequentStartsPerHour_1: entry,
-    oilBathFlowCapacity_m3_s: entry,
+    minFilmBase_m: criterion,
+    minFilmPerDiameter_1: criterion,
+    maxTemperature_degC: criterion,
+    maxStartUnitLoad_Pa: criterion,
+    designLoadFactor_1: criterion,
+    typicalUnitLoadMax_Pa: criterion,
+    typicalUnitLoadMin_Pa: criterion,
+    lightLoadEccentricity_1: criterion,
+    frequentStartsPerHour_1: criterion,
+    oilBathFlowCapacity_m3_s: criterion,
   }),
   designSpace: z.object({ lengthToDiameter_1: list, clearanceRatio_1: list }),
   fixedViscosityFluid: z.object({ density_kg_m3: entry, specificHeat_J_kgK: entry }),
@@ -91,6 +111,16 @@ export function journalCriteria(): JournalCriteria {
       lengthToDiameter: space.lengthToDiameter_1.source,
       clearanceRatio: space.clearanceRatio_1.source,
       fixedViscosityFluid: table.fixedViscosityFluid.density_kg_m3.source,
+    },
+    confidence: {
+      minFilmBase: rows.minFilmBase_m.confidence,
+      maxTemperature: rows.maxTemperature_degC.confidence,
+      maxStartUnitLoad: rows.maxStartUnitLoad_Pa.confidence,
+      designLoadFactor: rows.designLoadFactor_1.confidence,
+      typicalUnitLoadMax: rows.typicalUnitLoadMax_Pa.confidence,
+      lightLoadEccentricity: rows.lightLoadEccentricity_1.confidence,
+      frequentStartsPerHour: rows.frequentStartsPerHour_1.confidence,
+      oilBathFlowCapacity: rows.oilBathFlowCapacity_m3_s.confidence,
     },
   };
 }

@@ -1,7 +1,7 @@
 import { advisory, makeCheck, type CheckRecord } from '../../core/check.js';
 import { operatingPoint, type Fluid, type Geometry, type OperatingResult } from './operating-point.js';
 import { tableFor } from './table.js';
-import type { JournalCriteria } from '../../data/journal-criteria.js';
+import { mayGate, type JournalCriteria } from '../../data/journal-criteria.js';
 
 /**
  * Design of a plain full journal bearing at concept stage: evaluation of one geometry
@@ -18,7 +18,10 @@ import type { JournalCriteria } from '../../data/journal-criteria.js';
  *  - lightly loaded (smallest ε below the light-load limit): whirl-prone (common practice;
  *    advisory),
  *  - oil-bath or ring supply can deliver the flow the film draws in (from memory, low
- *    confidence on the capacity).
+ *    confidence on the capacity: advisory, see below).
+ * Every criterion row carries a confidence (data/journal-criteria.json); a limit whose
+ * confidence is `low` informs and never excludes a design (advisory, its confidence in the
+ * label and the source).
  * Film margin = (h0 − h_allow)/h_allow, the CheckRecord convention (src/core/check.ts).
  *
  * Sweep (common practice ranges, data/journal-criteria.json): L/D over the listed values
@@ -402,15 +405,18 @@ function adviceChecks(
 /**
  * Oil-bath supply: the largest flow the film draws in over the points, Q (m³/s), against
  * what an oil ring or bath delivers (from memory, low confidence; data/journal-criteria.json).
+ * Held with the confidence of its row: advisory unless that confidence may gate.
  */
 function supplyFlowCheck(e: DesignEvaluation, crit: JournalCriteria): CheckRecord {
-  return makeCheck(
+  const confidence = crit.confidence['oilBathFlowCapacity'];
+  const k = makeCheck(
     'supply-flow',
-    'Oil flow the film draws in at the maximum film thickness, against what an oil ring or bath can deliver',
+    `Oil flow the film draws in at the maximum film thickness, against what an oil ring or bath can deliver (confidence: ${confidence ?? 'not stated'})`,
     Math.max(...e.points.map((p) => p.result.flow)),
     crit.oilBathFlowCapacity,
     'm^3/s',
     'max',
-    crit.sources['oilBathFlowCapacity'] ?? '',
+    `${crit.sources['oilBathFlowCapacity'] ?? ''} [confidence: ${confidence ?? 'not stated'}]`,
   );
+  return mayGate(confidence) ? k : advisory(k);
 }
