@@ -87,6 +87,7 @@ export function completeCase(
       ambient: take('environment.ambient', file.environment?.ambient, DEFAULTS.ambient, '25 degC'),
       contamination: take('environment.contamination', file.environment?.contamination, DEFAULTS.contamination),
       startsPerHour: take('environment.startsPerHour', file.environment?.startsPerHour, DEFAULTS.startsPerHour),
+      ...(file.environment?.medium !== undefined ? { medium: file.environment.medium } : {}),
     },
     priorities,
   };

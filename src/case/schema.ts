@@ -113,6 +113,7 @@ const TEMPERATURE: Ceiling = { min: -60, max: 300, say: 'a temperature from -60 
 export const SHOCKS = ['none', 'light', 'moderate', 'heavy'] as const;
 export const SUPPLIES = ['none', 'grease', 'oil-bath', 'oil-feed'] as const;
 export const CONTAMINATIONS = ['clean', 'normal', 'dirty', 'severe'] as const;
+export const MEDIA = ['dry', 'water', 'slurry', 'chemical'] as const;
 export const PRIORITIES = ['cost', 'friction', 'maintenance', 'noise', 'precision'] as const;
 
 export const materialSchema = mapping({
@@ -205,6 +206,7 @@ export const caseFileSchema = mapping({
     ambient: quantity('temperature', 'any', TEMPERATURE).optional(),
     contamination: choice(CONTAMINATIONS).optional(),
     startsPerHour: plain('a number of starts per hour from 0 to 10000', 0, 10000).optional(),
+    medium: choice(MEDIA).optional(),
   }).optional(),
   priorities: mapping(
     Object.fromEntries(

@@ -11,6 +11,8 @@ import type { BushingMaterial } from '../data/bushing.js';
 export type Shock = 'none' | 'light' | 'moderate' | 'heavy';
 export type Supply = 'none' | 'grease' | 'oil-bath' | 'oil-feed';
 export type Contamination = 'clean' | 'normal' | 'dirty' | 'severe';
+/** What the bearing runs in: air (dry), water, a slurry of water and solids, or a chemical. */
+export type Medium = 'dry' | 'water' | 'slurry' | 'chemical';
 export type Priority = 'cost' | 'friction' | 'maintenance' | 'noise' | 'precision';
 
 /** A bushing material class, SI (defined with its schema in src/data/bushing.ts). */
@@ -68,6 +70,8 @@ export interface CaseSI {
     ambient: number;
     contamination: Contamination;
     startsPerHour: number;
+    /** The service medium; absent means not given (the bushing check takes dry and says so). */
+    medium?: Medium;
   };
   /** Priorities 1..5 (3 = neutral). */
   priorities: Record<Priority, number>;
