@@ -1,0 +1,141 @@
+import { pchipSlopes } from '../journal/table.js';
+import { solvePad, type PadPerformance } from './pad.js';
+
+/**
+ * Dimensionless pad performance against the taper K = h_in/h_min − 1 at one pad shape L/B,
+ * solved once per L/B (pad.ts, default mesh; cached in memory for the life of the process)
+ * over PAD_TAPERS and interpolated by monotone cubics (PCHIP, Fritsch & Carlson 1980, as the
+ * journal's table.ts) in ln K of: ln W*, ln F*, ln Q*_in, Q*_side/Q*_in and X_cp.
+ *
+ * Outside the rows: below K_min the near-parallel limit W* ∝ K, F* → 1, flows and X_cp held
+ * (the film is then nearly parallel and W* is linear in K to first order, which the
+ * infinitely wide slider's series W* = K/2 − … shows); above K_max the last row is held and
+ * the point is flagged `extrapolated` (a film this thin against the taper fails in any case).
+ */
+
+/** Taper rows: K from 0.05 to 20, closer where W* bends (K ≈ 0.5–3). */
+export const PAD_TAPERS: readonly number[] = [
+  0.05, 0.1, 0.2, 0.35, 0.5, 0.7, 0.9, 1.1, 1.3, 1.6, 2, 2.5, 3.2, 4.2, 5.6, 7.5, 10, 14, 20,
+];
+
+/** One interpolated state of the pad (definitions in pad.ts). */
+export interface PadPoint {
+  taper: number;
+  load: number;
+  friction: number;
+  inletFlow: number;
+  sideFlow: number;
+  centreOfPressure: number;
+  /** Peak pressure P_max (interpolated linearly in ln K of ln P_max). */
+  peakPressure: number;
+  /** True when K lies above the last row (figures of the last row). */
+  extrapolated: boolean;
+}
+
+export interface PadTable {
+  widthToLength: number;
+  lnK: Float64Array;
+  rows: PadPerformance[];
+  series: { y: Float64Array; d: Float64Array }[];
+}
+
+const cache = new Map<number, PadTable>();
+
+/** L/B rounded to 1e-4 so that sizes differing by a last digit share a table. */
+const quantise = (widthToLength: number): number => Math.round(widthToLength * 1e4) / 1e4;
+
+/** The table of pad shape L/B (> 0), solved on first use. */
+export function padTable(widthToLength: number): PadTable {
+  const key = quantise(widthToLength);
+  const hit = cache.get(key);
+  if (hit) return hit;
+  const rows = PAD_TAPERS.map((k) => solvePad(k, key));
+  const lnK = Float64Array.from(PAD_TAPERS, Math.log);
+  const columns = [
+    rows.map((r) => Math.log(r.load)),
+    rows.map((r) => Math.log(r.friction)),
+    rows.map((r) => Math.log(r.inletFlow)),
+    rows.map((r) => r.sideFlow / r.inletFlow),
+    rows.map((r) => r.centreOfPressure),
+    rows.map((r) => Math.log(r.peakPressure)),
+  ].map((c) => Float64Array.from(c));
+  const table = { widthToLength: key, lnK, rows, series: columns.map((y) => ({ y, d: pchipSlopes(lnK, y) })) };
+  cache.set(key, table);
+  return table;
+}
+
+function hermite(x: Float64Array, s: { y: Float64Array; d: Float64Array }, k: number, v: number): number {
+  const h = x[k + 1]! - x[k]!;
+  const t = (v - x[k]!) / h;
+  const t2 = t * t;
+  const t3 = t2 * t;
+  return (
+    (2 * t3 - 3 * t2 + 1) * s.y[k]! +
+    (t3 - 2 * t2 + t) * h * s.d[k]! +
+    (-2 * t3 + 3 * t2) * s.y[k + 1]! +
+    (t3 - t2) * h * s.d[k + 1]!
+  );
+}
+
+/** The pad's state at taper K (> 0). */
+export function padAt(t: PadTable, taper: number): PadPoint {
+  if (!(taper > 0)) throw new Error(`thrust pad: taper K must be positive, got ${taper}`);
+  const x = t.lnK;
+  const last = x.length - 1;
+  const v = Math.log(taper);
+  if (v <= x[0]!) {
+    const r = t.rows[0]!;
+    const scale = taper / r.taper; // W* ∝ K near parallel
+    return {
+      taper,
+      load: r.load * scale,
+      friction: 1 + (r.friction - 1) * scale,
+      inletFlow: r.inletFlow,
+      sideFlow: r.sideFlow / r.inletFlow,
+      centreOfPressure: r.centreOfPressure,
+      peakPressure: r.peakPressure * scale,
+      extrapolated: false,
+    };
+  }
+  if (v >= x[last]!) {
+    const r = t.rows[last]!;
+    const sideFlow = r.sideFlow / r.inletFlow;
+    return { ...r, taper: r.taper, sideFlow, extrapolated: v > x[last]! };
+  }
+  let k = 0;
+  while (k < last - 1 && x[k + 1]! <= v) k++;
+  const at = (i: number): number => hermite(x, t.series[i]!, k, v);
+  return {
+    taper,
+    load: Math.exp(at(0)),
+    friction: Math.exp(at(1)),
+    inletFlow: Math.exp(at(2)),
+    sideFlow: at(3),
+    centreOfPressure: at(4),
+    peakPressure: Math.exp(at(5)),
+    extrapolated: false,
+  };
+}
+
+/**
+ * The taper a tilting pad takes with its pivot at `pivot`·B from the leading edge: the K whose
+ * centre of pressure X_cp sits on the pivot (the pad tilts until the pressure's moment about the
+ * pivot vanishes). X_cp rises with K from 0.5 (parallel film); a pivot outside the table's range
+ * of X_cp throws. Bisection in ln K to 1e-9.
+ */
+export function tiltingTaper(t: PadTable, pivot: number): number {
+  const first = t.rows[0]!.centreOfPressure;
+  const last = t.rows[t.rows.length - 1]!.centreOfPressure;
+  if (!(pivot > first && pivot < last))
+    throw new Error(
+      `thrust pad: pivot at ${pivot}·B lies outside the centres of pressure ${first.toFixed(3)}–${last.toFixed(3)} the pad can take`,
+    );
+  let lo = t.lnK[0]!;
+  let hi = t.lnK[t.lnK.length - 1]!;
+  while (hi - lo > 1e-9) {
+    const mid = 0.5 * (lo + hi);
+    if (padAt(t, Math.exp(mid)).centreOfPressure < pivot) lo = mid;
+    else hi = mid;
+  }
+  return Math.exp(0.5 * (lo + hi));
+}
