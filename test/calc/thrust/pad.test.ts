@@ -47,7 +47,7 @@ describe('thrust pad solver', () => {
     expect(bestK).toBeLessThan(1.3);
   });
 
-  it('approaches the narrow-pad limit (derived in this file): within 3 % at L/B = 0.02 (the ends' share is of order L/B), closer than at 0.05', () => {
+  it('approaches the narrow-pad limit (derived in this file): within 3 % at L/B = 0.02 (the ends take a share of order L/B), closer than at 0.05', () => {
     for (const k of [0.5, 1, 2]) {
       const gap = (lb: number): number =>
         Math.abs(solvePad(k, lb, { mesh: { nX: 256, nZ: 8 } }).load / narrowPad(k, lb) - 1);
