@@ -1,6 +1,7 @@
 import { OPTIONS, type OptionName } from '../core/options.js';
 import { UsageError } from '../core/errors.js';
 import { loadCaseFile, type LoadedCase } from '../case/load.js';
+import { caseFileOf } from '../case/base-units.js';
 import type { UnitSystem } from '../report/units.js';
 import type { Assumption } from '../case/types.js';
 import type { AssumedFinding, Remark } from '../core/finding.js';
@@ -52,7 +53,7 @@ async function computeCheck(
     body: string,
   ) => {
     const { option, assumed, ...rest } = worded(r) as typeof r & { assumed: Assumption[] };
-    const json = { option, case: c, assumed: [...loaded.assumed, ...assumed], ...rest };
+    const json = { option, case: caseFileOf(c), assumed: [...loaded.assumed, ...assumed], ...rest };
     const text = [`${c.title}`, body, assumptionsBlock(json.assumed), warningsBlock(r.warnings), CAUTION]
       .filter(Boolean)
       .join('\n\n');

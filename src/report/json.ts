@@ -1,6 +1,6 @@
 import type { AdviceResult, RuleTrace } from '../advise/engine.js';
 import type { LoadedCase } from '../case/load.js';
-import type { CaseSI } from '../case/types.js';
+import { caseFileOf, type CaseFileInBase } from '../case/base-units.js';
 import { wordedAdvice, type Worded } from './findings/worded.js';
 
 /** Options of adviceJson. */
@@ -10,12 +10,13 @@ export interface AdviceJsonOptions {
 }
 
 /**
- * The advice as JSON data, every finding worded as text and the note word it: every key of the advice result but the rule trace, the SI case
- * under `case`, and `rules` only when explaining. JSON has no Infinity or NaN: a number the
+ * The advice as JSON data, every finding worded as text and the note word it: every key of the advice result but the rule trace, the case
+ * under `case` as a case file in SI base units (`units: base`, so that it loads back to the same
+ * SI case), and `rules` only when explaining. JSON has no Infinity or NaN: a number the
  * calculation found infinite (a margin over no limit check, say) is null here, and a key whose
  * value was undefined is absent.
  */
-export type AdviceJson = Worded<Omit<AdviceResult, 'rules'>> & { case: CaseSI; rules?: Worded<RuleTrace[]> };
+export type AdviceJson = Worded<Omit<AdviceResult, 'rules'>> & { case: CaseFileInBase; rules?: Worded<RuleTrace[]> };
 
 /**
  * The advice as `advise --format json` prints it. Returned after the JSON round trip (so an
@@ -29,6 +30,7 @@ export function adviceJson(
   opts: AdviceJsonOptions = {},
 ): AdviceJson {
   const { rules, ...rest } = wordedAdvice(advice);
-  const shown: AdviceJson = opts.explain ? { ...rest, case: loaded.case, rules } : { ...rest, case: loaded.case };
+  const echo = caseFileOf(loaded.case);
+  const shown: AdviceJson = opts.explain ? { ...rest, case: echo, rules } : { ...rest, case: echo };
   return JSON.parse(JSON.stringify(shown)) as AdviceJson;
 }

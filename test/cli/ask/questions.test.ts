@@ -134,14 +134,18 @@ describe('checking an answer', () => {
     expect(checkAnswer(q('ambient'), '-20 degC', {}).ok).toBe(true);
   });
 
-  it('asks for the unit of a bare number typed at the prompt, but reads one from a file as a case file does', () => {
+  it('asks for the unit of a bare number typed at the prompt, and refuses one read from a file as a case file does', () => {
     const typed = checkAnswer(q('diameter'), '40', {});
     expect(typed.ok).toBe(false);
     if (!typed.ok)
       expect(typed.message).toMatch(
         /shaft\.diameter: got "40" without a unit; expected a length with its unit, such as "40 mm"/,
       );
-    expect(checkAnswer(q('diameter'), 0.04, {}, true)).toEqual({ ok: true, value: 0.04 });
+    expect(checkAnswer(q('diameter'), 0.04, {}, true)).toEqual({
+      ok: false,
+      message: 'shaft.diameter: 0.04 has no unit; write 0.04 mm or 4e-5 m',
+    });
+    expect(checkAnswer(q('diameter'), '40 mm', {}, true)).toEqual({ ok: true, value: '40 mm' });
     // A lone unit (what is left after deleting the number) is not read as one of it.
     const unitOnly = checkAnswer(q('diameter'), 'mm', {});
     expect(unitOnly.ok).toBe(false);
