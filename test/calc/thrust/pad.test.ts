@@ -47,13 +47,13 @@ describe('thrust pad solver', () => {
     expect(bestK).toBeLessThan(1.3);
   });
 
-  it('approaches the narrow-pad limit (derived in this file): within 3 % at L/B = 0.02 (the ends take a share of order L/B), closer than at 0.05', () => {
+  it('approaches the narrow-pad limit (derived in this file): within 4 % at L/B = 0.02, the gap shrinking about in proportion to L/B (flow in x near the ends)', () => {
     for (const k of [0.5, 1, 2]) {
       const gap = (lb: number): number =>
         Math.abs(solvePad(k, lb, { mesh: { nX: 256, nZ: 8 } }).load / narrowPad(k, lb) - 1);
       const near = gap(0.02);
-      expect(near).toBeLessThan(0.03);
-      expect(near).toBeLessThan(gap(0.05));
+      expect(near).toBeLessThan(0.04);
+      expect(near).toBeLessThan(0.6 * gap(0.05));
     }
   });
 
