@@ -103,6 +103,13 @@ export interface OptionComparison {
    * friction power, and this option's is no higher than any of theirs.
    */
   frictionLowest: boolean;
+  /**
+   * How far the next-lowest feasible option's friction power is above this option's, W
+   * (negative when another feasible option runs cooler); null without a feasible other.
+   */
+  frictionMargin: number | null;
+  /** This option's friction power above the lowest of the feasible options', W (0 for the lowest). */
+  frictionAboveLowest: number | null;
   /** Life (h) over the longest life of the feasible options that compute one (1 = the longest). */
   lifeToLongest: number | null;
   /** Axial length over the shortest of the feasible options' (1 = the shortest). */
@@ -229,6 +236,15 @@ function ratioToBest(figs: Figures, option: OptionName, key: Measure, best: 'min
   return own / ref;
 }
 
+/** This option's friction power above the lowest of the feasible options', W. */
+function aboveLowest(figs: Figures, option: OptionName): number | null {
+  const own = figs[option].frictionPower;
+  const pool = OPTIONS.filter((o) => figs[o].feasible)
+    .map((o) => figs[o].frictionPower)
+    .filter((x): x is number => x !== null);
+  return own === null || !pool.length ? null : own - Math.min(...pool);
+}
+
 /**
  * The figures of the three options with each one's comparison with the others filled in
  * (OptionFigures.compare). Pure: returns new objects, the inputs are left as they were.
@@ -249,6 +265,8 @@ export function compareFigures(figs: Figures): Figures {
         feasibleCount: feasible.length,
         frictionToLowest: ratioToBest(figs, o, 'frictionPower', 'min'),
         frictionLowest: f.feasible && mine !== null && others.length > 0 && others.every((x) => mine <= x),
+        frictionMargin: mine === null || !others.length ? null : Math.min(...others) - mine,
+        frictionAboveLowest: aboveLowest(figs, o),
         lifeToLongest: ratioToBest(figs, o, 'lifeHours', 'max'),
         lengthToShortest: ratioToBest(figs, o, 'length', 'min'),
         outerDiameterToSmallest: ratioToBest(figs, o, 'outerDiameter', 'min'),
