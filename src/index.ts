@@ -108,12 +108,13 @@ export interface AdviseOptions {
  */
 export async function advise(c: CaseSI, opts: AdviseOptions = {}): Promise<AdviceJson> {
   const loaded = loadedOf(c);
-  const [{ advise: run }, { adviceJson }] = await Promise.all([
+  const [{ advise: run }, { withToMakeFeasible }, { adviceJson }] = await Promise.all([
     import('./advise/engine.js'),
+    import('./advise/to-feasible.js'),
     import('./report/json.js'),
   ]);
   // As the CLI's json path: the engine runs every kernel itself, pressure profile included.
-  const result = await run(loaded.case, loaded.assumed);
+  const result = await withToMakeFeasible(await run(loaded.case, loaded.assumed), loaded);
   return adviceJson(loaded, result, { explain: opts.explain === true });
 }
 
@@ -137,12 +138,13 @@ export async function renderNote(c: CaseSI, format: 'md' | 'html', opts: RenderN
   if (opts.units !== undefined && opts.units !== 'SI' && opts.units !== 'US')
     throw new UsageError(`renderNote units: got "${String(opts.units)}"; expected SI or US`);
   const loaded = loadedOf(c);
-  const [{ advise: run }, note, { journalSpeedCurves }] = await Promise.all([
+  const [{ advise: run }, { withToMakeFeasible }, note, { journalSpeedCurves }] = await Promise.all([
     import('./advise/engine.js'),
+    import('./advise/to-feasible.js'),
     import('./report/note/index.js'),
     import('./explore/journal-curves.js'),
   ]);
-  const result = await run(loaded.case, loaded.assumed);
+  const result = await withToMakeFeasible(await run(loaded.case, loaded.assumed), loaded);
   const { now } = opts;
   const caseFile = opts.caseFile ?? loaded.caseFile;
   const text = await note.renderNote(loaded, result, format, {

@@ -3,8 +3,9 @@ import { OPTIONS, type OptionName } from '../core/options.js';
 import { Engine, type RuleResult } from 'json-rules-engine';
 import type { Assumption, CaseSI } from '../case/types.js';
 import type { CheckRecord } from '../core/check.js';
+import type { FeasibleChange } from './to-feasible-types.js';
 import { checkBushing, type BushingResult } from '../calc/bushing/index.js';
-import { checkRolling } from '../calc/rolling/index.js';
+import { checkRolling, journalOil } from '../calc/rolling/index.js';
 import type { RollingResult } from '../calc/rolling/types.js';
 import { checkJournal, type JournalResult } from '../calc/journal/index.js';
 import {
@@ -81,8 +82,14 @@ export interface AdviceResult {
   warnings: Remark[];
   /** How ties were broken, when there was one. */
   tieBreak: Finding | null;
-  /** What would make an option feasible, when none is. */
-  toMakeFeasible: Finding[];
+  /**
+   * For each option not feasible, verified single changes to the case file that make it
+   * feasible. advise() leaves it empty: it needs the case document, and is filled by
+   * withToMakeFeasible (to-feasible.ts) for the CLI, the note and the library.
+   */
+  toMakeFeasible: FeasibleChange[];
+  /** An `advice.no-single-change` finding for each option not feasible that no single change found makes feasible. */
+  noSingleChange: Finding[];
   /** Every rule evaluated, fired or not, with the fact values it saw. */
   rules: RuleTrace[];
 }
@@ -135,8 +142,9 @@ function lazyChecks(c: CaseSI, opts: AdviseOptions) {
   const sheet = kernel.sheet === undefined ? {} : { sheet: kernel.sheet };
   const profile = kernel.pressureProfile === undefined ? {} : { pressureProfile: kernel.pressureProfile };
   const bushing = () => (cache.bushing ??= checkBushing(c, sheet));
-  const rolling = () => (cache.rolling ??= checkRolling(c, sheet));
   const journal = () => (cache.journal ??= checkJournal(c, { ...sheet, ...profile }));
+  // One oil per case: with an oil supply and no oil named, the rolling bearing takes the journal's grade.
+  const rolling = () => (cache.rolling ??= checkRolling(c, { ...sheet, ...journalOil(c, () => journal().oilGrade) }));
   let figs: Figures | undefined;
   const figures = (): Figures =>
     (figs ??= compareFigures({
@@ -292,7 +300,8 @@ export async function advise(
     assumed: [...caseAssumed, ...checks.bushing.assumed, ...checks.rolling.assumed, ...checks.journal.assumed],
     warnings,
     tieBreak,
-    toMakeFeasible: recommendation === null ? suggestions(c, checks, fig) : [],
+    toMakeFeasible: [],
+    noSingleChange: [],
     rules: traces,
   };
 }
@@ -309,39 +318,6 @@ function flatten(cond: Condition | undefined): ConditionTrace[] {
   if (seen.factResult !== undefined) t.factResult = seen.factResult;
   if (seen.result !== undefined) t.result = seen.result;
   return [t];
-}
-
-/** What would make an option feasible, from the failing checks (the designer's next move), as findings. */
-function suggestions(c: CaseSI, checks: AdviceResult['checks'], fig: Figures): Finding[] {
-  const out: Finding[] = [];
-  const b = checks.bushing.materials.filter((m) => m.checks.find((k) => k.id === 'velocity')?.pass);
-  if (b.length) {
-    const m = [...b].sort((x, y) => x.minLength - y.minLength)[0]!;
-    out.push(
-      finding('bushing.to-feasible-length', {
-        material: m.name,
-        minLength: m.minLength,
-        maxLength: c.space.maxLength,
-        lifeHours: m.lifeHours,
-        targetHours: c.life.hours,
-      }),
-    );
-  } else {
-    out.push(finding('bushing.to-feasible-speed'));
-  }
-  if (!fig.rolling.feasible) {
-    const failing = fig.rolling.failed.map((k) => k.label.toLowerCase()).join(', ');
-    const first = fig.rolling.why[0];
-    out.push(finding('rolling.to-feasible', { failing, why: first === undefined ? null : first }));
-  }
-  if (c.lubrication.supply === 'none' || c.lubrication.supply === 'grease') {
-    out.push(finding('journal.to-feasible-oil'));
-  } else if (!fig.journal.feasible) {
-    out.push(
-      finding('journal.to-feasible-film', { failing: fig.journal.failed.map((k) => k.label.toLowerCase()).join(', ') }),
-    );
-  }
-  return out;
 }
 
 const round2 = (x: number) => Math.round(x * 100) / 100;

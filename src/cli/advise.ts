@@ -40,11 +40,18 @@ export async function runAdvise(
   if (opts.out !== undefined && opts.out.trim() === '')
     throw new UsageError('--out: got an empty file name; expected a file path');
   const loaded = loadCaseFile(file);
-  const { advise } = await import('../advise/engine.js');
+  const [{ advise }, { withToMakeFeasible }, { loadRules }] = await Promise.all([
+    import('../advise/engine.js'),
+    import('../advise/to-feasible.js'),
+    import('../advise/load-rules.js'),
+  ]);
+  const rules = loadRules();
   // The pressure profile (one more Reynolds solve) is drawn in the note and kept in JSON; text has no use for it.
-  const a = await advise(loaded.case, loaded.assumed, undefined, {
+  const advice = await advise(loaded.case, loaded.assumed, rules, {
     kernel: format === 'text' ? { pressureProfile: false } : {},
   });
+  // What would make each failing option feasible, verified on the case file as the user wrote it.
+  const a = await withToMakeFeasible(advice, loaded, rules);
   if (note) {
     const { renderNote } = await import('../report/note/index.js');
     const { journalSpeedCurves } = await import('../explore/journal-curves.js');

@@ -1,4 +1,5 @@
 import { describe } from './findings/index.js';
+import { whatItWouldTake } from './findings/advice.js';
 import type { AdviceResult, RankedOption } from '../advise/engine.js';
 import type { SheetLine } from '../core/check.js';
 import { fmt, type UnitSystem } from './units.js';
@@ -30,6 +31,9 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
       ? paint.bold(`Recommended: ${NAMES[a.recommendation].toLowerCase()} — ${designLine(a.ranking[0]!, units)}.`)
       : paint.bold('No option is feasible for this duty as given.'),
   );
+  const take = whatItWouldTake(a).map((f) => `  - ${describe(f)}.`);
+  if (!a.recommendation && take.length)
+    out.push('What it would take (each change alone, verified by re-running):', ...take);
   if (a.tieBreak) out.push(`Tie: ${describe(a.tieBreak)}.`);
   if (a.recommendation === 'rolling' && a.checks.rolling.choice)
     out.push(`Why this kind: ${describe(a.checks.rolling.choice)}.`);
@@ -65,10 +69,8 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
       if (r.failed.length) out.push(checksTable(r.failed, units));
     }
   }
-  if (a.toMakeFeasible.length) {
-    out.push('\nWhat would make an option feasible:');
-    for (const s of a.toMakeFeasible) out.push(`  - ${describe(s)}`);
-  }
+  if (a.recommendation && take.length)
+    out.push('\nWhat it would take (each change alone, verified by re-running):', ...take);
   out.push(
     '\nScores are the sum of rule points (rules/*.json, common practice), weighted by the case priorities (priority/3); the checks decide feasibility.',
   );

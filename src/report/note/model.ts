@@ -1,5 +1,6 @@
 import { OPTIONS } from '../../core/options.js';
 import { describe, describeAssumption, describeWarning } from '../findings/index.js';
+import { whatItWouldTake } from '../findings/advice.js';
 import type { AdviceResult } from '../../advise/engine.js';
 import type { SheetLine } from '../../core/check.js';
 import type { LoadedCase } from '../../case/load.js';
@@ -172,9 +173,26 @@ function assumptionsSection(advice: AdviceResult): Section {
   };
 }
 
+/** What it would take: each failing option's verified single changes, or that none was found. */
+function takeBlocks(advice: AdviceResult): Block[] {
+  const take = whatItWouldTake(advice);
+  if (!take.length) return [];
+  return [
+    { kind: 'sub', title: 'What it would take' },
+    {
+      kind: 'p',
+      text: 'Each change alone, set in the case file, makes the option feasible: verified by re-running the advice on the changed case.',
+    },
+    { kind: 'list', items: take.map(describe) },
+  ];
+}
+
 /** The recommendation section: the summary, the ranking table, what would make an option feasible, warnings. */
 function recommendationSection(advice: AdviceResult, units: UnitSystem, summary: string): Section {
   const blocks: Block[] = [{ kind: 'p', text: summary, strong: true }];
+  const take = takeBlocks(advice);
+  // With no option feasible, what it would take comes first.
+  if (!advice.recommendation && take.length) blocks.push(...take);
   if (advice.tieBreak) blocks.push({ kind: 'p', text: `Tie: ${advice.tieBreak}.` });
   blocks.push({
     kind: 'table',
@@ -195,11 +213,7 @@ function recommendationSection(advice: AdviceResult, units: UnitSystem, summary:
     kind: 'p',
     text: 'Feasibility is decided by the checks; among feasible options the score, the sum of rule points (rules/*.json, common practice) weighted by the case priorities (priority / 3), decides the rank.',
   });
-  if (advice.toMakeFeasible.length)
-    blocks.push(
-      { kind: 'sub', title: 'What would make an option feasible' },
-      { kind: 'list', items: advice.toMakeFeasible.map(describe) },
-    );
+  if (advice.recommendation && take.length) blocks.push(...take);
   if (advice.warnings.length)
     blocks.push({ kind: 'sub', title: 'Warnings' }, { kind: 'list', items: advice.warnings.map(describeWarning) });
   return { id: 'recommendation', title: 'Recommendation and ranking', blocks };
