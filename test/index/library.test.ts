@@ -17,6 +17,7 @@ import {
   renderNote,
 } from '../../src/index.js';
 import { parseCaseText } from '../../src/case/load.js';
+import { caseFileOf } from '../../src/case/base-units.js';
 import { ROOT, runCli } from '../helpers/cli.js';
 
 const EXAMPLES = [
@@ -45,8 +46,8 @@ describe('advise(parseCase(text)) is what `advise FILE --format json` prints', (
       const c = parseCase(readFileSync(file, 'utf8'), file);
       const printed = cliJson(file) as { case: unknown };
       expect(await advise(c)).toEqual(printed);
-      // The case object itself is the CLI's `case`, nothing added to it.
-      expect(c).toEqual(printed.case);
+      // The CLI's `case` is the case object written as a case file in base units, nothing added to it.
+      expect(caseFileOf(c)).toEqual(printed.case);
     });
   }
 
