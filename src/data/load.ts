@@ -94,6 +94,15 @@ const lubricantsSchema = z.object({
   viscosityIndex: z.object({ value: z.number(), source: z.string().min(1) }),
   /** The grades the journal design sweep tries when a case names none (a subset of `grades`). */
   sweepGrades: z.object({ grades: z.array(positive).min(1), source: z.string().min(1) }),
+  /** The oil-bath heat balance (src/calc/sump.ts): housing proportions and heat transfer. */
+  sump: z.object({
+    diameterFactor: z.object({ value: positive, source: z.string().min(1) }),
+    lengthFactor: z.object({ value: positive, source: z.string().min(1) }),
+    dissipatingShare: z.object({ value: positive.max(1), source: z.string().min(1) }),
+    heatTransfer: z.object({ value: positive, unit: z.string(), source: z.string().min(1) }),
+    bearingRise: z.object({ value: z.number().nonnegative(), unit: z.string(), source: z.string().min(1) }),
+    maxRise: z.object({ value: positive, unit: z.string(), source: z.string().min(1) }),
+  }),
   grades: z.array(oilGradeSchema).min(1),
 });
 export type LubricantTable = z.infer<typeof lubricantsSchema>;

@@ -4,7 +4,8 @@ import { journalCriteria } from '../../data/journal-criteria.js';
 import { shippedJournalTables } from '../../data/journal-tables.js';
 import { dataDir } from '../../data/load.js';
 import { designSpace, journalDuty } from './candidates.js';
-import { allowableFilm, designChecks, evaluateDesign, sweepDesigns } from './design.js';
+import { sweepWithInlet } from './bath.js';
+import { allowableFilm, designChecks, evaluateDesign } from './design.js';
 import { journalAssumptions, journalWarnings } from './findings.js';
 import { pressureProfile } from './profile.js';
 import { assertFinite, meanPowerLoss, pointSummaries } from './result.js';
@@ -57,16 +58,18 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
   const D = c.shaft.diameter;
   if (!(D > 0 && Number.isFinite(D))) throw new Error(`journal: shaft diameter must be positive, got ${D} m`);
   const supply = c.lubrication.supply;
-  const tIn = c.lubrication.inletTemperature;
   const duty = journalDuty(c);
   const space = designSpace(c, crit, duty);
 
-  const { chosen, rows } = sweepDesigns(D, space.candidates, space.points, tIn, duty.startLoad, crit);
+  // The inlet: the case's with oil feed, the sump balance's bath temperature with an oil bath (bath.ts).
+  const swept = sweepWithInlet(c, D, space.candidates, space.points, duty.startLoad, crit, !space.noLubricant);
+  const { chosen, rows } = swept;
+  const tIn = swept.inletTemperature;
   const designLoad = space.noLubricant
     ? undefined
     : evaluateDesign(D, chosen.candidate, space.points, tIn, duty.startLoad, crit, crit.designLoadFactor);
   const checks = [...designChecks(chosen, designLoad, supply, crit, tIn), ...serviceChecks(c)];
-  const findingInput = { case: c, crit, duty, space, chosen, checks };
+  const findingInput = { case: c, crit, duty, space, chosen, checks, bath: swept.bath };
 
   const res = chosen.governing.result;
   const L = chosen.candidate.length;
@@ -104,7 +107,10 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     sweep: rows,
     assumed: journalAssumptions(findingInput),
     warnings: journalWarnings(findingInput),
-    sheet: opts.sheet === false ? [] : buildSheet(c, chosen, crit, supply),
+    sheet:
+      opts.sheet === false
+        ? []
+        : buildSheet({ ...c, lubrication: { ...c.lubrication, inletTemperature: tIn } }, chosen, crit, supply),
     pressureProfile: opts.pressureProfile === false ? [] : pressureProfile(chosen.governing, L / D, D / 2, cl),
     governingPoint: chosen.governingIndex,
     points,

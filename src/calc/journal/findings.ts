@@ -7,6 +7,7 @@ import { REPRESENTATIVE_CLEARANCE_RATIO, type DesignSpace, type JournalDuty } fr
 import type { DesignEvaluation } from './design.js';
 import { THERMAL_CEILING_C, THERMAL_TOLERANCE_K } from './operating-point.js';
 import { PSOR_TOLERANCE } from './reynolds.js';
+import { bathValues, type BathTemperature } from '../sump.js';
 import { DEFAULT_MESH, lastEccentricity, tableFor } from './table.js';
 
 /**
@@ -30,6 +31,8 @@ export interface FindingInput {
   space: DesignSpace;
   chosen: DesignEvaluation;
   checks: readonly CheckRecord[];
+  /** The oil-bath heat balance that set the inlet temperature (src/calc/sump.ts), when there is one. */
+  bath?: BathTemperature | null;
 }
 
 /** The warnings, in report order: motion and supply first, then what the figures show. */
@@ -96,7 +99,7 @@ function figureWarnings({ case: c, crit, chosen, checks }: FindingInput): Findin
 }
 
 /** The assumptions, in report order: the solver, the load, the lubricant, the design, the inlet. */
-export function journalAssumptions({ case: c, crit, duty, space }: FindingInput): AssumedFinding[] {
+export function journalAssumptions({ case: c, crit, duty, space, bath }: FindingInput): AssumedFinding[] {
   const assumed: AssumedFinding[] = [
     assumedFinding('journal.solver', 'journal.solver', {
       nTheta: DEFAULT_MESH.nTheta,
@@ -124,7 +127,9 @@ export function journalAssumptions({ case: c, crit, duty, space }: FindingInput)
     );
   }
   assumed.push(...designAssumptions(c, crit, space));
-  if (supply === 'oil-bath')
+  if (supply === 'oil-bath' && bath)
+    assumed.push(assumedFinding('lubrication.inletTemperature', 'journal.bath-temperature', bathValues(bath)));
+  else if (supply === 'oil-bath')
     assumed.push(
       assumedFinding('lubrication.inletTemperature', 'journal.bath-inlet', {
         inletTemperature: c.lubrication.inletTemperature,

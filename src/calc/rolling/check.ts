@@ -8,7 +8,8 @@ import type { EvalContext } from './context.js';
 import { evaluate } from './evaluate.js';
 import { newNotes, type Notes } from './findings.js';
 import { lifeExponent, requiredDynamicRating, type RollingType } from './life.js';
-import { bearingLubrication } from './lubrication.js';
+import { rollingBath } from './bath.js';
+import { bearingLubrication, type OilSystem } from './lubrication.js';
 import { bestCandidate, choiceFinding, equivalentLoadBound, kindFacts, leadOfEachKind } from './select.js';
 import { rollingSheet } from './sheet.js';
 import type { RollingResult } from './types.js';
@@ -18,11 +19,11 @@ import type { RollingResult } from './types.js';
  * lubricant), its steps' assumptions and cautions added to `notes` in the order they run; and
  * the duty's time-mean speed, rev/s.
  */
-export function evalContext(c: CaseSI, notes: Notes): { ctx: EvalContext; meanSpeed: number } {
+export function evalContext(c: CaseSI, notes: Notes, system: OilSystem = {}): { ctx: EvalContext; meanSpeed: number } {
   const f = rollingFactors();
   const duty = dutyPoints(c, notes);
   const shock = shockFactors(c, f, notes);
-  const lubrication = bearingLubrication(c, notes);
+  const lubrication = bearingLubrication(c, notes, system);
   const life = lifeFactors(c, f, notes);
   const ctx: EvalContext = {
     c,
@@ -65,9 +66,24 @@ export function evalContext(c: CaseSI, notes: Notes): { ctx: EvalContext; meanSp
  * lubrication.ts, candidates.ts, evaluate.ts with checks.ts, select.ts, sheet.ts; findings.ts
  * collects what each step assumed and cautions, in the order the steps run.
  */
-export function checkRolling(c: CaseSI, opts: { sheet?: boolean } = {}): RollingResult {
+export function checkRolling(
+  c: CaseSI,
+  opts: { sheet?: boolean; sharedGrade?: OilSystem['sharedGrade'] } = {},
+): RollingResult {
   const notes = newNotes();
-  const { ctx, meanSpeed } = evalContext(c, notes);
+  // One oil system: the journal's grade where it chose one, the bath of the sump balance (bath.ts).
+  const system: OilSystem = opts.sharedGrade ? { sharedGrade: opts.sharedGrade } : {};
+  const specs0 = candidateSpecs(c, newNotes());
+  const bath = rollingBath(
+    c,
+    (t, only) => {
+      const at = evalContext(c, newNotes(), { ...system, bath: { temperature: t, values: {} } }).ctx;
+      return specs0.filter((s) => only === undefined || s.id === only).map((s) => evaluate(s, at, newNotes()));
+    },
+    (cands) => bestCandidate(cands, newNotes()) ?? cands[0] ?? null,
+  );
+  if (bath) system.bath = bath;
+  const { ctx, meanSpeed } = evalContext(c, notes, system);
   const specs = candidateSpecs(c, notes);
   const candidates = specs.map((s) => evaluate(s, ctx, notes));
   const best = bestCandidate(candidates, notes);

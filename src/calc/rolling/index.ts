@@ -5,4 +5,5 @@
  * modules by whoever needs them.
  */
 export { checkRolling } from './check.js';
+export { journalOil } from './lubrication.js';
 export type { RollingCandidate, RollingResult } from './types.js';

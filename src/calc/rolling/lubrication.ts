@@ -2,6 +2,7 @@ import type { CaseSI } from '../../case/types.js';
 import { assumedFinding, finding } from '../../core/finding.js';
 import { lubricants, oilGrade } from '../../data/load.js';
 import { kinematicViscosity } from '../lubricant.js';
+import { sumpModel } from '../sump.js';
 import { finiteOr } from './conditions.js';
 import type { Notes } from './findings.js';
 import type { BearingSupply } from './kinds.js';
@@ -14,6 +15,9 @@ import type { BearingSupply } from './kinds.js';
  * [1] Viscosity–temperature law of the ISO VG grades: src/calc/lubricant.ts (ASTM D341 /
  *     Walther), grades in data/lubricants.json.
  * [2] Operating temperature from ambient or inlet plus a fixed rise: common practice.
+ * [3] Oil bath: the bath temperature of the one sump heat balance (src/calc/sump.ts) for the
+ *     bearing's own friction loss, plus a small rise of the bearing over the bath (common
+ *     practice; data/lubricants.json → sump.bearingRise).
  */
 
 export type { BearingSupply } from './kinds.js';
@@ -37,26 +41,53 @@ const FALLBACK_BASE_TEMPERATURE = 20;
 /** Density converting a fixed dynamic viscosity to kinematic, kg/m³: typical mineral oil (from memory; data/lubricants.json spans 865–900). */
 const OIL_DENSITY = 870;
 
+/** Where the oil grade and the bath temperature of a rolling check come from, besides the case. */
+export interface OilSystem {
+  /** The grade of the case's one oil system when the journal's sweep chose it (the case names none). */
+  sharedGrade?: { grade: number; from: 'journal' };
+  /** Oil bath: the bath temperature of the sump balance (°C) and its figures for the finding. */
+  bath?: { temperature: number; values: Record<string, number | string | boolean> };
+}
+
 /**
- * The supply, operating temperature T = T_base + ΔT and viscosity ν(T) of the case [1, 2]:
- * T_base the oil inlet temperature with oil feed (ΔT = 10 K), else the ambient (ΔT = 20 K),
- * °C; ν in m²/s. With no supply the bearing is read as sealed and greased for life.
+ * The supply, operating temperature T = T_base + ΔT and viscosity ν(T) of the case [1, 2, 3]:
+ * T_base the oil inlet temperature with oil feed (ΔT = 10 K), the bath temperature of the sump
+ * balance with an oil bath when `system.bath` gives it (ΔT = sump.bearingRise), else the
+ * ambient (ΔT = 20 K), °C; ν in m²/s. With no supply the bearing is read as sealed and greased
+ * for life. `system.sharedGrade` is the grade of the case's one oil system (no oil named).
  */
-export function bearingLubrication(c: CaseSI, notes: Notes): Lubrication {
+export function bearingLubrication(c: CaseSI, notes: Notes, system: OilSystem = {}): Lubrication {
   const sealed = c.lubrication.supply === 'none';
   const supply: BearingSupply = c.lubrication.supply === 'none' ? 'grease' : c.lubrication.supply;
   if (sealed) notes.assume(assumedFinding('lubrication.supply', 'rolling.sealed-for-life'));
-  const rise = supply === 'oil-feed' ? RISE_OVER_INLET : RISE_OVER_AMBIENT;
-  const base = supply === 'oil-feed' ? c.lubrication.inletTemperature : c.environment.ambient;
-  const temperature = finiteOr(base, FALLBACK_BASE_TEMPERATURE) + rise;
-  notes.assume(
-    assumedFinding('rolling.temperature', 'rolling.operating-temperature', {
-      temperature,
-      rise,
-      over: supply === 'oil-feed' ? 'inlet' : 'ambient',
-    }),
-  );
-  return { sealed, supply, temperature, viscosity: caseViscosity(c, supply, temperature, notes) };
+  const bath = supply === 'oil-bath' ? system.bath : undefined;
+  let temperature: number;
+  if (bath) {
+    const rise = sumpModel().bearingRise;
+    temperature = bath.temperature + rise;
+    notes.assume(
+      assumedFinding('rolling.temperature', 'rolling.bath-temperature', {
+        ...bath.values,
+        bearingTemperature: temperature,
+        rise,
+      }),
+    );
+  } else {
+    const rise = supply === 'oil-feed' ? RISE_OVER_INLET : RISE_OVER_AMBIENT;
+    const base = supply === 'oil-feed' ? c.lubrication.inletTemperature : c.environment.ambient;
+    temperature = finiteOr(base, FALLBACK_BASE_TEMPERATURE) + rise;
+    notes.assume(
+      assumedFinding('rolling.temperature', 'rolling.operating-temperature', {
+        temperature,
+        rise,
+        over: supply === 'oil-feed' ? 'inlet' : 'ambient',
+      }),
+    );
+  }
+  const shared = supply !== 'grease' && c.lubrication.oilGrade === undefined ? system.sharedGrade : undefined;
+  const cs: CaseSI = shared ? { ...c, lubrication: { ...c.lubrication, oilGrade: shared.grade } } : c;
+  if (shared) notes.assume(assumedFinding('lubrication.oilGrade', 'rolling.same-oil', { grade: shared.grade }));
+  return { sealed, supply, temperature, viscosity: caseViscosity(cs, supply, temperature, notes) };
 }
 
 /**
@@ -97,4 +128,21 @@ function caseViscosity(c: CaseSI, supply: BearingSupply, tC: number, notes: Note
     oil = oilGrade(lub.greaseBaseOil.grade) ?? lub.grades[0]!;
   }
   return kinematicViscosity(oil, tC) * 1e-6;
+}
+
+/**
+ * One oil per case: when the case supplies oil (bath or feed) but names no oil and no viscosity,
+ * the journal's design sweep picks the grade, and a rolling bearing on the same oil system runs
+ * on that grade too. Returns the option for checkRolling: the journal's grade (asked for only
+ * in that case, so the journal runs first exactly when its grade is needed), else nothing.
+ */
+export function journalOil(
+  c: CaseSI,
+  journalGrade: () => number | null,
+): { sharedGrade?: { grade: number; from: 'journal' } } {
+  const lub = c.lubrication;
+  if (lub.oilGrade !== undefined || lub.viscosity !== undefined) return {};
+  if (lub.supply !== 'oil-bath' && lub.supply !== 'oil-feed') return {};
+  const grade = journalGrade();
+  return grade === null ? {} : { sharedGrade: { grade, from: 'journal' } };
 }

@@ -169,6 +169,14 @@ export const rollingWording: KernelWording = {
           ? `operating temperature of the bearing taken as oil inlet + ${raw(v['rise'])} K (common practice for circulating oil)`
           : `operating temperature of the bearing taken as ambient + ${raw(v['rise'])} K (common practice for a grease- or bath-lubricated bearing in a housing)`,
     }),
+    'rolling.bath-temperature': (v) => ({
+      value: `${fig(v['bearingTemperature'])} °C`,
+      reason: `operating temperature of the bearing: the oil bath at ${fig(v['temperature'])} °C, from one sump heat balance T_bath = T_amb + P/(h·A) = ${fig(v['ambient'])} °C + ${fig(v['loss'])} W / (${fig(v['heatTransfer'])} W/(m²·K) · ${fig(v['area'])} m²) with this bearing's own friction loss, plus ${raw(v['rise'])} K over the bath (common practice); housing taken as a cylinder ${raw(v['diameterFactor'])} × the radial room across and ${raw(v['lengthFactor'])} × the axial room long, ${fig(Number(v['dissipatingShare']) * 100)} % of its surface giving heat to still air (our assumption); h: ${raw(v['source'])}${v['runaway'] === true ? '. The loss outruns the housing: no balance below this bound, cooling is needed' : ''}`,
+    }),
+    'rolling.same-oil': (v) => ({
+      value: `ISO VG ${raw(v['grade'])}`,
+      reason: `the same oil as the journal bearing, VG ${raw(v['grade'])}: one oil system per case, and the case names no oil, so the grade the journal's design sweep chose is taken`,
+    }),
     'rolling.fixed-viscosity': (v) => ({
       value: `ν = ${fig(Number(v['kinematicViscosity']) * 1e6)} mm²/s`,
       reason: `the fixed dynamic viscosity ${raw(v['dynamicViscosity'])} Pa·s is taken at the operating temperature and converted with a density of ${raw(v['density'])} kg/m³ (typical mineral oil, from memory)`,

@@ -1,0 +1,99 @@
+import type { CaseSI } from '../../case/types.js';
+import type { JournalCriteria } from '../../data/journal-criteria.js';
+import { THERMAL_CEILING_C } from './operating-point.js';
+import { bathTemperature, housingArea, sumpModel, type BathTemperature } from '../sump.js';
+import {
+  evaluateDesign,
+  sweepDesigns,
+  type Candidate,
+  type DesignEvaluation,
+  type DutyPoint,
+  type SweepRow,
+} from './design.js';
+
+/**
+ * The journal's inlet temperature and design sweep. With oil feed the inlet is the case's (or
+ * the default); with an oil bath the inlet is the bath temperature of the one sump heat balance
+ * (src/calc/sump.ts) for the chosen design's own friction loss:
+ *
+ *   T_in = T_bath,  T_bath = T_amb + P̄(T_bath)/(h·A),  P̄ = Σ share_i·P_i (W), the time mean
+ *   of the film's power loss over the operating points with the inlet at T_bath.
+ *
+ * The design and the bath depend on each other: sweep at a first bath temperature (the larger
+ * of the ambient and the case's inlet temperature), solve the bath for the design chosen,
+ * sweep again at that bath, and repeat until the same design is chosen
+ * (at most MAX_ROUNDS rounds; the last design is then shown at its own bath temperature).
+ * Each design is so shown at a self-consistent bath temperature of its own loss.
+ */
+
+/** Rounds of sweep and bath balance before the last design is taken as it stands. */
+const MAX_ROUNDS = 4;
+
+export interface JournalSweep {
+  chosen: DesignEvaluation;
+  rows: SweepRow[];
+  /** Inlet temperature the chosen design was evaluated with, °C. */
+  inletTemperature: number;
+  /** The bath balance (oil bath only), else null. */
+  bath: BathTemperature | null;
+}
+
+/** Time-mean power loss of a design over its points, W. */
+function meanLoss(e: DesignEvaluation): number {
+  const total = e.points.reduce((s, p) => s + p.share, 0);
+  const sum = e.points.reduce((s, p) => s + p.share * (p.film ? p.result.powerLoss : 0), 0);
+  return total > 0 ? sum / total : 0;
+}
+
+/** Same geometry and oil (the sweep's identity of a candidate). */
+function sameCandidate(a: Candidate, b: Candidate): boolean {
+  return a.length === b.length && a.radialClearance === b.radialClearance && a.oil === b.oil;
+}
+
+/**
+ * The sweep of `candidates` over `points` at the case's inlet temperature, or, with an oil bath
+ * and a film, at the bath temperature of the chosen design (see the module comment). SI: m, N,
+ * rev/s; temperatures °C.
+ */
+export function sweepWithInlet(
+  c: CaseSI,
+  diameter: number,
+  candidates: readonly Candidate[],
+  points: readonly DutyPoint[],
+  startLoad: number,
+  crit: JournalCriteria,
+  film: boolean,
+): JournalSweep {
+  const tCase = c.lubrication.inletTemperature;
+  if (c.lubrication.supply !== 'oil-bath' || !film) {
+    const { chosen, rows } = sweepDesigns(diameter, candidates, points, tCase, startLoad, crit);
+    return { chosen, rows, inletTemperature: tCase, bath: null };
+  }
+  const model = sumpModel();
+  const area = housingArea(c.space.maxOuterDiameter, c.space.maxLength, model);
+  const ambient = Number.isFinite(c.environment.ambient) ? c.environment.ambient : 20;
+  // The search stays below the ceiling of the film's thermal balance (operating-point.ts).
+  const search = {
+    heatTransfer: model.heatTransfer,
+    maxRise: Math.min(model.maxRise, THERMAL_CEILING_C - 1 - ambient),
+  };
+  const balance = (cand: Candidate) =>
+    bathTemperature(ambient, area, search, (t) => meanLoss(evaluateDesign(diameter, cand, points, t, startLoad, crit)));
+  let tBath = Math.max(ambient, tCase);
+  let sweep = sweepDesigns(diameter, candidates, points, tBath, startLoad, crit);
+  let bath = balance(sweep.chosen.candidate);
+  for (let round = 1; round < MAX_ROUNDS; round++) {
+    tBath = bath.temperature;
+    const next = sweepDesigns(diameter, candidates, points, tBath, startLoad, crit);
+    const same = sameCandidate(next.chosen.candidate, sweep.chosen.candidate);
+    sweep = next;
+    if (same) break;
+    bath = balance(sweep.chosen.candidate);
+  }
+  // The chosen design at its own bath temperature (equal to the sweep's when the rounds settled).
+  const chosen =
+    bath.temperature === tBath
+      ? sweep.chosen
+      : evaluateDesign(diameter, sweep.chosen.candidate, points, bath.temperature, startLoad, crit);
+  return { chosen, rows: sweep.rows, inletTemperature: bath.temperature, bath };
+}
