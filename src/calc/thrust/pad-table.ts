@@ -77,6 +77,20 @@ function hermite(x: Float64Array, s: { y: Float64Array; d: Float64Array }, k: nu
   );
 }
 
+/**
+ * W* alone at taper K (> 0), as padAt(t, K).load: the inner loop of load matching reads only this.
+ */
+export function padLoadAt(t: PadTable, taper: number): number {
+  const x = t.lnK;
+  const last = x.length - 1;
+  const v = Math.log(taper);
+  if (v <= x[0]!) return (t.rows[0]!.load * taper) / t.rows[0]!.taper;
+  if (v >= x[last]!) return t.rows[last]!.load;
+  let k = 0;
+  while (k < last - 1 && x[k + 1]! <= v) k++;
+  return Math.exp(hermite(x, t.series[0]!, k, v));
+}
+
 /** The pad's state at taper K (> 0). */
 export function padAt(t: PadTable, taper: number): PadPoint {
   if (!(taper > 0)) throw new Error(`thrust pad: taper K must be positive, got ${taper}`);
