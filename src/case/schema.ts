@@ -160,8 +160,6 @@ const oilSchema = z.unknown().transform((v, ctx) => {
 });
 
 export const caseFileSchema = mapping({
-  // Bare numbers in SI base units on purpose (files written by programs); load.ts reads it first.
-  units: choice(['base'] as const).optional(),
   title: text('a title for the case'),
   shaft: mapping({
     diameter: quantity('length', 'positive', { max: 5, min: 1e-3, say: 'a shaft diameter from 1 mm to 5 m' }),
@@ -256,6 +254,8 @@ export const caseFileSchema = mapping({
     radialClearance: quantity('length', 'positive', { max: 0.01, say: 'a radial clearance up to 10 mm' }).optional(),
     clearanceRatio: plain('a clearance ratio c/r between 0.0001 and 0.01', 0.0001, 0.01).optional(),
   }).optional(),
+  // Bare numbers in SI base units on purpose (files written by programs); load.ts reads it first.
+  units: choice(['base'] as const).optional(),
 });
 
 export type CaseFile = z.output<typeof caseFileSchema>;
