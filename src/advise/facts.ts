@@ -91,7 +91,7 @@ export interface OptionFigures {
  * "feasible" options), so a rule that claims "its friction is the lowest" or "it is the
  * smallest" can condition on this case's numbers. Ratios are this option's figure over the
  * best figure of the feasible options (the option itself counted when it is feasible);
- * null where this option has no such figure or no feasible option has one.
+ * null where this option has no such figure, no feasible option has one, or the best is 0.
  */
 export interface OptionComparison {
   /** Options (of three) that pass their checks. */
@@ -232,7 +232,8 @@ function ratioToBest(figs: Figures, option: OptionName, key: Measure, best: 'min
     .filter((x): x is number => typeof x === 'number' && Number.isFinite(x));
   if (own === null || !Number.isFinite(own) || !pool.length) return null;
   const ref = best === 'min' ? Math.min(...pool) : Math.max(...pool);
-  if (ref === 0) return own === 0 ? 1 : Number.POSITIVE_INFINITY;
+  // No ratio to a best of 0 (a figure that is 0 W, say): 1 when this is 0 too, else null.
+  if (ref === 0) return own === 0 ? 1 : null;
   return own / ref;
 }
 

@@ -5,6 +5,7 @@ import type { SheetLine } from '../core/check.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 import { checksTable, heading, paint, shorten } from './text.js';
+import { firstExclusion, scoreCell } from './ranking.js';
 
 const NAMES = { bushing: 'Plain bushing', rolling: 'Rolling bearing', journal: 'Journal bearing' } as const;
 
@@ -37,18 +38,19 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
   if (a.tieBreak) out.push(`Tie: ${describe(a.tieBreak)}.`);
   if (a.recommendation === 'rolling' && a.checks.rolling.choice)
     out.push(`Why this kind: ${describe(a.checks.rolling.choice)}.`);
+  const anyOut = a.ranking.some((r) => !r.feasible);
   out.push(
     table(
-      ['rank', 'option', 'feasible', 'score', 'life', 'friction power', 'length', 'OD'],
+      ['rank', 'option', 'score', 'life', 'friction power', 'length', 'OD', ...(anyOut ? ['excluded because'] : [])],
       a.ranking.map((r) => [
         String(r.rank),
         r.option,
-        r.feasible ? 'yes' : 'NO',
-        r.score.toFixed(2),
+        scoreCell(r),
         r.option === 'journal' ? (r.feasible ? 'full film: no wear limit' : '—') : fmt(r.figures.lifeHours, 'h', units),
         fmt(r.figures.frictionPower, 'W', units),
         fmt(r.figures.length, 'm', units),
         fmt(r.figures.outerDiameter, 'm', units),
+        ...(anyOut ? [shorten(firstExclusion(r), 64)] : []),
       ]),
     ),
   );

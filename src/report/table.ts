@@ -2,7 +2,9 @@
 export function table(head: string[], rows: string[][], indent = '  '): string {
   const widths = head.map((h, i) => Math.max(len(h), ...rows.map((r) => len(r[i] ?? ''))));
   const numeric = head.map(
-    (_, i) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+(e[-+]?\d+)?( .*)?$|^—$/.test(strip(r[i] ?? ''))),
+    // A number, "—" (none) or "excluded" (the ranking's score of an excluded option) right-aligns.
+    (_, i) =>
+      rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+(e[-+]?\d+)?( .*)?$|^—$|^excluded$/.test(strip(r[i] ?? ''))),
   );
   const line = (cells: string[]) =>
     indent +

@@ -1,6 +1,7 @@
 import { OPTIONS } from '../../core/options.js';
 import { describe, describeAssumption, describeWarning } from '../findings/index.js';
 import { whatItWouldTake } from '../findings/advice.js';
+import { firstExclusion, scoreCell } from '../ranking.js';
 import type { AdviceResult } from '../../advise/engine.js';
 import type { SheetLine } from '../../core/check.js';
 import type { LoadedCase } from '../../case/load.js';
@@ -193,20 +194,30 @@ function recommendationSection(advice: AdviceResult, units: UnitSystem, summary:
   const take = takeBlocks(advice);
   // With no option feasible, what it would take comes first.
   if (!advice.recommendation && take.length) blocks.push(...take);
-  if (advice.tieBreak) blocks.push({ kind: 'p', text: `Tie: ${advice.tieBreak}.` });
+  if (advice.tieBreak) blocks.push({ kind: 'p', text: `Tie: ${describe(advice.tieBreak)}.` });
+  const anyOut = advice.ranking.some((r) => !r.feasible);
   blocks.push({
     kind: 'table',
-    head: ['rank', 'option', 'feasible', 'score', 'life', 'friction power', 'length', 'outside diameter'],
-    numeric: [0, 3, 4, 5, 6, 7],
+    head: [
+      'rank',
+      'option',
+      'score',
+      'life',
+      'friction power',
+      'length',
+      'outside diameter',
+      ...(anyOut ? ['excluded because'] : []),
+    ],
+    numeric: [0, 2, 3, 4, 5, 6],
     rows: advice.ranking.map((r) => [
       String(r.rank),
       OPTION_NAMES[r.option],
-      r.feasible ? { text: 'yes', mark: 'pass' } : { text: 'NO', mark: 'fail' },
-      r.score.toFixed(2),
+      r.feasible ? scoreCell(r) : { text: scoreCell(r), mark: 'fail' },
       r.option === 'journal' ? (r.feasible ? 'full film: no wear life' : '—') : fmt(r.figures.lifeHours, 'h', units),
       fmt(r.figures.frictionPower, 'W', units),
       fmt(r.figures.length, 'm', units),
       fmt(r.figures.outerDiameter, 'm', units),
+      ...(anyOut ? [firstExclusion(r)] : []),
     ]),
   });
   blocks.push({
