@@ -11,6 +11,8 @@ import { pressureProfile } from './profile.js';
 import { assertFinite, meanPowerLoss, pointSummaries } from './result.js';
 import { serviceChecks } from './service-checks.js';
 import { buildSheet } from './sheet.js';
+import { journalRoomCase, journalThrust, thrustFinding } from './thrust.js';
+import { thrustSheet } from './thrust-sheet.js';
 import { clearTableCache, seedTables } from './table.js';
 import type { JournalOptions, JournalResult } from './types.js';
 
@@ -59,7 +61,8 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
   if (!(D > 0 && Number.isFinite(D))) throw new Error(`journal: shaft diameter must be positive, got ${D} m`);
   const supply = c.lubrication.supply;
   const duty = journalDuty(c);
-  const space = designSpace(c, crit, duty);
+  // The thrust collar or washer takes its axial room beside the journal (thrust.ts).
+  const space = designSpace(journalRoomCase(c), crit, duty);
 
   // The inlet: the case's with oil feed, the sump balance's bath temperature with an oil bath (bath.ts).
   const swept = sweepWithInlet(c, D, space.candidates, space.points, duty.startLoad, crit, !space.noLubricant);
@@ -68,7 +71,12 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
   const designLoad = space.noLubricant
     ? undefined
     : evaluateDesign(D, chosen.candidate, space.points, tIn, duty.startLoad, crit, crit.designLoadFactor);
-  const checks = [...designChecks(chosen, designLoad, supply, crit, tIn), ...serviceChecks(c)];
+  const thrust = journalThrust(c, crit, chosen.candidate.fluid, tIn, chosen.candidate.length);
+  const checks = [
+    ...designChecks(chosen, designLoad, supply, crit, tIn),
+    ...serviceChecks(c),
+    ...(thrust?.checks ?? []),
+  ];
   const findingInput = { case: c, crit, duty, space, chosen, checks, bath: swept.bath };
 
   const res = chosen.governing.result;
@@ -105,15 +113,19 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     feasible: allLimitsPass(checks),
     checks,
     sweep: rows,
-    assumed: journalAssumptions(findingInput),
+    assumed: thrust ? [...journalAssumptions(findingInput), thrustFinding(thrust)] : journalAssumptions(findingInput),
     warnings: journalWarnings(findingInput),
     sheet:
       opts.sheet === false
         ? []
-        : buildSheet({ ...c, lubrication: { ...c.lubrication, inletTemperature: tIn } }, chosen, crit, supply),
+        : [
+            ...buildSheet({ ...c, lubrication: { ...c.lubrication, inletTemperature: tIn } }, chosen, crit, supply),
+            ...thrustSheet(thrust),
+          ],
     pressureProfile: opts.pressureProfile === false ? [] : pressureProfile(chosen.governing, L / D, D / 2, cl),
     governingPoint: chosen.governingIndex,
     points,
+    thrust,
   };
   assertFinite(out);
   return out;

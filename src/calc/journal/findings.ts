@@ -99,7 +99,7 @@ function figureWarnings({ case: c, crit, chosen, checks }: FindingInput): Findin
 }
 
 /** The assumptions, in report order: the solver, the load, the lubricant, the design, the inlet. */
-export function journalAssumptions({ case: c, crit, duty, space, bath }: FindingInput): AssumedFinding[] {
+export function journalAssumptions({ case: c, crit, space, bath }: FindingInput): AssumedFinding[] {
   const assumed: AssumedFinding[] = [
     assumedFinding('journal.solver', 'journal.solver', {
       nTheta: DEFAULT_MESH.nTheta,
@@ -108,7 +108,6 @@ export function journalAssumptions({ case: c, crit, duty, space, bath }: Finding
       thermalTolerance: THERMAL_TOLERANCE_K,
     }),
   ];
-  if (duty.axialLoad) assumed.push(assumedFinding('load.axial', 'journal.axial-not-carried'));
   const supply = c.lubrication.supply;
   const viscosity = c.lubrication.viscosity;
   if (viscosity !== undefined)

@@ -112,6 +112,19 @@ export function thrustAxialRoom(c: CaseSI): number {
     : washerThickness(c.shaft.diameter);
 }
 
+/**
+ * The case the journal is designed in: its axial room less the thrust collar or washer
+ * (thrustAxialRoom), but never below half the room (the thrust-axial-room check then fails).
+ */
+export function journalRoomCase(c: CaseSI): CaseSI {
+  const t = thrustAxialRoom(c);
+  if (t === 0) return c;
+  return { ...c, space: { ...c.space, maxLength: Math.max(c.space.maxLength - t, 0.5 * c.space.maxLength) } };
+}
+
+/** A figure held finite for the report: an unbounded life or pressure is written as 1e30. */
+const bounded = (x: number): number => (Number.isFinite(x) ? x : 1e30);
+
 /** The pad ring in the radial space, or null when no ring fits (d2 ≤ d1). */
 export function padRing(D: number, maxOuterDiameter: number, rules: ThrustPadRules): PadRing | null {
   const inner = rules.innerToShaft * D;
@@ -233,17 +246,14 @@ function rubbingPath(
   const worst = results.reduce((a, b) => (governingMargin(b.checks) < governingMargin(a.checks) ? b : a));
   const damage = points.reduce((s, p, i) => s + p.share / results[i]!.lifeHours, 0);
   const lifeHours = damage > 0 ? points.reduce((s, p) => s + p.share, 0) / damage : Infinity;
-  const fig = { pressure: worst.pressure, velocity: worst.velocity, pv: worst.pv, lifeHours };
+  const fig = {
+    pressure: bounded(worst.pressure),
+    velocity: worst.velocity,
+    pv: bounded(worst.pv),
+    lifeHours: bounded(lifeHours),
+  };
   return {
-    result: {
-      material: id,
-      face,
-      pressure: worst.pressure,
-      velocity: worst.velocity,
-      pv: worst.pv,
-      frictionPower: worst.frictionPower,
-      lifeHours,
-    },
+    result: { material: id, face, ...fig, frictionPower: worst.frictionPower },
     checks: thrustChecks(fig, material, c.life.hours),
   };
 }

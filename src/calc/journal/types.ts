@@ -1,6 +1,7 @@
 import type { CheckRecord, SheetLine } from '../../core/check.js';
 import type { AssumedFinding, Finding } from '../../core/finding.js';
 import type { SweepRow } from './design.js';
+import type { JournalThrust } from './thrust.js';
 
 /**
  * The result of the journal bearing check (checkJournal) and its options. SI units: m, N,
@@ -99,6 +100,11 @@ export interface JournalResult {
   /** Index of the governing operating point in `points`. */
   governingPoint: number;
   points: JournalPointSummary[];
+  /**
+   * How the axial load is carried (null without one): a hydrodynamic pad thrust bearing or a
+   * rubbing face, its figures and its checks (also in `checks`, ids 'thrust-').
+   */
+  thrust: JournalThrust | null;
 }
 
 /** Options of checkJournal. */

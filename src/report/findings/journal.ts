@@ -19,6 +19,15 @@ const listed = (value: FindingValue | undefined): string => (Array.isArray(value
 /** Cubic metres per second to litres per minute (1 m³/s = 1000 L · 60 s/min). */
 const LITRES_PER_MINUTE_PER_M3_S = 6e4;
 
+/** Why the thrust runs on a rubbing face, by the thrust path's reason code (src/calc/journal/thrust.ts). */
+const THRUST_RUBBING_REASON: Record<string, string> = {
+  'no-supply': 'no lubricant supply: no film can form on thrust pads',
+  grease: 'grease does not feed a full film on thrust pads',
+  'no-rotation':
+    'the shaft does not turn continuously at every point with axial load (or the pads do not fit the radial space): no film forms',
+  'pad-film-thin': 'the pads would run below the allowable film, and a rubbing face passes its checks',
+};
+
 /** The words of the journal kernel's findings and assumptions, keyed by code. Values are SI (temperatures °C). */
 export const journalWording: KernelWording = {
   findings: {
@@ -54,10 +63,13 @@ export const journalWording: KernelWording = {
       reason:
         'convergence criteria of the finite-difference Reynolds solution and the temperature iteration; a solve or balance that does not converge stops the run with an error instead of reporting unconverged numbers',
     }),
-    'journal.axial-not-carried': () => ({
-      value: 'not carried',
-      reason:
-        'a plain journal bearing carries radial load only; the axial load needs a thrust face or bearing (common practice)',
+    'journal.thrust-pad': (v) => ({
+      value: `${textNum(v['axial'])} N on a hydrodynamic pad thrust bearing: ${String(v['pads'])} tapered-land pads, ${textNum(Number(v['inner']) * 1e3, 3)}–${textNum(Number(v['outer']) * 1e3, 3)} mm, taper depth ${textNum(Number(v['taperDepth']) * 1e6, 3)} µm`,
+      reason: `the journal's oil forms a film on the pads at every point with axial load; the thrust collar takes ${textNum(Number(v['collar']) * 1e3, 3)} mm of the axial room beside the journal (common practice)`,
+    }),
+    'journal.thrust-rubbing': (v) => ({
+      value: `${textNum(v['axial'])} N on a rubbing thrust face of ${String(v['material'])}, ${textNum(Number(v['inner']) * 1e3, 3)}–${textNum(Number(v['outer']) * 1e3, 3)} mm`,
+      reason: `${THRUST_RUBBING_REASON[String(v['reason'])] ?? String(v['reason'])}; the face runs boundary lubricated and its washer takes ${textNum(Number(v['washer']) * 1e3, 3)} mm of the axial room beside the journal (common practice)`,
     }),
     'journal.fixed-viscosity': (v) => ({
       value: `${textNum(v['viscosity'])} Pa·s, fixed`,
