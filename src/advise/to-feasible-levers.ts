@@ -151,8 +151,8 @@ export function leversFor(
   const d = c.shaft.diameter;
   const out: Lever[] = [];
   const lifeFails = failed.some((k) => k.unit === 'h');
-  const add = (field: string, steps: string[], monotone: boolean) => {
-    if (steps.length) out.push({ field, from: fromOf(doc, field, assumed), steps, monotone });
+  const add = (field: string, steps: string[], monotone: boolean, from = fromOf(doc, field, assumed)) => {
+    if (steps.length) out.push({ field, from, steps, monotone });
   };
   const lengthLever = (field: string, now: number, max: number) =>
     add(field, lengthsUp(getPath(doc, field), now, max, 1e-3), true);
@@ -181,8 +181,14 @@ export function leversFor(
         false,
       );
   }
-  lengthLever('space.maxOuterDiameter', c.space.maxOuterDiameter, MAX_OD_PER_D * d);
-  lengthLever('space.maxLength', c.space.maxLength, MAX_LENGTH_PER_D * d);
+  const oil = c.lubrication.supply === 'oil-bath' || c.lubrication.supply === 'oil-feed';
+  const grease = c.lubrication.supply === 'grease';
+  // A journal bearing without oil fails on its supply whatever else changes: only the supply can help.
+  // With oil, its radial room matters only through the bath's housing; cleanliness not at all.
+  const journal = option === 'journal';
+  if (!journal || c.lubrication.supply === 'oil-bath')
+    lengthLever('space.maxOuterDiameter', c.space.maxOuterDiameter, MAX_OD_PER_D * d);
+  if (!journal || oil) lengthLever('space.maxLength', c.space.maxLength, MAX_LENGTH_PER_D * d);
   if (lifeFails && option !== 'journal') add('life.hours', hoursDown(getPath(doc, 'life.hours'), c.life.hours), true);
   if (lifeFails && option === 'bushing') {
     const now = c.life.wearAllowance;
@@ -195,21 +201,36 @@ export function leversFor(
     nearestFirst(SUPPLIES, c.lubrication.supply, (i) => option === 'bushing' || i > supply),
     false,
   );
-  if (option !== 'bushing' && c.lubrication.viscosity === undefined) add('lubrication.oil', oilSteps(c), false);
+  if (option !== 'bushing' && (!journal || oil) && c.lubrication.viscosity === undefined)
+    add(
+      'lubrication.oil',
+      oilSteps(c),
+      false,
+      fromOf(doc, 'lubrication.oil', assumed) ?? (oil || grease ? `ISO VG ${presentGrade(c)}` : null),
+    );
   const dirt = c.environment.contamination;
-  add(
-    'environment.contamination',
-    nearestFirst(CONTAMINATIONS, dirt, (i) => i < CONTAMINATIONS.indexOf(dirt)),
-    false,
-  );
+  if (!journal)
+    add(
+      'environment.contamination',
+      nearestFirst(CONTAMINATIONS, dirt, (i) => i < CONTAMINATIONS.indexOf(dirt)),
+      false,
+    );
   return out;
+}
+
+/** The grade in use: the case's, else the grease's base oil on grease, else the table's default for oil. */
+function presentGrade(c: CaseSI): number {
+  const table = lubricants();
+  return (
+    c.lubrication.oilGrade ?? (c.lubrication.supply === 'grease' ? table.greaseBaseOil.grade : table.defaultGrade.grade)
+  );
 }
 
 /** Oil grades to try: the grades above the present one (nearest first), then a few below. */
 function oilSteps(c: CaseSI): string[] {
   const table = lubricants();
   const grades = table.grades.map((g) => g.grade).sort((a, b) => a - b);
-  const now = c.lubrication.oilGrade ?? table.defaultGrade.grade;
+  const now = presentGrade(c);
   const up = grades.filter((g) => g > now).slice(0, OIL_UP);
   const down = grades
     .filter((g) => g < now)

@@ -82,8 +82,12 @@ export async function toMakeFeasible(
     const searchRun = runnerOf(exclusions.filter((x) => x.event.option === option));
     const others = Object.fromEntries(OPTIONS.filter((o) => o !== option).map((o) => [o, advice.checks[o]]));
     let runs = 0;
+    // The option's own result on a changed document, from its search run: the kernels are pure,
+    // so the full run reuses it and computes the other options afresh.
+    const own = new Map<string, AdviceResult['checks'][OptionName]>();
     const feasibleIn = async (text: unknown, full: boolean): Promise<boolean> => {
       runs++;
+      const key = JSON.stringify(text);
       let c: CaseSI;
       try {
         c = validateCase(text).case;
@@ -93,11 +97,12 @@ export async function toMakeFeasible(
       }
       // A kernel that throws on a changed case (outside its model) cannot verify that change.
       const a = await advise(c, [], full ? exclusions : exclusions.filter((x) => x.event.option === option), {
-        ...(full ? {} : { checks: others }),
+        checks: full ? (own.has(key) ? { [option]: own.get(key) } : {}) : others,
         kernel: QUIET,
         traces: false,
         runRules: full ? verifyRun : searchRun,
       }).catch(() => null);
+      if (a && !full) own.set(key, a.checks[option]);
       return a?.ranking.find((x) => x.option === option)!.feasible === true;
     };
     const found: FeasibleChange[] = [];
