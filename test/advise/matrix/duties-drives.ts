@@ -69,7 +69,7 @@ load: { radial: 250 N, axial: 0 N, shock: none }
 life: { hours: 20000 h, wearAllowance: 0.5 mm }
 space: { maxLength: 30 mm, maxOuterDiameter: 40 mm }
 lubrication: { supply: none }
-environment: { ambient: 5 degC, contamination: normal, startsPerHour: 2 }
+environment: { ambient: 5 degC, contamination: normal, startsPerHour: 2, medium: water }
 priorities: { cost: 4, friction: 2, maintenance: 5, noise: 2, precision: 1 }
 `,
     accept: ['bushing', 'rolling'],
@@ -84,8 +84,9 @@ priorities: { cost: 4, friction: 2, maintenance: 5, noise: 2, precision: 1 }
     yaml: `
 title: Carrow Mill cement works, raw-mill feed conveyor helical reducer, intermediate shaft
 shaft: { diameter: 55 mm, speed: 360 rpm }
-load: { radial: 9 kN, axial: 3.5 kN, shock: moderate }
-life: { hours: 50000 h, wearAllowance: 0.05 mm }
+# a uniformly fed belt conveyor: a uniform load for the reducer
+load: { radial: 9 kN, axial: 3.5 kN, shock: light }
+life: { hours: 40000 h, wearAllowance: 0.05 mm }
 space: { maxLength: 35 mm, maxOuterDiameter: 120 mm }
 lubrication: { supply: oil-bath, oil: ISO VG 220, inletTemperature: 65 degC }
 environment: { ambient: 35 degC, contamination: normal, startsPerHour: 2 }
@@ -119,7 +120,8 @@ priorities: { cost: 3, friction: 3, maintenance: 4, noise: 3, precision: 2 }
 title: Orchard Street theatre, orchestra-pit lift, worm gearbox worm shaft (locating end)
 shaft: { diameter: 45 mm, speed: 1450 rpm }
 load: { radial: 3 kN, axial: 10 kN, shock: light }
-life: { hours: 10000 h, wearAllowance: 0.05 mm }
+# about two hours a day, 300 days a year, for ten years
+life: { hours: 6000 h, wearAllowance: 0.05 mm }
 space: { maxLength: 45 mm, maxOuterDiameter: 100 mm }
 lubrication: { supply: oil-bath, oil: ISO VG 460, inletTemperature: 55 degC }
 environment: { ambient: 20 degC, contamination: clean, startsPerHour: 20 }
@@ -191,7 +193,7 @@ load: { radial: 250 N, axial: 0 N, shock: light }
 life: { hours: 20000 h, wearAllowance: 0.5 mm }
 space: { maxLength: 80 mm, maxOuterDiameter: 60 mm }
 lubrication: { supply: none }
-environment: { ambient: 15 degC, contamination: severe, startsPerHour: 1 }
+environment: { ambient: 15 degC, contamination: severe, startsPerHour: 1, medium: water }
 priorities: { cost: 3, friction: 2, maintenance: 5, noise: 1, precision: 1 }
 `,
     accept: ['bushing'],
