@@ -11,6 +11,9 @@ import { loadRules, RuleFileError } from '../../src/advise/load-rules.js';
 import { validateCase } from '../../src/case/load.js';
 import { runCli } from '../helpers/cli.js';
 import { SCENARIOS } from './scenarios.js';
+import { adviceText } from '../../src/report/advice-text.js';
+import { renderNote } from '../../src/report/note/index.js';
+import { describe as wordOf } from '../../src/report/findings/index.js';
 
 describe('scenario matrix (expected winner: common practice)', () => {
   for (const s of SCENARIOS) {
@@ -54,6 +57,60 @@ describe('scenario matrix (expected winner: common practice)', () => {
     const cheap = a.ranking.find((r) => r.option === 'bushing')!.reasons.find((r) => r.rule === 'bushing-cheapest')!;
     expect(cheap.weight).toBeCloseTo(5 / 3, 2);
     expect(cheap.points).toBeCloseTo(3 * (5 / 3), 2);
+  });
+});
+
+describe('ranking table', () => {
+  // An invented sawmill roller where only the rolling bearing passes its checks: the excluded
+  // bushing's rule points sum above the winner's score, so a score there would read as a better rank.
+  const loaded = validateCase({
+    title: 'Test: sawmill roller, excluded option scored above the winner (invented)',
+    shaft: { diameter: '40 mm', speed: '250 rpm' },
+    load: { radial: '3 kN', shock: 'moderate' },
+    life: { hours: '20000 h', wearAllowance: '0.2 mm' },
+    space: { maxLength: '60 mm', maxOuterDiameter: '90 mm' },
+    lubrication: { supply: 'grease' },
+    environment: { contamination: 'dirty' },
+    priorities: { cost: 4, friction: 2, maintenance: 4, noise: 2, precision: 2 },
+  });
+  const advice = advise(loaded.case, loaded.assumed);
+
+  it('the premise holds: an excluded option whose score is above the winner’s', async () => {
+    const a = await advice;
+    const out = a.ranking.filter((r) => !r.feasible);
+    expect(a.ranking[0]!.feasible).toBe(true);
+    expect(out.some((r) => r.score > a.ranking[0]!.score)).toBe(true);
+  });
+
+  it('text: feasible options first, an excluded one shows "excluded" and its first reason, not its score', async () => {
+    const a = await advice;
+    const text = adviceText(a, 'SI');
+    const lines = text.split('\n');
+    const head = lines.findIndex((l) => /^\s+rank\s+option\s+score/.test(l));
+    expect(head).toBeGreaterThan(0);
+    expect(lines[head]).toMatch(/excluded because/);
+    for (const r of a.ranking) {
+      const row = lines.slice(head + 2, head + 5).find((l) => new RegExp(`^\\s+${r.rank}\\s+${r.option}\\b`).test(l))!;
+      expect(row, r.option).toBeDefined();
+      if (r.feasible) expect(row).toContain(r.score.toFixed(2));
+      else {
+        expect(row).toMatch(/\bexcluded\b/);
+        expect(row).not.toContain(r.score.toFixed(2));
+        expect(row).toContain(wordOf(r.excluded[0]!).slice(0, 30));
+      }
+    }
+  });
+
+  it('Markdown and HTML notes: the same reading', async () => {
+    const a = await advice;
+    const out = a.ranking.find((r) => !r.feasible)!;
+    const md = await renderNote(loaded, a, 'md', { units: 'SI', journalCurves: null });
+    const row = md.split('\n').find((l) => l.startsWith(`| ${out.rank} |`))!;
+    expect(row).toMatch(/\| excluded \|/);
+    expect(row).not.toContain(`| ${out.score.toFixed(2)} |`);
+    const html = await renderNote(loaded, a, 'html', { units: 'SI', journalCurves: null });
+    expect(html).toMatch(/<th[^>]*>excluded because<\/th>/);
+    expect(html).toMatch(/>excluded</);
   });
 });
 
