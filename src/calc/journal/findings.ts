@@ -128,12 +128,6 @@ export function journalAssumptions({ case: c, crit, space, bath }: FindingInput)
   assumed.push(...designAssumptions(c, crit, space));
   if (supply === 'oil-bath' && bath)
     assumed.push(assumedFinding('lubrication.inletTemperature', 'journal.bath-temperature', bathValues(bath)));
-  else if (supply === 'oil-bath')
-    assumed.push(
-      assumedFinding('lubrication.inletTemperature', 'journal.bath-inlet', {
-        inletTemperature: c.lubrication.inletTemperature,
-      }),
-    );
   return assumed;
 }
 

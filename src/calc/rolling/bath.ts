@@ -1,53 +1,61 @@
 import type { CaseSI } from '../../case/types.js';
-import { bathTemperature, bathValues, housingArea, sumpModel } from '../sump.js';
+import { assumedFinding } from '../../core/finding.js';
+import { bathTemperature, bathValues, housingArea, sumpModel, type BathTemperature } from '../sump.js';
+import type { CandidateSpec } from './candidates.js';
 import { finiteOr } from './conditions.js';
-import type { OilSystem } from './lubrication.js';
+import type { EvalContext } from './context.js';
+import { evaluate } from './evaluate.js';
+import { newNotes, type Notes } from './findings.js';
+import { bearingLubrication, type OilSystem } from './lubrication.js';
 import type { RollingCandidate } from './types.js';
 
 /**
- * The oil bath of a rolling bearing: the bath temperature of the one sump heat balance
- * (src/calc/sump.ts), T_bath = T_amb + P(T_bath)/(h·A), with P the time-mean friction power of
- * the bearing chosen (W), worked at the bearing temperature T_bath + sump.bearingRise (°C).
+ * The oil bath of a rolling bearing: each candidate bearing runs at the bath temperature of the
+ * one sump heat balance (src/calc/sump.ts) for its own friction loss,
  *
- * The bearing chosen and the bath depend on each other (κ, and so the choice, moves with the
- * viscosity): evaluate every candidate at a first bath temperature (ambient + 20 K, the old
- * fixed estimate), solve the bath for the bearing chosen, evaluate again at that bath, and
- * repeat until the same bearing is chosen (at most MAX_ROUNDS rounds).
+ *   T_bath = T_amb + P(T_bath)/(h·A),
+ *
+ * P the candidate's time-mean friction power (W) worked at the bearing temperature
+ * T_bath + sump.bearingRise (°C), whose viscosity sets the viscous moment, κ and the life.
+ * Solved per candidate, so a candidate's figures do not depend on which bearing is chosen.
  */
 
-const MAX_ROUNDS = 4;
-/** First bath temperature over ambient, K: where the fixed estimate used to put a bath. */
-const FIRST_RISE = 20;
+/** True when the case's bearing runs in an oil bath whose temperature the sump balance sets. */
+export function inSumpBath(c: CaseSI): boolean {
+  return c.lubrication.supply === 'oil-bath' && c.lubrication.viscosity === undefined;
+}
+
+export interface BathCandidate {
+  candidate: RollingCandidate;
+  /** The context it was evaluated in (its own lubricant temperature and viscosity). */
+  ctx: EvalContext;
+  bath: BathTemperature;
+}
 
 /**
- * The bath of an oil-bath case, or undefined for other supplies or no candidates.
- * `evaluateAt(t, id)` evaluates the candidates (only the one of that id, when given) with the
- * bath at t (°C); `choose` picks the bearing shown (the best, else the first).
+ * Evaluate one candidate at its own bath temperature; its cautions go to `notes`, those of the
+ * search to a scratch collector. `system` the case's oil system (the shared grade, if any).
  */
-export function rollingBath(
-  c: CaseSI,
-  evaluateAt: (tBath: number, onlyId?: string) => RollingCandidate[],
-  choose: (candidates: RollingCandidate[]) => RollingCandidate | null,
-): OilSystem['bath'] {
-  if (c.lubrication.supply !== 'oil-bath' || c.lubrication.viscosity !== undefined) return undefined;
+export function evaluateInBath(spec: CandidateSpec, ctx: EvalContext, system: OilSystem, notes: Notes): BathCandidate {
+  const c = ctx.c;
   const model = sumpModel();
   const area = housingArea(c.space.maxOuterDiameter, c.space.maxLength, model);
   const ambient = finiteOr(c.environment.ambient, 20);
-  let lead = choose(evaluateAt(ambient + FIRST_RISE));
-  if (!lead) return undefined;
-  let bath = balance(lead.id);
-  for (let round = 1; round < MAX_ROUNDS; round++) {
-    const next = choose(evaluateAt(bath.temperature));
-    if (!next || next.id === lead.id) break;
-    lead = next;
-    bath = balance(lead.id);
-  }
-  return { temperature: bath.temperature, values: bathValues(bath) };
+  const at = (t: number): EvalContext => ({
+    ...ctx,
+    lubrication: bearingLubrication(c, newNotes(), { ...system, bath: { temperature: t, values: {} } }),
+  });
+  const bath = bathTemperature(ambient, area, model, (t) => evaluate(spec, at(t), newNotes()).frictionPower);
+  const own = at(bath.temperature);
+  return { candidate: evaluate(spec, own, notes), ctx: own, bath };
+}
 
-  function balance(id: string) {
-    return bathTemperature(ambient, area, model, (t) => {
-      const k = evaluateAt(t, id)[0];
-      return k ? k.frictionPower : 0;
-    });
-  }
+/** The assumption that states the bath of the bearing shown: the model, its figures, the rise. */
+export function bathAssumption(shown: BathCandidate) {
+  const rise = sumpModel().bearingRise;
+  return assumedFinding('rolling.temperature', 'rolling.bath-temperature', {
+    ...bathValues(shown.bath),
+    bearingTemperature: shown.bath.temperature + rise,
+    rise,
+  });
 }

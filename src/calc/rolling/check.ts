@@ -8,7 +8,7 @@ import type { EvalContext } from './context.js';
 import { evaluate } from './evaluate.js';
 import { newNotes, type Notes } from './findings.js';
 import { lifeExponent, requiredDynamicRating, type RollingType } from './life.js';
-import { rollingBath } from './bath.js';
+import { bathAssumption, evaluateInBath, inSumpBath } from './bath.js';
 import { bearingLubrication, type OilSystem } from './lubrication.js';
 import { bestCandidate, choiceFinding, equivalentLoadBound, kindFacts, leadOfEachKind } from './select.js';
 import { rollingSheet } from './sheet.js';
@@ -71,22 +71,20 @@ export function checkRolling(
   opts: { sheet?: boolean; sharedGrade?: OilSystem['sharedGrade'] } = {},
 ): RollingResult {
   const notes = newNotes();
-  // One oil system: the journal's grade where it chose one, the bath of the sump balance (bath.ts).
-  const system: OilSystem = opts.sharedGrade ? { sharedGrade: opts.sharedGrade } : {};
-  const specs0 = candidateSpecs(c, newNotes());
-  const bath = rollingBath(
-    c,
-    (t, only) => {
-      const at = evalContext(c, newNotes(), { ...system, bath: { temperature: t, values: {} } }).ctx;
-      return specs0.filter((s) => only === undefined || s.id === only).map((s) => evaluate(s, at, newNotes()));
-    },
-    (cands) => bestCandidate(cands, newNotes()) ?? cands[0] ?? null,
-  );
-  if (bath) system.bath = bath;
-  const { ctx, meanSpeed } = evalContext(c, notes, system);
+  // One oil system: the journal's grade where it chose one; each bearing in a bath at its own sump balance (bath.ts).
+  const bathCase = inSumpBath(c);
+  const system: OilSystem = {
+    ...(opts.sharedGrade ? { sharedGrade: opts.sharedGrade } : {}),
+    bathPerBearing: bathCase,
+  };
+  const { ctx: ctx0, meanSpeed } = evalContext(c, notes, system);
   const specs = candidateSpecs(c, notes);
-  const candidates = specs.map((s) => evaluate(s, ctx, notes));
+  const inBath = bathCase ? specs.map((s) => evaluateInBath(s, ctx0, system, notes)) : [];
+  const candidates = bathCase ? inBath.map((b) => b.candidate) : specs.map((s) => evaluate(s, ctx0, notes));
   const best = bestCandidate(candidates, notes);
+  const shown = inBath.find((b) => b.candidate === (best ?? candidates[0]));
+  if (shown) notes.assume(bathAssumption(shown));
+  const ctx = shown ? shown.ctx : ctx0;
 
   // The figures of the result: the best candidate's, else the first's, else a bound for a ball bearing.
   const lead = best ?? candidates[0] ?? null;

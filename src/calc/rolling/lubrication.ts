@@ -45,8 +45,10 @@ const OIL_DENSITY = 870;
 export interface OilSystem {
   /** The grade of the case's one oil system when the journal's sweep chose it (the case names none). */
   sharedGrade?: { grade: number; from: 'journal' };
-  /** Oil bath: the bath temperature of the sump balance (°C) and its figures for the finding. */
+  /** Oil bath: the bath temperature of the sump balance, °C (the values are for a finding). */
   bath?: { temperature: number; values: Record<string, number | string | boolean> };
+  /** Each bearing is evaluated at its own bath temperature (bath.ts), which states it: no fixed estimate. */
+  bathPerBearing?: boolean;
 }
 
 /**
@@ -63,26 +65,20 @@ export function bearingLubrication(c: CaseSI, notes: Notes, system: OilSystem = 
   const bath = supply === 'oil-bath' ? system.bath : undefined;
   let temperature: number;
   if (bath) {
-    const rise = sumpModel().bearingRise;
-    temperature = bath.temperature + rise;
-    notes.assume(
-      assumedFinding('rolling.temperature', 'rolling.bath-temperature', {
-        ...bath.values,
-        bearingTemperature: temperature,
-        rise,
-      }),
-    );
+    // The bath of the sump balance (bath.ts states it for the bearing shown, once).
+    temperature = bath.temperature + sumpModel().bearingRise;
   } else {
     const rise = supply === 'oil-feed' ? RISE_OVER_INLET : RISE_OVER_AMBIENT;
     const base = supply === 'oil-feed' ? c.lubrication.inletTemperature : c.environment.ambient;
     temperature = finiteOr(base, FALLBACK_BASE_TEMPERATURE) + rise;
-    notes.assume(
-      assumedFinding('rolling.temperature', 'rolling.operating-temperature', {
-        temperature,
-        rise,
-        over: supply === 'oil-feed' ? 'inlet' : 'ambient',
-      }),
-    );
+    if (!system.bathPerBearing)
+      notes.assume(
+        assumedFinding('rolling.temperature', 'rolling.operating-temperature', {
+          temperature,
+          rise,
+          over: supply === 'oil-feed' ? 'inlet' : 'ambient',
+        }),
+      );
   }
   const shared = supply !== 'grease' && c.lubrication.oilGrade === undefined ? system.sharedGrade : undefined;
   const cs: CaseSI = shared ? { ...c, lubrication: { ...c.lubrication, oilGrade: shared.grade } } : c;

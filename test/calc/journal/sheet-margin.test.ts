@@ -53,7 +53,7 @@ describe('journal calculation sheet: each substituted expression is the value it
 describe('film criterion text from the criteria data', () => {
   it('label and sheet formula carry h_base and k_D of data/journal-criteria.json', () => {
     const crit = journalCriteria();
-    expect(allowableFilmText(crit)).toBe('5 µm + 0.00004·D'); // the shipped values, 5.0e-6 m and 4.0e-5
+    expect(allowableFilmText(crit)).toBe('5.08 µm + 0.00004·D'); // the shipped values: Trumpler's 0.0002 in = 5.08e-6 m, and 4.0e-5
     expect(allowableFilmText({ ...crit, minFilmBase: 8e-6, minFilmPerDiameter: 5e-5 })).toBe('8 µm + 0.00005·D');
     const r = checkJournal(steady());
     expect(r.checks.find((k) => k.id === 'min-film')!.label).toContain(allowableFilmText(crit));
