@@ -73,6 +73,14 @@ describe('journal thrust path', () => {
     expect(rocking.assumed.find((a) => a.code === 'journal.thrust-rubbing')?.values['reason']).toBe('no-rotation');
   });
 
+  it('falls back to a rubbing face when the pads run too thin at a slow speed and the face passes', () => {
+    const slow = load(WORM.replace('speed: 1450 rpm', 'speed: 1 rpm'));
+    const r = checkJournal(slow);
+    expect(r.thrust?.path).toBe('rubbing');
+    expect(r.thrust?.reason).toBe('pad-film-thin');
+    expect(allLimitsPass(r.checks.filter((k) => k.id.startsWith('thrust-')))).toBe(true);
+  });
+
   it('has no thrust path without axial load', () => {
     const r = checkJournal(load(WORM.replace('axial: 4 kN', 'axial: 0 N')));
     expect(r.thrust).toBeNull();
