@@ -9,7 +9,8 @@
  *
  * A case read by parseCase() or loadCase() carries what the loader assumed (defaults applied,
  * conversions made) and the text as written; both are kept beside the case object, not in it,
- * so the object deep-equals the `case` key of the CLI's JSON. advise() and renderNote() use
+ * and the CLI's JSON prints the object as a case file in SI base units (`case`, which loads
+ * back to the same object). advise() and renderNote() use
  * them, and so give exactly what the CLI prints. A case object built any other way (by hand,
  * or a copy) is advised with no loader assumptions, and the note shows its SI numbers as given.
  * Changing a case object after parsing it leaves the kept assumptions as they were, and a case
@@ -21,6 +22,7 @@ import type { AdviceJson } from './report/json.js';
 import type { UnitSystem } from './report/units.js';
 import { loadCaseFile, parseCaseText, type LoadedCase } from './case/load.js';
 import type { CaseSI } from './case/types.js';
+import { caseFileOf } from './case/base-units.js';
 import { UsageError } from './core/errors.js';
 import { checkBushing as bushingKernel, type BushingResult } from './calc/bushing/index.js';
 import { checkRolling as rollingKernel, type RollingResult } from './calc/rolling/index.js';
@@ -73,10 +75,10 @@ function remember(loaded: LoadedCase, caseFile?: string): CaseSI {
   return loaded.case;
 }
 
-/** The loaded case behind `c`: the loader's notes when it made `c`, else none (the case as its own given). */
+/** The loaded case behind `c`: the loader's notes when it made `c`, else none (the case as its own given, a case file in base units). */
 function loadedOf(c: CaseSI): LoadedCase & { caseFile?: string } {
   const notes = loaderNotes.get(c);
-  return notes ? { case: c, ...notes } : { case: c, assumed: [], given: c };
+  return notes ? { case: c, ...notes } : { case: c, assumed: [], given: caseFileOf(c) };
 }
 
 /**

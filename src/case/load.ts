@@ -114,6 +114,14 @@ export function validateCase(raw: unknown, source = '(case)'): LoadedCase {
   const materials = bushingMaterials().map((m) => m.id);
   const done = completeCase(parsed.data, grades, materials);
   if (done.problems.length) throw new CaseError(source, done.problems);
+  if (bare === 'base') {
+    done.assumed.push({
+      field: 'units',
+      value: 'base',
+      reason:
+        'numbers written without a unit are read in SI base units: m, N, rev/s, rad, Hz, Pa, Pa*s, m^3/(N*m); temperatures in degC, life in hours',
+    });
+  }
   const visc = (raw as { lubrication?: { viscosity?: unknown } }).lubrication?.viscosity;
   if (typeof visc === 'string' && /St\b|m\^?2\/s/.test(visc)) {
     done.assumed.push({

@@ -181,10 +181,13 @@ function kindOf(path: string): Parameters<typeof parseQuantity>[1] {
 }
 
 describe('units: base reads bare numbers in SI base units (rev/s, °C, hours)', () => {
-  it('shaft.speed: 120 is 120 rev/s (7200 rpm) in such a file', () => {
+  it('shaft.speed: 120 is 120 rev/s (7200 rpm) in such a file, and the reading is listed as an assumption', () => {
     const raw = { ...fullCase(), units: 'base' };
     setIn(raw, ['shaft', 'speed'], 120);
-    expect(validateCase(raw).case.shaft.speed).toBe(120);
+    const { case: c, assumed } = validateCase(raw);
+    expect(c.shaft.speed).toBe(120);
+    expect(assumed.find((a) => a.field === 'units')?.reason).toMatch(/rev\/s.*degC.*hours/);
+    expect(validateCase(fullCase()).assumed.some((a) => a.field === 'units')).toBe(false);
   });
 
   it('the whole case in bare SI numbers gives the case written with units; strings with units still read', () => {
