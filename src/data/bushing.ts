@@ -8,6 +8,12 @@ import { loadTable } from './load.js';
  * and converted to SI here, so a reader of the file sees the figures as handbooks print them.
  */
 const pos = z.number().positive();
+/** What a material must be given to reach its limits, from least to most: none < grease < oil. */
+export const NEEDS = ['none', 'grease', 'oil'] as const;
+export type LubricantNeed = (typeof NEEDS)[number];
+/** Resistance of a material in a service medium, from best to worst. */
+export const RATINGS = ['good', 'fair', 'poor'] as const;
+export type MediumRating = (typeof RATINGS)[number];
 const rowSchema = z.strictObject({
   id: z.string().regex(/^[a-z0-9-]+$/),
   /** Generic class name, never a trade name. */
@@ -32,6 +38,14 @@ const rowSchema = z.strictObject({
   /** Minimum wall (file mm; SI m). */
   minWall: pos,
   source: z.string().min(1),
+  /** The lubricant the material must be given to reach its limits (a contract key). */
+  needs: z.enum(NEEDS),
+  /** Why it needs that (or nothing): the source. */
+  needsSource: z.string().min(1),
+  /** Resistance in water or slurry, and in chemical service. */
+  water: z.enum(RATINGS),
+  chemical: z.enum(RATINGS),
+  mediaSource: z.string().min(1),
 });
 const fileSchema = z.strictObject({
   description: z.string(),
@@ -44,13 +58,27 @@ export type BushingMaterialRow = z.infer<typeof rowSchema>;
 
 /**
  * A bushing material as a case may give it inline (a supplier's datasheet): the row's fields in
- * SI without the wall sizing, the wear scatter optional (default typical/3 and typical×3).
+ * SI without the wall sizing, the wear scatter optional (default typical/3 and typical×3), the
+ * lubricant need and the media ratings optional (taken as none and fair, stated by the check).
  */
 export type BushingMaterial = Omit<
   BushingMaterialRow,
-  'wallFraction' | 'minWall' | 'wearFactorLow' | 'wearFactorHigh'
+  | 'wallFraction'
+  | 'minWall'
+  | 'wearFactorLow'
+  | 'wearFactorHigh'
+  | 'needs'
+  | 'needsSource'
+  | 'water'
+  | 'chemical'
+  | 'mediaSource'
 > &
-  Partial<Pick<BushingMaterialRow, 'wearFactorLow' | 'wearFactorHigh'>>;
+  Partial<
+    Pick<
+      BushingMaterialRow,
+      'wearFactorLow' | 'wearFactorHigh' | 'needs' | 'needsSource' | 'water' | 'chemical' | 'mediaSource'
+    >
+  >;
 
 const converted = new WeakMap<object, BushingMaterialRow[]>();
 
@@ -84,8 +112,8 @@ const factorsSchema = z.strictObject({
   motion: z.array(factorRow).min(1),
   environment: z.array(factorRow).min(1),
   heat: z.strictObject({
-    dissipation: pos,
-    areaFactor: pos,
+    /** Room temperature the published PV and temperature limits are taken to hold in, °C. */
+    referenceAmbient: z.number(),
     note: z.string(),
     source: z.string().min(1),
   }),

@@ -4,10 +4,10 @@ import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
 import { checksTable, heading, mark, paint } from './text.js';
 
-/** A temperature estimate more than twice the allowed rise above ambient (the model is linear and one-node). */
+/** A temperature estimate above the material's limit: the heat balance is linear up to the PV limit only. */
 function outOfRange(m: BushingResult['materials'][number]): boolean {
   const k = m.checks.find((x) => x.id === 'temperature');
-  return k !== undefined && k.margin < -1;
+  return k !== undefined && !k.pass;
 }
 
 /** The plain-bushing check for a person: a summary over materials, then each material's checks. */
@@ -15,11 +15,13 @@ export function bushingText(r: BushingResult, units: UnitSystem): string {
   const out: string[] = [heading('Plain bushing (boundary lubricated)')];
   out.push(
     table(
-      ['', 'material', 'length', 'OD', 'P', 'PV', 'life: short / typical / long', 'temp'],
+      ['', 'material', 'needs', 'length', 'shortest', 'OD', 'P', 'PV', 'life: short / typical / long', 'temp'],
       r.materials.map((m) => [
         mark(m.feasible),
         m.id,
+        m.needs,
         fmt(m.length, 'm', units),
+        fmt(m.minLength, 'm', units),
         fmt(m.outerDiameter, 'm', units),
         fmt(m.pressure, 'Pa', units),
         fmt(m.pv, 'Pa*m/s', units),
@@ -30,7 +32,7 @@ export function bushingText(r: BushingResult, units: UnitSystem): string {
   );
   if (r.materials.some(outOfRange)) {
     out.push(
-      '* beyond twice the allowed rise: the one-node temperature model is out of its range there; read it as "far too hot", not as a figure.',
+      '* above the material\'s temperature limit: the heat balance holds up to the PV limit only; read it as "too hot", not as a figure.',
     );
   }
   out.push(paint.bold(`${r.best ? 'Best' : 'None'}: ${describe(r.bestReason)}.`));
@@ -39,14 +41,18 @@ export function bushingText(r: BushingResult, units: UnitSystem): string {
     const lengthNote =
       m.lengthChosen === 'case'
         ? 'length from the case'
-        : m.lengthChosen === 'space-limited'
-          ? 'length limited by the axial space'
-          : 'shortest length meeting the limits';
+        : 'the common length of every material: the longest in the axial space, L/D at most 2';
     out.push(
       `\n${paint.bold(m.name)} (${m.id}) — ${fmt(m.length, 'm', units)} long (${lengthNote}; shortest meeting pressure, PV and wear life: ${fmt(m.minLength, 'm', units)}), ` +
         `wear after the life target ${fmt(m.wearDepth, 'm', units)} (peak pressure; ${fmt(m.wearDepthMeanPressure, 'm', units)} at mean pressure), ` +
         `factors motion ×${m.factors.motion}, environment ×${m.factors.environment}, k = ${fmt(m.wearFactor, 'm^2/N', units)}`,
     );
+    if (m.thrust)
+      out.push(
+        `  Thrust face ${fmt(m.thrust.face.inner, 'm', units)} / ${fmt(m.thrust.face.outer, 'm', units)}, ${fmt(m.thrust.thickness, 'm', units)} thick: ` +
+          `p ${fmt(m.thrust.pressure, 'Pa', units)}, PV ${fmt(m.thrust.pv, 'Pa*m/s', units)}, wear life ${fmt(m.thrust.lifeHours, 'h', units, 2)}`,
+      );
+    for (const reason of m.reasons) out.push(`  ${describe(reason)}`);
     out.push(checksTable(m.checks, units, m.source));
     out.push(`  Material data: ${m.source}`);
   }

@@ -3,20 +3,68 @@ import type { BushingMaterial, CaseSI } from '../../case/types.js';
 import { governingMargin } from '../../core/check.js';
 import { operatingPoints } from '../duty.js';
 import { bushingFactors, bushingMaterials, type BushingMaterialRow } from '../../data/bushing.js';
+import { sizeThrustFace, washerThickness } from '../thrust/rubbing.js';
 import { oscillatingSlidingSpeed, rotatingSlidingSpeed } from './formulas.js';
-import { checkMaterial } from './material.js';
+import { checkMaterial, LENGTH_STEP, type Setting } from './material.js';
 import { bushingSheet } from './sheet.js';
 import type { BushingMaterialResult, BushingResult, DutyPoint } from './types.js';
 
+/** Margins closer than this are equal: a tie, broken by the stated rule, never by list order. */
+export const MARGIN_TIE = 1e-9;
+
 /**
- * Size and check every bushing material class (or the one the case names) for the duty.
- * Method: mean pressure, PV and sliding speed against the material's limits; Archard wear at
- * the most loaded line with motion and environment multipliers, summed over the duty points;
- * the shortest length meeting pressure, PV and the wear life; a lumped temperature rise.
- * See ./formulas.ts for each equation and its source. `sheet: false` skips the calculation
- * sheet's text (sweeps evaluate thousands of points).
+ * The common length every material is checked at: the longest (so the longest wear life) within
+ * the axial space less the thrust washer and within L/D ≤ 2, in whole millimetres rounded down;
+ * the case's bushing.length when given. Whole millimetres and L/D ≤ 2 common practice. Where
+ * not one millimetre is left, 1 mm (the axial-space check then fails).
  */
-export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): BushingResult {
+export function commonLength(c: CaseSI, washer: number, lOverDMax: number): number {
+  const room = Math.min(c.space.maxLength - washer, lOverDMax * c.shaft.diameter);
+  const whole = Math.floor(room / LENGTH_STEP + 1e-9) * LENGTH_STEP;
+  // No whole millimetre left: the bushing is taken 1 mm long and the axial-space check fails.
+  return whole > 0 ? whole : LENGTH_STEP;
+}
+
+/** Checks of the fit in the space: they gate feasibility but say nothing of the material. */
+const SPACE_CHECKS = new Set(['radial-space', 'axial-space']);
+
+/**
+ * The margin a material is chosen by: the governing margin over its own limits (pressure, speed,
+ * PV, wear life, thrust face, lubricant need, medium), leaving out the fit in the space, which
+ * every material at the common length shares or which only measures its wall thickness.
+ */
+export function materialMargin(m: BushingMaterialResult): number {
+  return governingMargin(m.checks.filter((k) => !SPACE_CHECKS.has(k.id)));
+}
+
+/**
+ * The better of two materials: the larger materialMargin; margins within MARGIN_TIE are a tie,
+ * broken by the lower time-mean friction power, then the longer typical wear life, then the id
+ * in alphabetical order (stated in the finding), so list order never decides.
+ */
+export function better(a: BushingMaterialResult, b: BushingMaterialResult): BushingMaterialResult {
+  const ma = materialMargin(a);
+  const mb = materialMargin(b);
+  if (Math.abs(ma - mb) > MARGIN_TIE) return mb > ma ? b : a;
+  if (a.meanFrictionPower !== b.meanFrictionPower) return b.meanFrictionPower < a.meanFrictionPower ? b : a;
+  if (a.lifeHours !== b.lifeHours) return b.lifeHours > a.lifeHours ? b : a;
+  return b.id < a.id ? b : a;
+}
+
+/**
+ * Check every bushing material class (or the one the case names) for the duty, all at one
+ * common length. Method: mean pressure, PV and sliding speed against the material's limits;
+ * Archard wear at the most loaded line with motion and environment multipliers, summed over the
+ * duty points; the shortest length meeting pressure, PV and the wear life (reported); a flange
+ * or thrust washer for the axial load (src/calc/thrust/rubbing.ts); the lubricant the material
+ * needs and its resistance in the service medium; a heat-balance temperature. See ./formulas.ts
+ * for each equation and its source. `sheet: false` skips the calculation sheet's text (sweeps
+ * evaluate thousands of points); `materials` replaces the shipped table (tests).
+ */
+export function checkBushing(
+  c: CaseSI,
+  opts: { sheet?: boolean; materials?: BushingMaterialRow[] } = {},
+): BushingResult {
   const factors = bushingFactors();
   const assumed: AssumedFinding[] = [];
   const warnings: Finding[] = [];
@@ -26,9 +74,10 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
     share: p.share,
     F: p.radial,
     V: osc ? oscillatingSlidingSpeed(D, osc.angle, osc.frequency) : rotatingSlidingSpeed(D, p.speed ?? 0),
+    Fa: p.axial,
+    ...(osc ? {} : { n: p.speed ?? 0 }),
   }));
   if (points.some((p) => p.V === 0)) warnings.push(finding('bushing.zero-speed'));
-  if (c.load.axial > 0 || (c.duty ?? []).some((p) => p.axial > 0)) warnings.push(finding('bushing.axial-not-carried'));
 
   const motionKey = osc ? 'oscillating' : 'rotating';
   const fm = factors.motion.find((m) => m.key === motionKey)!;
@@ -46,54 +95,70 @@ export function checkBushing(c: CaseSI, opts: { sheet?: boolean } = {}): Bushing
       source: fe.source,
     }),
     assumedFinding('bushing.heat', 'bushing.heat-model', {
-      dissipation: factors.heat.dissipation,
-      areaFactor: factors.heat.areaFactor,
+      referenceAmbient: factors.heat.referenceAmbient,
       note: factors.heat.note,
       source: factors.heat.source,
     }),
   );
+  if (c.environment.medium === undefined) assumed.push(assumedFinding('environment.medium', 'bushing.medium-default'));
   if (c.lubrication.supply !== 'none')
     warnings.push(finding('bushing.boundary-conservative', { supply: c.lubrication.supply }));
 
-  const all = bushingMaterials();
+  // Axial load: a flange or thrust washer at the locating end, its thickness taken from the axial space.
+  const axial = points.some((p) => p.Fa > 0);
+  const thrust = axial ? { face: sizeThrustFace(D, c.space.maxOuterDiameter), thickness: washerThickness(D) } : null;
+  if (thrust)
+    assumed.push(
+      assumedFinding('bushing.thrustFace', 'bushing.thrust-face', {
+        inner: thrust.face.inner,
+        outer: thrust.face.outer,
+        thickness: thrust.thickness,
+      }),
+    );
+  const setting: Setting = {
+    length: c.bushing?.length ?? commonLength(c, thrust?.thickness ?? 0, factors.lengthToDiameter.max),
+    lengthChosen: c.bushing?.length !== undefined ? 'case' : 'common',
+    thrust,
+    medium: c.environment.medium ?? 'dry',
+  };
+
+  const all = opts.materials ?? bushingMaterials();
   const named = c.bushing?.material;
   const candidates: (BushingMaterial | BushingMaterialRow)[] =
     named === undefined ? all : typeof named === 'string' ? all.filter((m) => m.id === named) : [named];
 
-  const materials = candidates.map((m) => checkMaterial(c, m, points, fm.value, fe.value, factors));
+  const materials = candidates.map((m) => checkMaterial(c, m, points, fm.value, fe.value, factors, setting));
   const feasible = materials.filter((m) => m.feasible);
   let best: BushingMaterialResult | undefined;
   let bestReason: Finding;
   if (feasible.length) {
-    // Most robust: the largest smallest margin over the governing checks; ties keep data order.
-    best = feasible.reduce((a, b) => (governingMargin(b.checks) > governingMargin(a.checks) ? b : a));
+    best = feasible.reduce(better);
+    const margin = materialMargin(best);
+    const tied = feasible.filter((m) => m !== best && Math.abs(materialMargin(m) - margin) <= MARGIN_TIE);
     bestReason = finding('bushing.best', {
       material: best.name,
       length: best.length,
-      margin: governingMargin(best.checks),
+      margin,
       passing: feasible.length,
+      tiedWith: tied.map((m) => m.name),
     });
   } else {
     bestReason = noneFeasible(materials);
     warnings.push(bestReason);
   }
-  // The material shown when none is feasible: the nearest miss, by the same largest-smallest-margin rule.
-  const shown =
-    best ??
-    materials.reduce<BushingMaterialResult | undefined>(
-      (a, b) => (a === undefined || governingMargin(b.checks) > governingMargin(a.checks) ? b : a),
-      undefined,
-    );
+  // The material shown when none is feasible: the nearest miss, by the same rule.
+  const shown = best ?? (materials.length ? materials.reduce(better) : undefined);
   return {
     option: 'bushing',
     materials,
+    length: setting.length,
     best: best?.id ?? null,
     shown: shown?.id ?? null,
     bestReason,
     feasible: best !== undefined,
     assumed,
     warnings,
-    sheet: shown && opts.sheet !== false ? bushingSheet(c, shown, points) : [],
+    sheet: shown && opts.sheet !== false ? bushingSheet(c, shown, points, factors.heat.referenceAmbient) : [],
   };
 }
 

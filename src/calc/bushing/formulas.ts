@@ -60,11 +60,27 @@ export function frictionHeat(f: number, F: number, V: number): number {
 }
 
 /**
- * Lumped steady temperature rise ΔT = Q/(h·A), K, with A = a·π·D·L the surface that sheds
- * the heat (housing and shaft near the bushing) as a multiple a of the bore area, and h a
- * combined convection-and-radiation coefficient W/(m²·K). A one-node estimate: valid for
- * a bushing in a compact housing in still air, steady running; common practice.
+ * Heat-dissipation resistance of a rubbing bearing in its housing, K·m²/W, taken from the
+ * material's own published limits: at its PV limit PV_max (Pa·m/s) with friction μ the rubbing
+ * surface reaches its maximum temperature T_max (°C) from a room at T_ref (°C), so
+ *   R = (T_max − T_ref) / (μ·PV_max).
+ * Valid for a bearing housed like the ones the limits were measured in (a metal housing, still
+ * air). Source: the PV limit of a dry or boundary bearing is its thermal limit, The Tribology
+ * Handbook, 2nd ed., 1995, A4 (from memory). Never negative.
  */
-export function temperatureRise(Q: number, h: number, areaFactor: number, D: number, L: number): number {
-  return Q / (h * areaFactor * Math.PI * D * L);
+export function heatResistance(Tmax: number, Tref: number, mu: number, PVmax: number): number {
+  return Math.max(0, Tmax - Tref) / (mu * PVmax);
+}
+
+/**
+ * Steady temperature rise of a dry or boundary-lubricated rubbing surface, K:
+ *   ΔT = R·μ·P·V
+ * μ friction coefficient, P·V Pa·m/s (μ·P·V is the frictional heat per unit projected area,
+ * W/m²), R the heat-dissipation resistance K·m²/W (see heatResistance). Linear in PV: holds up
+ * to the PV limit; beyond it the surface is too hot and the figure only says so.
+ * Source: The Tribology Handbook, 2nd ed., Neale (ed.), 1995, A4, dry-bearing temperature
+ * rise (form from memory).
+ */
+export function dryTemperatureRise(R: number, mu: number, pv: number): number {
+  return R * mu * pv;
 }

@@ -1,121 +1,215 @@
-import type { BushingMaterial, CaseSI } from '../../case/types.js';
+import type { BushingMaterial, CaseSI, Medium, Supply } from '../../case/types.js';
 import { advisory, allLimitsPass, makeCheck, type CheckRecord } from '../../core/check.js';
-import type { BushingFactors, BushingMaterialRow } from '../../data/bushing.js';
-import { frictionHeat, meanPressure, peakPressure, temperatureRise, wearDepth } from './formulas.js';
-import type { BushingMaterialResult, DutyPoint } from './types.js';
+import { finding, type Finding } from '../../core/finding.js';
+import type { BushingFactors, BushingMaterialRow, LubricantNeed, MediumRating } from '../../data/bushing.js';
+import { rubbingThrust, thrustChecks, thrustWearRate, type ThrustFace } from '../thrust/rubbing.js';
+import { dryTemperatureRise, frictionHeat, heatResistance, meanPressure, peakPressure, wearDepth } from './formulas.js';
+import type { BushingMaterialResult, BushingThrust, DutyPoint } from './types.js';
 
 /** Seconds in an hour: wear is summed over the life target in hours. */
 export const HOUR = 3600;
 /** Lengths are chosen in whole millimetres, as a drawing would give them. */
 export const LENGTH_STEP = 1e-3;
 
-/** The shortest length for each limit, the governing one, and the length taken. */
-interface Sizing {
-  minLengthBy: { pressure: number; pv: number; wear: number };
-  minLength: number;
+type Material = BushingMaterial | BushingMaterialRow;
+
+/** Rank of a lubricant need and of a supply on one scale: none 1 < grease 2 < oil 3 (oil bath and oil feed). */
+const NEED_RANK: Record<LubricantNeed, number> = { none: 1, grease: 2, oil: 3 };
+const SUPPLY_RANK: Record<Supply, number> = { none: 1, grease: 2, 'oil-bath': 3, 'oil-feed': 3 };
+/** Rank of a medium rating: good 1, fair 2, poor 3; a material must be at least fair (2) in the case's medium. */
+const RATING_RANK: Record<MediumRating, number> = { good: 1, fair: 2, poor: 3 };
+
+/** The length every material is checked at, and the thrust face when the case has axial load. */
+export interface Setting {
   length: number;
   lengthChosen: BushingMaterialResult['lengthChosen'];
+  /** Thrust face and washer thickness (m), or null without axial load. */
+  thrust: { face: ThrustFace; thickness: number } | null;
+  medium: Medium;
 }
 
 /**
- * Size a bushing: each limit scales as 1/L, so the shortest length for each is a closed form.
+ * Shortest length for each limit of the bore (each scales as 1/L, so each is a closed form):
  *   L_p = F_max/(D·p_max),  L_PV = (F·V)_max/(D·PV_max),  L_w = (Σ share·f_m·f_e·k·p_peak(L=1)·V·3600)·T/δ
- * F N, V m/s, D m, T the life target h, δ the wear allowance m. The length taken is the case's,
- * or the shortest meeting all three (and L/D_min) rounded up to whole millimetres, capped by the
- * axial space. Source: the formulas in ./formulas.ts; whole millimetres common practice.
+ * F N, V m/s, D m, T the life target h, δ the wear allowance m. Source: ./formulas.ts.
  */
-function sizeLength(
-  c: CaseSI,
-  m: BushingMaterial | BushingMaterialRow,
-  points: DutyPoint[],
-  wearRateTimesL: (k: number) => number,
-  lengthToDiameterMin: number,
-): Sizing {
+function shortestLengths(c: CaseSI, m: Material, points: DutyPoint[], wearRateTimesL: number) {
   const D = c.shaft.diameter;
-  const Fmax = Math.max(...points.map((p) => p.F));
-  const FVmax = Math.max(...points.map((p) => p.F * p.V));
-  const minLengthBy = {
-    pressure: Fmax / (D * m.maxPressure),
-    pv: FVmax / (D * m.maxPV),
-    wear: (wearRateTimesL(m.wearFactor) * c.life.hours) / c.life.wearAllowance,
+  const by = {
+    pressure: Math.max(...points.map((p) => p.F)) / (D * m.maxPressure),
+    pv: Math.max(...points.map((p) => p.F * p.V)) / (D * m.maxPV),
+    wear: (wearRateTimesL * c.life.hours) / c.life.wearAllowance,
   };
-  const minLength = Math.max(minLengthBy.pressure, minLengthBy.pv, minLengthBy.wear);
-  if (c.bushing?.length !== undefined)
-    return { minLengthBy, minLength, length: c.bushing.length, lengthChosen: 'case' };
-  const wanted = Math.ceil(Math.max(minLength, lengthToDiameterMin * D) / LENGTH_STEP - 1e-9) * LENGTH_STEP;
-  return {
-    minLengthBy,
-    minLength,
-    length: Math.min(wanted, c.space.maxLength),
-    lengthChosen: wanted > c.space.maxLength ? 'space-limited' : 'shortest-meeting-limits',
-  };
-}
-
-/** The figures a material's checks are held against, at the length taken. */
-interface Figures {
-  length: number;
-  pressure: number;
-  Vmax: number;
-  pv: number;
-  lifeHours: number;
-  temperature: number;
-  outerDiameter: number;
-  lOverD: number;
+  return { minLengthBy: by, minLength: Math.max(by.pressure, by.pv, by.wear) };
 }
 
 /**
- * The checks of one material at its length: pressure, speed, PV and wear life against the
- * material's limits (the material row's source); temperature and L/D as advice; axial and
- * radial space against the case.
+ * The thrust face over the duty: each point with axial load through rubbingThrust, then the
+ * largest pressure, speed and PV, the wear life by summing the points' wear rates by share
+ * (linear accumulation of Archard wear), and the friction power at the largest Fa·V.
  */
-function materialChecks(
+function thrustOverDuty(
   c: CaseSI,
-  m: BushingMaterial | BushingMaterialRow,
-  f: Figures,
+  m: Material,
+  points: DutyPoint[],
+  t: { face: ThrustFace; thickness: number },
+  fMotion: number,
+  fEnv: number,
+): { thrust: BushingThrust; checks: CheckRecord[]; meanPower: number } {
+  const loaded = points.filter((p) => p.Fa > 0);
+  const each = loaded.map((p) => ({
+    share: p.share,
+    r: rubbingThrust(
+      {
+        axial: p.Fa,
+        face: t.face,
+        ...(p.n !== undefined ? { speed: p.n } : {}),
+        ...(c.shaft.oscillation ? { oscillation: c.shaft.oscillation } : {}),
+        hours: c.life.hours,
+        wearAllowance: c.life.wearAllowance,
+        fMotion,
+        fEnv,
+      },
+      m,
+    ),
+  }));
+  const rate = each.reduce(
+    (s, e) => s + e.share * thrustWearRate(m.wearFactor, e.r.pressure, e.r.velocity, fMotion, fEnv),
+    0,
+  );
+  const top = each.reduce((a, b) => (b.r.pv > a.r.pv ? b : a));
+  const thrust: BushingThrust = {
+    face: t.face,
+    thickness: t.thickness,
+    pressure: Math.max(...each.map((e) => e.r.pressure)),
+    velocity: Math.max(...each.map((e) => e.r.velocity)),
+    pv: Math.max(...each.map((e) => e.r.pv)),
+    lifeHours: rate > 0 ? c.life.wearAllowance / rate : Infinity,
+    frictionPower: top.r.frictionPower,
+  };
+  const meanPower = each.reduce((s, e) => s + e.share * e.r.frictionPower, 0);
+  return { thrust, checks: thrustChecks(thrust, m, c.life.hours), meanPower };
+}
+
+/**
+ * Whether the case can give the material what it needs, and whether it stands the service
+ * medium. Each unmet condition is a failing limit check (value and limit on the rank scales
+ * above: lubricant none 1, grease 2, oil 3; medium rating good 1, fair 2, poor 3) and a finding;
+ * met conditions add no check, so they never decide a margin.
+ */
+function suitability(c: CaseSI, m: Material, medium: Medium): { checks: CheckRecord[]; reasons: Finding[] } {
+  const checks: CheckRecord[] = [];
+  const reasons: Finding[] = [];
+  const needs = m.needs ?? 'none';
+  const supply = c.lubrication.supply;
+  if (NEED_RANK[needs] > SUPPLY_RANK[supply]) {
+    checks.push(
+      makeCheck(
+        'lubricant-need',
+        'Lubricant the material needs, within the supply (none 1, grease 2, oil 3)',
+        NEED_RANK[needs],
+        SUPPLY_RANK[supply],
+        '1',
+        'max',
+        m.needsSource ?? m.source,
+      ),
+    );
+    reasons.push(finding('bushing.needs-lubricant', { material: m.name, needs, supply }));
+  }
+  const rating = medium === 'water' || medium === 'slurry' ? m.water : medium === 'chemical' ? m.chemical : undefined;
+  if (rating !== undefined && RATING_RANK[rating] > RATING_RANK.fair) {
+    checks.push(
+      makeCheck(
+        'medium',
+        `Resistance in ${medium} (good 1, fair 2, poor 3)`,
+        RATING_RANK[rating],
+        RATING_RANK.fair,
+        '1',
+        'max',
+        m.mediaSource ?? m.source,
+      ),
+    );
+    reasons.push(finding('bushing.medium-unsuited', { material: m.name, medium, rating }));
+  }
+  return { checks, reasons };
+}
+
+/**
+ * Check one material class at the setting's length: mean pressure, sliding speed, PV and wear
+ * life of the bore against the material's limits; the thrust face (when there is axial load)
+ * with the same material; the lubricant need and the service medium; the outer diameter in the
+ * radial space; the axial space when the case fixes the length or nothing fits (the common
+ * length fits by construction, so its check would only add a margin of zero); temperature (heat balance ΔT = R·μ·P·V) and L/D as advice. Wear depth and life
+ * at the typical wear factor and at the ends of its scatter. SI units; lives in hours.
+ */
+export function checkMaterial(
+  c: CaseSI,
+  m: Material,
+  points: DutyPoint[],
+  fMotion: number,
+  fEnv: number,
   factors: BushingFactors,
-): CheckRecord[] {
+  setting: Setting,
+): BushingMaterialResult {
+  const D = c.shaft.diameter;
+  const T = c.life.hours;
+  const L = setting.length;
+  const kLow = m.wearFactorLow ?? m.wearFactor / 3;
+  const kHigh = m.wearFactorHigh ?? m.wearFactor * 3;
+  // Wear depth per hour of a bushing of unit length (÷ L gives m/h): Σ share·f_m·f_e·k·p_peak(L = 1)·V·3600 s
+  const wearRateTimesL = (k: number) =>
+    points.reduce((s, p) => s + p.share * wearDepth(k, peakPressure(p.F, D, 1), p.V, HOUR, fMotion, fEnv), 0);
+  const { minLengthBy, minLength } = shortestLengths(c, m, points, wearRateTimesL(m.wearFactor));
+
+  const Fmax = Math.max(...points.map((p) => p.F));
+  const Vmax = Math.max(...points.map((p) => p.V));
+  const governing = points.reduce((a, b) => (b.F * b.V > a.F * a.V ? b : a));
+  // An inline material (a case's own row) carries no wall sizing: 1.5 mm and 10 % of the bore (common practice).
+  const wall = Math.max('minWall' in m ? m.minWall : 1.5e-3, ('wallFraction' in m ? m.wallFraction : 0.1) * D);
+  const outerDiameter = D + 2 * wall;
+  const pressure = meanPressure(Fmax, D, L);
+  const pv = (governing.F * governing.V) / (D * L);
+  const rate = (k: number) => wearRateTimesL(k) / L; // m/h
+  const life = (k: number) => c.life.wearAllowance / rate(k);
+  const wearDepthTyp = rate(m.wearFactor) * T;
+  const Q = frictionHeat(m.friction, governing.F, governing.V);
+  const R = heatResistance(m.maxTemperature, factors.heat.referenceAmbient, m.friction, m.maxPV);
+  const temperature = c.environment.ambient + dryTemperatureRise(R, m.friction, pv);
+  const lOverD = L / D;
+
   const src = m.source;
   const ld = factors.lengthToDiameter;
-  const wearSrc = `Archard wear law, The Tribology Handbook 2nd ed. 1995, A5; wear factor: ${src}`;
-  return [
-    makeCheck('pressure', 'Mean pressure P = F/(D·L)', f.pressure, m.maxPressure, 'Pa', 'max', src),
-    makeCheck('velocity', 'Sliding speed V', f.Vmax, m.maxVelocity, 'm/s', 'max', src),
-    makeCheck('pv', 'PV', f.pv, m.maxPV, 'Pa*m/s', 'max', src),
+  const thickness = setting.thrust?.thickness ?? 0;
+  const checks: CheckRecord[] = [
+    makeCheck('pressure', 'Mean pressure P = F/(D·L)', pressure, m.maxPressure, 'Pa', 'max', src),
+    makeCheck('velocity', 'Sliding speed V', Vmax, m.maxVelocity, 'm/s', 'max', src),
+    makeCheck('pv', 'PV', pv, m.maxPV, 'Pa*m/s', 'max', src),
     makeCheck(
       'wear-life',
       'Hours to wear through the allowance (typical wear factor)',
-      f.lifeHours,
-      c.life.hours,
+      life(m.wearFactor),
+      T,
       'h',
       'min',
-      wearSrc,
+      `Archard wear law, The Tribology Handbook 2nd ed. 1995, A5; wear factor: ${src}`,
     ),
-    // Advisory: the one-node heat model is crude; PV is the published thermal criterion.
+    // Advisory: the heat balance takes its resistance from the PV limit, which is the published criterion.
     advisory(
       makeCheck(
         'temperature',
-        'Running temperature (lumped estimate, advisory)',
-        f.temperature,
+        'Rubbing-surface temperature (heat balance, advisory)',
+        temperature,
         m.maxTemperature,
         'degC',
         'max',
-        `${src}; heat model: ${factors.heat.source}; margin: share of the allowed rise above ambient`,
+        `${src}; heat balance: ${factors.heat.source}; margin: share of the allowed rise above ambient`,
         c.environment.ambient,
       ),
     ),
     makeCheck(
-      'axial-space',
-      'Length within the axial space',
-      f.length,
-      c.space.maxLength,
-      'm',
-      'max',
-      'the case (space.maxLength)',
-    ),
-    makeCheck(
       'radial-space',
       'Outer diameter within the housing bore',
-      f.outerDiameter,
+      outerDiameter,
       c.space.maxOuterDiameter,
       'm',
       'max',
@@ -123,75 +217,42 @@ function materialChecks(
     ),
     // Length/diameter is advice (edge loading, misalignment), not a limit.
     advisory(
-      f.lOverD < 1
-        ? makeCheck('length-to-diameter', 'Length/diameter (advisory)', f.lOverD, ld.min, '1', 'min', ld.source)
-        : makeCheck('length-to-diameter', 'Length/diameter (advisory)', f.lOverD, ld.max, '1', 'max', ld.source),
+      lOverD < 1
+        ? makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.min, '1', 'min', ld.source)
+        : makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.max, '1', 'max', ld.source),
     ),
   ];
-}
-
-/**
- * Size and check one material class for the duty (see sizeLength and materialChecks): wear
- * depth and life at the typical wear factor and at the ends of its scatter, friction heat and
- * the lumped temperature rise. SI units; lives in hours.
- */
-export function checkMaterial(
-  c: CaseSI,
-  m: BushingMaterial | BushingMaterialRow,
-  points: DutyPoint[],
-  fMotion: number,
-  fEnv: number,
-  factors: BushingFactors,
-): BushingMaterialResult {
-  const D = c.shaft.diameter;
-  const T = c.life.hours;
-  const allowance = c.life.wearAllowance;
-  const kLow = m.wearFactorLow ?? m.wearFactor / 3;
-  const kHigh = m.wearFactorHigh ?? m.wearFactor * 3;
-
-  // Wear depth per hour of a bushing of unit length (so ÷ L gives m/h): Σ share·f_m·f_e·k·p_peak(L = 1)·V·3600 s
-  const wearRateTimesL = (k: number) =>
-    points.reduce((s, p) => s + p.share * wearDepth(k, peakPressure(p.F, D, 1), p.V, HOUR, fMotion, fEnv), 0);
-  const { minLengthBy, minLength, length, lengthChosen } = sizeLength(
-    c,
-    m,
-    points,
-    wearRateTimesL,
-    factors.lengthToDiameter.min,
-  );
-  const Fmax = Math.max(...points.map((p) => p.F));
-  const FVmax = Math.max(...points.map((p) => p.F * p.V));
-  const Vmax = Math.max(...points.map((p) => p.V));
-
-  // An inline material (a case's own row) carries no wall sizing: 1.5 mm and 10 % of the bore (common practice).
-  const wall = Math.max('minWall' in m ? m.minWall : 1.5e-3, ('wallFraction' in m ? m.wallFraction : 0.1) * D);
-  const outerDiameter = D + 2 * wall;
-  const pressure = meanPressure(Fmax, D, length);
-  const pPeak = peakPressure(Fmax, D, length);
-  const pv = FVmax / (D * length);
-  const rate = (k: number) => wearRateTimesL(k) / length; // m/h
-  const life = (k: number) => allowance / rate(k);
-  const wearDepthTyp = rate(m.wearFactor) * T;
-  const governing = points.reduce((a, b) => (b.F * b.V > a.F * a.V ? b : a));
-  const Q = frictionHeat(m.friction, governing.F, governing.V);
-  const temperature =
-    c.environment.ambient + temperatureRise(Q, factors.heat.dissipation, factors.heat.areaFactor, D, length);
-  const src = m.source;
-  const lOverD = length / D;
-  const lifeHours = life(m.wearFactor);
-  const figures = { length, pressure, Vmax, pv, lifeHours, temperature, outerDiameter, lOverD };
-  const checks = materialChecks(c, m, figures, factors);
-  const feasible = allLimitsPass(checks);
+  if (setting.lengthChosen === 'case' || L + thickness > c.space.maxLength)
+    checks.push(
+      makeCheck(
+        'axial-space',
+        setting.thrust ? 'Length plus thrust washer within the axial space' : 'Length within the axial space',
+        L + thickness,
+        c.space.maxLength,
+        'm',
+        'max',
+        'the case (space.maxLength); washer thickness common practice',
+      ),
+    );
+  const thrust = setting.thrust ? thrustOverDuty(c, m, points, setting.thrust, fMotion, fEnv) : null;
+  if (thrust) checks.push(...thrust.checks);
+  const fit = suitability(c, m, setting.medium);
+  checks.push(...fit.checks);
 
   return {
     id: m.id,
     name: m.name,
-    length,
-    lengthChosen,
+    length: L,
+    lengthChosen: setting.lengthChosen,
+    needs: m.needs ?? 'none',
+    water: m.water ?? 'fair',
+    chemical: m.chemical ?? 'fair',
+    thrust: thrust?.thrust ?? null,
+    reasons: fit.reasons,
     outerDiameter,
     lengthToDiameter: lOverD,
     pressure,
-    peakPressure: pPeak,
+    peakPressure: peakPressure(Fmax, D, L),
     velocity: Vmax,
     pv,
     factors: { motion: fMotion, environment: fEnv },
@@ -206,9 +267,10 @@ export function checkMaterial(
     minLengthBy,
     temperature,
     frictionCoefficient: m.friction,
-    frictionPower: Q,
-    meanFrictionPower: points.reduce((sum, p) => sum + p.share * frictionHeat(m.friction, p.F, p.V), 0),
-    feasible,
+    frictionPower: Q + (thrust?.thrust.frictionPower ?? 0),
+    meanFrictionPower:
+      points.reduce((sum, p) => sum + p.share * frictionHeat(m.friction, p.F, p.V), 0) + (thrust?.meanPower ?? 0),
+    feasible: allLimitsPass(checks),
     checks,
     source: src,
   };

@@ -4,11 +4,20 @@ import { num } from '../../core/format.js';
 import { HOUR } from './material.js';
 import type { BushingMaterialResult, DutyPoint } from './types.js';
 
+/** The temperature and PV limits the result's checks were held against. */
+const tempLimit = (m: BushingMaterialResult) => m.checks.find((k) => k.id === 'temperature')?.limit ?? NaN;
+const pvLimit = (m: BushingMaterialResult) => m.checks.find((k) => k.id === 'pv')?.limit ?? NaN;
+
 /**
  * The bushing's calculation sheet for the material shown: each figure with its formula and the
  * case's numbers substituted (SI), so a reviewer can redo the arithmetic.
  */
-export function bushingSheet(c: CaseSI, m: BushingMaterialResult, points: DutyPoint[]): SheetLine[] {
+export function bushingSheet(
+  c: CaseSI,
+  m: BushingMaterialResult,
+  points: DutyPoint[],
+  refAmbient: number,
+): SheetLine[] {
   const D = c.shaft.diameter;
   const L = m.length;
   const g = points.reduce((a, b) => (b.F * b.V > a.F * a.V ? b : a));
@@ -77,13 +86,43 @@ export function bushingSheet(c: CaseSI, m: BushingMaterialResult, points: DutyPo
       source: 'Archard 1953',
     },
     {
-      label: 'Frictional heat Q',
+      label: 'Frictional heat Q of the bore',
       formula: 'Q = f·F·V',
       substituted: `Q = ${m.frictionCoefficient} · ${num(g.F)} N · ${num(g.V)} m/s`,
-      value: m.frictionPower,
+      value: m.frictionCoefficient * g.F * g.V,
       unit: 'W',
       source: hb,
     },
+    {
+      label: 'Rubbing-surface temperature (advisory)',
+      formula: 'T = T_amb + (T_max − T_ref)·PV/PV_max  (ΔT = R·μ·P·V, R = (T_max − T_ref)/(μ·PV_max))',
+      substituted: `T = ${num(c.environment.ambient)} + (${num(tempLimit(m))} − ${num(refAmbient)})·${num(m.pv)} / ${num(pvLimit(m))}`,
+      value: m.temperature,
+      unit: 'degC',
+      source: 'The Tribology Handbook 2nd ed. 1995, A4 (form from memory)',
+    },
   ];
+  const t = m.thrust;
+  if (t) {
+    const Fa = Math.max(...points.map((p) => p.Fa));
+    lines.push(
+      {
+        label: 'Thrust face mean pressure p',
+        formula: 'p = Fa / (π/4·(d_o² − d_i²))',
+        substituted: `p = ${num(Fa)} N / (π/4·(${num(t.face.outer)}² − ${num(t.face.inner)}²) m²)`,
+        value: t.pressure,
+        unit: 'Pa',
+        source: hb,
+      },
+      {
+        label: 'Thrust face wear life',
+        formula: 't = δ / (Σ share·f_m·f_e·k·p·V_m·3600)',
+        substituted: `t = ${num(c.life.wearAllowance)} m / (wear rate over the duty at p_max ${num(t.pressure)} Pa, V_m ${num(t.velocity)} m/s)`,
+        value: t.lifeHours,
+        unit: 'h',
+        source: 'Archard 1953; The Tribology Handbook 2nd ed. 1995, A5',
+      },
+    );
+  }
   return lines;
 }

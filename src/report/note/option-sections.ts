@@ -101,7 +101,9 @@ function bushingBlocks(advice: AdviceResult, units: UnitSystem, chartById: Chart
     kind: 'table',
     head: [
       'material',
+      'needs',
       'length',
+      'shortest passing',
       'mean pressure',
       'PV',
       'wear life (short – typical – long)',
@@ -110,7 +112,9 @@ function bushingBlocks(advice: AdviceResult, units: UnitSystem, chartById: Chart
     ],
     rows: advice.checks.bushing.materials.map((x) => [
       `${x.name} (${x.id})`,
+      x.needs,
       fmt(x.length, 'm', units),
+      fmt(x.minLength, 'm', units),
       fmt(x.pressure, 'Pa', units),
       fmt(x.pv, 'Pa*m/s', units),
       `${fmt(x.lifeBand.short, 'h', units)} – ${fmt(x.lifeBand.typical, 'h', units)} – ${fmt(x.lifeBand.long, 'h', units)}`,
@@ -121,6 +125,11 @@ function bushingBlocks(advice: AdviceResult, units: UnitSystem, chartById: Chart
         .join('; ') || '—',
     ]),
   });
+  if (shown?.thrust)
+    blocks.push({
+      kind: 'p',
+      text: `Axial load on a flange or thrust washer of ${shown.name}, ${fmt(shown.thrust.face.inner, 'm', units)} / ${fmt(shown.thrust.face.outer, 'm', units)}, ${fmt(shown.thrust.thickness, 'm', units)} thick (taken from the axial space): face pressure ${fmt(shown.thrust.pressure, 'Pa', units)}, PV ${fmt(shown.thrust.pv, 'Pa*m/s', units)}, wear life ${fmt(shown.thrust.lifeHours, 'h', units)}; its checks are in the table above.`,
+    });
   blocks.push({ kind: 'p', text: describe(advice.checks.bushing.bestReason) });
   blocks.push({ kind: 'chart', chart: chartById('bushing-wear') });
   return blocks;

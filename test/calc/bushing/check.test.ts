@@ -7,7 +7,7 @@ import { pumpCase } from '../../helpers/case.js';
 describe('checkBushing', () => {
   it('at the reported shortest length the governing limit is met with zero margin', () => {
     const first = checkBushing(pumpCase({ bushing: { material: 'sintered-bronze' } })).materials[0]!;
-    const atMin = checkBushing(pumpCase({ bushing: { material: 'sintered-bronze', length: first.minLength } }))
+    const atMin = checkBushing(pumpCase({ bushing: { material: 'sintered-bronze', length: `${first.minLength} m` } }))
       .materials[0]!;
     const governing = Math.min(
       ...atMin.checks.filter((k) => ['pressure', 'pv', 'wear-life'].includes(k.id)).map((k) => k.margin),

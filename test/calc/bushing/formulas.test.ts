@@ -6,7 +6,8 @@ import {
   oscillatingSlidingSpeed,
   peakPressure,
   rotatingSlidingSpeed,
-  temperatureRise,
+  dryTemperatureRise,
+  heatResistance,
   wearDepth,
 } from '../../../src/calc/bushing/formulas.js';
 import { fmtValue } from '../../../src/report/units.js';
@@ -55,9 +56,17 @@ describe('hand-worked values from the formulas', () => {
     expect(oscillatingSlidingSpeed(0.04, Math.PI / 2, 1)).toBeCloseTo(0.0628319, 6);
   });
 
-  it('heat and lumped temperature rise', () => {
-    // Q = 0.1 × 1000 N × 0.5 m/s = 50 W; ΔT = 50 / (20 × 6 × π × 0.04 × 0.04) = 82.9 K.
+  it('heat and the dry-bearing temperature rise ΔT = R·μ·P·V', () => {
+    // Q = 0.1 × 1000 N × 0.5 m/s = 50 W.
     expect(frictionHeat(0.1, 1000, 0.5)).toBeCloseTo(50, 10);
-    expect(temperatureRise(50, 20, 6, 0.04, 0.04)).toBeCloseTo(82.89, 2);
+    // A material rated 75 degC at PV_max 1.16 MPa·m/s with μ = 0.08, limits taken at 20 degC:
+    // R = (75 − 20) / (0.08 × 1.16e6) = 5.927e-4 K·m²/W; at PV 0.5 MPa·m/s
+    // ΔT = 5.927e-4 × 0.08 × 0.5e6 = 23.71 K (= 55 K × 0.5/1.16).
+    const R = heatResistance(75, 20, 0.08, 1.16e6);
+    expect(R).toBeCloseTo(5.927e-4, 7);
+    expect(dryTemperatureRise(R, 0.08, 0.5e6)).toBeCloseTo(23.71, 2);
+    // At the PV limit the surface reaches the limit temperature; a limit below the room gives no rise.
+    expect(20 + dryTemperatureRise(R, 0.08, 1.16e6)).toBeCloseTo(75, 9);
+    expect(heatResistance(15, 20, 0.1, 1e6)).toBe(0);
   });
 });
