@@ -90,7 +90,7 @@ export const journalWording: KernelWording = {
     'journal.grade-swept': () => ({
       value: 'chosen from the sweep',
       reason:
-        'ISO VG grades of data/lubricants.json, the one giving the largest film margin within the temperature limit',
+        'the journal grades of data/lubricants.json (sweepGrades), the one giving the largest film margin within the temperature limit',
     }),
     'journal.representative-design': (v) => ({
       value: `L = ${textNum(v['length'])} m, c = ${textNum(v['radialClearance'])} m`,
