@@ -98,7 +98,7 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     petroffFrictionCoefficient: res.petroffFrictionCoefficient,
     frictionTorque: res.frictionTorque,
     powerLoss: res.powerLoss,
-    meanPowerLoss: meanPowerLoss(points),
+    meanPowerLoss: meanPowerLoss(points) + (thrust?.meanPowerLoss ?? 0),
     flow: res.flow,
     sideFlow: res.sideFlow,
     peakPressure: res.peakPressure,

@@ -47,8 +47,6 @@ export interface JournalThrustPad {
   points: (PadBearingResult & { share: number; axial: number; speed: number })[];
   /** Index in `points` of the smallest film. */
   governingPoint: number;
-  /** Share-weighted mean power loss over the axial points, W. */
-  meanPowerLoss: number;
 }
 
 export interface JournalThrustRubbing {
@@ -61,6 +59,8 @@ export interface JournalThrustRubbing {
   frictionPower: number;
   /** Wear life over the duty, h. */
   lifeHours: number;
+  /** Share-weighted mean friction power over the duty, W. */
+  meanFrictionPower: number;
 }
 
 export interface JournalThrust {
@@ -70,6 +70,11 @@ export interface JournalThrust {
   axial: number;
   /** Axial room the collar or washer takes beside the journal, m. */
   axialThickness: number;
+  /**
+   * Time mean of the thrust face's power loss over the duty, W: Σ share·P over the points
+   * with axial load (shares of the whole duty, adding to 1; 0 where there is no thrust).
+   */
+  meanPowerLoss: number;
   pad: JournalThrustPad | null;
   rubbing: JournalThrustRubbing | null;
   checks: CheckRecord[];
@@ -172,14 +177,12 @@ function padPath(
   evaluated.forEach((p, i) => {
     if (p.minFilmThickness < evaluated[governingPoint]!.minFilmThickness) governingPoint = i;
   });
-  const shares = evaluated.reduce((s, p) => s + p.share, 0);
   return {
     ring,
     taperDepth,
     allowableFilm: allowableFilm(ring.outer, crit),
     points: evaluated,
     governingPoint,
-    meanPowerLoss: shares > 0 ? evaluated.reduce((s, p) => s + p.share * p.powerLoss, 0) / shares : 0,
   };
 }
 
@@ -253,7 +256,13 @@ function rubbingPath(
     lifeHours: bounded(lifeHours),
   };
   return {
-    result: { material: id, face, ...fig, frictionPower: worst.frictionPower },
+    result: {
+      material: id,
+      face,
+      ...fig,
+      frictionPower: worst.frictionPower,
+      meanFrictionPower: points.reduce((s, p, i) => s + p.share * results[i]!.frictionPower, 0),
+    },
     checks: thrustChecks(fig, material, c.life.hours),
   };
 }
@@ -296,6 +305,7 @@ export function journalThrust(
       reason,
       axial,
       axialThickness,
+      meanPowerLoss: r.result.meanFrictionPower,
       pad: null,
       rubbing: r.result,
       checks: [...r.checks, roomCheck(c, journalLength, axialThickness)],
@@ -312,7 +322,8 @@ export function journalThrust(
     const alternative = rubbing('pad-film-thin');
     if (governingMargin(alternative.checks) >= 0) return alternative;
   }
-  return { path: 'pad', reason: 'oil-film', axial, axialThickness, pad, rubbing: null, checks };
+  const meanPowerLoss = pad.points.reduce((sum, p) => sum + p.share * p.powerLoss, 0);
+  return { path: 'pad', reason: 'oil-film', axial, axialThickness, meanPowerLoss, pad, rubbing: null, checks };
 }
 
 /** The finding that says which thrust path was taken and why (worded in src/report/findings/journal.ts). */

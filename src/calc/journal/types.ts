@@ -69,7 +69,8 @@ export interface JournalResult {
   /**
    * Share-weighted mean power loss over the operating points, W: Σ share·powerLoss/Σ share
    * over `points` (0 at points without a film) — a time mean over the duty, like the
-   * rolling candidate's `frictionPower`.
+   * rolling candidate's `frictionPower` — plus the thrust face's time-mean loss
+   * (`thrust.meanPowerLoss`), so that the option's figure covers the whole load it carries.
    */
   meanPowerLoss: number;
   /** Flow drawn in at the maximum film thickness, m³/s. */

@@ -47,6 +47,9 @@ describe('journal thrust path', () => {
     // Unit load Fa/(N·A) and the power loss are reported as computed.
     expect(thrust.find((k) => k.id === 'thrust-unit-load')!.value).toBeCloseTo(g.unitLoad, 6);
     expect(g.powerLoss).toBeGreaterThan(0);
+    // The option's mean power covers the thrust pads too (one point, share 1).
+    expect(r.thrust!.meanPowerLoss).toBeCloseTo(g.powerLoss, 9);
+    expect(r.meanPowerLoss).toBeCloseTo(r.points[0]!.powerLoss + g.powerLoss, 9);
     expect(r.sheet.some((l) => l.label === 'Thrust pad minimum film h_min')).toBe(true);
   });
 
