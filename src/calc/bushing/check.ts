@@ -9,6 +9,12 @@ import { checkMaterial, LENGTH_STEP, type Setting } from './material.js';
 import { bushingSheet } from './sheet.js';
 import type { BushingMaterialResult, BushingResult, DutyPoint } from './types.js';
 
+/**
+ * Axial load below this (N) needs no thrust face: a location against a shoulder takes it. It keeps
+ * a vanishing load from giving a face whose wear rate rounds to zero (an infinite life).
+ */
+export const MIN_AXIAL = 1;
+
 /** Margins closer than this are equal: a tie, broken by the stated rule, never by list order. */
 export const MARGIN_TIE = 1e-9;
 
@@ -105,7 +111,7 @@ export function checkBushing(
     warnings.push(finding('bushing.boundary-conservative', { supply: c.lubrication.supply }));
 
   // Axial load: a flange or thrust washer at the locating end, its thickness taken from the axial space.
-  const axial = points.some((p) => p.Fa > 0);
+  const axial = points.some((p) => p.Fa >= MIN_AXIAL);
   const thrust = axial ? { face: sizeThrustFace(D, c.space.maxOuterDiameter), thickness: washerThickness(D) } : null;
   if (thrust)
     assumed.push(
