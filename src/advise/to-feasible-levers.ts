@@ -24,6 +24,12 @@ export interface Lever {
   steps: string[];
   /** true: feasibility grows along the steps (bisect); false: try each in turn. */
   monotone: boolean;
+  /**
+   * A discrete input's strongest value: when the option fails with it, no value of this input
+   * is tried further (pumped oil feeds a film or a rolling bearing at least as well as a bath,
+   * common practice).
+   */
+  probe?: string;
 }
 
 /** Largest housing bore tried, as a multiple of the shaft diameter (common practice: a sane upper bound). */
@@ -194,13 +200,13 @@ export function leversFor(
     const now = c.life.wearAllowance;
     add('life.wearAllowance', lengthsUp(getPath(doc, 'life.wearAllowance'), now, now * MAX_WEAR_MULTIPLE, 1e-5), true);
   }
-  // A bushing may need another supply than it has (its material's need); the others only more.
+  // A bushing may need another supply than it has (its material's need); the others only more,
+  // pumped oil tried first as the probe.
   const supply = SUPPLIES.indexOf(c.lubrication.supply);
-  add(
-    'lubrication.supply',
-    nearestFirst(SUPPLIES, c.lubrication.supply, (i) => option === 'bushing' || i > supply),
-    false,
-  );
+  const supplies = nearestFirst(SUPPLIES, c.lubrication.supply, (i) => option === 'bushing' || i > supply);
+  add('lubrication.supply', supplies, false);
+  if (option !== 'bushing' && supplies.includes('oil-feed') && out.at(-1)?.field === 'lubrication.supply')
+    out.at(-1)!.probe = 'oil-feed';
   if (option !== 'bushing' && (!journal || oil) && c.lubrication.viscosity === undefined)
     add(
       'lubrication.oil',
@@ -215,7 +221,23 @@ export function leversFor(
       nearestFirst(CONTAMINATIONS, dirt, (i) => i < CONTAMINATIONS.indexOf(dirt)),
       false,
     );
-  return out;
+  return journal ? out.filter((l) => canHelp(l.field, failed)) : out;
+}
+
+/**
+ * Journal checks whose outcome only some inputs can change: the start-up unit load W/(L·D) only
+ * the axial room (through L), the supply check only the supply, continuous rotation none of
+ * them. A single change must clear every failing check, so an input that cannot change one of
+ * them is not tried (the journal's kernel is the costly one to re-run).
+ */
+const JOURNAL_CHECK_INPUTS: Record<string, readonly string[]> = {
+  'start-unit-load': ['space.maxLength'],
+  supply: ['lubrication.supply'],
+  motion: [],
+};
+
+function canHelp(field: string, failed: readonly CheckRecord[]): boolean {
+  return failed.every((k) => JOURNAL_CHECK_INPUTS[k.id]?.includes(field) ?? true);
 }
 
 /** The grade in use: the case's, else the grease's base oil on grease, else the table's default for oil. */

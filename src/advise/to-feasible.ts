@@ -85,9 +85,11 @@ export async function toMakeFeasible(
     // The option's own result on a changed document, from its search run: the kernels are pure,
     // so the full run reuses it and computes the other options afresh.
     const own = new Map<string, AdviceResult['checks'][OptionName]>();
+    const searched = new Map<string, boolean>();
     const feasibleIn = async (text: unknown, full: boolean): Promise<boolean> => {
-      runs++;
       const key = JSON.stringify(text);
+      if (!full && searched.has(key)) return searched.get(key)!;
+      runs++;
       let c: CaseSI;
       try {
         c = validateCase(text).case;
@@ -103,7 +105,9 @@ export async function toMakeFeasible(
         runRules: full ? verifyRun : searchRun,
       }).catch(() => null);
       if (a && !full) own.set(key, a.checks[option]);
-      return a?.ranking.find((x) => x.option === option)!.feasible === true;
+      const ok = a?.ranking.find((x) => x.option === option)!.feasible === true;
+      if (!full) searched.set(key, ok);
+      return ok;
     };
     const found: FeasibleChange[] = [];
     for (const lever of leversFor(option, doc.given, base, doc.assumed, r.failed)) {
@@ -129,7 +133,8 @@ export async function toMakeFeasible(
  * The smallest verified value of one lever, or null. Monotone: the far end first (if the
  * option fails there, no value of this input makes it feasible), then bisection for the first
  * value that passes the search, then that value (and, if it fails the full run, the next two)
- * verified. Discrete: each value in turn, the first that passes both.
+ * verified. Discrete: the probe first (if the option fails with it, none), then each value in
+ * turn, the first that passes both (the probe's own search run is not repeated: same document).
  */
 async function search(
   lever: Lever,
@@ -140,6 +145,7 @@ async function search(
   const at = (i: number, full: boolean) => feasibleIn(withPath(doc, lever.field, lever.steps[i]), full);
   const n = lever.steps.length;
   if (!lever.monotone) {
+    if (lever.probe !== undefined && !(await feasibleIn(withPath(doc, lever.field, lever.probe), false))) return null;
     for (let i = 0; i < n && left() > 0; i++)
       if ((await at(i, false)) && left() > 0 && (await at(i, true))) return lever.steps[i]!;
     return null;
