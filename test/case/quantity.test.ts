@@ -37,9 +37,30 @@ describe('parseQuantity: SI and US customary strings to the internal unit', () =
     expect(parseQuantity('68 cSt', 'viscosity')).toBeCloseTo(68e-6 * 870, 10);
   });
 
-  it('plain numbers are taken in the internal unit (temperatures °C)', () => {
+  it('plain numbers are taken in the internal unit (temperatures °C) when read as base units', () => {
     expect(parseQuantity(0.04, 'length')).toBe(0.04);
     expect(parseQuantity(40, 'temperature')).toBe(40);
+    expect(parseQuantity('120', 'speed', 'base')).toBe(120);
+  });
+
+  it('refused bare numbers name the number in the usual unit and in a second one that reads back the same', () => {
+    const refusal = (v: unknown, kind: Parameters<typeof parseQuantity>[1]) => {
+      try {
+        parseQuantity(v, kind, 'refused');
+      } catch (e) {
+        return (e as Error).message;
+      }
+      return 'accepted';
+    };
+    expect(refusal(120, 'speed')).toBe('120 has no unit; write 120 rpm or 2 rev/s');
+    expect(refusal('40', 'length')).toBe('"40" has no unit; write 40 mm or 0.04 m');
+    expect(refusal(5e-7, 'wearFactor')).toBe('5e-7 has no unit; write 5e-7 mm^3/(N*m) or 5e-16 m^3/(N*m)');
+    expect(refusal(2e6, 'force')).toBe('2000000 has no unit; write 2e6 N or 2000 kN');
+    expect(refusal(-10, 'temperature')).toBe('-10 has no unit; write -10 degC or 14 degF');
+    expect(refusal(0.5, 'frequency')).toBe('0.5 has no unit; write 0.5 Hz or 30 1/min');
+    expect(parseQuantity('2e6 N', 'force', 'refused')).toBe(2e6);
+    expect(parseQuantity('30 1/min', 'frequency', 'refused')).toBeCloseTo(0.5, 12);
+    expect(refusal(Number.POSITIVE_INFINITY, 'force')).toMatch(/^got Infinity; expected a finite number with a unit/);
   });
 
   it('a unit of the wrong kind names the kind found and the kind expected', () => {
