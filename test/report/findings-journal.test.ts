@@ -58,6 +58,13 @@ const BRANCH_CASES: [string, CaseSI][] = [
   ['frequent starts', lineShaftCase({ environment: { ambient: 30, contamination: 'normal', startsPerHour: 30 } })],
   ['fixed viscosity', lineShaftCase({ lubrication: { supply: 'oil-feed', inletTemperature: 40, viscosity: 0.03 } })],
   [
+    'greased shaft with axial load: a rubbing thrust face',
+    lineShaftCase({
+      load: { radial: 3000, axial: 500, shock: 'light' },
+      lubrication: { supply: 'grease', inletTemperature: 40 },
+    }),
+  ],
+  [
     'no thermal equilibrium below the ceiling',
     lineShaftCase({
       shaft: { diameter: 0.2, speed: 10000 / 60 },
