@@ -248,7 +248,10 @@ describe('the case as printed (a case file in base units) loads back to the same
   });
 
   it('an oscillating shaft', () => {
-    const raw = { ...fullCase(), shaft: { diameter: '35 mm', oscillation: { angle: '70 deg', frequency: '0.4 Hz' } } };
+    const raw: Record<string, unknown> = {
+      ...fullCase(),
+      shaft: { diameter: '35 mm', oscillation: { angle: '70 deg', frequency: '0.4 Hz' } },
+    };
     delete raw.duty;
     const c = validateCase(raw).case;
     expect(validateCase(JSON.parse(JSON.stringify(caseFileOf(c)))).case).toEqual(c);
