@@ -26,13 +26,15 @@ export function bushingText(r: BushingResult, units: UnitSystem): string {
         fmt(m.pressure, 'Pa', units),
         fmt(m.pv, 'Pa*m/s', units),
         `${fmt(m.lifeBand.short, 'h', units, 2)} / ${fmt(m.lifeBand.typical, 'h', units, 2)} / ${fmt(m.lifeBand.long, 'h', units, 2)}`,
-        outOfRange(m) ? `${fmt(m.temperature, 'degC', units)} *` : fmt(m.temperature, 'degC', units),
+        outOfRange(m)
+          ? `> ${fmt(m.checks.find((k) => k.id === 'temperature')!.limit, 'degC', units)} *`
+          : fmt(m.temperature, 'degC', units),
       ]),
     ),
   );
   if (r.materials.some(outOfRange)) {
     out.push(
-      '* above the material\'s temperature limit: the heat balance holds up to the PV limit only; read it as "too hot", not as a figure.',
+      "* above the material's temperature limit: the heat balance holds up to the PV limit only, so no figure is given beyond it.",
     );
   }
   out.push(paint.bold(`${r.best ? 'Best' : 'None'}: ${describe(r.bestReason)}.`));

@@ -109,7 +109,7 @@ export function bushingSheet(
       {
         label: 'Thrust face mean pressure p',
         formula: 'p = Fa / (π/4·(d_o² − d_i²))',
-        substituted: `p = ${num(Fa)} N / (π/4·(${num(t.face.outer)}² − ${num(t.face.inner)}²) m²)`,
+        substituted: `p = ${num(Fa)} N / (π/4·(${num(t.face.outer)}² − ${num(t.face.inner)}²))`,
         value: t.pressure,
         unit: 'Pa',
         source: hb,
@@ -117,7 +117,10 @@ export function bushingSheet(
       {
         label: 'Thrust face wear life',
         formula: 't = δ / (Σ share·f_m·f_e·k·p·V_m·3600)',
-        substituted: `t = ${num(c.life.wearAllowance)} m / (wear rate over the duty at p_max ${num(t.pressure)} Pa, V_m ${num(t.velocity)} m/s)`,
+        substituted:
+          points.filter((p) => p.Fa > 0).length === 1
+            ? `t = ${num(c.life.wearAllowance)} m / (${m.factors.motion}·${m.factors.environment}·${num(m.wearFactor)}·${num(t.pressure)}·${num(t.velocity)}·3600)`
+            : `t = ${num(c.life.wearAllowance)} m / (Σ over the duty points with axial load, at p_max ${num(t.pressure)} Pa, V_m ${num(t.velocity)} m/s)`,
         value: t.lifeHours,
         unit: 'h',
         source: 'Archard 1953; The Tribology Handbook 2nd ed. 1995, A5',

@@ -103,4 +103,16 @@ describe('bushing calculation sheet', () => {
     }
     expect(numerical).toBeGreaterThanOrEqual(5);
   });
+
+  it('with axial load the thrust face lines evaluate to their values too', async () => {
+    const { evaluate } = await import('../../helpers/sheet.js');
+    const r = checkBushing(pumpCase({ load: { radial: '1.2 kN', axial: '800 N', shock: 'light' } }));
+    const lines = r.sheet.filter((l) => l.label.startsWith('Thrust face'));
+    expect(lines).toHaveLength(2);
+    for (const l of lines) {
+      const v = evaluate(l.substituted);
+      expect(v, l.substituted).not.toBeNull();
+      expect(Math.abs(v! / l.value - 1), `${l.label}: ${l.substituted}`).toBeLessThan(0.01);
+    }
+  });
 });
