@@ -46,6 +46,10 @@ const rowSchema = z.strictObject({
   water: z.enum(RATINGS),
   chemical: z.enum(RATINGS),
   mediaSource: z.string().min(1),
+  /** The motion the limits hold for: any, or oscillating only (pins and pivots). */
+  motion: z.enum(['any', 'oscillating']),
+  /** Why a class is for oscillation only. */
+  motionSource: z.string().min(1).optional(),
 });
 const fileSchema = z.strictObject({
   description: z.string(),
@@ -72,11 +76,21 @@ export type BushingMaterial = Omit<
   | 'water'
   | 'chemical'
   | 'mediaSource'
+  | 'motion'
+  | 'motionSource'
 > &
   Partial<
     Pick<
       BushingMaterialRow,
-      'wearFactorLow' | 'wearFactorHigh' | 'needs' | 'needsSource' | 'water' | 'chemical' | 'mediaSource'
+      | 'wearFactorLow'
+      | 'wearFactorHigh'
+      | 'needs'
+      | 'needsSource'
+      | 'water'
+      | 'chemical'
+      | 'mediaSource'
+      | 'motion'
+      | 'motionSource'
     >
   >;
 

@@ -33,7 +33,12 @@ describe('bushing material table', () => {
     // Converted to SI: 150 MPa, 3e-9 mm³/(N·m) = 3e-18 m²/N.
     expect(steel.maxPressure).toBeCloseTo(150e6, 0);
     expect(steel.wearFactor).toBeCloseTo(3e-18, 30);
-    for (const m of [steel, pin]) expect(m.source).toMatch(/seen|from memory/);
+    for (const m of [steel, pin]) {
+      expect(m.source).toMatch(/seen|from memory/);
+      expect(m.motion).toBe('oscillating');
+      expect(m.motionSource).toMatch(/common practice/);
+    }
+    expect(rows.filter((m) => m.motion === 'oscillating').map((m) => m.id)).toEqual([steel.id, pin.id]);
   });
 });
 

@@ -92,8 +92,8 @@ function thrustOverDuty(
 }
 
 /**
- * Whether the case can give the material what it needs, and whether it stands the service
- * medium. Each unmet condition is a failing limit check (value and limit on the rank scales
+ * Whether the case can give the material what it needs, whether it stands the service medium,
+ * and whether the shaft moves as the material's limits assume (a pin class: oscillating only). Each unmet condition is a failing limit check (value and limit on the rank scales
  * above: lubricant none 1, grease 2, oil 3; medium rating good 1, fair 2, poor 3) and a finding;
  * met conditions add no check, so they never decide a margin.
  */
@@ -130,6 +130,20 @@ function suitability(c: CaseSI, m: Material, medium: Medium): { checks: CheckRec
       ),
     );
     reasons.push(finding('bushing.medium-unsuited', { material: m.name, medium, rating }));
+  }
+  if (m.motion === 'oscillating' && !c.shaft.oscillation) {
+    checks.push(
+      makeCheck(
+        'motion',
+        'Motion the limits hold for (oscillating only 1, any 2)',
+        2,
+        1,
+        '1',
+        'max',
+        m.motionSource ?? m.source,
+      ),
+    );
+    reasons.push(finding('bushing.motion-unsuited', { material: m.name }));
   }
   return { checks, reasons };
 }

@@ -11,11 +11,13 @@ const lightDuty = {
   load: { radial: '300 N', axial: '0 N', shock: 'light' },
   life: { hours: '2000 h', wearAllowance: '0.2 mm' },
 };
+/** The same, as a pin swinging 60° at 0.3 Hz (the pin classes hold for oscillation only). */
+const lightPin = { ...lightDuty, shaft: { diameter: '30 mm', oscillation: { angle: '60 deg', frequency: '0.3 Hz' } } };
 
 describe('lubricant need (guards: a periodically greased bronze recommended for a case with no lubricant)', () => {
   it('a greased bronze never passes a supply: none case, and passes the same duty when greased', () => {
     for (const id of ['greased-bronze', 'greased-bronze-pin', 'greased-hardened-steel']) {
-      const dry = checkBushing(pumpCase({ ...lightDuty, lubrication: { supply: 'none' }, bushing: { material: id } }));
+      const dry = checkBushing(pumpCase({ ...lightPin, lubrication: { supply: 'none' }, bushing: { material: id } }));
       const m = dry.materials[0]!;
       expect(m.needs).toBe('grease');
       expect(m.feasible, id).toBe(false);
@@ -23,7 +25,7 @@ describe('lubricant need (guards: a periodically greased bronze recommended for 
       expect(k.pass).toBe(false);
       expect(k.advisory).toBeUndefined();
       expect(wordOf(m.reasons[0]!)).toMatch(/needs grease to reach its limits; the case supplies none/);
-      const greased = checkBushing(pumpCase({ ...lightDuty, bushing: { material: id } })).materials[0]!;
+      const greased = checkBushing(pumpCase({ ...lightPin, bushing: { material: id } })).materials[0]!;
       expect(greased.feasible, id).toBe(true);
       expect(greased.checks.some((x) => x.id === 'lubricant-need')).toBe(false);
     }
@@ -49,6 +51,19 @@ const slurry = () =>
     lubrication: { supply: 'none' },
     environment: { ambient: '20 degC', contamination: 'dirty', startsPerHour: 1, medium: 'slurry' },
   });
+
+describe('pin classes', () => {
+  it('greased hardened steel and the bronze pin bush are set aside for a continuously rotating shaft, with the reason', () => {
+    const r = checkBushing(pumpCase(lightDuty));
+    for (const id of ['greased-hardened-steel', 'greased-bronze-pin']) {
+      const m = r.materials.find((x) => x.id === id)!;
+      expect(m.feasible, id).toBe(false);
+      expect(m.checks.find((k) => k.id === 'motion')!.pass).toBe(false);
+      expect(wordOf(m.reasons[0]!)).toMatch(/oscillating pins and pivots; this shaft rotates continuously/);
+    }
+    expect(r.materials.find((x) => x.id === 'greased-bronze')!.feasible).toBe(true);
+  });
+});
 
 describe('material choice at a common length (guards: a slurry winner decided by millimetre rounding and list order)', () => {
   it('every material is checked at one length, the longest in the space with L/D ≤ 2, whole mm', () => {
