@@ -13,6 +13,17 @@ export const FAILING_CASES = {
     lubrication: { supply: 'grease' },
     bushing: { material: 'ptfe-lined-steel' },
   },
+  /** A named rubbing material that wears through too soon where a sintered bearing would last. */
+  namedNylon: {
+    title: 'Damper-blade linkage of a drying kiln, dry running (invented)',
+    shaft: { diameter: '30 mm', speed: '100 rpm' },
+    load: { radial: '400 N' },
+    life: { hours: '3000 h' },
+    space: { maxLength: '40 mm', maxOuterDiameter: '45 mm' },
+    lubrication: { supply: 'none' },
+    environment: { ambient: '80 degC' },
+    bushing: { material: 'nylon' },
+  },
   /** A rolling bearing sealed for life whose grease gives out long before the life target. */
   sealedFan: {
     title: 'Extract fan of a drying oven, sealed bearings (invented)',
