@@ -72,10 +72,10 @@ describe('advise --format md', () => {
   });
   it('shows each check with value, limit, margin, result and source, and the sheet with substituted values', () => {
     expect(r.stdout).toContain('| check | value | limit | margin | result | source of the limit |');
-    // Nearest miss greased hardened steel, 60 mm, dirty (f_e = 4): rate = 4·3e-18 m²/N·(0.7·1.5915 MPa·0.20944 m/s +
-    // 0.3·2.6526 MPa·0.083776 m/s) = 3.6e-12 m/s; 0.25 mm / (3.6e-12·3600) = 19290 h; margin −4 %.
+    // Sintered bronze, 60 mm, dirty (f_e = 4): rate = 4·3e-17 m²/N·(0.7·1.5915 MPa·0.20944 m/s +
+    // 0.3·2.6526 MPa·0.083776 m/s) = 3.6e-11 m/s; 0.25 mm / (3.6e-11·3600) = 1929 h; margin −90 %.
     expect(r.stdout).toMatch(
-      /\| Hours to wear through the allowance \(typical wear factor\) \| 19290 h \| ≥ 20000 h \| -4 % \| FAIL \|/,
+      /\| Hours to wear through the allowance \(typical wear factor\) \| 1929 h \| ≥ 20000 h \| -90 % \| FAIL \|/,
     );
     expect(r.stdout).toContain('P = 5000 N / (0.04 m · 0.06 m)');
     expect(r.stdout).toContain('| shaft.diameter | 40 mm | 40 mm (0.04 m) |');
