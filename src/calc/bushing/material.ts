@@ -220,6 +220,17 @@ export function checkMaterial(
         c.environment.ambient,
       ),
     ),
+    // The room alone above the material's limit is a fact of the case, not an estimate: a limit.
+    makeCheck(
+      'ambient-temperature',
+      'Ambient within the material temperature limit',
+      c.environment.ambient,
+      m.maxTemperature,
+      'degC',
+      'max',
+      `${src}; margin: share of the rise from ${factors.heat.referenceAmbient} degC`,
+      factors.heat.referenceAmbient,
+    ),
     makeCheck(
       'radial-space',
       'Outer diameter within the housing bore',

@@ -131,6 +131,22 @@ describe('temperature (guards: 132 °C for sintered bronze at PV 0.5 MPa·m/s fr
   });
 });
 
+describe('hot surroundings', () => {
+  it('an ambient above a material class limit excludes it whatever the duty (a limit, not advice)', () => {
+    const r = checkBushing(
+      pumpCase({ ...lightDuty, lubrication: { supply: 'none' }, environment: { ambient: '80 degC' } }),
+    );
+    const bronze = r.materials.find((m) => m.id === 'sintered-bronze')!; // limit 75 degC
+    const k = bronze.checks.find((x) => x.id === 'ambient-temperature')!;
+    expect(k.pass).toBe(false);
+    expect(k.advisory).toBeUndefined();
+    expect(bronze.feasible).toBe(false);
+    expect(
+      r.materials.find((m) => m.id === 'filled-ptfe')!.checks.find((x) => x.id === 'ambient-temperature')!.pass,
+    ).toBe(true);
+  });
+});
+
 describe('axial load (guards: 4 kN of thrust on a bushing not checked at all)', () => {
   const thrust = (axial: string) => checkBushing(pumpCase({ load: { radial: '1.2 kN', axial, shock: 'light' } }));
 
