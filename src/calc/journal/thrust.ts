@@ -86,9 +86,12 @@ interface AxialPoint {
   speed: number;
 }
 
+/** Axial load below which a point has no thrust to carry, N: a rounding residue, not a load (our own). */
+const NEGLIGIBLE_AXIAL = 1e-3;
+
 function axialPoints(c: CaseSI): AxialPoint[] {
   return operatingPoints(c)
-    .filter((p) => p.axial > 0)
+    .filter((p) => p.axial > NEGLIGIBLE_AXIAL)
     .map((p) => ({ share: p.share, axial: p.axial, speed: pointSpeed(c, p) }));
 }
 

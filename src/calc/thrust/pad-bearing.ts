@@ -123,7 +123,12 @@ function film(
   }
   let hi = Math.log(delta / kMin);
   // Beyond K_min, W* ∝ K: W·h² ∝ δ/h, so h grows as the cube root; widen until bracketed.
-  while (residual(Math.exp(hi)) > 0) hi += Math.log(2);
+  // A vanishing load (a rounding residue) never brackets: stop at a film 2^60 times the table's
+  // thickest and call it extrapolated rather than letting K underflow to zero.
+  for (let doublings = 0; residual(Math.exp(hi)) > 0; doublings++) {
+    if (doublings >= 60) return { h: Math.exp(hi), pt: { ...padAt(t, delta / Math.exp(hi)), extrapolated: true } };
+    hi += Math.log(2);
+  }
   while (hi - lo > 1e-7) {
     const mid = 0.5 * (lo + hi);
     if (residual(Math.exp(mid)) > 0) lo = mid;
