@@ -220,17 +220,6 @@ export function checkMaterial(
         c.environment.ambient,
       ),
     ),
-    // The room alone above the material's limit is a fact of the case, not an estimate: a limit.
-    makeCheck(
-      'ambient-temperature',
-      'Ambient within the material temperature limit',
-      c.environment.ambient,
-      m.maxTemperature,
-      'degC',
-      'max',
-      `${src}; margin: share of the rise from ${factors.heat.referenceAmbient} degC`,
-      factors.heat.referenceAmbient,
-    ),
     makeCheck(
       'radial-space',
       'Outer diameter within the housing bore',
@@ -257,6 +246,21 @@ export function checkMaterial(
         'm',
         'max',
         'the case (space.maxLength); washer thickness common practice',
+      ),
+    );
+  // The room alone above the material's limit is a fact of the case, not an estimate: a limit. Only a
+  // failing one is added (the headroom of a passing one is the PV check's business, not a choice margin).
+  if (c.environment.ambient > m.maxTemperature)
+    checks.push(
+      makeCheck(
+        'ambient-temperature',
+        'Ambient within the material temperature limit',
+        c.environment.ambient,
+        m.maxTemperature,
+        'degC',
+        'max',
+        `${src}; margin: share of the rise from ${factors.heat.referenceAmbient} degC`,
+        factors.heat.referenceAmbient,
       ),
     );
   const thrust = setting.thrust ? thrustOverDuty(c, m, points, setting.thrust, fMotion, fEnv) : null;

@@ -141,9 +141,9 @@ describe('hot surroundings', () => {
     expect(k.pass).toBe(false);
     expect(k.advisory).toBeUndefined();
     expect(bronze.feasible).toBe(false);
-    expect(
-      r.materials.find((m) => m.id === 'filled-ptfe')!.checks.find((x) => x.id === 'ambient-temperature')!.pass,
-    ).toBe(true);
+    // A class that stands the room gets no such check, so the room never decides a choice margin.
+    const ptfe = r.materials.find((m) => m.id === 'filled-ptfe')!;
+    expect(ptfe.checks.some((x) => x.id === 'ambient-temperature')).toBe(false);
   });
 });
 
