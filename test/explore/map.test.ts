@@ -37,10 +37,17 @@ describe('selection map on an oil-fed line shaft with a long life target', async
         expect(m.cells[i]![j]!.winner, `load ${m.loads[i]} N, ${m.speeds[j]! * 60} r/min`).toBe('journal');
   });
 
-  it('the bushing wins at the lowest speeds', () => {
-    // 3 and 6 r/min, 280 N to 7 kN (at 200 N and 6 r/min the journal's score edges ahead).
-    for (let i = 1; i < 11; i++)
-      for (const j of [0, 1]) expect(m.cells[i]![j]!.winner, `load ${m.loads[i]} N, column ${j}`).toBe('bushing');
+  it('at the lowest speeds a rubbing bushing or a rolling bearing wins, never the journal', () => {
+    // 3 and 6 r/min, 280 N to 10 kN: no oil film forms at a crawl, and both a rubbing bushing and
+    // a rolling bearing (running nearly static) serve there (common practice). Which of the two
+    // wins turns on friction powers of a few watts, which no test here should pin down.
+    for (let i = 1; i < 12; i++)
+      for (const j of [0, 1]) {
+        const cell = m.cells[i]![j]!;
+        expect(['bushing', 'rolling'], `load ${m.loads[i]} N, column ${j}`).toContain(cell.winner);
+        // Up to 7 kN the bushing itself passes at a crawl.
+        if (i < 11) expect(cell.feasible[0], `bushing feasible at load ${m.loads[i]} N, column ${j}`).toBe(true);
+      }
     expect(m.cells[0]![0]!.winner).toBe('bushing');
   });
 
