@@ -21,6 +21,8 @@ const knownDisagreements: Record<string, string> = {
     'tool: none feasible; the sealed ball bearing fails its grease life (about 9 700 h against 40 000 h at 480 rpm, 35 degC); at fault: rolling choice (grease life)',
   'colliery-drive-pulley':
     'tool: none feasible; the spherical roller bearing fails its modified life (about 32 000 h against 60 000 h) on an estimated rating near 0.65 of a catalogue value; at fault: rolling choice (rating estimate)',
+  'biscuit-oven-sprocket':
+    'tool: rolling; a sealed greased ball bearing in a 200 degC oven passes, judged at 8 rpm on static safety alone (no grease-life or temperature check), while the graphite-plugged bronze bush is worn through its 0.5 mm in about 10 000 h of dry wear against 30 000 h; at fault: rolling choice (slow-speed path), bushing materials (dry wear)',
   'poultry-washdown-idler':
     'tool: none feasible; the water-resistant polymers worn as if dry (about 3 700 h against 20 000 h) and the sealed bearing that fits fails its grease life; at fault: bushing materials, rolling choice (grease life)',
   'boiler-feed-pump': 'tool: rolling scored above a feasible journal; at fault: rules/reasons',
