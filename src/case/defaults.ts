@@ -67,6 +67,7 @@ export function completeCase(
       radial: radial ?? Math.max(...(file.duty ?? []).map((p) => p.radial)),
       axial: take('load.axial', file.load?.axial, DEFAULTS.axial, '0 N'),
       shock: take('load.shock', file.load?.shock, DEFAULTS.shock),
+      ...(file.load?.atStart !== undefined ? { atStart: file.load.atStart } : {}),
     },
     life: {
       hours: file.life.hours,

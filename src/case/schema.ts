@@ -176,6 +176,9 @@ export const caseFileSchema = mapping({
     radial: quantity('force', 'positive', FORCE).optional(),
     axial: quantity('force', 'nonnegative', FORCE).optional(),
     shock: choice(SHOCKS).optional(),
+    // The radial load on the bearing when the shaft starts and stops (dead weight, or the load
+    // the machine starts under); the journal's start-up unit load is checked at it.
+    atStart: quantity('force', 'nonnegative', FORCE).optional(),
   }).optional(),
   duty: z
     .array(pointSchema, { error: 'expected a list of operating points' })

@@ -39,7 +39,13 @@ export interface CaseSI {
     /** Oscillation: total swing angle (rad) and full cycles per second (Hz). */
     oscillation?: { angle: number; frequency: number };
   };
-  load: { radial: number; axial: number; shock: Shock };
+  load: {
+    radial: number;
+    axial: number;
+    shock: Shock;
+    /** Radial load at start and stop, N (shaft at rest); absent: the largest running load. */
+    atStart?: number;
+  };
   /** Operating points replacing shaft speed and load, when given. */
   duty?: OperatingPointSI[];
   life: {
