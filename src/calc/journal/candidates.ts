@@ -33,8 +33,13 @@ const LENGTH_TOLERANCE = 1e-9;
 export interface JournalDuty {
   /** Radial load N, speed rev/s (of an oscillating shaft: the equivalent θ·f/π), time share. */
   points: DutyPoint[];
-  /** Largest radial load of the case, N: the start-up load, shaft at rest. */
+  /**
+   * Radial load at start and stop, N (shaft at rest): the case's load.atStart, or, where it
+   * gives none, the largest running load (stated as an assumption, findings.ts).
+   */
   startLoad: number;
+  /** True when the start-up load is the case's load.atStart rather than the running load. */
+  startLoadGiven: boolean;
   /** True when some point carries an axial load, which a plain journal bearing does not. */
   axialLoad: boolean;
 }
@@ -48,7 +53,8 @@ export function journalDuty(c: CaseSI): JournalDuty {
   const points = ops.map((p) => ({ share: p.share, load: p.radial, speed: pointSpeed(c, p) }));
   return {
     points,
-    startLoad: Math.max(c.load.radial, ...points.map((p) => p.load)),
+    startLoad: c.load.atStart ?? Math.max(c.load.radial, ...points.map((p) => p.load)),
+    startLoadGiven: c.load.atStart !== undefined,
     axialLoad: ops.some((p) => p.axial > 0),
   };
 }

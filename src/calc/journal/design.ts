@@ -11,7 +11,8 @@ import { mayGate, type JournalCriteria } from '../../data/journal-criteria.js';
  * Criteria (values and sources in data/journal-criteria.json; each check carries its source):
  *  - minimum film thickness h0 ≥ h_allow = h_base + k_D·D (Trumpler 1966, from memory),
  *  - maximum film temperature T_in + ΔT ≤ T_allow (Trumpler 1966, from memory),
- *  - start-up unit load W/(L·D) ≤ p_start (Trumpler 1966, from memory),
+ *  - start-up unit load W_start/(L·D) ≤ p_start, W_start the radial load at start and stop
+ *    (the case's load.atStart, else the largest running load) (Trumpler 1966, from memory),
  *  - film at the design load factor × running load still ≥ h_allow (Trumpler 1966,
  *    from memory; advisory),
  *  - mean unit load within the typical range (from memory; advisory),
@@ -338,7 +339,7 @@ function limitChecks(e: DesignEvaluation, crit: JournalCriteria, inletTemperatur
     ),
     makeCheck(
       'start-unit-load',
-      'Start-up unit load W/(L·D) (largest radial load of the case, shaft at rest)',
+      'Start-up unit load W_start/(L·D) (radial load when the shaft starts and stops: load.atStart, else the largest running load)',
       e.startUnitLoad,
       crit.maxStartUnitLoad,
       'Pa',

@@ -99,7 +99,7 @@ function figureWarnings({ case: c, crit, chosen, checks }: FindingInput): Findin
 }
 
 /** The assumptions, in report order: the solver, the load, the lubricant, the design, the inlet. */
-export function journalAssumptions({ case: c, crit, space, bath }: FindingInput): AssumedFinding[] {
+export function journalAssumptions({ case: c, crit, duty, space, bath }: FindingInput): AssumedFinding[] {
   const assumed: AssumedFinding[] = [
     assumedFinding('journal.solver', 'journal.solver', {
       nTheta: DEFAULT_MESH.nTheta,
@@ -125,6 +125,8 @@ export function journalAssumptions({ case: c, crit, space, bath }: FindingInput)
       assumedFinding('lubrication.oilGrade', 'journal.grease-base-oil', { grade: base.grade, source: base.source }),
     );
   }
+  if (!duty.startLoadGiven)
+    assumed.push(assumedFinding('load.atStart', 'journal.start-load-running', { load: duty.startLoad }));
   assumed.push(...designAssumptions(c, crit, space));
   if (supply === 'oil-bath' && bath)
     assumed.push(assumedFinding('lubrication.inletTemperature', 'journal.bath-temperature', bathValues(bath)));

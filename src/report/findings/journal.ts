@@ -71,6 +71,11 @@ export const journalWording: KernelWording = {
       value: `${textNum(v['axial'])} N on a rubbing thrust face of ${String(v['material'])}, ${textNum(Number(v['inner']) * 1e3, 3)}–${textNum(Number(v['outer']) * 1e3, 3)} mm`,
       reason: `${THRUST_RUBBING_REASON[String(v['reason'])] ?? String(v['reason'])}; the face runs boundary lubricated and its washer takes ${textNum(Number(v['washer']) * 1e3, 3)} mm of the axial room beside the journal (common practice)`,
     }),
+    'journal.start-load-running': (v) => ({
+      value: `${textNum(v['load'])} N (the largest running load)`,
+      reason:
+        'no load.atStart given: the start-up unit load is checked as if the shaft started under its full running load; where the machine starts unloaded (dead weight only), give that load as load.atStart',
+    }),
     'journal.fixed-viscosity': (v) => ({
       value: `${textNum(v['viscosity'])} Pa·s, fixed`,
       reason: `no thermal iteration; the temperature rise uses ρ = ${String(v['density'])} kg/m³, cp = ${String(v['specificHeat'])} J/(kg·K) (${String(v['source'])})`,
