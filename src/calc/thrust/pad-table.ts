@@ -1,11 +1,20 @@
+import { dataDir } from '../../data/load.js';
+import { shippedPadTables, type ShippedPadTables } from '../../data/thrust-pad-tables.js';
 import { pchipSlopes } from '../journal/table.js';
-import { solvePad, type PadPerformance } from './pad.js';
+import { PAD_MESH, solvePad, type PadPerformance } from './pad.js';
 
 /**
  * Dimensionless pad performance against the taper K = h_in/h_min − 1 at one pad shape L/B,
- * solved once per L/B (pad.ts, default mesh; cached in memory for the life of the process)
- * over PAD_TAPERS and interpolated by monotone cubics (PCHIP, Fritsch & Carlson 1980, as the
+ * over PAD_TAPERS, interpolated by monotone cubics (PCHIP, Fritsch & Carlson 1980, as the
  * journal's table.ts) in ln K of: ln W*, ln F*, ln Q*_in, Q*_side/Q*_in and X_cp.
+ *
+ * The rows at an L/B come from data/thrust-pad-tables.json (solved ahead of time by
+ * scripts/thrust-pad-tables.mjs at PAD_MESH over PAD_TAPERS, one table per L/B from 0.25 to 4
+ * in steps of 2^(1/8)), interpolated between its L/B by monotone cubics (PCHIP) in ln(L/B) of
+ * the same quantities, row by row (test/calc/thrust/pad-table-shipped.test.ts bounds the
+ * departure from a direct solve). Outside the file's L/B range, or when the data folder has no
+ * such file (or one solved over other rows or another mesh), the rows are solved with pad.ts on
+ * first use. Either way a table is kept in memory for the life of the process.
  *
  * Outside the rows: below K_min the near-parallel limit W* ∝ K, F* → 1, flows and X_cp held
  * (the film is then nearly parallel and W* is linear in K to first order, which the
@@ -39,29 +48,135 @@ export interface PadTable {
   series: { y: Float64Array; d: Float64Array }[];
 }
 
+/** The dimensionless figures a row holds, as the shipped file stores them. */
+type RowFigures = Pick<
+  PadPerformance,
+  'taper' | 'load' | 'friction' | 'inletFlow' | 'outletFlow' | 'sideFlow' | 'centreOfPressure' | 'peakPressure'
+>;
+
 const cache = new Map<number, PadTable>();
+/** The data folder whose shipped rows the cache was built from. */
+let cacheFolder: string | undefined;
 
 /** L/B rounded to 1e-4 so that sizes differing by a last digit share a table. */
 const quantise = (widthToLength: number): number => Math.round(widthToLength * 1e4) / 1e4;
 
-/** The table of pad shape L/B (> 0), solved on first use. */
+/** Empty the table cache: the next tables are read or solved afresh (benchmarks, tests). */
+export function clearPadTableCache(): void {
+  cache.clear();
+  cacheFolder = undefined;
+}
+
+/** The rows of pad shape L/B solved directly (pad.ts, default mesh) over PAD_TAPERS. */
+export function solvePadRows(widthToLength: number): PadPerformance[] {
+  return PAD_TAPERS.map((k) => solvePad(k, widthToLength));
+}
+
+/** The table of pad shape L/B (> 0): shipped rows interpolated in L/B, or solved, on first use. */
 export function padTable(widthToLength: number): PadTable {
+  const folder = dataDir().href;
+  if (folder !== cacheFolder) {
+    cache.clear();
+    cacheFolder = folder;
+  }
   const key = quantise(widthToLength);
   const hit = cache.get(key);
   if (hit) return hit;
-  const rows = PAD_TAPERS.map((k) => solvePad(k, key));
-  const lnK = Float64Array.from(PAD_TAPERS, Math.log);
-  const columns = [
-    rows.map((r) => Math.log(r.load)),
-    rows.map((r) => Math.log(r.friction)),
-    rows.map((r) => Math.log(r.inletFlow)),
-    rows.map((r) => r.sideFlow / r.inletFlow),
-    rows.map((r) => r.centreOfPressure),
-    rows.map((r) => Math.log(r.peakPressure)),
-  ].map((c) => Float64Array.from(c));
-  const table = { widthToLength: key, lnK, rows, series: columns.map((y) => ({ y, d: pchipSlopes(lnK, y) })) };
+  const table = padTableFromRows(key, shippedRows(key) ?? solvePadRows(key));
   cache.set(key, table);
   return table;
+}
+
+/** A table from rows over PAD_TAPERS (solved, or read from the shipped file). */
+export function padTableFromRows(widthToLength: number, rows: readonly RowFigures[]): PadTable {
+  const full: PadPerformance[] = rows.map((r) => ({
+    ...r,
+    widthToLength,
+    frictionVariable: r.friction / r.load,
+    iterations: 'iterations' in r ? (r as PadPerformance).iterations : 0,
+  }));
+  const lnK = Float64Array.from(full, (r) => Math.log(r.taper));
+  const columns = [
+    full.map((r) => Math.log(r.load)),
+    full.map((r) => Math.log(r.friction)),
+    full.map((r) => Math.log(r.inletFlow)),
+    full.map((r) => r.sideFlow / r.inletFlow),
+    full.map((r) => r.centreOfPressure),
+    full.map((r) => Math.log(r.peakPressure)),
+  ].map((c) => Float64Array.from(c));
+  return { widthToLength, lnK, rows: full, series: columns.map((y) => ({ y, d: pchipSlopes(lnK, y) })) };
+}
+
+/** Per shipped file: ln(L/B) of its tables and, per taper row and quantity, the PCHIP series in ln(L/B). */
+interface ShapeSeries {
+  lnLB: Float64Array;
+  /** series[row][quantity]: ln W*, ln F*, ln Q*_in, Q*_side/Q*_in, X_cp, ln P_max. */
+  series: { y: Float64Array; d: Float64Array }[][];
+}
+const shapeSeries = new WeakMap<ShippedPadTables, ShapeSeries | null>();
+
+function seriesOf(file: ShippedPadTables): ShapeSeries | null {
+  const hit = shapeSeries.get(file);
+  if (hit !== undefined) return hit;
+  const fits =
+    file.mesh?.nX === PAD_MESH.nX &&
+    file.mesh?.nZ === PAD_MESH.nZ &&
+    file.tapers.length === PAD_TAPERS.length &&
+    file.tapers.every((k, i) => k === PAD_TAPERS[i]) &&
+    file.tables.length >= 2;
+  let out: ShapeSeries | null = null;
+  if (fits) {
+    const lnLB = Float64Array.from(file.tables, (t) => Math.log(t.widthToLength));
+    const series = PAD_TAPERS.map((_, j) => {
+      const rows = file.tables.map((t) => t.rows[j]!);
+      return [
+        rows.map((r) => Math.log(r.load)),
+        rows.map((r) => Math.log(r.friction)),
+        rows.map((r) => Math.log(r.inletFlow)),
+        rows.map((r) => r.sideFlow / r.inletFlow),
+        rows.map((r) => r.centreOfPressure),
+        rows.map((r) => Math.log(r.peakPressure)),
+      ].map((c) => {
+        const y = Float64Array.from(c);
+        return { y, d: pchipSlopes(lnLB, y) };
+      });
+    });
+    out = { lnLB, series };
+  }
+  shapeSeries.set(file, out);
+  return out;
+}
+
+/**
+ * The rows at L/B interpolated from the shipped tables (PCHIP in ln(L/B)), or null when the data
+ * folder has no usable file or L/B lies outside its range.
+ */
+export function shippedRows(widthToLength: number): RowFigures[] | null {
+  const file = shippedPadTables();
+  const s = file && seriesOf(file);
+  if (!s) return null;
+  const x = s.lnLB;
+  const last = x.length - 1;
+  const v = Math.log(widthToLength);
+  if (!(v >= x[0]! - 1e-12 && v <= x[last]! + 1e-12)) return null;
+  let k = 0;
+  while (k < last - 1 && x[k + 1]! <= v) k++;
+  const w = Math.min(Math.max(v, x[0]!), x[last]!);
+  return PAD_TAPERS.map((taper, j) => {
+    const at = (q: number): number => hermite(x, s.series[j]![q]!, k, w);
+    const inletFlow = Math.exp(at(2));
+    const sideFlow = at(3) * inletFlow;
+    return {
+      taper,
+      load: Math.exp(at(0)),
+      friction: Math.exp(at(1)),
+      inletFlow,
+      outletFlow: inletFlow - sideFlow,
+      sideFlow,
+      centreOfPressure: at(4),
+      peakPressure: Math.exp(at(5)),
+    };
+  });
 }
 
 function hermite(x: Float64Array, s: { y: Float64Array; d: Float64Array }, k: number, v: number): number {
