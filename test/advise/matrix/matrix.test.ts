@@ -25,7 +25,6 @@ const knownDisagreements: Record<string, string> = {
     'tool: rolling; a sealed greased ball bearing in a 200 degC oven passes, judged at 8 rpm on static safety alone (no grease-life or temperature check), while the graphite-plugged bronze bush is worn through its 0.5 mm in about 10 000 h of dry wear against 30 000 h; at fault: rolling choice (slow-speed path), bushing materials (dry wear)',
   'poultry-washdown-idler':
     'tool: none feasible; the water-resistant polymers worn as if dry (about 3 700 h against 20 000 h) and the sealed bearing that fits fails its grease life; at fault: bushing materials, rolling choice (grease life)',
-  'boiler-feed-pump': 'tool: rolling scored above a feasible journal; at fault: rules/reasons',
   'colliery-sump-pump-guide':
     'tool: none feasible; no water-lubricated class, the water-resistant polymers held to dry sliding-speed and wear limits; at fault: bushing materials',
   'greenhouse-circulation-fan':
