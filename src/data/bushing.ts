@@ -8,8 +8,11 @@ import { loadTable } from './load.js';
  * and converted to SI here, so a reader of the file sees the figures as handbooks print them.
  */
 const pos = z.number().positive();
-/** What a material must be given to reach its limits, from least to most: none < grease < oil. */
-export const NEEDS = ['none', 'grease', 'oil'] as const;
+/**
+ * What a material must be given to reach its limits: none < grease < oil on one scale; water
+ * (a water-lubricated class) is met only where the bearing runs in water or slurry.
+ */
+export const NEEDS = ['none', 'grease', 'oil', 'water'] as const;
 export type LubricantNeed = (typeof NEEDS)[number];
 /** Resistance of a material in a service medium, from best to worst. */
 export const RATINGS = ['good', 'fair', 'poor'] as const;
@@ -50,6 +53,16 @@ const rowSchema = z.strictObject({
   motion: z.enum(['any', 'oscillating']),
   /** Why a class is for oscillation only. */
   motionSource: z.string().min(1).optional(),
+  /** Lowest sliding speed at which the published limits hold (a water-lubricated class forms its film), m/s; advisory. */
+  minVelocity: pos.optional(),
+  /** Longest length/diameter the class is built to (replaces the general L/D cap), with its source. */
+  maxLengthToDiameter: pos.optional(),
+  /** Grit in the medium passes through the class (flutes and an elastomer face): no contamination factor on its wear. */
+  gritPasses: z.boolean().optional(),
+  /** Resistance in abrasive slurry where it differs from water (a hard face that grit scores). */
+  slurry: z.enum(RATINGS).optional(),
+  /** Source of minVelocity, maxLengthToDiameter, gritPasses and slurry. */
+  wetSource: z.string().min(1).optional(),
 });
 const fileSchema = z.strictObject({
   description: z.string(),
@@ -78,6 +91,11 @@ export type BushingMaterial = Omit<
   | 'mediaSource'
   | 'motion'
   | 'motionSource'
+  | 'minVelocity'
+  | 'maxLengthToDiameter'
+  | 'gritPasses'
+  | 'slurry'
+  | 'wetSource'
 > &
   Partial<
     Pick<
@@ -91,6 +109,11 @@ export type BushingMaterial = Omit<
       | 'mediaSource'
       | 'motion'
       | 'motionSource'
+      | 'minVelocity'
+      | 'maxLengthToDiameter'
+      | 'gritPasses'
+      | 'slurry'
+      | 'wetSource'
     >
   >;
 

@@ -18,7 +18,8 @@ describe('bushing material table', () => {
   it('periodically greased classes need grease; self-lubricating and oil-impregnated classes need none', () => {
     for (const m of rows) {
       const greased = /greased|grease-grooved/i.test(m.name);
-      expect(m.needs, m.id).toBe(greased ? 'grease' : 'none');
+      const wet = /water-lubricated/i.test(m.name);
+      expect(m.needs, m.id).toBe(greased ? 'grease' : wet ? 'water' : 'none');
     }
     expect(rows.find((m) => m.id === 'sintered-bronze')!.needsSource).toMatch(/pores/);
   });

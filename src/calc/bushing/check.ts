@@ -133,7 +133,13 @@ export function checkBushing(
   const candidates: (BushingMaterial | BushingMaterialRow)[] =
     named === undefined ? all : typeof named === 'string' ? all.filter((m) => m.id === named) : [named];
 
-  const materials = candidates.map((m) => checkMaterial(c, m, points, fm.value, fe.value, factors, setting));
+  // A class built longer than the general L/D cap (a water-lubricated stern tube bush) is checked at
+  // the longest length its own practice allows in the space; every other class at the common length.
+  const settingOf = (m: BushingMaterial | BushingMaterialRow): Setting =>
+    setting.lengthChosen === 'common' && 'maxLengthToDiameter' in m && m.maxLengthToDiameter !== undefined
+      ? { ...setting, length: commonLength(c, thrust?.thickness ?? 0, m.maxLengthToDiameter) }
+      : setting;
+  const materials = candidates.map((m) => checkMaterial(c, m, points, fm.value, fe.value, factors, settingOf(m)));
   const feasible = materials.filter((m) => m.feasible);
   let best: BushingMaterialResult | undefined;
   let bestReason: Finding;

@@ -13,8 +13,11 @@ export const LENGTH_STEP = 1e-3;
 
 type Material = BushingMaterial | BushingMaterialRow;
 
-/** Rank of a lubricant need and of a supply on one scale: none 1 < grease 2 < oil 3 (oil bath and oil feed). */
-const NEED_RANK: Record<LubricantNeed, number> = { none: 1, grease: 2, oil: 3 };
+/**
+ * Rank of a lubricant need and of a supply on one scale: none 1 < grease 2 < oil 3 (oil bath and
+ * oil feed). Water is off this scale: a water-lubricated class is met by the medium, not the supply.
+ */
+const NEED_RANK: Record<Exclude<LubricantNeed, 'water'>, number> = { none: 1, grease: 2, oil: 3 };
 const SUPPLY_RANK: Record<Supply, number> = { none: 1, grease: 2, 'oil-bath': 3, 'oil-feed': 3 };
 /** Rank of a medium rating: good 1, fair 2, poor 3; a material must be at least fair (2) in the case's medium. */
 const RATING_RANK: Record<MediumRating, number> = { good: 1, fair: 2, poor: 3 };
@@ -102,7 +105,23 @@ function suitability(c: CaseSI, m: Material, medium: Medium): { checks: CheckRec
   const reasons: Finding[] = [];
   const needs = m.needs ?? 'none';
   const supply = c.lubrication.supply;
-  if (NEED_RANK[needs] > SUPPLY_RANK[supply]) {
+  if (needs === 'water') {
+    // A water-lubricated class: the medium is its lubricant and coolant (wet 1, dry or chemical 2).
+    if (medium !== 'water' && medium !== 'slurry') {
+      checks.push(
+        makeCheck(
+          'lubricant-need',
+          'Runs in the water it needs (in water or slurry 1, otherwise 2)',
+          2,
+          1,
+          '1',
+          'max',
+          m.needsSource ?? m.source,
+        ),
+      );
+      reasons.push(finding('bushing.needs-water', { material: m.name, medium }));
+    }
+  } else if (NEED_RANK[needs] > SUPPLY_RANK[supply]) {
     checks.push(
       makeCheck(
         'lubricant-need',
@@ -116,7 +135,15 @@ function suitability(c: CaseSI, m: Material, medium: Medium): { checks: CheckRec
     );
     reasons.push(finding('bushing.needs-lubricant', { material: m.name, needs, supply }));
   }
-  const rating = medium === 'water' || medium === 'slurry' ? m.water : medium === 'chemical' ? m.chemical : undefined;
+  const slurry = 'slurry' in m ? m.slurry : undefined;
+  const rating =
+    medium === 'slurry'
+      ? (slurry ?? m.water)
+      : medium === 'water'
+        ? m.water
+        : medium === 'chemical'
+          ? m.chemical
+          : undefined;
   if (rating !== undefined && RATING_RANK[rating] > RATING_RANK.fair) {
     checks.push(
       makeCheck(
@@ -161,13 +188,16 @@ export function checkMaterial(
   m: Material,
   points: DutyPoint[],
   fMotion: number,
-  fEnv: number,
+  fEnvCase: number,
   factors: BushingFactors,
   setting: Setting,
 ): BushingMaterialResult {
   const D = c.shaft.diameter;
   const T = c.life.hours;
   const L = setting.length;
+  // A class whose grit passes (flutes flush it, an elastomer face yields to it) is not held to the
+  // contamination factor: its wear factor is measured in the wet, gritty service it is built for.
+  const fEnv = 'gritPasses' in m && m.gritPasses ? 1 : fEnvCase;
   const kLow = m.wearFactorLow ?? m.wearFactor / 3;
   const kHigh = m.wearFactorHigh ?? m.wearFactor * 3;
   // Wear depth per hour of a bushing of unit length (÷ L gives m/h): Σ share·f_m·f_e·k·p_peak(L = 1)·V·3600 s
@@ -233,9 +263,36 @@ export function checkMaterial(
     advisory(
       lOverD < 1
         ? makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.min, '1', 'min', ld.source)
-        : makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.max, '1', 'max', ld.source),
+        : 'maxLengthToDiameter' in m && m.maxLengthToDiameter !== undefined
+          ? makeCheck(
+              'length-to-diameter',
+              'Length/diameter (advisory)',
+              lOverD,
+              m.maxLengthToDiameter,
+              '1',
+              'max',
+              m.wetSource ?? src,
+            )
+          : makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.max, '1', 'max', ld.source),
     ),
   ];
+  // A water-lubricated class forms its film only above a sliding speed: below it, advice (a maker's figure).
+  if ('minVelocity' in m && m.minVelocity !== undefined) {
+    const Vmin = Math.min(...points.map((p) => p.V));
+    checks.push(
+      advisory(
+        makeCheck(
+          'min-velocity',
+          'Sliding speed for the water film (advisory)',
+          Vmin,
+          m.minVelocity,
+          'm/s',
+          'min',
+          m.wetSource ?? src,
+        ),
+      ),
+    );
+  }
   if (setting.lengthChosen === 'case' || L + thickness > c.space.maxLength)
     checks.push(
       makeCheck(

@@ -9,6 +9,8 @@ export const bushingWording: KernelWording = {
     'bushing.zero-speed': () => 'an operating point has zero speed: no sliding, no wear at that point',
     'bushing.needs-lubricant': (v) =>
       `${String(v['material'])} needs ${String(v['needs'])} to reach its limits; the case supplies ${String(v['supply'])}`,
+    'bushing.needs-water': (v) =>
+      `${String(v['material'])} is lubricated and cooled by the water it runs in; the case's medium is ${String(v['medium'])}, not water or slurry`,
     'bushing.motion-unsuited': (v) =>
       `${String(v['material'])} is a class for oscillating pins and pivots; this shaft rotates continuously`,
     'bushing.medium-unsuited': (v) =>

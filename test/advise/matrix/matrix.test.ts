@@ -23,18 +23,10 @@ const knownDisagreements: Record<string, string> = {
     'tool: none feasible; the spherical roller bearing fails its modified life (about 32 000 h against 60 000 h) on an estimated rating near 0.65 of a catalogue value; at fault: rolling choice (rating estimate)',
   'biscuit-oven-sprocket':
     'tool: rolling; a sealed greased ball bearing in a 200 degC oven passes, judged at 8 rpm on static safety alone (no grease-life or temperature check), while the graphite-plugged bronze bush is worn through its 0.5 mm in about 10 000 h of dry wear against 30 000 h; at fault: rolling choice (slow-speed path), bushing materials (dry wear)',
-  'poultry-washdown-idler':
-    'tool: none feasible; the water-resistant polymers worn as if dry (about 3 700 h against 20 000 h) and the sealed bearing that fits fails its grease life; at fault: bushing materials, rolling choice (grease life)',
-  'colliery-sump-pump-guide':
-    'tool: none feasible; no water-lubricated class, the water-resistant polymers held to dry sliding-speed and wear limits; at fault: bushing materials',
   'greenhouse-circulation-fan':
     'tool: none feasible; oil-impregnated sintered bronze worn as if dry (about 3 300 h against 30 000 h), the sealed ball bearing fails its grease life (about 9 600 h); at fault: bushing materials, rolling choice (grease life)',
   'fertiliser-dryer-trunnion':
     'tool: none feasible; modified life about 14 000 h against 60 000 h: an estimated rating below catalogue values and the dirty surroundings taken as the contamination inside a sealed housing; at fault: rolling choice',
-  'trawler-stern-tube':
-    'tool: none feasible; no water-lubricated bushing class, the polymers held to dry PV and wear; at fault: bushing materials',
-  'tailings-agitator-steady':
-    'tool: none feasible; dry wear times the severe-contamination factor (best about 2 800 h against 8 000 h), no slurry-lubricated rubber or ceramic class; at fault: bushing materials',
   'air-separation-gear-pinion':
     'tool: none feasible; the journal fails the start-up unit load (2.2 MPa) taken at the full gear load, which is absent at rest; at fault: journal criteria',
   'cnc-router-spindle':
