@@ -107,74 +107,72 @@ export function padTableFromRows(widthToLength: number, rows: readonly RowFigure
   return { widthToLength, lnK, rows: full, series: columns.map((y) => ({ y, d: pchipSlopes(lnK, y) })) };
 }
 
-/** Per shipped file: ln(L/B) of its tables and, per taper row and quantity, the PCHIP series in ln(L/B). */
-interface ShapeSeries {
-  lnLB: Float64Array;
-  /** series[row][quantity]: ln W*, ln F*, ln Q*_in, Q*_side/Q*_in, X_cp, ln P_max. */
-  series: { y: Float64Array; d: Float64Array }[][];
-}
-const shapeSeries = new WeakMap<ShippedPadTables, ShapeSeries | null>();
+/** Per shipped file: ln(L/B) of its tables, or null when it was solved over other rows or another mesh. */
+const shapeAxis = new WeakMap<ShippedPadTables, Float64Array | null>();
 
-function seriesOf(file: ShippedPadTables): ShapeSeries | null {
-  const hit = shapeSeries.get(file);
+function axisOf(file: ShippedPadTables): Float64Array | null {
+  const hit = shapeAxis.get(file);
   if (hit !== undefined) return hit;
   const fits =
     file.mesh?.nX === PAD_MESH.nX &&
     file.mesh?.nZ === PAD_MESH.nZ &&
     file.tapers.length === PAD_TAPERS.length &&
     file.tapers.every((k, i) => k === PAD_TAPERS[i]) &&
-    file.tables.length >= 2;
-  let out: ShapeSeries | null = null;
-  if (fits) {
-    const lnLB = Float64Array.from(file.tables, (t) => Math.log(t.widthToLength));
-    const series = PAD_TAPERS.map((_, j) => {
-      const rows = file.tables.map((t) => t.rows[j]!);
-      return [
-        rows.map((r) => Math.log(r.load)),
-        rows.map((r) => Math.log(r.friction)),
-        rows.map((r) => Math.log(r.inletFlow)),
-        rows.map((r) => r.sideFlow / r.inletFlow),
-        rows.map((r) => r.centreOfPressure),
-        rows.map((r) => Math.log(r.peakPressure)),
-      ].map((c) => {
-        const y = Float64Array.from(c);
-        return { y, d: pchipSlopes(lnLB, y) };
-      });
-    });
-    out = { lnLB, series };
-  }
-  shapeSeries.set(file, out);
+    file.tables.length >= 3;
+  const out = fits ? Float64Array.from(file.tables, (t) => Math.log(t.widthToLength)) : null;
+  shapeAxis.set(file, out);
   return out;
 }
 
+/** The quantities interpolated in ln(L/B): ln W*, ln F*, ln Q*_in, Q*_side/Q*_in, X_cp, ln P_max. */
+const SHAPE_QUANTITIES: ((r: RowFigures) => number)[] = [
+  (r) => Math.log(r.load),
+  (r) => Math.log(r.friction),
+  (r) => Math.log(r.inletFlow),
+  (r) => r.sideFlow / r.inletFlow,
+  (r) => r.centreOfPressure,
+  (r) => Math.log(r.peakPressure),
+];
+
 /**
  * The rows at L/B interpolated from the shipped tables (PCHIP in ln(L/B)), or null when the data
- * folder has no usable file or L/B lies outside its range.
+ * folder has no usable file or L/B lies outside its range. The PCHIP slopes at the two tables
+ * either side of L/B depend only on the tables next to them (and, at an end, on the end
+ * formula's two intervals), so they are found from a window of at most four tables: the same
+ * slopes as over the whole file, without reading the rest.
  */
 export function shippedRows(widthToLength: number): RowFigures[] | null {
   const file = shippedPadTables();
-  const s = file && seriesOf(file);
-  if (!s) return null;
-  const x = s.lnLB;
+  const x = file && axisOf(file);
+  if (!file || !x) return null;
   const last = x.length - 1;
   const v = Math.log(widthToLength);
   if (!(v >= x[0]! - 1e-12 && v <= x[last]! + 1e-12)) return null;
   let k = 0;
   while (k < last - 1 && x[k + 1]! <= v) k++;
   const w = Math.min(Math.max(v, x[0]!), x[last]!);
+  const from = Math.max(0, k - 1);
+  const to = Math.min(last, k + 2);
+  const xs = x.subarray(from, to + 1);
+  const at = k - from;
+  const tables = file.tables.slice(from, to + 1);
   return PAD_TAPERS.map((taper, j) => {
-    const at = (q: number): number => hermite(x, s.series[j]![q]!, k, w);
-    const inletFlow = Math.exp(at(2));
-    const sideFlow = at(3) * inletFlow;
+    const rows = tables.map((t) => t.rows[j]!);
+    const q = SHAPE_QUANTITIES.map((f) => {
+      const y = Float64Array.from(rows, f);
+      return hermite(xs, { y, d: pchipSlopes(xs, y) }, at, w);
+    });
+    const inletFlow = Math.exp(q[2]!);
+    const sideFlow = q[3]! * inletFlow;
     return {
       taper,
-      load: Math.exp(at(0)),
-      friction: Math.exp(at(1)),
+      load: Math.exp(q[0]!),
+      friction: Math.exp(q[1]!),
       inletFlow,
       outletFlow: inletFlow - sideFlow,
       sideFlow,
-      centreOfPressure: at(4),
-      peakPressure: Math.exp(at(5)),
+      centreOfPressure: q[4]!,
+      peakPressure: Math.exp(q[5]!),
     };
   });
 }

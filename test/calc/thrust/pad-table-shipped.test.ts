@@ -19,6 +19,20 @@ import {
   solvePadRows,
 } from '../../../src/calc/thrust/pad-table.js';
 import { shippedPadTables } from '../../../src/data/thrust-pad-tables.js';
+import { pchipSlopes } from '../../../src/calc/journal/table.js';
+
+/** The cubic Hermite interpolant through (x, y) with slopes d, at v (written out here, independently of pad-table.ts). */
+function monotoneCubic(x: Float64Array, y: Float64Array, d: Float64Array, v: number): number {
+  let k = 0;
+  while (k < x.length - 2 && x[k + 1]! <= v) k++;
+  const h = x[k + 1]! - x[k]!;
+  const t = (v - x[k]!) / h;
+  const h00 = (1 + 2 * t) * (1 - t) ** 2;
+  const h10 = t * (1 - t) ** 2;
+  const h01 = t * t * (3 - 2 * t);
+  const h11 = t * t * (t - 1);
+  return h00 * y[k]! + h10 * h * d[k]! + h01 * y[k + 1]! + h11 * h * d[k + 1]!;
+}
 
 const QUANTITIES = ['load', 'friction', 'inletFlow', 'sideFlow', 'centreOfPressure'] as const;
 
@@ -60,6 +74,17 @@ describe('shipped thrust pad tables', () => {
         for (const q of ['load', 'friction', 'inletFlow', 'sideFlow'] as const)
           expect(Math.abs(r[q] / d[q] - 1), `${q} at L/B=${lb}, K=${k}`).toBeLessThan(1e-4);
         expect(r.centreOfPressure).toBeCloseTo(d.centreOfPressure, 4);
+      });
+    }
+  });
+
+  it('interpolate from a window of tables exactly as over the whole file', () => {
+    const x = Float64Array.from(shipped.tables, (t) => Math.log(t.widthToLength));
+    for (const lb of [0.26, 0.9, 1.0604, 3.9]) {
+      PAD_TAPERS.forEach((_, j) => {
+        const y = Float64Array.from(shipped.tables, (t) => Math.log(t.rows[j]!.load));
+        const whole = monotoneCubic(x, y, pchipSlopes(x, y), Math.log(lb));
+        expect(Math.log(shippedRows(lb)![j]!.load)).toBeCloseTo(whole, 12);
       });
     }
   });
