@@ -6,7 +6,8 @@ import { dataDir } from './load.js';
  * data/thrust-pad-tables.json: the thrust pad solver's dimensionless tables, solved ahead of
  * time by scripts/thrust-pad-tables.mjs (source "computed"), one table per pad shape L/B over
  * the taper rows. Numbers of our own making, checked by a plain loop (every row has every
- * field, finite) rather than a zod schema, as data/journal-tables.json is. A data folder
+ * field, finite) rather than a zod schema; the shipped file is checked by the tests and trusted at
+ * run time, a folder named by SHAFTWISE_DATA_DIR is checked on every read. A data folder
  * without the file (SHAFTWISE_DATA_DIR naming an older copy of data/) is no error: the pad
  * tables are then solved on first use.
  */
@@ -41,7 +42,10 @@ export function shippedPadTables(): ShippedPadTables | null {
   const hit = cached.get(dir.href);
   if (hit !== undefined) return hit;
   const url = new URL('thrust-pad-tables.json', dir);
-  const file = 'data/thrust-pad-tables.json';
+  const env = process.env.SHAFTWISE_DATA_DIR;
+  const file = env
+    ? `${env.replace(/\/$/, '')}/thrust-pad-tables.json (SHAFTWISE_DATA_DIR)`
+    : 'data/thrust-pad-tables.json';
   let text: string;
   try {
     text = readFileSync(url, 'utf8');
@@ -60,6 +64,14 @@ export function shippedPadTables(): ShippedPadTables | null {
       `${file}: cannot be read as JSON (${(e as Error).message}); regenerate it with node scripts/thrust-pad-tables.mjs`,
     );
   }
+  // The shipped file is checked by the tests and trusted here (as loadTable does); another folder's on every read.
+  if (env) checkPadTables(t, file);
+  cached.set(dir.href, t);
+  return t;
+}
+
+/** Throw a DataError naming the first table, row and field of `t` that is not as the loader expects. */
+export function checkPadTables(t: ShippedPadTables, file = 'data/thrust-pad-tables.json'): void {
   if (!Array.isArray(t?.tapers) || !Array.isArray(t.tables))
     throw new DataError(`${file}: fields tapers and tables: expected lists`);
   let previous = 0;
@@ -80,6 +92,4 @@ export function shippedPadTables(): ShippedPadTables | null {
       }
     });
   });
-  cached.set(dir.href, t);
-  return t;
 }

@@ -5,7 +5,7 @@
  * check the runtime path solves its tables where the data folder has no such file. Properties
  * of the program, not published values.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
@@ -18,7 +18,8 @@ import {
   shippedRows,
   solvePadRows,
 } from '../../../src/calc/thrust/pad-table.js';
-import { shippedPadTables } from '../../../src/data/thrust-pad-tables.js';
+import { checkPadTables, shippedPadTables } from '../../../src/data/thrust-pad-tables.js';
+import { DataError } from '../../../src/core/errors.js';
 import { pchipSlopes } from '../../../src/calc/journal/table.js';
 
 /** The cubic Hermite interpolant through (x, y) with slopes d, at v (written out here, independently of pad-table.ts). */
@@ -46,6 +47,10 @@ describe('shipped thrust pad tables', () => {
     expect(lbs[0]).toBe(0.25);
     expect(lbs[lbs.length - 1]).toBe(4);
     expect(lbs).toContain(1);
+  });
+
+  it('pass the loader check (trusted at run time without it)', () => {
+    expect(() => checkPadTables(shipped)).not.toThrow();
   });
 
   for (const lb of [0.25, 1, 4]) {
@@ -117,6 +122,22 @@ describe('a data folder without thrust-pad-tables.json', () => {
     if (before === undefined) delete process.env.SHAFTWISE_DATA_DIR;
     else process.env.SHAFTWISE_DATA_DIR = before;
     clearPadTableCache();
+  });
+
+  it('reads a copy of the file there, checked: a row without a figure is named', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'shaftwise-pad-data-'));
+    try {
+      const t = JSON.parse(readFileSync(new URL('../../../data/thrust-pad-tables.json', import.meta.url), 'utf8'));
+      delete t.tables[2].rows[4].friction;
+      writeFileSync(join(dir, 'thrust-pad-tables.json'), JSON.stringify(t));
+      process.env.SHAFTWISE_DATA_DIR = dir;
+      expect(() => shippedPadTables()).toThrow(DataError);
+      expect(() => shippedPadTables()).toThrow(
+        /tables\[2\]\.rows\[4\]\.friction: got undefined; expected a finite number/,
+      );
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 
   it('has its pad tables solved on first use, and the shipped ones come back with data/', () => {
