@@ -12,7 +12,8 @@ export const FAST_DUTIES: Duty[] = [
     yaml: `
 title: Northfleet air-separation plant, main air compressor integral gear, high-speed pinion bearing
 shaft: { diameter: 90 mm, speed: 12000 rpm }
-load: { radial: 18 kN, axial: 0 N, shock: none }
+# the mesh load comes with torque; at rest the bearing holds the pinion's weight
+load: { radial: 18 kN, atStart: 500 N, axial: 0 N, shock: none }
 life: { hours: 100000 h, wearAllowance: 0.05 mm }
 space: { maxLength: 90 mm, maxOuterDiameter: 180 mm }
 lubrication: { supply: oil-feed, oil: ISO VG 32, inletTemperature: 45 degC }
