@@ -1,6 +1,7 @@
 import type { CaseSI } from '../../case/types.js';
 import type { JournalCriteria } from '../../data/journal-criteria.js';
 import { THERMAL_CEILING_C } from './operating-point.js';
+import { journalThrust } from './thrust.js';
 import { bathTemperature, housingArea, sumpModel, type BathTemperature } from '../sump.js';
 import {
   evaluateDesign,
@@ -14,10 +15,12 @@ import {
 /**
  * The journal's inlet temperature and design sweep. With oil feed the inlet is the case's (or
  * the default); with an oil bath the inlet is the bath temperature of the one sump heat balance
- * (src/calc/sump.ts) for the chosen design's own friction loss:
+ * (src/calc/sump.ts) for the chosen design's own friction loss and its thrust face's:
  *
- *   T_in = T_bath,  T_bath = T_amb + P̄(T_bath)/(h·A),  P̄ = Σ share_i·P_i (W), the time mean
- *   of the film's power loss over the operating points with the inlet at T_bath.
+ *   T_in = T_bath,  T_bath = T_amb + P̄(T_bath)/(h·A),  P̄ = Σ share_i·P_i + P̄_thrust (W): the
+ *   time mean of the film's power loss over the operating points with the inlet at T_bath,
+ *   plus the time mean loss of the thrust pads (or rubbing face) on the same oil at T_bath
+ *   (thrust.ts; 0 without axial load). Both run in the one sump, so both heat it.
  *
  * The design and the bath depend on each other: sweep at a first bath temperature (the larger
  * of the ambient and the case's inlet temperature), solve the bath for the design chosen,
@@ -34,8 +37,10 @@ export interface JournalSweep {
   rows: SweepRow[];
   /** Inlet temperature the chosen design was evaluated with, °C. */
   inletTemperature: number;
-  /** The bath balance (oil bath only), else null. */
+  /** The bath balance (oil bath only), else null. Its loss is the journal's and the thrust face's. */
   bath: BathTemperature | null;
+  /** Of the bath's loss, the thrust face's time-mean share at the bath temperature, W (0 without a bath). */
+  thrustLoss: number;
 }
 
 /** Time-mean power loss of a design over its points, W. */
@@ -67,7 +72,7 @@ export function sweepWithInlet(
   const tCase = c.lubrication.inletTemperature;
   if (c.lubrication.supply !== 'oil-bath' || !film) {
     const { chosen, rows } = sweepDesigns(diameter, candidates, points, tCase, startLoad, crit);
-    return { chosen, rows, inletTemperature: tCase, bath: null };
+    return { chosen, rows, inletTemperature: tCase, bath: null, thrustLoss: 0 };
   }
   const model = sumpModel();
   const area = housingArea(c.space.maxOuterDiameter, c.space.maxLength, model);
@@ -77,8 +82,16 @@ export function sweepWithInlet(
     heatTransfer: model.heatTransfer,
     maxRise: Math.min(model.maxRise, THERMAL_CEILING_C - 1 - ambient),
   };
+  // The thrust face on the same oil at the bath temperature (its room check does not matter here).
+  const thrustLoss = (cand: Candidate, t: number) =>
+    journalThrust(c, crit, cand.fluid, t, cand.length)?.meanPowerLoss ?? 0;
   const balance = (cand: Candidate) =>
-    bathTemperature(ambient, area, search, (t) => meanLoss(evaluateDesign(diameter, cand, points, t, startLoad, crit)));
+    bathTemperature(
+      ambient,
+      area,
+      search,
+      (t) => meanLoss(evaluateDesign(diameter, cand, points, t, startLoad, crit)) + thrustLoss(cand, t),
+    );
   let tBath = Math.max(ambient, tCase);
   let sweep = sweepDesigns(diameter, candidates, points, tBath, startLoad, crit);
   let bath = balance(sweep.chosen.candidate);
@@ -95,5 +108,11 @@ export function sweepWithInlet(
     bath.temperature === tBath
       ? sweep.chosen
       : evaluateDesign(diameter, sweep.chosen.candidate, points, bath.temperature, startLoad, crit);
-  return { chosen, rows: sweep.rows, inletTemperature: bath.temperature, bath };
+  return {
+    chosen,
+    rows: sweep.rows,
+    inletTemperature: bath.temperature,
+    bath,
+    thrustLoss: thrustLoss(chosen.candidate, bath.temperature),
+  };
 }

@@ -77,7 +77,16 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
     ...serviceChecks(c),
     ...(thrust?.checks ?? []),
   ];
-  const findingInput = { case: c, crit, duty, space, chosen, checks, bath: swept.bath };
+  const findingInput = {
+    case: c,
+    crit,
+    duty,
+    space,
+    chosen,
+    checks,
+    bath: swept.bath,
+    bathThrustLoss: swept.thrustLoss,
+  };
 
   const res = chosen.governing.result;
   const L = chosen.candidate.length;

@@ -33,6 +33,8 @@ export interface FindingInput {
   checks: readonly CheckRecord[];
   /** The oil-bath heat balance that set the inlet temperature (src/calc/sump.ts), when there is one. */
   bath?: BathTemperature | null;
+  /** Of the bath's loss, the thrust face's share, W (0 or absent without thrust). */
+  bathThrustLoss?: number;
 }
 
 /** The warnings, in report order: motion and supply first, then what the figures show. */
@@ -99,7 +101,14 @@ function figureWarnings({ case: c, crit, chosen, checks }: FindingInput): Findin
 }
 
 /** The assumptions, in report order: the solver, the load, the lubricant, the design, the inlet. */
-export function journalAssumptions({ case: c, crit, duty, space, bath }: FindingInput): AssumedFinding[] {
+export function journalAssumptions({
+  case: c,
+  crit,
+  duty,
+  space,
+  bath,
+  bathThrustLoss = 0,
+}: FindingInput): AssumedFinding[] {
   const assumed: AssumedFinding[] = [
     assumedFinding('journal.solver', 'journal.solver', {
       nTheta: DEFAULT_MESH.nTheta,
@@ -129,7 +138,12 @@ export function journalAssumptions({ case: c, crit, duty, space, bath }: Finding
     assumed.push(assumedFinding('load.atStart', 'journal.start-load-running', { load: duty.startLoad }));
   assumed.push(...designAssumptions(c, crit, space));
   if (supply === 'oil-bath' && bath)
-    assumed.push(assumedFinding('lubrication.inletTemperature', 'journal.bath-temperature', bathValues(bath)));
+    assumed.push(
+      assumedFinding('lubrication.inletTemperature', 'journal.bath-temperature', {
+        ...bathValues(bath),
+        thrustLoss: bathThrustLoss,
+      }),
+    );
   return assumed;
 }
 

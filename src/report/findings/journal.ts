@@ -103,7 +103,7 @@ export const journalWording: KernelWording = {
     }),
     'journal.bath-temperature': (v) => ({
       value: `${textNum(v['temperature'])} °C (oil bath)`,
-      reason: `oil inlet taken as the bath temperature of one sump heat balance, T_bath = T_amb + P/(h·A) = ${textNum(v['ambient'])} °C + ${textNum(v['loss'])} W / (${textNum(v['heatTransfer'])} W/(m²·K) · ${textNum(v['area'])} m²), P this design's own mean friction loss at that temperature; housing taken as a cylinder ${String(v['diameterFactor'])} × the radial room across and ${String(v['lengthFactor'])} × the axial room long, ${textNum(Number(v['dissipatingShare']) * 100)} % of its surface giving heat to still air (our assumption); h: ${String(v['source'])}${v['runaway'] === true ? '. The loss outruns the housing: no balance below this bound, cooling is needed' : ''}`,
+      reason: `oil inlet taken as the bath temperature of one sump heat balance, T_bath = T_amb + P/(h·A) = ${textNum(v['ambient'])} °C + ${textNum(v['loss'])} W / (${textNum(v['heatTransfer'])} W/(m²·K) · ${textNum(v['area'])} m²), P this design's own mean friction loss at that temperature${Number(v['thrustLoss'] ?? 0) > 0 ? ` (of it ${textNum(v['thrustLoss'], 3)} W from the thrust face in the same sump)` : ''}; housing taken as a cylinder ${String(v['diameterFactor'])} × the radial room across and ${String(v['lengthFactor'])} × the axial room long, ${textNum(Number(v['dissipatingShare']) * 100)} % of its surface giving heat to still air (our assumption); h: ${String(v['source'])}${v['runaway'] === true ? '. The loss outruns the housing: no balance below this bound, cooling is needed' : ''}`,
     }),
   },
 };
