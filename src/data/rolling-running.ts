@@ -79,6 +79,8 @@ export const runningSchema = z.object({
   friction: z.array(frictionRowSchema).min(1),
   staticSafety: z.array(staticSafetyRowSchema).length(4),
   speedLimits: z.array(speedLimitRowSchema).min(1),
+  /** Highest operating temperature of the assumed grease and of bearing steel of standard heat treatment, °C. */
+  temperatureLimits: z.object({ grease: z.number(), steel: z.number(), greaseAssumed: z.string(), source }),
 });
 export type RollingRunning = z.infer<typeof runningSchema>;
 export type GreaseLifeConstants = RollingRunning['greaseLife'];

@@ -78,6 +78,10 @@ const factorsSchema = z.object({
         low: nonNegative,
         high: positive,
         eC: nonNegative,
+        /** The same guidance for a pitch diameter dm ≥ 100 mm. */
+        lowLarge: nonNegative,
+        highLarge: positive,
+        eCLarge: nonNegative,
         source,
       }),
     )

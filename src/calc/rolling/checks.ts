@@ -15,6 +15,8 @@ import { rollingRunning } from '../../data/rolling-running.js';
  * [1] ISO 281:2007: modified rating life (cl. 9), the a_ISO range of κ, P ≤ 0.5·C (from memory).
  * [2] ISO 76 s0 = C0/P0; the s0 guidance and speed limits per kind with their sources
  *     (data/rolling-running.json).
+ * [3] Temperature limits of the grease and of standard bearing steel (data/rolling-running.json;
+ *     common practice, from memory).
  */
 
 /** P/C above this is beyond the rating-life equation's intent (ISO 281:2007, from memory). */
@@ -85,7 +87,7 @@ function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext
   return checks;
 }
 
-/** Checks of what the surroundings allow [2]: n·dm for the kind and supply, outside diameter and width, grease life of a sealed bearing. */
+/** Checks of what the surroundings allow [2, 3]: n·dm for the kind and supply, outside diameter and width, grease life of a sealed bearing, temperatures. */
 function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
   const checks: CheckRecord[] = [];
   const { c, lubrication } = ctx;
@@ -146,6 +148,49 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext)
       ),
     );
   }
+  return [...checks, ...temperatureChecks(ctx)];
+}
+
+/**
+ * Temperature limits of what the bearing is made of and runs on [3], at any speed (a slow or
+ * still bearing cooks its grease and grows its rings as surely as a fast one):
+ *   T ≤ T_grease   the assumed grease's upper operating temperature (grease supply, sealed or open)
+ *   T ≤ T_steel    dimensional stability of rings of standard heat treatment (every supply)
+ * T the bearing's operating temperature, °C (lubrication.ts); limits in
+ * data/rolling-running.json → temperatureLimits (common practice, from memory).
+ */
+function temperatureChecks(ctx: EvalContext): CheckRecord[] {
+  const lim = rollingRunning().temperatureLimits;
+  const T = ctx.lubrication.temperature;
+  // Margins as the share of the allowed rise above the surroundings (from absolute zero where they are not below the limit).
+  const ambient = ctx.c.environment.ambient;
+  const ref = (limit: number) => (Number.isFinite(ambient) && ambient < limit ? ambient : undefined);
+  const checks: CheckRecord[] = [];
+  if (ctx.lubrication.supply === 'grease')
+    checks.push(
+      makeCheck(
+        'grease-temperature',
+        `operating temperature against the grease's upper limit (${lim.greaseAssumed})`,
+        T,
+        lim.grease,
+        'degC',
+        'max',
+        lim.source,
+        ref(lim.grease),
+      ),
+    );
+  checks.push(
+    makeCheck(
+      'steel-temperature',
+      'operating temperature against the dimensional stability of standard bearing steel',
+      T,
+      lim.steel,
+      'degC',
+      'max',
+      lim.source,
+      ref(lim.steel),
+    ),
+  );
   return checks;
 }
 

@@ -86,13 +86,24 @@ export function shockFactors(c: CaseSI, f: RollingFactors, notes: Notes): ShockF
 }
 
 /**
- * Pitch diameter below which the ISO 281 contamination guidance is given, m (ISO 281:2007,
- * from memory); above it the same (lower, so conservative) e_C is taken and said.
+ * Pitch diameter at which the ISO 281 contamination guidance changes column, m (ISO 281:2007,
+ * from memory): below it the dm < 100 mm ranges, from it on the (higher) dm ≥ 100 mm ranges.
  */
 export const EC_GUIDANCE_DM = 0.1;
 
+/** The contamination level a sealed bearing greased for life is read at, whatever its surroundings. */
+export const SEALED_LEVEL = 'clean';
+
+/**
+ * Contamination factor e_C of one bearing [1]: the middle of the ISO 281 range of its level in
+ * the column of its pitch diameter dm (m): eC for dm < 0.1 m, eCLarge from 0.1 m on.
+ */
+export function contaminationFactor(cont: RollingFactors['contamination'][number], dm: number): number {
+  return dm >= EC_GUIDANCE_DM ? cont.eCLarge : cont.eC;
+}
+
 export interface LifeFactors {
-  /** Contamination row: the ISO 281 level read and its factor e_C, 1. */
+  /** Contamination row: the ISO 281 level read and its factors e_C (dm < 100 mm) and eCLarge (dm ≥ 100 mm), 1. */
   cont: RollingFactors['contamination'][number];
   /** Reliability factor a1, 1 [1]. */
   a1: number;
@@ -101,20 +112,41 @@ export interface LifeFactors {
 }
 
 /**
- * The contamination factor e_C (the middle of the ISO 281 range for the case's level) and the
- * reliability factor a1 [1]; a reliability outside the a1 formula's range is held to it and
- * said. A reliability that is not a number is read as the basic rating's own, the lower end of
- * that range (a1 = 1).
+ * Whether a sealed bearing's seals can be trusted to keep its surroundings out for life: in air
+ * (no medium, or dry) and short of ISO 281's "severe contamination", whose typical conditions
+ * are ineffective or damaged seals. A bearing running in water, slurry or a chemical, or in
+ * severe dirt, takes its surroundings' level (common practice).
+ */
+function sealsHold(c: CaseSI): boolean {
+  const medium = c.environment.medium;
+  return (medium === undefined || medium === 'dry') && c.environment.contamination !== 'severe';
+}
+
+/**
+ * The contamination level and its factor e_C (the middle of the ISO 281 range, per pitch-diameter
+ * column) and the reliability factor a1 [1]. An open bearing takes the case's surroundings; a
+ * sealed bearing greased for life (no supply in the case) takes ISO 281's "high cleanliness",
+ * whose typical conditions are sealed bearings greased for life: the seals keep the
+ * surroundings out, so its level is largely independent of them (said), unless it runs in a
+ * liquid or in severe dirt (sealsHold). A reliability outside
+ * the a1 formula's range is held to it and said; one that is not a number is read as the basic
+ * rating's own, the lower end of that range (a1 = 1).
  */
 export function lifeFactors(c: CaseSI, f: RollingFactors, notes: Notes): LifeFactors {
-  const cont = f.contamination.find((x) => x.level === c.environment.contamination) ?? f.contamination[1]!;
+  const surroundings = f.contamination.find((x) => x.level === c.environment.contamination) ?? f.contamination[1]!;
+  const sealed = c.lubrication.supply === 'none' && sealsHold(c);
+  const cont = sealed ? (f.contamination.find((x) => x.level === SEALED_LEVEL) ?? surroundings) : surroundings;
   notes.assume(
-    assumedFinding('environment.contamination', 'rolling.contamination', {
+    assumedFinding('environment.contamination', sealed ? 'rolling.contamination-sealed' : 'rolling.contamination', {
       level: cont.level,
       isoLevel: cont.isoLevel,
+      surroundings: surroundings.level,
       low: cont.low,
       high: cont.high,
       eC: cont.eC,
+      lowLarge: cont.lowLarge,
+      highLarge: cont.highLarge,
+      eCLarge: cont.eCLarge,
       guidanceBelow: EC_GUIDANCE_DM,
       source: cont.source,
     }),

@@ -4,7 +4,7 @@ import { finding, type Finding } from '../../core/finding.js';
 import { AISO_CAP, KAPPA_MAX, KAPPA_MIN } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import { candidateChecks } from './checks.js';
-import { EC_GUIDANCE_DM, type LoadPoint } from './conditions.js';
+import { contaminationFactor, type LoadPoint } from './conditions.js';
 import type { EvalContext } from './context.js';
 import type { Notes } from './findings.js';
 import { frictionMoment } from './friction.js';
@@ -111,13 +111,14 @@ function pointLoads(
 
 /**
  * Lives over the duty [1]: each point's a_ISO from its own κ and e_C·Cu/Pi, the point lives
- * combined by the linear damage rule (spectrum.ts). Where κ or a_ISO leave the method's
- * range it is said; κ below 0.1 informs, it never rules a bearing out.
+ * combined by the linear damage rule (spectrum.ts), e_C from the column of the bearing's pitch
+ * diameter (conditions.ts). Where κ or a_ISO leave the method's range it is said; κ below 0.1
+ * informs, it never rules a bearing out.
  */
 function lives(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: Notes): SpectrumLife {
   const life = spectrumLife(
     per.map((q) => ({ P: q.Pf, n: q.n, t: q.t, nu: ctx.lubrication.viscosity })),
-    { type: spec.type, C: spec.C, Cu: spec.Cu, dm: spec.dm, eC: ctx.cont.eC, a1: ctx.a1 },
+    { type: spec.type, C: spec.C, Cu: spec.Cu, dm: spec.dm, eC: contaminationFactor(ctx.cont, spec.dm), a1: ctx.a1 },
   );
   const designation = spec.designation;
   if (life.staticOnly)
@@ -138,11 +139,6 @@ function lives(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: N
       notes.warn(finding('rolling.kappa-below-range', { designation, kappa: q.kappa, kappaMin: KAPPA_MIN }), 'once');
     if (q.capped) notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }), 'once');
   }
-  if (spec.dm >= EC_GUIDANCE_DM)
-    notes.warn(
-      finding('rolling.pitch-diameter-large', { designation, pitchDiameter: spec.dm, guidanceBelow: EC_GUIDANCE_DM }),
-      'once',
-    );
   return life;
 }
 

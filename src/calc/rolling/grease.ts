@@ -18,8 +18,9 @@ import { speedFactor, speedLimit } from './speed.js';
  *     halves the life.
  * [2] Booser & Khonsari (2010), Grease life in ball bearings: the effect of temperatures,
  *     Tribology & Lubrication Technology, October 2010: four temperature zones, oxidation and
- *     oil loss limiting life when hot, stiff grease when cold (seen). The law is held at its
- *     70 °C value below 70 °C (bound from memory).
+ *     oil loss limiting life when hot, stiff grease when cold (seen). The law is evaluated at
+ *     the bearing temperature and held at its 20 °C value below 20 °C, where stiffness rather
+ *     than oxidation limits life (the bound our choice, from memory).
  * [3] Common practice, our own choices: the kind's half-lives S_K, the load's S_W, the Weibull
  *     slope 1.5 giving the 10 % life, and the regreasing interval as half the 10 % life.
  */
@@ -69,7 +70,7 @@ const KELVIN = 273.15;
  *   S_N = 0.864·(n·dm)/(n·dm)_lim      speed, against the kind's grease speed limit
  *   S_W = max(0, P/C − 0.1)/0.1        load (common practice, ours)
  *   L10 = L50·(ln 0.9/ln 0.5)^(1/β), β = 1.5
- * T = max(t, 70 °C) + 273.15 K; dm = (d + D)/2, m; n rev/s (n·dm in mm·r/min inside).
+ * T = max(t, 20 °C) + 273.15 K; dm = (d + D)/2, m; n rev/s (n·dm in mm·r/min inside).
  * Booser states S_N on the shaft diameter, D·N/(D·N)_L; the ratio to a limit stated on the
  * pitch diameter is the same idea (our adaptation). Fitted to deep-groove ball bearings in
  * electric motors with long-life greases: other kinds by S_K, other greases not covered.

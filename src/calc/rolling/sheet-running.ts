@@ -145,8 +145,7 @@ export function greaseLines(c: RollingCandidate, ctx: EvalContext): SheetLine[] 
   const S = h.grease + h.speed + h.load + h.kind;
   const loadText = h.load > 0 ? `(${fig(load.P)} N/${fig(load.C)} N − ${g.loadThreshold})/${g.loadStep}` : '0';
   const sealed = ctx.lubrication.sealed;
-  const booser =
-    'Booser, E. R. (1974), Grease life forecast for ball bearings, Lubrication Engineering 30(11) 536–541 (form and constants from memory, as restated in Khonsari & Booser, Applied Tribology, 2nd ed., Wiley 2008); held at its 70 °C value below 70 °C (Booser & Khonsari 2010, from memory)';
+  const booser = `Booser, E. R. (1974), Grease life forecast for ball bearings, Lubrication Engineering 30(11) 536–541 (L the 50 % life, seen; form and constants from memory, as restated in Khonsari & Booser, Applied Tribology, 2nd ed., Wiley 2008); held at its ${g.coolTemperature} °C value below ${g.coolTemperature} °C, where the grease stiffens (Booser & Khonsari 2010, seen; the bound from memory)`;
   const lines: SheetLine[] = [
     {
       label: `Half-lives subtracted from the grease life S (${c.kind})`,

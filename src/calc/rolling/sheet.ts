@@ -1,6 +1,7 @@
 import type { SheetLine } from '../../core/check.js';
 import { AISO_CAP, AISO_CONSTANTS, KAPPA_MAX, KAPPA_MIN, ratedViscosity } from './aiso.js';
 import type { EvalContext } from './context.js';
+import { EC_GUIDANCE_DM, contaminationFactor } from './conditions.js';
 import { staticLoad } from './load-factors.js';
 import { EXPONENT_TEXT, SHEET_TERMS_MAX, fig, loadLines, pointLabel, rowsText } from './sheet-load.js';
 import { frictionLines, greaseLines } from './sheet-running.js';
@@ -107,7 +108,8 @@ function pointLifeLines(c: RollingCandidate, ctx: EvalContext, i: number, picked
   );
   if (q.aISO === null) return lines;
   const Pi = ctx.serviceFactor * q.P;
-  const eCCuP = (ctx.cont.eC * c.fatigueLimit) / Pi;
+  const eC = contaminationFactor(ctx.cont, c.pitchDiameter);
+  const eCCuP = (eC * c.fatigueLimit) / Pi;
   const kappaUsed = Math.min(KAPPA_MAX, Math.max(KAPPA_MIN, q.kappa));
   const args = `a_ISO(κ = ${fig(kappaUsed)}, e_C·Cu/P = ${fig(eCCuP)})`;
   const ex = EXPONENT_TEXT[c.type];
@@ -115,10 +117,10 @@ function pointLifeLines(c: RollingCandidate, ctx: EvalContext, i: number, picked
     {
       label: `Contamination and fatigue-limit term e_C·Cu/P${at}`,
       formula: `e_C·Cu/P, P = f_d·Pi = ${ctx.serviceFactor}·${fig(q.P)} N`,
-      substituted: `${fig(ctx.cont.eC)}·${fig(c.fatigueLimit)} N/${fig(Pi)} N`,
+      substituted: `${fig(eC)}·${fig(c.fatigueLimit)} N/${fig(Pi)} N`,
       value: eCCuP,
       unit: '1',
-      source: `ISO 281:2007 (from memory); e_C for "${ctx.cont.level}" (${ctx.cont.source})`,
+      source: `ISO 281:2007 (from memory); e_C for "${ctx.cont.level}" at dm ${c.pitchDiameter >= EC_GUIDANCE_DM ? '≥' : '<'} 100 mm (${ctx.cont.source})`,
     },
     {
       label: `Life modification factor a_ISO${at}`,

@@ -103,7 +103,7 @@ const candidateFindings: Record<string, Wording> = {
   'rolling.opposed-partner': () =>
     'a single-row angular-contact ball or tapered roller bearing (or a tandem pair) must be located by an opposed bearing at the shaft’s other support: that partner is taken as the same bearing under the same radial load, so this one carries the case’s axial load plus the partner’s induced force 0.5·Fr/Y (ISO 281 practice for two bearings that locate each other); a shaft model with both supports replaces this',
   'rolling.grease-life-cool-held': (v) =>
-    `bearing at ${fig(v['temperature'])} °C: the grease-life law is held at its ${fig(v['used'])} °C value (below it other causes limit grease life)`,
+    `bearing at ${fig(v['temperature'])} °C: the grease-life law is held at its ${fig(v['used'])} °C value (in the cold the grease stiffens, which shortens its life rather than lengthening it)`,
   'rolling.grease-hot': (v) =>
     `bearing at ${fig(v['temperature'])} °C, above ${fig(v['limit'])} °C: mineral-oil greases oxidise fast; a high-temperature grease or oil is needed`,
   'rolling.grease-speed-beyond-limit': (v) =>
@@ -118,10 +118,6 @@ const candidateFindings: Record<string, Wording> = {
     `every operating point turns slower than ${fig(Number(v['limit']) * 60)} r/min (the highest is ${fig(Number(v['speed']) * 60)} r/min): the bearing is sized by its static safety s0 = C0/P0 and no rating life is claimed (ISO 281 rates fatigue over revolutions; the limit is common practice)${Number(v['revolutions']) > 1e6 ? `; over the life target it still turns ${fig(Number(v['revolutions']) / 1e6)} million revolutions: compare L10 = (C/P)^p with the supplier` : ''}`,
   'rolling.aiso-capped': (v) =>
     `${raw(v['designation'])} (and any other candidate alike): a_ISO reached its cap of ${raw(v['cap'])} (ISO 281:2007)`,
-  'rolling.pitch-diameter-large': (v) => {
-    const guidance = fig(Number(v['guidanceBelow']) * 1000);
-    return `${raw(v['designation'])} (and any larger candidate): pitch diameter ${fig(Number(v['pitchDiameter']) * 1000)} mm ≥ ${guidance} mm; e_C is taken from the dm < ${guidance} mm guidance, which is the lower (conservative) one`;
-  },
   'rolling.grease-too-fast': (v) =>
     `${raw(v['designation'])}: the grease interval formula gives no positive interval at ${fig(Number(v['speed']) * 60)} r/min: too fast for grease by this rule; oil is needed`,
   'rolling.swing-too-small': (v) =>
@@ -194,8 +190,12 @@ export const rollingWording: KernelWording = {
       reason: `no oil grade given: ISO VG ${raw(v['grade'])}, a common general-machinery grade (common practice)`,
     }),
     'rolling.contamination': (v) => ({
-      value: `e_C = ${raw(v['eC'])}`,
-      reason: `"${raw(v['level'])}" read as ISO 281 "${raw(v['isoLevel'])}" (e_C ${raw(v['low'])}–${raw(v['high'])} for dm < ${fig(Number(v['guidanceBelow']) * 1000)} mm); the middle of the range is taken (${raw(v['source'])})`,
+      value: `e_C = ${raw(v['eC'])} (dm < ${fig(Number(v['guidanceBelow']) * 1000)} mm), ${raw(v['eCLarge'])} (larger)`,
+      reason: `"${raw(v['level'])}" read as ISO 281 "${raw(v['isoLevel'])}" (e_C ${raw(v['low'])}–${raw(v['high'])} for dm < ${fig(Number(v['guidanceBelow']) * 1000)} mm, ${raw(v['lowLarge'])}–${raw(v['highLarge'])} from it on); the middle of the range is taken (${raw(v['source'])})`,
+    }),
+    'rolling.contamination-sealed': (v) => ({
+      value: `e_C = ${raw(v['eC'])} (dm < ${fig(Number(v['guidanceBelow']) * 1000)} mm), ${raw(v['eCLarge'])} (larger)`,
+      reason: `a sealed bearing greased for life is read at ISO 281 "${raw(v['isoLevel'])}", whose typical conditions are sealed bearings greased for life: the seals keep the "${raw(v['surroundings'])}" surroundings out of the grease, so the surroundings do not set the level (an open bearing takes them); e_C ${raw(v['low'])}–${raw(v['high'])} for dm < ${fig(Number(v['guidanceBelow']) * 1000)} mm, ${raw(v['lowLarge'])}–${raw(v['highLarge'])} from it on, the middle taken (${raw(v['source'])})`,
     }),
     'rolling.life-criterion': () => ({
       value: 'L10mh = a1·a_ISO·L10h ≥ life target',

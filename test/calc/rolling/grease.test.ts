@@ -1,7 +1,7 @@
 // Kind: behaviour of the grease-life kernel (Booser 1974 law, constants in
 // data/rolling-running.json) and of the regreasing interval taken from it; the law itself is
 // checked by hand in test/reference/grease-life.test.ts. Kind half-lives, the load rule, the
-// 70 °C hold, the Weibull slope 1.5 and the half-of-L10 interval are common practice.
+// 20 °C hold, the Weibull slope 1.5 and the half-of-L10 interval are common practice.
 import { describe, expect, it } from 'vitest';
 import { greaseLife, regreasingInterval, tenPercentShare } from '../../../src/calc/rolling/grease.js';
 import { ROLLING_KINDS } from '../../../src/calc/rolling/kinds.js';
@@ -20,13 +20,18 @@ describe('grease life', () => {
     expect(g.hours).toBeNull();
     expect(g.l10Hours).toBeNull();
   });
-  it('below 70 °C the law is held at its 70 °C value, and says so', () => {
-    const cool = greaseLife({ ...base, temperature: 40 });
-    const at70 = greaseLife({ ...base, temperature: 70 });
-    expect(cool.hours).toBeCloseTo(at70.hours!, 9);
-    expect(cool.temperatureUsed).toBe(70);
-    expect(codes(cool)).toContain('rolling.grease-life-cool-held');
-    expect(codes(at70)).not.toContain('rolling.grease-life-cool-held');
+  it('below 20 °C the law is held at its 20 °C value, and says so; above it the law runs on (each 14-15 K cooler about doubles the life)', () => {
+    const cold = greaseLife({ ...base, temperature: 5 });
+    const at20 = greaseLife({ ...base, temperature: 20 });
+    expect(cold.hours).toBeCloseTo(at20.hours!, 9);
+    expect(cold.temperatureUsed).toBe(20);
+    expect(codes(cold)).toContain('rolling.grease-life-cool-held');
+    expect(codes(at20)).not.toContain('rolling.grease-life-cool-held');
+    const at40 = greaseLife({ ...base, temperature: 40 });
+    const at55 = greaseLife({ ...base, temperature: 55 });
+    expect(at40.temperatureUsed).toBe(40);
+    // 2450·(1/313.15 − 1/328.15) = 0.3577 decades: a factor 2.28 for 15 K.
+    expect(at40.hours! / at55.hours!).toBeCloseTo(Math.pow(10, 2450 * (1 / 313.15 - 1 / 328.15)), 6);
   });
   it('hotter than 120 °C: a caution', () => {
     expect(codes(greaseLife({ ...base, temperature: 125 }))).toContain('rolling.grease-hot');
