@@ -4,6 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import { parseCaseText } from '../../../src/case/load.js';
 import type { CaseSI } from '../../../src/case/types.js';
+import type { CheckRecord } from '../../../src/core/check.js';
 import { checkRolling } from '../../../src/calc/rolling/index.js';
 import { contaminationFactor, EC_GUIDANCE_DM } from '../../../src/calc/rolling/conditions.js';
 import { greaseLife } from '../../../src/calc/rolling/grease.js';
@@ -17,7 +18,7 @@ function duty(id: string): CaseSI {
   return parseCaseText(d.yaml, id).case;
 }
 
-const checkOf = (k: { checks: { id: string }[] }, id: string) => k.checks.find((ch) => ch.id === id);
+const checkOf = (k: { checks: CheckRecord[] }, id: string) => k.checks.find((ch) => ch.id === id);
 
 describe('quarry-return-idler: grease life of a sealed bearing at a cool temperature', () => {
   const c = duty('quarry-return-idler');
