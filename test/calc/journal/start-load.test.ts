@@ -14,9 +14,10 @@ import { DUTIES } from '../../advise/matrix/duties.js';
 const KERNEL = { sheet: false, pressureProfile: false } as const;
 const duty = DUTIES.find((d) => d.id === 'air-separation-gear-pinion')!;
 
-/** The duty's case, with load.atStart set when given (a case-file string such as "1.5 kN"). */
+/** The duty's case with load.atStart set to `atStart` (a case-file string such as "1.5 kN"), or left out. */
 function pinion(atStart?: string) {
   const file = parseYaml(duty.yaml) as { load: Record<string, unknown> };
+  delete file.load['atStart'];
   if (atStart !== undefined) file.load['atStart'] = atStart;
   return parseCaseText(stringify(file), duty.id).case;
 }
