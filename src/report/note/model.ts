@@ -128,7 +128,8 @@ const METHODS: Record<'bushing' | 'rolling' | 'journal', string[]> = {
   bushing: [
     'Mean projected pressure P = F/(D·L), peak of the parabolic distribution 4F/(π·D·L), sliding speed π·D·N (θ·D·f when oscillating) and PV, each against the material class limits (The Tribology Handbook, 2nd ed., M. J. Neale (ed.), 1995, A4–A5; each material row names its own source).',
     'Archard-type wear at the most loaded line, depth = f_m·f_e·k·p·V·t summed over the duty points, with a low / typical / high wear factor band (Archard 1953; The Tribology Handbook A5).',
-    'Shortest length meeting pressure, PV and wear life in closed form; frictional heat f·F·V with a one-node temperature rise (common practice, advisory); length/diameter 0.5–2 (common practice, advisory).',
+    'Every material at one common length (the longest the room allows, L/D ≤ 2), the shortest passing length beside it in closed form; chosen by its governing margin; what it needs (lubricant, medium, motion) against the case.',
+    'Axial load on a flange or thrust washer of the same material: face pressure, sliding speed at the mean diameter, PV and wear life; running temperature ΔT = R·μ·P·V with R from the material’s own PV and temperature limits (The Tribology Handbook A4, from memory; advisory).',
   ],
   rolling: [
     'Basic rating life L10 = (C/P)^p, p = 3 ball, 10/3 roller; L10h = 10^6·L10/(60·n) (ISO 281:2007).',
@@ -139,6 +140,7 @@ const METHODS: Record<'bushing' | 'rolling' | 'journal', string[]> = {
     'Reynolds equation for a finite, full 360° bearing solved by finite differences with the Reynolds (Swift–Stieber) cavitation condition; load matched for the eccentricity ratio; friction, flow, side leakage and peak pressure (checked against Raimondi & Boyd 1958, ASLE Trans. 1(1)).',
     'Adiabatic thermal balance with an effective film temperature and the Walther (ASTM D341) viscosity–temperature law for ISO VG oils; Petroff friction for the light-load limit.',
     'Design criteria for minimum film thickness, maximum temperature and start-up unit load (Trumpler 1966, from memory); design ranges of L/D and clearance ratio (common practice).',
+    'Axial load on a fixed tapered-land pad thrust bearing solved by the same finite-difference Reynolds approach (checked against the inclined slider, Reynolds 1886), or on a rubbing bronze face where no film forms; an oil bath’s temperature from one sump heat balance.',
   ],
 };
 
