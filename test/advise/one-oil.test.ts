@@ -55,6 +55,18 @@ describe('one oil per case', () => {
     expect(assumed(r.checks.rolling.assumed, 'rolling.same-oil')).toBeUndefined();
     expect(r.ranking.length).toBe(3);
   });
+
+  it('on grease, a named oil is the base oil of both the rolling bearing and the journal', async () => {
+    // Guards the failure where, with supply grease and ISO VG 220 named as the base oil, the
+    // rolling bearing read VG 220 and the journal the default grease base oil VG 100.
+    const text = fedNoGrade('grease').replace(
+      'inletTemperature: 45 degC',
+      'oil: ISO VG 220, inletTemperature: 45 degC',
+    );
+    const r = await advise(caseOf(text), { traces: false });
+    expect(r.checks.journal.oilGrade).toBe(220);
+    expect(assumed(r.checks.rolling.assumed, 'rolling.grade-as-base-oil')?.values['grade']).toBe(220);
+  });
 });
 
 describe('one bath temperature per case', () => {

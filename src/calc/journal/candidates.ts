@@ -96,7 +96,8 @@ export function fluidOptions(c: CaseSI, crit: JournalCriteria): FluidOption[] {
   const supply = c.lubrication.supply;
   if (supply === 'none') return [fixed(1, 'none')];
   if (supply === 'grease') {
-    const base = lubricants().greaseBaseOil.grade;
+    // One oil per case: a grade the case names is the grease's base oil, as the rolling check reads it.
+    const base = c.lubrication.oilGrade ?? lubricants().greaseBaseOil.grade;
     return [gradeFluid(base, `grease base oil ISO VG ${base}`)];
   }
   if (c.lubrication.oilGrade !== undefined) return [gradeFluid(c.lubrication.oilGrade)];
