@@ -101,6 +101,7 @@ export function completeCase(
   }
   if (shaft.speed !== undefined) c.shaft.speed = shaft.speed;
   if (shaft.oscillation) c.shaft.oscillation = { ...shaft.oscillation };
+  if (shaft.misalignment !== undefined) c.shaft.misalignment = shaft.misalignment;
   if (file.duty) {
     c.duty = file.duty.map((p) => {
       const point: CaseSI['duty'] extends (infer T)[] | undefined ? T : never = {

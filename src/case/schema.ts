@@ -171,6 +171,11 @@ export const caseFileSchema = mapping({
       }),
       frequency: quantity('frequency', 'positive', { max: 100, say: 'a frequency up to 100 Hz' }),
     }).optional(),
+    // The slope of the shaft relative to the bearing seat at this support (absent: aligned).
+    misalignment: quantity('angle', 'nonnegative', {
+      max: Math.PI / 36,
+      say: 'a misalignment angle from 0 deg to 5 deg, written with its unit (0.05 deg, 0.001 rad)',
+    }).optional(),
   }),
   load: mapping({
     radial: quantity('force', 'positive', FORCE).optional(),

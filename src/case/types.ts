@@ -38,6 +38,8 @@ export interface CaseSI {
     speed?: number;
     /** Oscillation: total swing angle (rad) and full cycles per second (Hz). */
     oscillation?: { angle: number; frequency: number };
+    /** Slope of the shaft relative to the bearing seat, rad (absent: aligned). */
+    misalignment?: number;
   };
   load: {
     radial: number;
