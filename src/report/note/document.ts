@@ -17,6 +17,8 @@ export type Block =
   | { kind: 'table'; head: string[]; rows: Cell[][]; caption?: string; numeric?: number[] }
   | { kind: 'sub'; title: string }
   | { kind: 'chart'; chart: NoteChart }
+  /** A drawing our own code wrote as SVG (the shaft sketch), with its caption. */
+  | { kind: 'figure'; id: string; title: string; svg: string; caption: string }
   | { kind: 'signoff'; roles: string[] };
 
 export interface Section {

@@ -75,6 +75,8 @@ function block(b: Block): string {
       return b.chart.spec
         ? `<figure class="chart-figure" data-chart="${h(b.chart.id)}">${lineChart(b.chart.spec)}<figcaption>${h(b.chart.caption)}</figcaption></figure>`
         : `<p class="no-chart" data-chart="${h(b.chart.id)}">${h(b.chart.caption)}</p>`;
+    case 'figure':
+      return `<figure class="chart-figure" data-chart="${h(b.id)}">${b.svg}<figcaption>${h(b.caption)}</figcaption></figure>`;
     case 'signoff':
       return `<table class="signoff"><thead><tr><th scope="col">role</th><th scope="col">name</th><th scope="col">signature</th><th scope="col">date</th></tr></thead><tbody>${b.roles
         .map((r) => `<tr><td>${h(r)}</td><td></td><td></td><td></td></tr>`)

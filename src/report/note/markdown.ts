@@ -45,6 +45,8 @@ function block(b: Block): string {
     }
     case 'chart':
       return `> **Chart: ${escapeMd(b.chart.spec?.title ?? b.chart.id)}** (drawn in the HTML note: \`--format html\`). ${escapeMd(b.chart.caption)}`;
+    case 'figure':
+      return `> **Figure: ${escapeMd(b.title)}** (drawn in the HTML note: \`--format html\`). ${escapeMd(b.caption)}`;
     case 'signoff':
       return [
         '| role | name | signature | date |',
