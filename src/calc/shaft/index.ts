@@ -1,0 +1,3 @@
+export type { PointLoad, SupportReaction, Statics, BeamPoint, Beam } from './types.js';
+export { resolveLoads, gearLoad, pullLoad, STANDARD_GRAVITY } from './loads.js';
+export { shaftStatics } from './statics.js';
