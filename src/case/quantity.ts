@@ -31,7 +31,10 @@ export type Kind =
   | 'pv'
   | 'angle'
   | 'frequency'
-  | 'wearFactor';
+  | 'wearFactor'
+  | 'mass'
+  | 'torque'
+  | 'modulus';
 
 interface KindInfo {
   /** Unit of the internal number, as js-quantities spells it. */
@@ -67,6 +70,9 @@ export const KINDS: Record<Kind, KindInfo> = {
     examples: '"5e-7 mm^3/(N*m)"',
     noun: 'a wear factor (volume per load per sliding distance)',
   },
+  mass: { unit: 'kg', label: 'kg', examples: '"85 kg" or "190 lb"', noun: 'a mass' },
+  torque: { unit: 'N*m', label: 'N*m', examples: '"2.4 kN*m" or "1800 lbf*ft"', noun: 'a torque' },
+  modulus: { unit: 'Pa', label: 'Pa', examples: '"210 GPa" or "30e6 psi"', noun: "a Young's modulus" },
 };
 
 /** Density used to turn a kinematic viscosity into a dynamic one when a case gives cSt, kg/m³ (from memory: typical mineral oil near 40 °C). */
@@ -94,6 +100,9 @@ const USUAL: Record<Kind, { unit: string; other: string; to: (x: number) => numb
   angle: { unit: 'deg', other: 'rad', to: (x) => (x * Math.PI) / 180 },
   frequency: { unit: 'Hz', other: '1/min', to: (x) => x * 60 },
   wearFactor: { unit: 'mm^3/(N*m)', other: 'm^3/(N*m)', to: (x) => x * 1e-9 },
+  mass: { unit: 'kg', other: 'lb', to: (x) => x / LB },
+  torque: { unit: 'N*m', other: 'lbf*ft', to: (x) => x / (LBF * 0.3048) },
+  modulus: { unit: 'GPa', other: 'psi', to: (x) => (x * 1e9) / PSI },
 };
 
 /** A number as a case file would write it (exponent form outside 1e-3..1e6, six significant figures). */
@@ -239,6 +248,7 @@ export function parseQuantity(value: unknown, kind: Kind, bare: BareNumbers = 'b
 
 const IN = 0.0254;
 const LBF = 4.4482216152605;
+const LB = 0.45359237;
 const PSI = 6894.757293168;
 const FT_MIN = 0.3048 / 60;
 
@@ -272,6 +282,9 @@ const COMMON: Record<Exclude<Kind, 'temperature'>, Record<string, number>> = {
     'mm^3/N*m': 1e-9,
     'in^3*min/lbf*ft*h': (IN ** 3 * 60) / (LBF * 0.3048 * 3600),
   },
+  mass: { kg: 1, g: 1e-3, t: 1e3, lb: LB },
+  torque: { 'N*m': 1, 'kN*m': 1e3, 'lbf*ft': LBF * 0.3048, 'lbf*in': LBF * IN },
+  modulus: { Pa: 1, MPa: 1e6, GPa: 1e9, psi: PSI },
 };
 
 /** Absolute temperatures to °C (exact). */

@@ -13,7 +13,7 @@ import { ARRANGEMENTS, FORMS, ROLLING_KINDS } from '../core/rolling-kinds.js';
 type Bound = 'positive' | 'nonnegative' | 'any';
 
 /** A plausibility ceiling: beyond it a value is a typing slip, not a machine (value in the internal unit, and how to say it). */
-interface Ceiling {
+export interface Ceiling {
   max: number;
   min?: number;
   say: string;
@@ -66,7 +66,7 @@ function show(v: unknown): string {
 }
 
 /** A mapping that rejects unknown keys, naming them and the keys it knows. */
-function mapping<S extends z.ZodRawShape>(shape: S) {
+export function mapping<S extends z.ZodRawShape>(shape: S) {
   const known = Object.keys(shape).join(', ');
   return z.strictObject(shape, {
     error: (iss) => {
@@ -79,13 +79,13 @@ function mapping<S extends z.ZodRawShape>(shape: S) {
   });
 }
 
-function choice<T extends readonly [string, ...string[]]>(values: T) {
+export function choice<T extends readonly [string, ...string[]]>(values: T) {
   return z.enum(values, {
     error: (iss) => `got ${describeInput(iss.input)}; expected one of: ${values.join(', ')}`,
   });
 }
 
-function describeInput(v: unknown): string {
+export function describeInput(v: unknown): string {
   if (v === undefined) return 'nothing (missing)';
   if (v === null) return 'null';
   if (Array.isArray(v)) return 'a list';
@@ -93,19 +93,19 @@ function describeInput(v: unknown): string {
   return show(v);
 }
 
-const text = (what: string) =>
+export const text = (what: string) =>
   z
     .string({ error: (iss) => `got ${describeInput(iss.input)}; expected ${what}` })
     .min(1, { error: `is empty; expected ${what}` });
 
-const plain = (what: string, min: number, max: number) =>
+export const plain = (what: string, min: number, max: number) =>
   z
     .number({ error: (iss) => `got ${describeInput(iss.input)}; expected ${what}` })
     .refine((n) => Number.isFinite(n) && n >= min && n <= max, {
       error: (iss) => `got ${show(iss.input)}; expected ${what}`,
     });
 
-const FORCE: Ceiling = { max: 1e8, say: 'a force up to 100 MN' };
+export const FORCE: Ceiling = { max: 1e8, say: 'a force up to 100 MN' };
 // Dimensional wear factors of rubbing materials span about 1e-9 to 1e-3 mm^3/(N*m) (unfilled PTFE at the top).
 const WEAR: Ceiling = { max: 1e-12, say: 'a wear factor up to 1e-3 mm^3/(N*m)' };
 const TEMPERATURE: Ceiling = { min: -60, max: 300, say: 'a temperature from -60 degC to 300 degC' };
