@@ -21,6 +21,11 @@ const MAX_BYTES = 1_000_000;
 
 /** Read and validate a case file (YAML or JSON). Throws CaseError listing every problem. */
 export function loadCaseFile(path: string): LoadedCase {
+  return parseCaseText(readCaseFileText(path), path);
+}
+
+/** The text of a case file, refused (CaseError) when missing, a directory or too large. */
+export function readCaseFileText(path: string): string {
   let text: string;
   try {
     const st = statSync(path);
@@ -39,11 +44,16 @@ export function loadCaseFile(path: string): LoadedCase {
       { field: '(file)', message: `cannot be read (${why}); expected a YAML or JSON case file` },
     ]);
   }
-  return parseCaseText(text, path);
+  return text;
 }
 
 /** Validate case text (YAML or JSON); `source` names it in messages. */
 export function parseCaseText(text: string, source = '(case)'): LoadedCase {
+  return validateCase(parseCaseDocument(text, source), source);
+}
+
+/** Case text (YAML or JSON) parsed into a plain document, not yet validated; CaseError when unreadable. */
+export function parseCaseDocument(text: string, source = '(case)'): unknown {
   if (text.includes('\u0000')) {
     throw new CaseError(source, [{ field: '(file)', message: 'holds binary data; expected a YAML or JSON text file' }]);
   }
@@ -64,7 +74,7 @@ export function parseCaseText(text: string, source = '(case)'): LoadedCase {
     const msg = e instanceof YAMLParseError ? e.message.split('\n')[0]! : (e as Error).message;
     throw new CaseError(source, [{ field: '(file)', message: `is not valid YAML or JSON: ${msg}` }]);
   }
-  return validateCase(raw, source);
+  return raw;
 }
 
 /** A case nests four or five levels; far deeper is junk that would only exhaust the parser's stack. */
