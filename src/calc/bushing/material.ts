@@ -47,6 +47,33 @@ function shortestLengths(c: CaseSI, m: Material, points: DutyPoint[], wearRateTi
 }
 
 /**
+ * Edge loading of a bushing whose shaft is tilted in it, where the case states a misalignment
+ * (shaft.misalignment; absent: aligned, no check). Our own model, advisory:
+ *   L_eff = min(L, δ/θ),   p_edge = F_max/(D·L_eff) ≤ p_max
+ * θ the slope of the shaft against the bore, rad; the tilt opens a gap θ·x at a distance x from
+ * the loaded edge, so the liner bears (and bedding in wears it to the shaft's line) only where
+ * that gap is within the wear allowance δ, m; L the length, D the bore, m; F_max the largest
+ * radial load, N; p_max the material's pressure limit, Pa. Elastic conformity of the liner and
+ * the running clearance are neglected (conservative). Advisory: the model is a first estimate.
+ */
+function edgeLoadCheck(c: CaseSI, Fmax: number, L: number, pMax: number, src: string): CheckRecord | null {
+  const theta = c.shaft.misalignment;
+  if (theta === undefined) return null;
+  const Leff = theta > 0 ? Math.min(L, c.life.wearAllowance / theta) : L;
+  return advisory(
+    makeCheck(
+      'edge-pressure',
+      'Pressure on the bedded-in length min(L, δ/θ) with the shaft tilted (advisory)',
+      meanPressure(Fmax, c.shaft.diameter, Leff),
+      pMax,
+      'Pa',
+      'max',
+      `${src}; model: the tilted shaft bears only where its gap θ·x is within the wear allowance (common practice, our own estimate)`,
+    ),
+  );
+}
+
+/**
  * The thrust face over the duty: each point with axial load through rubbingThrust, then the
  * largest pressure, speed and PV, the wear life by summing the points' wear rates by share
  * (linear accumulation of Archard wear), and the friction power at the largest Fa·V.
@@ -276,6 +303,8 @@ export function checkMaterial(
           : makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.max, '1', 'max', ld.source),
     ),
   ];
+  const edge = edgeLoadCheck(c, Fmax, L, m.maxPressure, src);
+  if (edge) checks.push(edge);
   // A water-lubricated class forms its film only above a sliding speed: below it, advice (a maker's figure).
   if ('minVelocity' in m && m.minVelocity !== undefined) {
     const Vmin = Math.min(...points.map((p) => p.V));

@@ -9,7 +9,7 @@ import { allowableFilm, designChecks, evaluateDesign } from './design.js';
 import { journalAssumptions, journalWarnings } from './findings.js';
 import { pressureProfile } from './profile.js';
 import { assertFinite, meanPowerLoss, pointSummaries } from './result.js';
-import { serviceChecks } from './service-checks.js';
+import { edgeFilmCheck, serviceChecks } from './service-checks.js';
 import { buildSheet } from './sheet.js';
 import { journalRoomCase, journalThrust, thrustFinding } from './thrust.js';
 import { thrustSheet } from './thrust-sheet.js';
@@ -75,6 +75,9 @@ export function checkJournal(c: CaseSI, opts: JournalOptions = {}): JournalResul
   const checks = [
     ...designChecks(chosen, designLoad, supply, crit, tIn),
     ...serviceChecks(c),
+    ...(space.noLubricant
+      ? []
+      : edgeFilmCheck(c, chosen.governing.result.minFilmThickness, chosen.candidate.length, allowableFilm(D, crit))),
     ...(thrust?.checks ?? []),
   ];
   const findingInput = {

@@ -48,3 +48,30 @@ export function serviceChecks(c: CaseSI): CheckRecord[] {
     );
   return checks;
 }
+
+/**
+ * The edge film of a journal tilted in its bore, where the case states a misalignment
+ * (shaft.misalignment; absent: aligned, no check):
+ *   h_edge = h0 − θ·L/2 ≥ h_allow
+ * h0 the minimum film thickness of the aligned solution at the governing point, m; θ the slope
+ * of the shaft against the bearing axis, rad; L the bearing length, m; h_allow the allowable
+ * film (Trumpler 1966, from memory; design.ts), m. Model: a rigid tilt of the journal about
+ * the bearing's mid-length, taken in the plane of the minimum film (the worst edge), the film
+ * pressure's own response to the tilt neglected: a conservative first estimate, valid while
+ * θ·L/2 is small against the radial clearance.
+ */
+export function edgeFilmCheck(c: CaseSI, h0: number, length: number, allowable: number): CheckRecord[] {
+  const theta = c.shaft.misalignment;
+  if (theta === undefined) return [];
+  return [
+    makeCheck(
+      'edge-film',
+      'Film at the bearing edge with the shaft tilted, h0 − θ·L/2, against the allowable minimum film',
+      h0 - (theta * length) / 2,
+      allowable,
+      'm',
+      'min',
+      'model: rigid tilt of the journal in the bore about mid-length, worst edge at the minimum film; allowable film Trumpler (1966, from memory)',
+    ),
+  ];
+}

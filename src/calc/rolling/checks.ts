@@ -4,6 +4,7 @@ import type { CandidateSpec } from './candidates.js';
 import type { CandidateFigures, EvalContext } from './context.js';
 import { speedLimit } from './speed.js';
 import { rollingRunning } from '../../data/rolling-running.js';
+import { kindTraits } from '../../data/rolling.js';
 
 /**
  * The checks of one candidate, from its figures: life, lubrication, load ratio and static
@@ -148,7 +149,57 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext)
       ),
     );
   }
-  return [...checks, ...temperatureChecks(ctx)];
+  const plan = c.lubrication.regreaseInterval;
+  if (!lubrication.sealed && lubrication.supply === 'grease' && fig.greaseHours !== null && plan !== undefined)
+    checks.push(regreaseCheck(fig.greaseHours, plan));
+  return [...checks, ...misalignmentChecks(spec, ctx), ...temperatureChecks(ctx)];
+}
+
+/**
+ * An open bearing on grease against the maintenance plan [3]: t_r ≥ t_plan, with t_r the
+ * regreasing interval the bearing needs (half its 10 % grease life, grease.ts), h, and t_plan
+ * the longest interval the plan regreases at (case lubrication.regreaseInterval), h. A plan
+ * that regreases less often than the bearing needs lets it run dry.
+ */
+export function regreaseCheck(neededHours: number, planHours: number): CheckRecord {
+  return makeCheck(
+    'regrease-interval',
+    'regreasing interval the bearing needs against the maintenance plan’s',
+    neededHours,
+    planHours,
+    'h',
+    'min',
+    `${rollingRunning().greaseLife.source}; plan interval from the case`,
+  );
+}
+
+/** Minutes of arc in a radian. */
+const ARCMIN = Math.PI / (180 * 60);
+
+/**
+ * Misalignment, where the case states one (shaft.misalignment; absent: aligned, no check):
+ *   θ ≤ θ_perm
+ * θ the slope of the shaft against the bearing seat, rad; θ_perm the angle between the ring
+ * axes the kind tolerates without a noticeable loss of life, rad (data/rolling-kinds.json,
+ * common practice, from memory). Model: the shaft's slope at the support is the ring tilt (a
+ * rigid, aligned housing). A pair mounted as one support is held to its kind's single-row
+ * figure, an upper bound (a pair tolerates less).
+ */
+function misalignmentChecks(spec: CandidateSpec, ctx: EvalContext): CheckRecord[] {
+  const theta = ctx.c.shaft.misalignment;
+  if (theta === undefined) return [];
+  const t = kindTraits().find((k) => k.kind === spec.kind)!;
+  return [
+    makeCheck(
+      'misalignment',
+      `slope of the shaft at the bearing against the misalignment a ${spec.kind} bearing tolerates`,
+      theta,
+      t.misalignment_arcmin * ARCMIN,
+      'rad',
+      'max',
+      `${t.source}; model: the shaft's slope at the support tilts the inner ring against an aligned housing`,
+    ),
+  ];
 }
 
 /**
