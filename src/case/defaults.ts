@@ -4,6 +4,7 @@ import type { Assumption, CaseSI, Priority } from './types.js';
 import type { CaseFile } from './schema.js';
 import { PRIORITIES } from './schema.js';
 import { BALL_KINDS } from '../core/rolling-kinds.js';
+import { rollingSeries } from './rolling-series.js';
 
 /** A supplier bore within this of the shaft diameter is the shaft diameter, m (a unit conversion's rounding). */
 const BORE_MATCH = 1e-5;
@@ -115,6 +116,7 @@ export function completeCase(
   }
   if (lub.oil !== undefined) c.lubrication.oilGrade = lub.oil;
   if (lub.viscosity !== undefined) c.lubrication.viscosity = lub.viscosity;
+  if (lub.regreaseInterval !== undefined) c.lubrication.regreaseInterval = lub.regreaseInterval;
   if (file.bushing) c.bushing = stripUndefined(file.bushing);
   if (file.rolling) c.rolling = stripUndefined(file.rolling);
   if (file.journal) c.journal = stripUndefined(file.journal);
@@ -201,6 +203,12 @@ function choiceProblems(file: CaseFile, knownGrades: number[], knownMaterials: s
     problems.push({ field: 'journal', message: 'gives both radialClearance and clearanceRatio; expected one of them' });
   }
   const r = file.rolling;
+  if (r?.series !== undefined && !rollingSeries().includes(r.series)) {
+    problems.push({
+      field: 'rolling.series',
+      message: `got "${r.series}"; expected one of the dimension series of the tables: ${rollingSeries().join(', ')}`,
+    });
+  }
   if (r && (r.dynamicRating === undefined) !== (r.staticRating === undefined)) {
     problems.push({
       field: 'rolling',

@@ -207,6 +207,11 @@ export const caseFileSchema = mapping({
       max: 150,
       say: 'an oil inlet temperature from -30 degC to 150 degC (mineral oils)',
     }).optional(),
+    // The longest interval the maintenance plan regreases at (an open bearing on grease is held to it).
+    regreaseInterval: quantity('time', 'positive', {
+      max: 1e6,
+      say: 'a regreasing interval up to 1 000 000 h',
+    }).optional(),
   }).optional(),
   environment: mapping({
     ambient: quantity('temperature', 'any', TEMPERATURE).optional(),
@@ -250,6 +255,17 @@ export const caseFileSchema = mapping({
       say: 'a nominal contact angle from 0 deg to 60 deg, written with its unit (40 deg)',
     }).optional(),
     arrangement: choice(ARRANGEMENTS).optional(),
+    // A dimension series of the tables ("02", "302", "49"); checked against them in defaults.ts.
+    // YAML reads an unquoted 03 as the number 3: a whole number is taken as its two-digit series.
+    series: z
+      .unknown()
+      .transform((v, ctx) => {
+        if (typeof v === 'string' && v.trim()) return v.trim();
+        if (typeof v === 'number' && Number.isInteger(v) && v >= 0) return String(v).padStart(2, '0');
+        ctx.addIssue({ code: 'custom', message: `got ${describeInput(v)}; expected a dimension series such as "03"` });
+        return z.NEVER;
+      })
+      .optional(),
     bore: quantity('length', 'positive', { max: 10, say: 'a bearing bore up to 10 m' }).optional(),
     dynamicRating: quantity('force', 'positive', FORCE).optional(),
     staticRating: quantity('force', 'positive', FORCE).optional(),

@@ -72,6 +72,8 @@ export interface CaseSI {
     viscosity?: number;
     /** Oil inlet temperature, °C. */
     inletTemperature: number;
+    /** Longest regreasing interval of the maintenance plan, hours; absent: none given (the needed one is reported). */
+    regreaseInterval?: number;
   };
   environment: {
     /** Ambient temperature, °C. */
@@ -93,6 +95,8 @@ export interface CaseSI {
     /** Nominal contact angle, rad. */
     contactAngle?: number;
     arrangement?: Arrangement;
+    /** Dimension series of the tables ("02", "302", "49"); restricts the candidates to it. */
+    series?: string;
     /** Supplier bearing bore, m (must be the shaft diameter). */
     bore?: number;
     /** Supplier basic dynamic load rating C, N. */

@@ -100,7 +100,7 @@ export function candidateSpecs(c: CaseSI, notes: Notes): CandidateSpec[] {
   return specs;
 }
 
-/** The entries of the case's kind (form, arrangement), else of its type, else all. */
+/** The entries of the case's kind (form, arrangement, dimension series), else of its type, else all. */
 function wanted(c: CaseSI, entries: CatalogueEntry[]): CatalogueEntry[] {
   const r = c.rolling;
   if (!r) return entries;
@@ -109,7 +109,8 @@ function wanted(c: CaseSI, entries: CatalogueEntry[]): CatalogueEntry[] {
       (r.type === undefined || kindType(e.kind) === r.type) &&
       (r.kind === undefined || e.kind === r.kind) &&
       (r.form === undefined || e.form === r.form) &&
-      (r.arrangement === undefined || e.arrangement === r.arrangement),
+      (r.arrangement === undefined || e.arrangement === r.arrangement) &&
+      (r.series === undefined || e.series === r.series),
   );
 }
 
