@@ -1,7 +1,9 @@
 import type { AdviceResult, RuleTrace } from '../advise/engine.js';
 import type { LoadedCase } from '../case/load.js';
 import { caseFileOf, type CaseFileInBase } from '../case/base-units.js';
-import { wordedAdvice, type Worded } from './findings/worded.js';
+import { worded, wordedAdvice, type Worded } from './findings/worded.js';
+import { describeWarning } from './findings/index.js';
+import type { ShaftAdviceView } from './shaft-text.js';
 
 /** Options of adviceJson. */
 export interface AdviceJsonOptions {
@@ -33,4 +35,36 @@ export function adviceJson(
   const echo = caseFileOf(loaded.case);
   const shown: AdviceJson = opts.explain ? { ...rest, case: echo, rules } : { ...rest, case: echo };
   return JSON.parse(JSON.stringify(shown)) as AdviceJson;
+}
+
+/**
+ * A whole shaft's advice as `advise --format json` prints it (the contract of a shaft case):
+ * `shaft` (maxDeflection m, maxMoment N·m, diagram: x m, shearY and shearZ N, moment N·m,
+ * deflection m, and each plane's moment and deflection), `supports` (name, at m, diameter m,
+ * reaction y, z, radial, axial N, slope rad, and `advice`: the single-support advice exactly as
+ * adviceJson prints it, its own case echoed), `arrangement` (locating, summary, reasons, worded),
+ * `assumed`, `warnings` (worded), then the shaft case as written under `case`. SI throughout.
+ */
+export function shaftAdviceJson(
+  given: unknown,
+  cases: Pick<LoadedCase, 'case'>[],
+  a: ShaftAdviceView,
+  opts: AdviceJsonOptions = {},
+): Record<string, unknown> {
+  const shown = {
+    shaft: { maxDeflection: a.shaft.maxDeflection, maxMoment: a.shaft.maxMoment, diagram: a.shaft.diagram },
+    supports: a.supports.map((s, i) => ({
+      name: s.name,
+      at: s.at,
+      diameter: s.diameter,
+      reaction: s.reaction,
+      slope: s.slope,
+      advice: adviceJson(cases[i]!, s.advice, opts),
+    })),
+    arrangement: worded(a.arrangement),
+    assumed: worded(a.assumed),
+    warnings: a.warnings.map(describeWarning),
+    case: given,
+  };
+  return JSON.parse(JSON.stringify(shown)) as Record<string, unknown>;
 }
