@@ -4,6 +4,8 @@ import type { Assumption, CaseSI } from '../case/types.js';
 import type { CheckRecord } from '../core/check.js';
 import type { OptionName } from '../core/options.js';
 import { ROLLING_KINDS } from '../core/rolling-kinds.js';
+import { entriesForShaft } from '../calc/rolling/catalogue.js';
+import { kindType } from '../calc/rolling/kinds.js';
 import { bushingMaterials } from '../data/bushing.js';
 import { lubricants } from '../data/load.js';
 
@@ -13,7 +15,7 @@ import { lubricants } from '../data/load.js';
  * target, an allowance, a length) is a grid of values a drawing would carry (whole mm, hours to
  * two significant figures) and is searched by bisection: feasibility is taken to grow along
  * it, and the value found is verified on its own. A discrete input (supply, oil grade,
- * cleanliness, material, rolling kind) is a short list tried in order.
+ * cleanliness, material, rolling kind or series) is a short list tried in order.
  */
 export interface Lever {
   /** Case path. */
@@ -117,19 +119,50 @@ function lengthsUp(docValue: unknown, now: number, max: number, stepSI: number):
   return out;
 }
 
-/** Life targets downward from `now` h to MIN_LIFE_SHARE of it, two significant figures, largest first. */
-function hoursDown(docValue: unknown, now: number): string[] {
+/**
+ * Durations downward from `now` h, two significant figures, largest first, in the document's
+ * unit: to MIN_LIFE_SHARE of `now` (a life target), or to `least` h rounded down to two
+ * significant figures (a regreasing plan: the interval the bearing needs, as a plan carries it).
+ */
+function hoursDown(docValue: unknown, now: number, least?: number): string[] {
   const { unit, perUnit } = docUnit(docValue, 'time', 'h');
   const cur = now / perUnit;
+  const low = (least ?? now * MIN_LIFE_SHARE) / perUnit;
+  const e0 = Math.floor(Math.log10(low)) - 1;
+  const floor = least === undefined ? low : Math.floor(low * 10 ** -e0 * (1 + 1e-9)) * 10 ** e0;
   const values = new Set<number>();
-  for (let e = Math.floor(Math.log10(cur)); e >= Math.floor(Math.log10(cur * MIN_LIFE_SHARE)) - 1; e--) {
+  for (let e = Math.floor(Math.log10(cur)); e >= e0; e--) {
     const step = 10 ** (e - 1);
     for (let m = 99; m >= 10; m--) {
       const v = Number((m * step).toPrecision(2));
-      if (v < cur * (1 - 1e-9) && v >= cur * MIN_LIFE_SHARE * (1 - 1e-9)) values.add(v);
+      if (v < cur * (1 - 1e-9) && v >= floor * (1 - 1e-9)) values.add(v);
     }
   }
   return [...values].sort((a, b) => b - a).map((v) => `${plainNumber(v)} ${unit}`);
+}
+
+/**
+ * The other dimension series with a bearing for the shaft of the case's type, kind, form and
+ * arrangement that fits its space, the nearest in size (smallest outside diameter of the
+ * series) to the present one first, ties the larger first.
+ */
+function seriesSteps(c: CaseSI, now: string): string[] {
+  const r = c.rolling ?? {};
+  const smallest = new Map<string, number>();
+  for (const e of entriesForShaft(c.shaft.diameter)) {
+    const wanted =
+      (r.type === undefined || kindType(e.kind) === r.type) &&
+      (r.kind === undefined || e.kind === r.kind) &&
+      (r.form === undefined || e.form === r.form) &&
+      (r.arrangement === undefined || e.arrangement === r.arrangement);
+    const fits = e.outerDiameter <= c.space.maxOuterDiameter && e.width <= c.space.maxLength;
+    if (wanted) smallest.set(e.series, Math.min(smallest.get(e.series) ?? Infinity, fits ? e.outerDiameter : Infinity));
+  }
+  const D0 = smallest.get(now) ?? Infinity;
+  const gap = (s: string) => (Number.isFinite(D0) ? Math.abs(smallest.get(s)! - D0) : smallest.get(s)!);
+  return [...smallest.keys()]
+    .filter((s) => s !== now && Number.isFinite(smallest.get(s)))
+    .sort((a, b) => gap(a) - gap(b) || smallest.get(b)! - smallest.get(a)!);
 }
 
 /** The discrete values of an ordered scale, nearest to `now` first (ties: later in the scale first). */
@@ -156,7 +189,7 @@ export function leversFor(
 ): Lever[] {
   const d = c.shaft.diameter;
   const out: Lever[] = [];
-  const lifeFails = failed.some((k) => k.unit === 'h');
+  const lifeFails = failed.some((k) => k.unit === 'h' && k.id !== 'regrease-interval');
   const add = (field: string, steps: string[], monotone: boolean, from = fromOf(doc, field, assumed)) => {
     if (steps.length) out.push({ field, from, steps, monotone });
   };
@@ -185,6 +218,17 @@ export function leversFor(
         'rolling.kind',
         ROLLING_KINDS.filter((k) => k !== kind),
         false,
+      );
+    const series = c.rolling?.series;
+    if (series !== undefined) add('rolling.series', seriesSteps(c, series), false);
+    // A plan that regreases too seldom: its interval down to the one the bearing needs (2 significant figures).
+    const needed = failed.filter((k) => k.id === 'regrease-interval').map((k) => k.value);
+    const plan = c.lubrication.regreaseInterval;
+    if (needed.length && plan !== undefined)
+      add(
+        'lubrication.regreaseInterval',
+        hoursDown(getPath(doc, 'lubrication.regreaseInterval'), plan, Math.min(...needed)),
+        true,
       );
   }
   const oil = c.lubrication.supply === 'oil-bath' || c.lubrication.supply === 'oil-feed';

@@ -16,6 +16,8 @@ const CHANGE_WORDS: Record<string, (to: string) => string> = {
   'lubrication.oil': (to) => `oil ${to}`,
   'environment.contamination': (to) => `${to} running`,
   'rolling.kind': (to) => `a ${to} bearing`,
+  'rolling.series': (to) => `a bearing of dimension series ${to}`,
+  'lubrication.regreaseInterval': (to) => `regreasing every ${to}`,
 };
 
 /** One change in words, with the line to write in the case file: "a housing bore of 32 mm (space.maxOuterDiameter: 32 mm)". */
