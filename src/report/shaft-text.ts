@@ -98,7 +98,8 @@ export function shaftSketch(shaft: ShaftSI, units: UnitSystem, width = 72): stri
   shaft.supports.forEach((s, i) => {
     const c = col(s.at);
     sup[c] = '^';
-    if (c + 1 < width) sup[c + 1] = SUPPORT_MARKS[i]!;
+    // The letter right of the mark, or left of it at the right-hand end.
+    sup[c + 1 < width ? c + 1 : c - 1] = SUPPORT_MARKS[i]!;
   });
   const pad = '  ';
   const left = fmt(lo, 'm', units);
@@ -140,22 +141,29 @@ export function shaftSummaryLines(shaft: ShaftSI, units: UnitSystem): string[] {
  * carries), then once per kind the relation it was resolved by.
  */
 export function loadsTable(shaft: ShaftSI, resolved: PointLoad[], units: UnitSystem): string {
-  const rows = table(
-    ['#', 'load', 'at', 'Fy', 'Fz', 'Fx (axial)', 'My', 'Mz', 'torque'],
-    resolved.map((p, i) => [
-      String(i + 1),
-      p.label,
-      fmt(p.at, 'm', units),
-      fmt(p.fy, 'N', units),
-      fmt(p.fz, 'N', units),
-      fmt(p.fx, 'N', units),
-      fmt(p.my, 'N*m', units),
-      fmt(p.mz, 'N*m', units),
-      fmt(p.torque, 'N*m', units),
-    ]),
-  );
+  const rows = table(['#', 'load', 'at', 'Fy', 'Fz', 'Fx (axial)', 'My', 'Mz', 'torque'], loadRows(resolved, units));
   const kinds = [...new Set(shaft.loads.map(loadKind))];
   return [rows, ...kinds.map((k) => shorten(`  ${k}: ${RELATIONS[k]}`, 100))].join('\n');
+}
+
+/** Rounding noise of the kernels' trigonometry (cos 90° = 6e-17) shown as the zero it is: below 1e-9 of the largest. */
+const clean = (v: number, scale: number) => (Math.abs(v) < 1e-9 * scale ? 0 : v);
+
+/** The resolved loads as table cells: number, label, position, forces, couples, torque. */
+export function loadRows(resolved: PointLoad[], units: UnitSystem): string[][] {
+  const f = Math.max(0, ...resolved.flatMap((p) => [Math.abs(p.fx), Math.abs(p.fy), Math.abs(p.fz)]));
+  const m = Math.max(0, ...resolved.flatMap((p) => [Math.abs(p.my), Math.abs(p.mz), Math.abs(p.torque)]));
+  return resolved.map((p, i) => [
+    String(i + 1),
+    p.label,
+    fmt(p.at, 'm', units),
+    fmt(clean(p.fy, f), 'N', units),
+    fmt(clean(p.fz, f), 'N', units),
+    fmt(clean(p.fx, f), 'N', units),
+    fmt(clean(p.my, m), 'N*m', units),
+    fmt(clean(p.mz, m), 'N*m', units),
+    fmt(clean(p.torque, m), 'N*m', units),
+  ]);
 }
 
 /** The reactions table: the forces each support exerts on the shaft, and the shaft's slope there. */

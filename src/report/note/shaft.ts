@@ -6,6 +6,7 @@ import { describe, describeAssumption, describeWarning } from '../findings/index
 import {
   SUPPORT_MARKS,
   loadKind,
+  loadRows,
   loadRelation,
   shaftSummaryLines,
   slopeText,
@@ -74,17 +75,7 @@ function shaftSection(n: ShaftNoteInput, u: UnitSystem): Section {
         caption: 'Loads on the shaft as resolved: forces on the shaft, bending couples, the torque carried',
         head: ['#', 'load', 'at', 'Fy', 'Fz', 'Fx (axial)', 'My', 'Mz', 'torque'],
         numeric: [0, 2, 3, 4, 5, 6, 7, 8],
-        rows: n.resolved.map((p, i) => [
-          String(i + 1),
-          p.label,
-          fmt(p.at, 'm', u),
-          fmt(p.fy, 'N', u),
-          fmt(p.fz, 'N', u),
-          fmt(p.fx, 'N', u),
-          fmt(p.my, 'N*m', u),
-          fmt(p.mz, 'N*m', u),
-          fmt(p.torque, 'N*m', u),
-        ]),
+        rows: loadRows(n.resolved, u),
       },
       { kind: 'list', items: kinds.map((k) => `${k}: ${loadRelation(n.shaft.loads.find((l) => loadKind(l) === k)!)}`) },
       {
