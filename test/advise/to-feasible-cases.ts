@@ -53,4 +53,24 @@ export const FAILING_CASES = {
     space: { maxLength: '60 mm', maxOuterDiameter: '100 mm' },
     lubrication: { supply: 'grease' },
   },
+  /** An open bearing on grease whose maintenance plan regreases less often than it needs. */
+  regreasePlan: {
+    title: 'Drive-end bearing of a flour-mill roller, regreased on a plan (invented)',
+    shaft: { diameter: '45 mm', speed: '3000 rpm' },
+    load: { radial: '1.5 kN' },
+    life: { hours: '30000 h' },
+    space: { maxLength: '40 mm', maxOuterDiameter: '120 mm' },
+    lubrication: { supply: 'grease', regreaseInterval: '4000 h' },
+    environment: { ambient: '60 degC' },
+  },
+  /** A rolling bearing restricted to a light series too weak for its life, where a heavier series fits. */
+  lightSeries: {
+    title: 'Tail pulley of a ballast conveyor, light series named (invented)',
+    shaft: { diameter: '50 mm', speed: '300 rpm' },
+    load: { radial: '6 kN', shock: 'light' },
+    life: { hours: '40000 h' },
+    space: { maxLength: '40 mm', maxOuterDiameter: '130 mm' },
+    lubrication: { supply: 'grease' },
+    rolling: { kind: 'deep-groove ball', series: '10' },
+  },
 };
