@@ -5,6 +5,7 @@ import { adviceWording } from './advice.js';
 import { bushingWording } from './bushing.js';
 import { journalWording } from './journal.js';
 import { rollingWording } from './rolling.js';
+import { shaftWording } from './shaft.js';
 
 /** Every finding code and its words, one table per kernel. */
 const WORDING: Record<string, Wording> = {
@@ -12,6 +13,7 @@ const WORDING: Record<string, Wording> = {
   ...bushingWording.findings,
   ...rollingWording.findings,
   ...journalWording.findings,
+  ...shaftWording.findings,
 };
 const ASSUMPTION_WORDING: Record<string, AssumptionWording> = {
   ...bushingWording.assumptions,
