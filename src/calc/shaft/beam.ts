@@ -111,7 +111,7 @@ export function shaftBeam(
     const h = (right - left) / n;
     for (let k = 0; k < n; k++) {
       const xa = left + k * h;
-      const xb = k === n - 1 ? right : xa + h;
+      const xb = k === n - 1 ? right : left + (k + 1) * h;
       const mz0 = xa * sFy - sFyX - sMz;
       const mz1 = xb * sFy - sFyX - sMz;
       const mY0 = xa * sFz - sFzX + sMy;
