@@ -1,5 +1,5 @@
 import { UsageError } from '../core/errors.js';
-import { loadCaseFile } from '../case/load.js';
+import { loadAnyCaseFile } from '../case/shaft-load.js';
 import { describeWarning } from '../report/findings/index.js';
 import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
 import { adviceJson } from '../report/json.js';
@@ -39,7 +39,12 @@ export async function runAdvise(
     throw new UsageError('--force: applies only with --out FILE; got --force without --out');
   if (opts.out !== undefined && opts.out.trim() === '')
     throw new UsageError('--out: got an empty file name; expected a file path');
-  const loaded = loadCaseFile(file);
+  const any = loadAnyCaseFile(file);
+  if (any.kind === 'shaft') {
+    const { runAdviseShaft } = await import('./advise-shaft.js');
+    return runAdviseShaft(any.loaded, { ...opts, format, caseFile: file });
+  }
+  const loaded = any.loaded;
   const [{ advise }, { withToMakeFeasible }, { loadRules }] = await Promise.all([
     import('../advise/engine.js'),
     import('../advise/to-feasible.js'),

@@ -210,7 +210,6 @@ export function shaftAdviceText(
   parts.push(
     [
       heading('Arrangement'),
-      `Locating: ${a.arrangement.locating}.`,
       describe(a.arrangement.summary),
       ...a.arrangement.reasons.map((r) => `  - ${describe(r)}`),
     ].join('\n'),

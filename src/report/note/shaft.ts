@@ -121,10 +121,7 @@ function reactionsSection(a: ShaftAdviceView, u: UnitSystem): Section {
 }
 
 function arrangementSection(a: ShaftAdviceView): Section {
-  const blocks: Block[] = [
-    { kind: 'p', text: describe(a.arrangement.summary), strong: true },
-    { kind: 'p', text: `Locating: ${a.arrangement.locating}.` },
-  ];
+  const blocks: Block[] = [{ kind: 'p', text: describe(a.arrangement.summary), strong: true }];
   if (a.arrangement.reasons.length) blocks.push({ kind: 'list', items: a.arrangement.reasons.map(describe) });
   if (a.assumed.length)
     blocks.push(
