@@ -3,7 +3,7 @@ import { OPTIONS } from '../core/options.js';
 import { CaseError } from '../core/errors.js';
 import { readdirSync, statSync } from 'node:fs';
 import { join } from 'node:path';
-import { loadCaseFile } from '../case/load.js';
+import { loadAnyCaseFile } from '../case/shaft-load.js';
 import { advise, type AdviceResult } from '../advise/engine.js';
 import { loadRules, type LoadedRule } from '../advise/load-rules.js';
 
@@ -11,7 +11,7 @@ import { ruleRunner } from './rule-runner.js';
 
 /**
  * Batch: advise every case file in a folder, in sorted order (by code point, so the order
- * is the same on every machine), one row per file. A file that cannot be read or validated
+ * is the same on every machine), one row per file (per support for a shaft case). A file that cannot be read or validated
  * gets its error on its row and the rest go on. One process, one rules Engine reused for
  * every case (identical results: rule-runner.ts), no journal pressure profile or sheet
  * (the row does not show them).
@@ -55,48 +55,65 @@ function designText(a: AdviceResult): string {
   }
 }
 
+/** One advised support (or single case) as a row. */
+function adviceRow(name: string, title: string, a: AdviceResult): BatchRow {
+  const top = a.ranking[0]!;
+  const f = (o: (typeof OPTIONS)[number]) => a.ranking.find((r) => r.option === o)!.feasible;
+  return {
+    file: name,
+    title,
+    result: a.recommendation ? 'pass' : 'fail',
+    recommendation: a.recommendation ?? 'none feasible',
+    score: a.recommendation ? top.score : null,
+    lifeHours: a.recommendation ? top.figures.lifeHours : null,
+    design: designText(a),
+    feasible: { bushing: f('bushing'), rolling: f('rolling'), journal: f('journal') },
+    error: '',
+  };
+}
+
+/**
+ * The rows of one case file: one for a single-support case, one per support for a shaft case
+ * (titled "<title>: <support name>"), or one row holding the error.
+ */
 export async function adviseFile(
   path: string,
   name: string,
   rules: LoadedRule[],
   run: ReturnType<typeof ruleRunner>['run'],
-): Promise<BatchRow> {
+): Promise<BatchRow[]> {
   try {
-    const loaded = loadCaseFile(path);
-    const c = loaded.case;
-    const a = await advise(c, loaded.assumed, rules, {
+    const any = loadAnyCaseFile(path);
+    if (any.kind === 'shaft') {
+      const { adviseShaft } = await import('../advise/shaft.js');
+      const sa = await adviseShaft(any.loaded, rules);
+      const title = typeof any.loaded.common['title'] === 'string' ? any.loaded.common['title'] : '';
+      return sa.supports.map((s) => adviceRow(name, `${title}: ${s.name}`, s.advice));
+    }
+    const loaded = any.loaded;
+    const a = await advise(loaded.case, loaded.assumed, rules, {
       kernel: { pressureProfile: false, sheet: false },
       runRules: run,
     });
-    const top = a.ranking[0]!;
-    const f = (o: (typeof OPTIONS)[number]) => a.ranking.find((r) => r.option === o)!.feasible;
-    return {
-      file: name,
-      title: c.title,
-      result: a.recommendation ? 'pass' : 'fail',
-      recommendation: a.recommendation ?? 'none feasible',
-      score: a.recommendation ? top.score : null,
-      lifeHours: a.recommendation ? top.figures.lifeHours : null,
-      design: designText(a),
-      feasible: { bushing: f('bushing'), rolling: f('rolling'), journal: f('journal') },
-      error: '',
-    };
+    return [adviceRow(name, loaded.case.title, a)];
   } catch (e) {
     const error =
       e instanceof CaseError
         ? e.problems.map((p) => `${p.field}: ${p.message}`).join('; ')
         : `internal defect: ${(e as Error)?.message ?? String(e)}`;
-    return {
-      file: name,
-      title: '',
-      result: 'error',
-      recommendation: '',
-      score: null,
-      lifeHours: null,
-      design: '',
-      feasible: { bushing: null, rolling: null, journal: null },
-      error,
-    };
+    return [
+      {
+        file: name,
+        title: '',
+        result: 'error',
+        recommendation: '',
+        score: null,
+        lifeHours: null,
+        design: '',
+        feasible: { bushing: null, rolling: null, journal: null },
+        error,
+      },
+    ];
   }
 }
 
@@ -110,8 +127,8 @@ export async function runBatch(
   const files = caseFiles(dir);
   const rows: BatchRow[] = [];
   for (const f of files) {
-    rows.push(await adviseFile(join(dir, f), f, rules, run));
-    opts.onProgress?.(rows.length, files.length);
+    rows.push(...(await adviseFile(join(dir, f), f, rules, run)));
+    opts.onProgress?.(files.indexOf(f) + 1, files.length);
   }
   return rows;
 }

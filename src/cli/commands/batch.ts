@@ -4,7 +4,9 @@ import type { Command } from 'commander';
 export function registerBatch(program: Command): void {
   program
     .command('batch')
-    .description('advise every case file (*.yaml, *.yml, *.json) in a folder; one CSV row per case')
+    .description(
+      'advise every case file (*.yaml, *.yml, *.json) in a folder; one CSV row per case, one per support for a shaft case',
+    )
     .argument('<dir>', 'folder of case files')
     .option('--out <file>', 'CSV summary to write (required)')
     .option('--force', 'replace an existing --out file')
@@ -42,7 +44,7 @@ export function registerBatch(program: Command): void {
       const bad = rows.filter((r) => r.result === 'error');
       const none = rows.filter((r) => r.result === 'fail').length;
       process.stdout.write(
-        `wrote ${raw.out}: ${rows.length} case${rows.length === 1 ? '' : 's'}, ${rows.length - bad.length - none} with a recommendation, ${none} with none feasible, ${bad.length} failed\n`,
+        `wrote ${raw.out}: ${rows.length} row${rows.length === 1 ? '' : 's'}, ${rows.length - bad.length - none} with a recommendation, ${none} with none feasible, ${bad.length} failed\n`,
       );
       for (const r of bad) process.stderr.write(`shaftwise: ${r.file}: ${r.error}\n`);
       if (bad.length) process.exitCode = EXIT.checkFailed;
