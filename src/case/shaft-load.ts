@@ -131,6 +131,8 @@ function toSI(file: ShaftCaseFile, assumed: Assumption[]): ShaftSI {
   if (file.load?.shock === undefined)
     assumed.push({ field: 'load.shock', value: shock, reason: DEFAULTS.shock.reason });
   const shaft: ShaftSI = {
+    // Without shaft.diameter the segments are the whole shaft (every position lies on one), so
+    // no place takes this figure; the largest segment's is given to keep the field a diameter.
     diameter: s.diameter ?? Math.max(...segments.map((g) => g.diameter)),
     modulus,
     segments,

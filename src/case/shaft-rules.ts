@@ -204,9 +204,11 @@ function outside(at: number, extent: { from: number; to: number } | undefined): 
   return `got ${mm(at)}, outside the shaft's segments (${mm(extent.from)} to ${mm(extent.to)}); expected a position on the shaft, or shaft.diameter for the shaft beyond the segments`;
 }
 
-/** The segment holding position `at` (the first of two that meet there), if any. */
+/** The segment holding position `at` (the nearer x = 0 of two that meet there), if any. */
 export function segmentAt(file: ShaftCaseFile, at: number): { from: number; to: number; diameter: number } | undefined {
-  return file.shaft.segments?.find((s) => at >= s.from - SAME_PLACE && at <= s.to + SAME_PLACE);
+  return [...(file.shaft.segments ?? [])]
+    .sort((a, b) => a.from - b.from)
+    .find((s) => at >= s.from - SAME_PLACE && at <= s.to + SAME_PLACE);
 }
 
 /** The shaft's diameter at `at`, m: its segment's, else shaft.diameter. */
