@@ -31,8 +31,14 @@ export function registerMap(program: Command): void {
         const grid = parseGrid(raw.grid, kind === 'text' ? 30 : 60);
         const load = raw.load === undefined ? undefined : parseRange('--load', raw.load, 'force', '100N..20kN');
         const speed = raw.speed === undefined ? undefined : parseRange('--speed', raw.speed, 'speed', '10rpm..5000rpm');
-        const { loadCaseFile } = await import('../../case/load.js');
-        const loaded = loadCaseFile(file);
+        const { loadAnyCaseFile } = await import('../../case/shaft-load.js');
+        const any = loadAnyCaseFile(file);
+        // A whole shaft is not swept yet: refused by name rather than swept as something it is not.
+        if (any.kind === 'shaft')
+          throw new UsageError(
+            `map: "${file}" is a shaft case (shaft.supports and shaft.loads); map takes a single-support case: advise the shaft, then run map on a support's case (advise --format json gives each under supports[].advice.case)`,
+          );
+        const loaded = any.loaded;
         const { computeMap } = await import('../../explore/map.js');
         const { progressBar } = await import('../../report/explore/progress.js');
         const bar = progressBar('map');

@@ -18,8 +18,14 @@ export function registerSensitivity(program: Command): void {
       const format = raw.format ?? 'text';
       if (!['text', 'json', 'html'].includes(format))
         throw new UsageError(`--format: got "${format}"; expected one of: text, json, html`);
-      const { loadCaseFile } = await import('../../case/load.js');
-      const loaded = loadCaseFile(file);
+      const { loadAnyCaseFile } = await import('../../case/shaft-load.js');
+      const any = loadAnyCaseFile(file);
+      // A whole shaft is not swept yet: refused by name rather than swept as something it is not.
+      if (any.kind === 'shaft')
+        throw new UsageError(
+          `sensitivity: "${file}" is a shaft case (shaft.supports and shaft.loads); sensitivity takes a single-support case: advise the shaft, then run sensitivity on a support's case (advise --format json gives each under supports[].advice.case)`,
+        );
+      const loaded = any.loaded;
       const { computeSensitivity } = await import('../../explore/sensitivity.js');
       const r = await computeSensitivity(loaded.case, loaded.assumed);
       const rep = await import('../../report/explore/sensitivity-report.js');
