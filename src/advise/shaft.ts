@@ -55,6 +55,8 @@ const MAX_SLOPE = Math.PI / 36;
 /** A support whose reaction is below this is advised at it, N (a case's radial load must be positive). */
 const MIN_RADIAL = 1;
 const PAIR_KINDS = new Set(['tapered roller', 'angular-contact ball']);
+/** Re-advice passes of a cross-located pair on the opposed-pair axial loads. */
+const MAX_PAIR_PASSES = 3;
 
 /** A number as a case file writes it, with its unit (twelve significant figures). */
 const q = (x: number, unit: string) => `${Number(x.toPrecision(12))} ${unit}`;
@@ -79,7 +81,7 @@ function stateOf(shaft: ShaftSI, loads: ShaftLoadSI[], share: number, speed: num
  * The axial load each support carries at one state, N (≥ 0): the statics' (the locating
  * support, or the cross-located one the thrust pushes towards), or for a cross-located pair of
  * tapered roller or angular-contact bearings the opposed-pair rule with each bearing's induced
- * force (tapered-pair.ts): Fi = 0.5·Fr/Y, Y = 0.4·cot α (tapered, ISO 281, from memory), or
+ * force (tapered-pair.ts): Fi = 0.5·Fr/Y, Y = 0.4·cot α, α the candidate's contact angle (tapered, ISO 281, from memory), or
  * Fi = e·Fr (angular-contact ball), Ka = Σfx towards the second support.
  */
 function axialLoads(shaft: ShaftSI, s: State, pair: [RollingCandidate, RollingCandidate] | null): [number, number] {
@@ -87,7 +89,7 @@ function axialLoads(shaft: ShaftSI, s: State, pair: [RollingCandidate, RollingCa
   if (!pair) return [Math.abs(ra.axial), Math.abs(rb.axial)];
   const induced = (k: RollingCandidate, Fr: number) =>
     k.kind === 'tapered roller'
-      ? inducedAxialForce(Fr, 0.4 / Math.tan(k.contactAngle))
+      ? inducedAxialForce(Fr, 0.4 / Math.tan((k.contactAngle * Math.PI) / 180))
       : inducedAxialForceFromE(Fr, k.e ?? 0);
   const towardsB = Math.sign(shaft.supports[1].at - shaft.supports[0].at);
   const r = opposedAxialLoadsFromInduced({
@@ -161,7 +163,9 @@ function rollingChoice(a: AdviceResult): RollingCandidate | null {
  *  3. a cross-located pair (both supports `one-direction`) whose rolling option is a tapered
  *     roller or angular-contact ball bearing at both supports: the axial loads recomputed by the
  *     opposed-pair rule with the induced forces of those two bearings, and both supports
- *     advised again once on them (the second advice is the result);
+ *     advised again on them until the chosen pair repeats; when the choice swings between
+ *     bearings (the loads move the choice), each support takes the largest axial load of the
+ *     passes (conservative) and is advised once more on it;
  *  4. what it would take (withToMakeFeasible) on each support's document; a `space.*` field of a
  *     support with its own room is renamed `shaft.supports[i].space.*`, the path in the shaft file;
  *  5. the arrangement as a pair (shaft-arrangement.ts).
@@ -195,11 +199,24 @@ export async function adviseShaft(input: ShaftCaseInput, rules: LoadedRule[] = l
   let runs = await run(axial);
   let pairRule = false;
   const cross = shaft.supports.every((s) => s.locates === 'one-direction');
-  const pair = runs.map((r) => rollingChoice(r.advice));
-  if (cross && pair.every((k) => k && PAIR_KINDS.has(k.kind) && (k.kind === 'tapered roller' || k.e !== null))) {
-    axial = states.map((s) => axialLoads(shaft, s, pair as [RollingCandidate, RollingCandidate]));
+  // The pair's bearings decide the axial loads, and the axial loads may change the bearings:
+  // re-advised until the chosen pair repeats (at most MAX_PAIR_PASSES times).
+  const seen: string[] = [];
+  let envelope: [number, number][] | null = null;
+  for (let pass = 0; cross && pass <= MAX_PAIR_PASSES; pass++) {
+    const pair = runs.map((r) => rollingChoice(r.advice));
+    if (!pair.every((k) => k && PAIR_KINDS.has(k.kind) && (k.kind === 'tapered roller' || k.e !== null))) break;
+    const ids = pair.map((k) => k!.id).join('|');
+    if (ids === seen.at(-1)) break;
+    const next = states.map((s) => axialLoads(shaft, s, pair as [RollingCandidate, RollingCandidate]));
+    envelope = envelope ? envelope.map((e, k) => [Math.max(e[0], next[k]![0]), Math.max(e[1], next[k]![1])]) : next;
+    // A choice that comes back (or one pass too many) does not settle: the largest loads found.
+    const settled = !seen.includes(ids) && pass < MAX_PAIR_PASSES;
+    axial = settled ? next : envelope;
     runs = await run(axial);
+    seen.push(ids);
     pairRule = true;
+    if (!settled) break;
   }
 
   const supports = [] as unknown as [ShaftSupportAdvice, ShaftSupportAdvice];
