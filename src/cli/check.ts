@@ -1,6 +1,7 @@
 import { OPTIONS, type OptionName } from '../core/options.js';
 import { UsageError } from '../core/errors.js';
-import { loadCaseFile, type LoadedCase } from '../case/load.js';
+import type { LoadedCase } from '../case/load.js';
+import { loadAnyCaseFile } from '../case/shaft-load.js';
 import { caseFileOf } from '../case/base-units.js';
 import type { UnitSystem } from '../report/units.js';
 import type { Assumption } from '../case/types.js';
@@ -36,7 +37,12 @@ export async function runCheck(name: string, file: string, opts: OutputOptions):
   if (!(CHECKS as readonly string[]).includes(name)) {
     throw new UsageError(`check: got "${name}"; expected one of: ${CHECKS.join(', ')}`);
   }
-  const loaded = loadCaseFile(file);
+  const any = loadAnyCaseFile(file);
+  if (any.kind === 'shaft')
+    throw new UsageError(
+      `check: "${file}" is a shaft case (shaft.supports and shaft.loads); check takes a single-support case: advise the shaft (each support's checks are in its advice)`,
+    );
+  const loaded = any.loaded;
   if (opts.format === 'text') await useColour();
   const { json, text } = await computeCheck(name as CheckName, loaded, opts);
   return opts.format === 'json' ? JSON.stringify(json, null, 2) : text;
