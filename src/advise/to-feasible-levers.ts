@@ -178,7 +178,10 @@ function nearestFirst<T extends string>(scale: readonly T[], now: T, allowed: (i
 /**
  * The inputs worth changing for a failing option, each with its candidate values. `failed`
  * are the option's failing limit checks: a life target is lowered only when a check held in
- * hours fails, a wear allowance raised only for a failing bushing life.
+ * hours fails, a wear allowance raised only for a failing bushing life. `candidates` (rolling)
+ * are the ids of the failing limit checks of every bearing considered: an input that leaves
+ * the set of bearings as it is is tried only where it can move every failing check of one of
+ * them (ROLLING_CHECK_INPUTS).
  */
 export function leversFor(
   option: OptionName,
@@ -186,6 +189,7 @@ export function leversFor(
   c: CaseSI,
   assumed: readonly Assumption[],
   failed: readonly CheckRecord[],
+  candidates?: readonly (readonly string[])[],
 ): Lever[] {
   const d = c.shaft.diameter;
   const out: Lever[] = [];
@@ -265,7 +269,32 @@ export function leversFor(
       nearestFirst(CONTAMINATIONS, dirt, (i) => i < CONTAMINATIONS.indexOf(dirt)),
       false,
     );
-  return journal ? out.filter((l) => canHelp(l.field, failed)) : out;
+  if (journal) return out.filter((l) => canHelp(l.field, failed));
+  if (option === 'rolling' && candidates)
+    return out.filter((l) => {
+      const moves = rollingMoves(l.field, c);
+      return moves === null || candidates.some((ids) => ids.every((id) => moves.includes(id)));
+    });
+  return out;
+}
+
+/**
+ * The rolling bearing's checks an input can move without changing which bearings are
+ * considered (null: any, or it changes them: room, kind, series, supply). The oil grade moves
+ * the life (through κ and a_ISO), and on an oil bath the bath's temperature too; on grease or
+ * fed oil the operating temperature is the ambient's or the inlet's plus a fixed rise
+ * (src/calc/rolling/lubrication.ts), which no grade moves. Cleanliness moves the life only
+ * (e_C), the life target the checks held against it, the plan's interval its own check.
+ */
+const ROLLING_CHECK_INPUTS: Record<string, (c: CaseSI) => readonly string[] | null> = {
+  'lubrication.oil': (c) => (c.lubrication.supply === 'oil-bath' ? null : ['rolling-life']),
+  'environment.contamination': () => ['rolling-life'],
+  'life.hours': () => ['rolling-life', 'grease-life'],
+  'lubrication.regreaseInterval': () => ['regrease-interval'],
+};
+
+function rollingMoves(field: string, c: CaseSI): readonly string[] | null {
+  return ROLLING_CHECK_INPUTS[field]?.(c) ?? null;
 }
 
 /**

@@ -110,7 +110,12 @@ export async function toMakeFeasible(
       return ok;
     };
     const found: FeasibleChange[] = [];
-    for (const lever of leversFor(option, doc.given, base, doc.assumed, r.failed)) {
+    // Rolling: which checks each bearing considered fails (an input can help only where it moves all of one's).
+    const candidates =
+      option === 'rolling'
+        ? advice.checks.rolling.candidates.map((k) => k.checks.filter((x) => !x.pass && !x.advisory).map((x) => x.id))
+        : undefined;
+    for (const lever of leversFor(option, doc.given, base, doc.assumed, r.failed, candidates)) {
       if (runs >= MAX_RUNS_PER_OPTION) break;
       const to = await search(lever, doc.given, feasibleIn, () => MAX_RUNS_PER_OPTION - runs);
       if (to !== null) found.push({ option, field: lever.field, from: lever.from, to, verified: true });
