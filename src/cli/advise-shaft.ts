@@ -2,7 +2,6 @@ import type { LoadedShaftCase } from '../case/shaft-load.js';
 import { describeWarning } from '../report/findings/index.js';
 import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
 import type { UnitSystem } from '../report/units.js';
-import type { AdviseFormat } from './advise.js';
 
 /**
  * `advise` on a whole shaft: the shaft advice (statics, beam, each support advised, the
@@ -12,7 +11,8 @@ import type { AdviseFormat } from './advise.js';
 export async function runAdviseShaft(
   loaded: LoadedShaftCase,
   opts: {
-    format: AdviseFormat;
+    /** As runAdvise's formats (kept here so the two files do not import each other). */
+    format: 'text' | 'json' | 'md' | 'html';
     units: UnitSystem;
     explain: boolean;
     out?: string;
