@@ -73,15 +73,8 @@ const fileSchema = z.strictObject({
 /** A row of data/bushing-materials.json converted to SI (the same fields as the file's schema). */
 export type BushingMaterialRow = z.infer<typeof rowSchema>;
 
-/**
- * A bushing material as a case may give it inline (a supplier's datasheet): the row's fields in
- * SI without the wall sizing, the wear scatter optional (default typical/3 and typical×3), the
- * lubricant need and the media ratings optional (taken as none and fair, stated by the check).
- */
-export type BushingMaterial = Omit<
-  BushingMaterialRow,
-  | 'wallFraction'
-  | 'minWall'
+/** Row fields an inline material may leave out. */
+type InlineOptional =
   | 'wearFactorLow'
   | 'wearFactorHigh'
   | 'needs'
@@ -95,27 +88,14 @@ export type BushingMaterial = Omit<
   | 'maxLengthToDiameter'
   | 'gritPasses'
   | 'slurry'
-  | 'wetSource'
-> &
-  Partial<
-    Pick<
-      BushingMaterialRow,
-      | 'wearFactorLow'
-      | 'wearFactorHigh'
-      | 'needs'
-      | 'needsSource'
-      | 'water'
-      | 'chemical'
-      | 'mediaSource'
-      | 'motion'
-      | 'motionSource'
-      | 'minVelocity'
-      | 'maxLengthToDiameter'
-      | 'gritPasses'
-      | 'slurry'
-      | 'wetSource'
-    >
-  >;
+  | 'wetSource';
+/**
+ * A bushing material as a case may give it inline (a supplier's datasheet): the row's fields in
+ * SI without the wall sizing, the wear scatter optional (default typical/3 and typical×3), the
+ * lubricant need and the media ratings optional (taken as none and fair, stated by the check).
+ */
+export type BushingMaterial = Omit<BushingMaterialRow, 'wallFraction' | 'minWall' | InlineOptional> &
+  Partial<Pick<BushingMaterialRow, InlineOptional>>;
 
 const converted = new WeakMap<object, BushingMaterialRow[]>();
 
