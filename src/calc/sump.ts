@@ -23,10 +23,11 @@
  * Solution: P_loss(T) falls as T rises, so the excess g(T) = (T − T_amb)·h·A − P_loss(T) rises
  * with T, with slope at least h·A, and has one root T*. Two consequences bound the search:
  * T* ≤ T_amb + P_loss(T_amb)/(h·A) (the loss at ambient is the largest), and at any T,
- * |T − T*| ≤ |g(T)|/(h·A). The root is found by secant steps inside that bracket (a step that would
- * leave it is replaced by the midpoint), stopped once |g(T)|/(h·A) is within half
- * BATH_TOLERANCE_K: near the root g is almost linear (slope h·A − dP/dT), so four to six
- * evaluations of the loss do where bisection took about fifteen. When even ΔT_max does not balance the loss, the bath is reported at that
+ * |T − T*| ≤ |g(T)|/(h·A). The root is found inside that bracket by inverse quadratic interpolation
+ * through the last three temperatures tried (as in Brent, R. P. (1973), Algorithms for
+ * Minimization without Derivatives, Prentice-Hall, ch. 4; from memory), a step that would
+ * leave the bracket replaced by the midpoint, and stopped once |g(T)|/(h·A) is within half
+ * BATH_TOLERANCE_K: a few evaluations of the loss where bisection took about fifteen. When even ΔT_max does not balance the loss, the bath is reported at that
  * bound with `runaway` set.
  */
 import { lubricants } from '../data/load.js';
@@ -90,6 +91,21 @@ export const BATH_TOLERANCE_K = 0.05;
 const MAX_ITERATIONS = 60;
 
 /**
+ * The temperature where g = 0 on the inverse interpolant (T as a polynomial in g) through the
+ * points tried: quadratic through three, linear (the secant) through two or when two g agree.
+ */
+function interpolate(p: readonly { t: number; g: number }[]): number {
+  const [a, b, c] = p.length === 3 ? p : [undefined, p[0]!, p[1]!];
+  if (a && a.g !== b!.g && a.g !== c!.g && b!.g !== c!.g)
+    return (
+      (a.t * b!.g * c!.g) / ((a.g - b!.g) * (a.g - c!.g)) +
+      (b!.t * a.g * c!.g) / ((b!.g - a.g) * (b!.g - c!.g)) +
+      (c!.t * a.g * b!.g) / ((c!.g - a.g) * (c!.g - b!.g))
+    );
+  return c!.t - (c!.g * (c!.t - b!.t)) / (c!.g - b!.g);
+}
+
+/**
  * The bath temperature of the balance above (°C), for a loss P_loss(T) (W) that does not rise
  * with the bath temperature T (°C); ambient °C, area m², heat transfer W/(m²·K). `start` (°C):
  * where to begin (a neighbouring solution's bath temperature; the default is the ambient), which
@@ -139,20 +155,20 @@ export function bathTemperature(
   }
   if (Math.abs(hi.g) <= close) return done(hi, false);
   if (Math.abs(lo.g) <= close) return done(lo, false);
-  // Secant steps through the last two temperatures tried, kept inside the bracket [lo, hi]
-  // (the midpoint when a step would leave it); the bracket narrows with each evaluation.
-  let prev = first;
-  let last = first === lo ? hi : lo;
+  // Inverse quadratic interpolation through the last three temperatures tried (a secant step
+  // through the last two while there are only two), kept inside the bracket [lo, hi]: the
+  // midpoint when a step would leave it. The bracket narrows with each evaluation.
+  const tried = [first, first === lo ? hi : lo];
   for (let k = 0; k < MAX_ITERATIONS && hi.t - lo.t > BATH_TOLERANCE_K; k++) {
-    const secant = last.t - (last.g * (last.t - prev.t)) / (last.g - prev.g);
+    const step = interpolate(tried);
     const inset = 1e-3 * (hi.t - lo.t);
-    const t = secant > lo.t + inset && secant < hi.t - inset ? secant : (lo.t + hi.t) / 2;
+    const t = step > lo.t + inset && step < hi.t - inset ? step : (lo.t + hi.t) / 2;
     const x = at(t);
     if (Math.abs(x.g) <= close) return done(x, false);
     if (x.g < 0) lo = x;
     else hi = x;
-    prev = last;
-    last = x;
+    tried.push(x);
+    if (tried.length > 3) tried.shift();
   }
   return done(at((lo.t + hi.t) / 2), false);
 }

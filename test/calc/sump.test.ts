@@ -37,6 +37,28 @@ describe('sump heat balance', () => {
     expect(b.loss).toBeCloseTo(loss(b.temperature), 9);
   });
 
+  it('finds the same root from any start, within half the tolerance, in fewer evaluations than bisection', () => {
+    // A viscous loss that falls steeply plus a part that hardly changes (a journal with its
+    // thrust face): P(T) = 40 + 400·exp(−(T − 20)/25) W, h·A = 1.5 W/K. The root by a
+    // bisection run here to 1e-12 K is the reference.
+    const loss = (t: number) => 40 + 400 * Math.exp(-(t - 20) / 25);
+    const g = (t: number) => (t - 20) * 1.5 - loss(t);
+    let lo = 20;
+    let hi = 270;
+    while (hi - lo > 1e-12)
+      if (g((lo + hi) / 2) < 0) lo = (lo + hi) / 2;
+      else hi = (lo + hi) / 2;
+    for (const start of [undefined, 20, 40, 80, 120, 200, 269]) {
+      let calls = 0;
+      const b = bathTemperature(20, 0.1, model, (t) => (calls++, loss(t)), start);
+      expect(Math.abs(b.temperature - lo), `start ${start}`).toBeLessThanOrEqual(BATH_TOLERANCE_K / 2);
+      expect(b.loss).toBe(loss(b.temperature));
+      expect(b.iterations).toBe(calls);
+      // Bisection over 250 K to 0.05 K took 13 halvings and 2 more evaluations.
+      expect(calls, `start ${start}`).toBeLessThanOrEqual(8);
+    }
+  });
+
   it('a loss the housing cannot shed within the bound is flagged, at the bound', () => {
     const b = bathTemperature(25, 0.01, model, () => 1e5);
     expect(b.runaway).toBe(true);
