@@ -53,11 +53,44 @@ export function evaluateInBath(spec: CandidateSpec, ctx: EvalContext, system: Oi
     ...ctx,
     lubrication: bearingLubrication(c, newNotes(), { ...system, bath: { temperature: t, values: {} } }),
   });
-  const loss = (t: number) => evaluate(spec, at(t), newNotes()).frictionPower;
+  // Each evaluation of the search keeps what it noted; the one at the bath temperature found is
+  // the candidate's own, its notes passed on in order (no evaluation is repeated).
+  const tried = new Map<number, { candidate: RollingCandidate; ctx: EvalContext; replay: (to: Notes) => void }>();
+  const loss = (t: number) => {
+    const own = at(t);
+    const log = recorder();
+    const candidate = evaluate(spec, own, log.notes);
+    tried.set(t, { candidate, ctx: own, replay: log.replay });
+    return candidate.frictionPower;
+  };
   const bath = bathTemperature(ambient, area, model, loss, lastBath.get(ctx));
   lastBath.set(ctx, bath.temperature);
+  const hit = tried.get(bath.temperature);
+  if (hit) {
+    hit.replay(notes);
+    return { candidate: hit.candidate, ctx: hit.ctx, bath };
+  }
   const own = at(bath.temperature);
   return { candidate: evaluate(spec, own, notes), ctx: own, bath };
+}
+
+/** A collector that records what is noted, to be passed on to another collector later in the same order. */
+function recorder(): { notes: Notes; replay: (to: Notes) => void } {
+  const calls: ((to: Notes) => void)[] = [];
+  const scratch = newNotes();
+  const notes: Notes = {
+    assumed: scratch.assumed,
+    warnings: scratch.warnings,
+    assume: (a) => {
+      scratch.assume(a);
+      calls.push((to) => to.assume(a));
+    },
+    warn: (w, sameAs) => {
+      scratch.warn(w, sameAs);
+      calls.push((to) => to.warn(w, sameAs));
+    },
+  };
+  return { notes, replay: (to) => calls.forEach((call) => call(to)) };
 }
 
 /** The assumption that states the bath of the bearing shown: the model, its figures, the rise. */
