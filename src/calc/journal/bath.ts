@@ -43,6 +43,32 @@ export interface JournalSweep {
   thrustLoss: number;
 }
 
+/**
+ * The first sweep of a bath case, at the ambient (or inlet) temperature, remembered for the
+ * last few inputs: a search over a case input that leaves the journal's candidates, duty and
+ * first temperature alone (the housing's size, a life target) repeats it exactly. Only its
+ * chosen design is used (module comment), so nothing returned is shared between callers.
+ */
+const firstSweeps = new Map<string, DesignEvaluation>();
+const FIRST_SWEEPS_KEPT = 8;
+
+function firstSweep(
+  diameter: number,
+  candidates: readonly Candidate[],
+  points: readonly DutyPoint[],
+  t: number,
+  startLoad: number,
+  crit: JournalCriteria,
+): DesignEvaluation {
+  const key = JSON.stringify([diameter, candidates, points, t, startLoad, crit]);
+  const hit = firstSweeps.get(key);
+  if (hit) return hit;
+  const { chosen } = sweepDesigns(diameter, candidates, points, t, startLoad, crit);
+  if (firstSweeps.size >= FIRST_SWEEPS_KEPT) firstSweeps.delete(firstSweeps.keys().next().value!);
+  firstSweeps.set(key, chosen);
+  return chosen;
+}
+
 /** Time-mean power loss of a design over its points, W. */
 function meanLoss(e: DesignEvaluation): number {
   const total = e.points.reduce((s, p) => s + p.share, 0);
@@ -85,34 +111,49 @@ export function sweepWithInlet(
   // The thrust face on the same oil at the bath temperature (its room check does not matter here).
   const thrustLoss = (cand: Candidate, t: number) =>
     journalThrust(c, crit, cand.fluid, t, cand.length)?.meanPowerLoss ?? 0;
-  const balance = (cand: Candidate) =>
-    bathTemperature(
+  // What the last balance evaluated, by temperature: its root is one of them, so the chosen
+  // design and its thrust loss there are not evaluated again.
+  let tried = new Map<number, { cand: Candidate; design: DesignEvaluation; thrust: number }>();
+  const balance = (cand: Candidate, start?: number) => {
+    tried = new Map();
+    return bathTemperature(
       ambient,
       area,
       search,
-      (t) => meanLoss(evaluateDesign(diameter, cand, points, t, startLoad, crit)) + thrustLoss(cand, t),
+      (t) => {
+        const design = evaluateDesign(diameter, cand, points, t, startLoad, crit);
+        const thrust = thrustLoss(cand, t);
+        tried.set(t, { cand, design, thrust });
+        return meanLoss(design) + thrust;
+      },
+      start,
     );
+  };
   let tBath = Math.max(ambient, tCase);
-  let sweep = sweepDesigns(diameter, candidates, points, tBath, startLoad, crit);
-  let bath = balance(sweep.chosen.candidate);
+  let previous = firstSweep(diameter, candidates, points, tBath, startLoad, crit);
+  let bath = balance(previous.candidate);
+  let sweep: { chosen: DesignEvaluation; rows: SweepRow[] } | undefined;
   for (let round = 1; round < MAX_ROUNDS; round++) {
     tBath = bath.temperature;
-    const next = sweepDesigns(diameter, candidates, points, tBath, startLoad, crit);
-    const same = sameCandidate(next.chosen.candidate, sweep.chosen.candidate);
-    sweep = next;
-    if (same) break;
-    bath = balance(sweep.chosen.candidate);
+    sweep = sweepDesigns(diameter, candidates, points, tBath, startLoad, crit);
+    if (sameCandidate(sweep.chosen.candidate, previous.candidate)) break;
+    previous = sweep.chosen;
+    // The next design's bath starts from this one's (the start changes the evaluations, not the root).
+    bath = balance(sweep.chosen.candidate, tBath);
   }
+  if (!sweep) throw new Error('journal: no sweep at the bath temperature');
   // The chosen design at its own bath temperature (equal to the sweep's when the rounds settled).
+  const hit = tried.get(bath.temperature);
+  const known = hit && sameCandidate(hit.cand, sweep.chosen.candidate) ? hit : undefined;
   const chosen =
     bath.temperature === tBath
       ? sweep.chosen
-      : evaluateDesign(diameter, sweep.chosen.candidate, points, bath.temperature, startLoad, crit);
+      : (known?.design ?? evaluateDesign(diameter, sweep.chosen.candidate, points, bath.temperature, startLoad, crit));
   return {
     chosen,
     rows: sweep.rows,
     inletTemperature: bath.temperature,
     bath,
-    thrustLoss: thrustLoss(chosen.candidate, bath.temperature),
+    thrustLoss: known ? known.thrust : thrustLoss(chosen.candidate, bath.temperature),
   };
 }
