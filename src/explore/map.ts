@@ -42,6 +42,8 @@ export interface MapOptions {
   /** Coarse journal sub-grid nodes per axis (default 5). */
   journalNodes?: number;
   rules?: LoadedRule[];
+  /** The case at a cell from the load and speed factors (default scaleCase; a whole shaft's support also scales its slope). */
+  scale?: (c: CaseSI, loadFactor: number, speedFactor: number) => CaseSI;
   /** Called after each row of cells: cells done, cells in all. */
   onProgress?: (done: number, total: number) => void;
 }
@@ -68,6 +70,8 @@ export interface MapResult {
   ranges: { load: [number, number]; speed: [number, number]; loadGiven: boolean; speedGiven: boolean };
   journal: { nodesPerAxis: number; designs: JournalDesign[]; note: string };
   notes: string[];
+  /** Set for a whole shaft's support: the load axis is shown as the scale k = load / reference of every load on the shaft. */
+  loadScale?: { reference: number };
 }
 
 /** Cell summary of an advice. */
@@ -215,7 +219,8 @@ export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOpti
   const ref = referencePoint(c);
   const { load, speed, loads, speeds } = mapAxes(ref, opts);
   const runner = ruleRunner(rules, { memo: true });
-  const caseAt = (i: number, j: number) => scaleCase(c, loads[i]! / ref.load, speeds[j]! / ref.speed);
+  const scale = opts.scale ?? scaleCase;
+  const caseAt = (i: number, j: number) => scale(c, loads[i]! / ref.load, speeds[j]! / ref.speed);
 
   // The case itself, in full.
   const full = await advise(c, assumed, rules);

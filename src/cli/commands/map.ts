@@ -17,9 +17,13 @@ export function registerMap(program: Command): void {
       '--speed <min..max>',
       'speed range of the governing point, e.g. "10rpm..5000rpm" (default 0.1× to 10× the case)',
     )
+    .option('--scale <min..max>', 'a shaft case: range of the factor on every load on the shaft (default 0.25..4)')
     .exitOverride()
     .action(
-      async (file: string, raw: { out?: string; force?: boolean; grid?: string; load?: string; speed?: string }) => {
+      async (
+        file: string,
+        raw: { out?: string; force?: boolean; grid?: string; load?: string; speed?: string; scale?: string },
+      ) => {
         const { UsageError } = await import('../../core/errors.js');
         const { parseGrid, parseRange } = await import('../../explore/axes.js');
         let kind: 'svg' | 'html' | 'text' = 'text';
@@ -33,10 +37,40 @@ export function registerMap(program: Command): void {
         const speed = raw.speed === undefined ? undefined : parseRange('--speed', raw.speed, 'speed', '10rpm..5000rpm');
         const { loadAnyCaseFile } = await import('../../case/shaft-load.js');
         const any = loadAnyCaseFile(file);
-        // A whole shaft is not swept yet: refused by name rather than swept as something it is not.
-        if (any.kind === 'shaft')
+        if (any.kind === 'shaft') {
+          if (raw.load !== undefined)
+            throw new UsageError(
+              `--load: got "${raw.load}" for a shaft case; a shaft case scales every load on the shaft together: give --scale MIN..MAX, e.g. "0.25..4"`,
+            );
+          const { computeShaftMap, parseLoadScale } = await import('../../explore/shaft-map.js');
+          const scale = raw.scale === undefined ? undefined : parseLoadScale(raw.scale);
+          const { progressBar } = await import('../../report/explore/progress.js');
+          const bar = progressBar('map');
+          const opts: Parameters<typeof computeShaftMap>[1] = { grid, onProgress: bar.update };
+          if (scale) opts.loadScale = scale;
+          if (speed) opts.speed = speed;
+          let sm;
+          try {
+            sm = await computeShaftMap(any.loaded, opts);
+          } finally {
+            bar.done();
+          }
+          const rep = await import('../../report/explore/shaft-map.js');
+          if (kind === 'text') {
+            process.stdout.write(rep.shaftMapText(sm) + '\n');
+            return;
+          }
+          const { writeFileSafe } = await import('../write-file.js');
+          writeFileSafe(raw.out!, kind === 'svg' ? rep.shaftMapSvg(sm) : rep.shaftMapHtml(sm), {
+            force: raw.force === true,
+            option: '--out',
+          });
+          process.stdout.write(`wrote ${raw.out}\n`);
+          return;
+        }
+        if (raw.scale !== undefined)
           throw new UsageError(
-            `map: "${file}" is a shaft case (shaft.supports and shaft.loads); map takes a single-support case: advise the shaft, then run map on a support's case (advise --format json gives each under supports[].advice.case)`,
+            `--scale: got "${raw.scale}"; --scale is for a shaft case (shaft.supports and shaft.loads); "${file}" is a single-support case: give --load MIN..MAX`,
           );
         const loaded = any.loaded;
         const { computeMap } = await import('../../explore/map.js');

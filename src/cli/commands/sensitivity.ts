@@ -1,5 +1,6 @@
 import type { Command } from 'commander';
 import { formatOption } from '../options.js';
+import type { LoadedCase } from '../../case/load.js';
 
 /** `shaftwise sensitivity <case>`: which inputs move the margins, and where the advice flips. */
 export function registerSensitivity(program: Command): void {
@@ -20,21 +21,20 @@ export function registerSensitivity(program: Command): void {
         throw new UsageError(`--format: got "${format}"; expected one of: text, json, html`);
       const { loadAnyCaseFile } = await import('../../case/shaft-load.js');
       const any = loadAnyCaseFile(file);
-      // A whole shaft is not swept yet: refused by name rather than swept as something it is not.
-      if (any.kind === 'shaft')
-        throw new UsageError(
-          `sensitivity: "${file}" is a shaft case (shaft.supports and shaft.loads); sensitivity takes a single-support case: advise the shaft, then run sensitivity on a support's case (advise --format json gives each under supports[].advice.case)`,
-        );
-      const loaded = any.loaded;
-      const { computeSensitivity } = await import('../../explore/sensitivity.js');
-      const r = await computeSensitivity(loaded.case, loaded.assumed);
-      const rep = await import('../../report/explore/sensitivity-report.js');
-      const text =
-        format === 'json'
-          ? rep.sensitivityJson(r)
-          : format === 'html'
-            ? rep.sensitivityHtml(r)
-            : rep.sensitivityText(r);
+      let text: string;
+      if (any.kind === 'shaft') {
+        const { computeShaftSensitivity } = await import('../../explore/shaft-sensitivity.js');
+        const r = await computeShaftSensitivity(any.loaded);
+        const rep = await import('../../report/explore/shaft-sensitivity.js');
+        text =
+          format === 'json'
+            ? rep.shaftSensitivityJson(r)
+            : format === 'html'
+              ? rep.shaftSensitivityHtml(r)
+              : rep.shaftSensitivityText(r);
+      } else {
+        text = await singleSupport(any.loaded, format);
+      }
       if (raw.out === undefined) {
         process.stdout.write(text.endsWith('\n') ? text : text + '\n');
         return;
@@ -43,4 +43,16 @@ export function registerSensitivity(program: Command): void {
       writeFileSafe(raw.out, text.endsWith('\n') ? text : text + '\n', { force: raw.force === true, option: '--out' });
       process.stdout.write(`wrote ${raw.out}\n`);
     });
+}
+
+/** The sensitivity of a single-support case in the format asked for. */
+async function singleSupport(loaded: LoadedCase, format: string): Promise<string> {
+  const { computeSensitivity } = await import('../../explore/sensitivity.js');
+  const r = await computeSensitivity(loaded.case, loaded.assumed);
+  const rep = await import('../../report/explore/sensitivity-report.js');
+  return format === 'json'
+    ? rep.sensitivityJson(r)
+    : format === 'html'
+      ? rep.sensitivityHtml(r)
+      : rep.sensitivityText(r);
 }

@@ -159,13 +159,20 @@ function axesWithTicks(m: MapResult, layout: MapLayout): string[] {
   out.push(
     `<text x="${left + width / 2}" y="${top + height + 40}" text-anchor="middle">speed of the governing point, r/min (log scale)</text>`,
   );
-  for (const t of logTicks(m.loads[0]!, m.loads[layout.rows - 1]!)) {
-    const y = n3(layout.loadY(t.value));
+  // A whole shaft's support: ticks in the load scale k (load = k × reference).
+  const k = m.loadScale?.reference ?? 1;
+  for (const t of logTicks(m.loads[0]! / k, m.loads[layout.rows - 1]! / k)) {
+    const y = n3(layout.loadY(t.value * k));
     out.push(`<line x1="${left - (t.major ? 7 : 4)}" y1="${y}" x2="${left}" y2="${y}" stroke="#222"/>`);
-    out.push(`<text x="${left - 10}" y="${n3(y + 4)}" text-anchor="end">${esc(fmtLoad(t.value))}</text>`);
+    out.push(
+      `<text x="${left - 10}" y="${n3(y + 4)}" text-anchor="end">${esc(m.loadScale ? `${t.value}×` : fmtLoad(t.value))}</text>`,
+    );
   }
+  const yTitle = m.loadScale
+    ? `load scale k, every load on the shaft (log scale; k = 1: ${fmtLoad(k)} here)`
+    : 'radial load of the governing point (log scale)';
   out.push(
-    `<text transform="translate(20 ${top + height / 2}) rotate(-90)" text-anchor="middle">radial load of the governing point (log scale)</text>`,
+    `<text transform="translate(20 ${top + height / 2}) rotate(-90)" text-anchor="middle">${esc(yTitle)}</text>`,
   );
   return out;
 }
@@ -206,7 +213,9 @@ function mapLegend(m: MapResult, layout: MapLayout, inRange: boolean): string[] 
   out.push(
     `<circle cx="${legendX + 11}" cy="${y - 4}" r="7" fill="#fff" stroke="#000" stroke-width="2"/><path d="M${legendX + 7} ${y - 4}H${legendX + 15}M${legendX + 11} ${y - 8}V${y}" stroke="#000" stroke-width="2"/>`,
   );
-  out.push(`<text x="${legendX + 30}" y="${y}">the case${inRange ? '' : ' (outside the map)'}</text>`);
+  out.push(
+    `<text x="${legendX + 30}" y="${y}">the case${m.loadScale ? ' (k = 1)' : ''}${inRange ? '' : ' (outside the map)'}</text>`,
+  );
   out.push(
     `<text x="${legendX + 30}" y="${y + 16}">${esc(`${fmtLoad(m.reference.load)}, ${fmtSpeed(m.reference.speed)}`)}</text>`,
   );

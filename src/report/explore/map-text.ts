@@ -45,14 +45,20 @@ export function mapText(m: MapResult): string {
   const n = m.speeds.length;
   const w = n <= 40 ? 2 : 1;
   const at = caseCell(m);
-  const yTicks = tickCells(m.loads);
-  const pad = Math.max(...[...yTicks.values()].map((v) => fmtLoad(v).length), 6) + 1;
+  const k = m.loadScale?.reference;
+  const yTicks = tickCells(m.loads, k ? 1 / k : 1);
+  const yLabel = (v: number) => (k ? `${v}×` : fmtLoad(v));
+  const pad = Math.max(...[...yTicks.values()].map((v) => yLabel(v).length), 6) + 1;
   const lines: string[] = [];
   lines.push(`Selection map: ${m.title}`);
-  lines.push(`radial load of the governing point (up) × speed (across), log scales`);
+  lines.push(
+    k
+      ? `load scale k of every load on the shaft (up; k = 1: ${fmtLoad(k)} at this support) × speed (across), log scales`
+      : `radial load of the governing point (up) × speed (across), log scales`,
+  );
   lines.push('');
   for (let i = m.loads.length - 1; i >= 0; i--) {
-    const label = yTicks.has(i) ? fmtLoad(yTicks.get(i)!) : '';
+    const label = yTicks.has(i) ? yLabel(yTicks.get(i)!) : '';
     let row = '';
     for (let j = 0; j < n; j++) {
       const c = m.cells[i]![j]!;
@@ -76,7 +82,7 @@ export function mapText(m: MapResult): string {
   lines.push('');
   const winner = at ? m.cells[at.i]![at.j]!.winner : null;
   lines.push(
-    `Legend: B bushing wins, R rolling bearing wins, J journal bearing wins, ${NONE} none feasible, ${CASE_MARK} the case (${fmtLoad(m.reference.load)}, ${fmtSpeed(m.reference.speed)}; ` +
+    `Legend: B bushing wins, R rolling bearing wins, J journal bearing wins, ${NONE} none feasible, ${CASE_MARK} the case (${k ? 'k = 1, ' : ''}${fmtLoad(m.reference.load)}, ${fmtSpeed(m.reference.speed)}; ` +
       (at ? `map cell: ${winner ?? 'none'}; ` : 'outside the map; ') +
       `full advice: ${m.atCase.recommendation ?? 'none feasible'})`,
   );
@@ -91,7 +97,7 @@ export function mapText(m: MapResult): string {
   }
   lines.push('');
   lines.push(
-    `Ranges: load ${fmtLoad(m.ranges.load[0])} to ${fmtLoad(m.ranges.load[1])}${m.ranges.loadGiven ? '' : ' (0.1× to 10× the case)'}, speed ${fmtSpeed(m.ranges.speed[0])} to ${fmtSpeed(m.ranges.speed[1])}${m.ranges.speedGiven ? '' : ' (0.1× to 10× the case)'}; ${m.loads.length} × ${n} cells.`,
+    `Ranges: ${k ? `load scale ${+(m.ranges.load[0] / k).toPrecision(3)}× to ${+(m.ranges.load[1] / k).toPrecision(3)}× (` : 'load '}${fmtLoad(m.ranges.load[0])} to ${fmtLoad(m.ranges.load[1])}${k ? ' at this support)' : m.ranges.loadGiven ? '' : ' (0.1× to 10× the case)'}, speed ${fmtSpeed(m.ranges.speed[0])} to ${fmtSpeed(m.ranges.speed[1])}${m.ranges.speedGiven ? '' : ' (0.1× to 10× the case)'}; ${m.loads.length} × ${n} cells.`,
   );
   for (const note of m.notes) lines.push(`- ${note}`);
   lines.push(`- Journal designs used: ${m.journal.designs.map((d) => d.label).join('; ')}.`);
