@@ -2,6 +2,23 @@ import type { Locates } from '../case/shaft-types.js';
 import { finding, type Finding } from '../core/finding.js';
 import type { OptionName } from '../core/options.js';
 import type { RollingCandidate } from '../calc/rolling/types.js';
+import type { RollingKind } from '../calc/rolling/kinds.js';
+import { MIN_AXIAL } from '../calc/bushing/check.js';
+
+/**
+ * The rolling kinds that hold a shaft axially at a cross-located support, one way each, whatever
+ * the thrust's direction in this load case (it reverses at start, braking or reversal): a single
+ * row tapered roller or angular-contact ball bearing faced against its partner, or a deep-groove
+ * ball bearing, which holds both ways and is what practice fits to light cross-located shafts.
+ * Kinds that carry no axial load (cylindrical roller with ribs on one ring, needle roller) and the
+ * self-aligning kinds (fitted as locating and floating supports on long shafts) are left out
+ * (common practice).
+ */
+export const CROSS_LOCATED_KINDS: readonly RollingKind[] = [
+  'deep-groove ball',
+  'tapered roller',
+  'angular-contact ball',
+];
 
 /** One support as the arrangement sees it: how it locates and what was recommended there. */
 export interface ArrangedSupport {
@@ -49,12 +66,16 @@ const SELF_ALIGNING = new Set(['spherical roller', 'self-aligning ball']);
  *    a plain bushing or journal bearing locates with a thrust washer or thrust face;
  *  - cross-located (both `one-direction`): each support stops the shaft one way; a tapered
  *    roller or angular-contact pair is set by its axial play (or preload) and suits short
- *    shafts with little growth; bushings carry a thrust face at each end;
+ *    shafts with little growth; the rolling kind is one that holds the shaft axially
+ *    (CROSS_LOCATED_KINDS), the same at both supports; bushings carry a thrust face at each end,
+ *    a support this load case puts no thrust on included;
  *  - each support whose recommended rolling kind is self-aligning, with the slope it takes up.
  */
 export function shaftArrangement(x: {
   supports: [ArrangedSupport, ArrangedSupport];
   pairRule: boolean;
+  /** The kind a cross-located pair's rolling option was advised with (null: the case named its own). */
+  crossKind?: RollingKind | null;
 }): ShaftArrangement {
   const [a, b] = x.supports;
   const cross = a.locates === 'one-direction' && b.locates === 'one-direction';
@@ -72,6 +93,11 @@ export function shaftArrangement(x: {
     const kinds = x.supports.map((s) => (s.recommendation === 'rolling' ? (s.rolling?.kind ?? null) : null));
     const same = a.recommendation === b.recommendation && kinds[0] === kinds[1];
     reasons.push(finding('shaft.cross-located-growth', {}));
+    if (x.crossKind)
+      reasons.push(finding('shaft.cross-located-kind', { kind: x.crossKind, kinds: [...CROSS_LOCATED_KINDS] }));
+    for (const s of x.supports)
+      if ((s.recommendation === 'bushing' || s.recommendation === 'journal') && s.axial < MIN_AXIAL)
+        reasons.push(finding('shaft.cross-located-washer', { name: s.name, option: s.recommendation }));
     if (x.pairRule)
       reasons.push(finding('shaft.induced-axial', { supports: [a.name, b.name], axial: [a.axial, b.axial] }));
     if (a.recommendation === 'bushing' && b.recommendation === 'bushing')

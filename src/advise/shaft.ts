@@ -9,10 +9,13 @@ import {
   opposedAxialLoadsFromInduced,
 } from '../calc/rolling/tapered-pair.js';
 import type { RollingCandidate } from '../calc/rolling/types.js';
+import type { RollingKind } from '../calc/rolling/kinds.js';
+import { MIN_AXIAL } from '../calc/bushing/check.js';
+import { kindTraits } from '../data/rolling.js';
 import { advise, type AdviceResult } from './engine.js';
 import { loadRules, type LoadedRule } from './load-rules.js';
 import { withToMakeFeasible } from './to-feasible.js';
-import { shaftArrangement, type ShaftArrangement } from './shaft-arrangement.js';
+import { CROSS_LOCATED_KINDS, shaftArrangement, type ShaftArrangement } from './shaft-arrangement.js';
 
 /** What adviseShaft reads of a loaded shaft case (the case layer's LoadedShaftCase has these keys). */
 export interface ShaftCaseInput {
@@ -112,9 +115,14 @@ function supportDocument(
   states: State[],
   axial: [number, number][],
   hasDuty: boolean,
+  kind: RollingKind | null = null,
 ): Record<string, unknown> {
   const { shaft, common } = input;
   const support = shaft.supports[i];
+  // A one-way locating support holds the shaft whatever this load case's thrust: at least
+  // MIN_AXIAL, so a bushing there is sized with its thrust washer (and a journal with its face).
+  const least = support.locates === 'one-direction' ? MIN_AXIAL : 0;
+  const fa = (n: number) => q(Math.max(least, n), 'N');
   const slope = Math.min(MAX_SLOPE, Math.max(...states.map((s) => s.beam.slopes[i])));
   const radial = (s: State) => q(Math.max(MIN_RADIAL, s.statics.supports[i].radial), 'N');
   const title = typeof common['title'] === 'string' ? common['title'] : 'Shaft';
@@ -130,13 +138,17 @@ function supportDocument(
       misalignment: q(slope, 'rad'),
     },
   };
-  if (!hasDuty) doc['load'] = { radial: radial(states[0]!), axial: q(axial[0]![i], 'N'), shock: shaft.shock };
+  if (kind) {
+    const given = common['rolling'] && typeof common['rolling'] === 'object' ? common['rolling'] : {};
+    doc['rolling'] = { ...structuredClone(given), kind, arrangement: 'single' };
+  }
+  if (!hasDuty) doc['load'] = { radial: radial(states[0]!), axial: fa(axial[0]![i]), shock: shaft.shock };
   else {
     doc['load'] = { shock: shaft.shock };
     doc['duty'] = states.map((s, k) => ({
       share: s.share,
       radial: radial(s),
-      axial: q(axial[k]![i], 'N'),
+      axial: fa(axial[k]![i]),
       ...(s.speed !== undefined ? { speed: q(s.speed * 60, 'rpm') } : {}),
     }));
   }
@@ -154,21 +166,54 @@ function rollingChoice(a: AdviceResult): RollingCandidate | null {
   return r.candidates.find((k) => k.id === r.best) ?? null;
 }
 
+/** The case's own rolling kind, if it names one (then a cross-located pair keeps it). */
+function givenKind(common: Record<string, unknown>): unknown {
+  const r = common['rolling'];
+  return r && typeof r === 'object' ? (r as Record<string, unknown>)['kind'] : undefined;
+}
+
+/**
+ * The order a cross-located pair's kinds are tried in (CROSS_LOCATED_KINDS): those with a
+ * feasible single bearing at more supports (on the statics' axial loads) first, then the order the
+ * rolling choice uses (least costly, then the kind practice reaches for first;
+ * data/rolling-kinds.json, common practice): a deep-groove ball pair where it suffices, else a
+ * mirrored tapered roller or angular-contact ball pair.
+ */
+export function crossLocatedOrder(advice: readonly AdviceResult[]): RollingKind[] {
+  const traits = new Map(kindTraits().map((t) => [t.kind, t]));
+  const at = (kind: RollingKind) =>
+    advice.filter((a) =>
+      a.checks.rolling.candidates.some((k) => k.kind === kind && k.feasible && k.arrangement === 'single'),
+    ).length;
+  return [...CROSS_LOCATED_KINDS].sort(
+    (a, b) =>
+      at(b) - at(a) ||
+      traits.get(a)!.costClass - traits.get(b)!.costClass ||
+      traits.get(a)!.preference - traits.get(b)!.preference,
+  );
+}
+
 /**
  * Advice for a whole shaft (issue 15). Steps:
  *  1. loads resolved, statics and beam (src/calc/shaft) for the case's loads, or for each duty
  *     point's loads and speed (the diagram then shows the point with the largest moment);
  *  2. per support a single-support case document (supportDocument), validated as a case file
  *     is, advised with the same rules;
- *  3. a cross-located pair (both supports `one-direction`) whose rolling option is a tapered
+ *  3. a cross-located pair (both supports `one-direction`): each support's rolling option is
+ *     advised again with one kind of CROSS_LOCATED_KINDS at both, the kinds tried in
+ *     crossLocatedOrder (each through step 4) until one is feasible at both supports, else the
+ *     first; a case that names its rolling kind keeps it. Each support is advised on at least
+ *     MIN_AXIAL of axial load, so a bushing there has its thrust washer (a journal its thrust
+ *     face) whatever the thrust's direction in this load case;
+ *  4. a cross-located pair whose rolling option is a tapered
  *     roller or angular-contact ball bearing at both supports: the axial loads recomputed by the
  *     opposed-pair rule with the induced forces of those two bearings, and both supports
  *     advised again on them until the chosen pair repeats; when the choice swings between
  *     bearings (the loads move the choice), each support takes the largest axial load of the
  *     passes (conservative) and is advised once more on it;
- *  4. what it would take (withToMakeFeasible) on each support's document; a `space.*` field of a
+ *  5. what it would take (withToMakeFeasible) on each support's document; a `space.*` field of a
  *     support with its own room is renamed `shaft.supports[i].space.*`, the path in the shaft file;
- *  5. the arrangement as a pair (shaft-arrangement.ts).
+ *  6. the arrangement as a pair (shaft-arrangement.ts).
  */
 export async function adviseShaft(input: ShaftCaseInput, rules: LoadedRule[] = loadRules()): Promise<ShaftAdvice> {
   const { shaft } = input;
@@ -186,38 +231,58 @@ export async function adviseShaft(input: ShaftCaseInput, rules: LoadedRule[] = l
       );
   });
 
-  const run = async (axial: [number, number][]) => {
+  const run = async (axial: [number, number][], kind: RollingKind | null) => {
     const out: { doc: Record<string, unknown>; advice: AdviceResult; loaded: LoadedCase }[] = [];
     for (const i of [0, 1] as const) {
-      const doc = supportDocument(input, i, states, axial, hasDuty);
+      const doc = supportDocument(input, i, states, axial, hasDuty, kind);
       const loaded = validateCase(structuredClone(doc), `${shaft.supports[i].name}`);
       out.push({ doc, advice: await advise(loaded.case, loaded.assumed, rules), loaded });
     }
     return out;
   };
-  let axial = states.map((s) => axialLoads(shaft, s, null));
-  let runs = await run(axial);
-  let pairRule = false;
   const cross = shaft.supports.every((s) => s.locates === 'one-direction');
   // The pair's bearings decide the axial loads, and the axial loads may change the bearings:
   // re-advised until the chosen pair repeats (at most MAX_PAIR_PASSES times).
-  const seen: string[] = [];
-  let envelope: [number, number][] | null = null;
-  for (let pass = 0; cross && pass <= MAX_PAIR_PASSES; pass++) {
-    const pair = runs.map((r) => rollingChoice(r.advice));
-    if (!pair.every((k) => k && PAIR_KINDS.has(k.kind) && (k.kind === 'tapered roller' || k.e !== null))) break;
-    const ids = pair.map((k) => k!.id).join('|');
-    if (ids === seen.at(-1)) break;
-    const next = states.map((s) => axialLoads(shaft, s, pair as [RollingCandidate, RollingCandidate]));
-    envelope = envelope ? envelope.map((e, k) => [Math.max(e[0], next[k]![0]), Math.max(e[1], next[k]![1])]) : next;
-    // A choice that comes back (or one pass too many) does not settle: the largest loads found.
-    const settled = !seen.includes(ids) && pass < MAX_PAIR_PASSES;
-    axial = settled ? next : envelope;
-    runs = await run(axial);
-    seen.push(ids);
-    pairRule = true;
-    if (!settled) break;
+  const settle = async (kind: RollingKind | null) => {
+    let axial = states.map((s) => axialLoads(shaft, s, null));
+    let runs = await run(axial, kind);
+    let pairRule = false;
+    const seen: string[] = [];
+    let envelope: [number, number][] | null = null;
+    for (let pass = 0; cross && pass <= MAX_PAIR_PASSES; pass++) {
+      const pair = runs.map((r) => rollingChoice(r.advice));
+      if (!pair.every((k) => k && PAIR_KINDS.has(k.kind) && (k.kind === 'tapered roller' || k.e !== null))) break;
+      const ids = pair.map((k) => k!.id).join('|');
+      if (ids === seen.at(-1)) break;
+      const next = states.map((s) => axialLoads(shaft, s, pair as [RollingCandidate, RollingCandidate]));
+      envelope = envelope ? envelope.map((e, k) => [Math.max(e[0], next[k]![0]), Math.max(e[1], next[k]![1])]) : next;
+      // A choice that comes back (or one pass too many) does not settle: the largest loads found.
+      const settled = !seen.includes(ids) && pass < MAX_PAIR_PASSES;
+      axial = settled ? next : envelope;
+      runs = await run(axial, kind);
+      seen.push(ids);
+      pairRule = true;
+      if (!settled) break;
+    }
+    return { runs, axial, pairRule, kind };
+  };
+  let settled = await settle(null);
+  // A cross-located pair: each support among the kinds that hold the shaft one way, the same
+  // kind at both, tried in crossLocatedOrder until one is feasible at both supports once its
+  // axial loads settle (else the first); a case that names its rolling kind keeps it.
+  if (cross && givenKind(input.common) === undefined) {
+    let chosen: typeof settled | null = null;
+    for (const kind of crossLocatedOrder(settled.runs.map((r) => r.advice))) {
+      const tried = await settle(kind);
+      chosen ??= tried;
+      if (tried.runs.every((r) => r.advice.checks.rolling.best !== null)) {
+        chosen = tried;
+        break;
+      }
+    }
+    settled = chosen!;
   }
+  const { runs, axial, pairRule, kind } = settled;
 
   const supports = [] as unknown as [ShaftSupportAdvice, ShaftSupportAdvice];
   for (const i of [0, 1] as const) {
@@ -251,6 +316,7 @@ export async function adviseShaft(input: ShaftCaseInput, rules: LoadedRule[] = l
       slope: supports[i]!.slope,
     })) as Parameters<typeof shaftArrangement>[0]['supports'],
     pairRule,
+    crossKind: kind,
   });
   return {
     shaft: { maxDeflection: shown.beam.maxDeflection, maxMoment: shown.beam.maxMoment, diagram: shown.beam.diagram },

@@ -52,6 +52,10 @@ export const shaftWording: KernelWording = {
       const fa = v['axial'] as readonly number[];
       return `axial loads from the opposed-pair rule with each bearing's induced axial force (ISO 281 method for tapered roller bearings, from memory): ${kN(fa[0])} kN at ${names[0]!}, ${kN(fa[1])} kN at ${names[1]!}`;
     },
+    'shaft.cross-located-kind': (v) =>
+      `each support of the cross-located pair is advised with a ${raw(v['kind'])} bearing: one that holds the shaft axially whatever the thrust's direction in this load case (it reverses at start, braking or reversal), the same kind at both supports; of the kinds that do (${(v['kinds'] as readonly string[]).join(', ')}), the least costly feasible at both, so a deep-groove ball pair on a light shaft, else a mirrored tapered roller or angular-contact pair (common practice)`,
+    'shaft.cross-located-washer': (v) =>
+      `the ${v['option'] === 'journal' ? 'journal bearing' : 'bushing'} at ${raw(v['name'])} carries no axial load in this load case but is given its thrust ${v['option'] === 'journal' ? 'face' : 'washer'} all the same: a cross-located support holds the shaft one way whatever the thrust's direction (common practice)`,
     'shaft.thrust-face-each-end': () =>
       'each bushing carries a thrust washer on its outer side, each taking the axial load one way (common practice)',
     'shaft.self-aligning': (v) =>
