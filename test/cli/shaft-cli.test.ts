@@ -1,5 +1,5 @@
 // The built CLI on a whole-shaft case: advise in text, JSON (issue 15's contract keys) and the
-// note; batch with a row per support; bad input; map and sensitivity refusing a shaft case.
+// note; batch with a row per support; bad input (map and sensitivity: test/cli/shaft-map.test.ts).
 // Contract tests of the output's structure, not physics. Invented setting: the jackshaft of a
 // sawdust extraction fan, a spur gear between the supports and the belt pulley overhung.
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
@@ -121,15 +121,6 @@ describe('advise on a shaft case', () => {
     expect(r.stderr).toMatch(/shaft\.supports/);
     expect(r.stderr).not.toMatch(STACK);
     expect(r.stdout).toBe('');
-  });
-
-  it('map and sensitivity refuse a shaft case by name, exit 2', () => {
-    for (const cmd of ['map', 'sensitivity']) {
-      const r = runCli([cmd, FAN]);
-      expect(r.code).toBe(2);
-      expect(r.stderr).toContain('is a shaft case');
-      expect(r.stderr).not.toMatch(STACK);
-    }
   });
 });
 
