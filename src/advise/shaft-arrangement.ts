@@ -87,14 +87,15 @@ export function shaftArrangement(x: {
   for (const s of x.supports)
     if (s.recommendation === 'rolling' && s.rolling && SELF_ALIGNING.has(s.rolling.kind))
       reasons.push(finding('shaft.self-aligning', { name: s.name, kind: s.rolling.kind, slope: s.slope }));
+  // The kind a cross-located pair's rolling option was advised with, where a rolling bearing is recommended.
+  if (cross && x.crossKind && x.supports.some((s) => s.recommendation === 'rolling'))
+    reasons.push(finding('shaft.cross-located-kind', { kind: x.crossKind, kinds: [...CROSS_LOCATED_KINDS] }));
   if (missing.length) return { locating, summary: finding('shaft.arrangement-incomplete', { missing }), reasons };
 
   if (cross) {
     const kinds = x.supports.map((s) => (s.recommendation === 'rolling' ? (s.rolling?.kind ?? null) : null));
     const same = a.recommendation === b.recommendation && kinds[0] === kinds[1];
     reasons.push(finding('shaft.cross-located-growth', {}));
-    if (x.crossKind)
-      reasons.push(finding('shaft.cross-located-kind', { kind: x.crossKind, kinds: [...CROSS_LOCATED_KINDS] }));
     for (const s of x.supports)
       if ((s.recommendation === 'bushing' || s.recommendation === 'journal') && s.axial < MIN_AXIAL)
         reasons.push(finding('shaft.cross-located-washer', { name: s.name, option: s.recommendation }));
