@@ -2,6 +2,7 @@ import type { CaseSI } from '../../case/types.js';
 import type { JournalCriteria } from '../../data/journal-criteria.js';
 import { THERMAL_CEILING_C } from './operating-point.js';
 import { journalThrust } from './thrust.js';
+import { tableGeneration } from './table.js';
 import { bathTemperature, housingArea, sumpModel, type BathTemperature } from '../sump.js';
 import {
   evaluateDesign,
@@ -60,7 +61,7 @@ function firstSweep(
   startLoad: number,
   crit: JournalCriteria,
 ): DesignEvaluation {
-  const key = JSON.stringify([diameter, candidates, points, t, startLoad, crit]);
+  const key = JSON.stringify([tableGeneration(), diameter, candidates, points, t, startLoad, crit]);
   const hit = firstSweeps.get(key);
   if (hit) return hit;
   const { chosen } = sweepDesigns(diameter, candidates, points, t, startLoad, crit);

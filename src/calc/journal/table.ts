@@ -393,6 +393,7 @@ export function seedTables(
 ): void {
   // Only the rows are kept; a table is made from them when first asked for (most runs use one or a few L/D).
   for (const t of tables) seeds.set(Number(quantiseLengthToDiameter(t.lengthToDiameter).toFixed(6)), t.rows);
+  generation++;
 }
 
 const seeds = new Map<number, readonly DimensionlessPerformance[]>();
@@ -463,4 +464,12 @@ const defaultMesh = (): Mesh => (mesh0 ??= makeMesh(DEFAULT_MESH.nTheta, DEFAULT
 export function clearTableCache(): void {
   cache.clear();
   seeds.clear();
+  generation++;
+}
+
+let generation = 0;
+
+/** A count that changes whenever the tables may change (cleared or seeded): results kept from them carry it. */
+export function tableGeneration(): number {
+  return generation;
 }
