@@ -322,12 +322,15 @@ export function checkMaterial(
       ),
     );
   }
-  if (setting.lengthChosen === 'case' || L + thickness > c.space.maxLength)
+  // Whole millimetres plus a washer add up with a floating-point residue (57 mm + 3 mm comes to
+  // 60.000000000000005 mm): the sum is taken to the nanometre, far below any drawing's precision.
+  const axialTaken = Math.round((L + thickness) * 1e9) / 1e9;
+  if (setting.lengthChosen === 'case' || axialTaken > c.space.maxLength)
     checks.push(
       makeCheck(
         'axial-space',
         setting.thrust ? 'Length plus thrust washer within the axial space' : 'Length within the axial space',
-        L + thickness,
+        axialTaken,
         c.space.maxLength,
         'm',
         'max',

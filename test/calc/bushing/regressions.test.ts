@@ -174,3 +174,22 @@ describe('axial load (guards: 4 kN of thrust on a bushing not checked at all)', 
     for (const m of none.materials) expect(m.thrust).toBeNull();
   });
 });
+
+describe('axial room taken to the whole millimetre (guards: 57 mm + 3 mm washer failing 60 mm of room by a float residue)', () => {
+  it('a common length plus its washer that fills the room exactly passes the axial-space check', () => {
+    // 60 mm shaft, 60 mm of room, axial load: washer max(1.5 mm, 5 % of 60 mm) = 3 mm, common
+    // length min(60 − 3, 2·60) = 57 mm; 57 + 3 = 60 mm is within 60 mm.
+    const r = checkBushing(
+      pumpCase({
+        ...lightDuty,
+        shaft: { diameter: '60 mm', speed: '20 rpm' },
+        load: { radial: '300 N', axial: '200 N', shock: 'light' },
+        space: { maxLength: '60 mm', maxOuterDiameter: '120 mm' },
+      }),
+    );
+    for (const m of r.materials) {
+      expect(m.length).toBeCloseTo(0.057, 12);
+      expect(m.checks.find((k) => k.id === 'axial-space')).toBeUndefined();
+    }
+  });
+});
