@@ -115,14 +115,17 @@ export function sweepWithInlet(
   // What the last balance evaluated, by temperature: its root is one of them, so the chosen
   // design and its thrust loss there are not evaluated again.
   let tried = new Map<number, { cand: Candidate; design: DesignEvaluation; thrust: number }>();
-  const balance = (cand: Candidate, start?: number) => {
+  // The balance of a design a sweep chose starts at that sweep's temperature, where the sweep
+  // has already evaluated the design (the start changes the evaluations, not the root).
+  const balance = (swept: DesignEvaluation, start: number) => {
+    const cand = swept.candidate;
     tried = new Map();
     return bathTemperature(
       ambient,
       area,
       search,
       (t) => {
-        const design = evaluateDesign(diameter, cand, points, t, startLoad, crit);
+        const design = t === start ? swept : evaluateDesign(diameter, cand, points, t, startLoad, crit);
         const thrust = thrustLoss(cand, t);
         tried.set(t, { cand, design, thrust });
         return meanLoss(design) + thrust;
@@ -132,15 +135,14 @@ export function sweepWithInlet(
   };
   let tBath = Math.max(ambient, tCase);
   let previous = firstSweep(diameter, candidates, points, tBath, startLoad, crit);
-  let bath = balance(previous.candidate);
+  let bath = balance(previous, tBath);
   let sweep: { chosen: DesignEvaluation; rows: SweepRow[] } | undefined;
   for (let round = 1; round < MAX_ROUNDS; round++) {
     tBath = bath.temperature;
     sweep = sweepDesigns(diameter, candidates, points, tBath, startLoad, crit);
     if (sameCandidate(sweep.chosen.candidate, previous.candidate)) break;
     previous = sweep.chosen;
-    // The next design's bath starts from this one's (the start changes the evaluations, not the root).
-    bath = balance(sweep.chosen.candidate, tBath);
+    bath = balance(sweep.chosen, tBath);
   }
   if (!sweep) throw new Error('journal: no sweep at the bath temperature');
   // The chosen design at its own bath temperature (equal to the sweep's when the rounds settled).
