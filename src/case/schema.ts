@@ -278,6 +278,12 @@ export const caseFileSchema = mapping({
     radialClearance: quantity('length', 'positive', { max: 0.01, say: 'a radial clearance up to 10 mm' }).optional(),
     clearanceRatio: plain('a clearance ratio c/r between 0.0001 and 0.01', 0.0001, 0.01).optional(),
   }).optional(),
+  // Document control of the design-review note; absent parts are derived (number from title and date).
+  document: mapping({
+    number: text('a document number such as "DR-0142"').optional(),
+    revision: text('a revision such as "B"').optional(),
+    project: text('a project name or number').optional(),
+  }).optional(),
   // Bare numbers in SI base units on purpose (files written by programs); load.ts reads it first.
   units: choice(['base'] as const).optional(),
 });
