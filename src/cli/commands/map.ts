@@ -18,11 +18,20 @@ export function registerMap(program: Command): void {
       'speed range of the governing point, e.g. "10rpm..5000rpm" (default 0.1× to 10× the case)',
     )
     .option('--scale <min..max>', 'a shaft case: range of the factor on every load on the shaft (default 0.25..4)')
+    .option('--full', 'evaluate every cell (slower; the same map as the default adaptive fill)')
     .exitOverride()
     .action(
       async (
         file: string,
-        raw: { out?: string; force?: boolean; grid?: string; load?: string; speed?: string; scale?: string },
+        raw: {
+          out?: string;
+          force?: boolean;
+          grid?: string;
+          load?: string;
+          speed?: string;
+          scale?: string;
+          full?: boolean;
+        },
       ) => {
         const { UsageError } = await import('../../core/errors.js');
         const { parseGrid, parseRange } = await import('../../explore/axes.js');
@@ -46,7 +55,7 @@ export function registerMap(program: Command): void {
           const scale = raw.scale === undefined ? undefined : parseLoadScale(raw.scale);
           const { progressBar } = await import('../../report/explore/progress.js');
           const bar = progressBar('map');
-          const opts: Parameters<typeof computeShaftMap>[1] = { grid, onProgress: bar.update };
+          const opts: Parameters<typeof computeShaftMap>[1] = { grid, full: raw.full === true, onProgress: bar.update };
           if (scale) opts.loadScale = scale;
           if (speed) opts.speed = speed;
           let sm;
@@ -76,7 +85,7 @@ export function registerMap(program: Command): void {
         const { computeMap } = await import('../../explore/map.js');
         const { progressBar } = await import('../../report/explore/progress.js');
         const bar = progressBar('map');
-        const opts: Parameters<typeof computeMap>[2] = { grid, onProgress: bar.update };
+        const opts: Parameters<typeof computeMap>[2] = { grid, full: raw.full === true, onProgress: bar.update };
         if (load) opts.load = load;
         if (speed) opts.speed = speed;
         let m;
