@@ -7,6 +7,7 @@ import { checkJournal } from '../calc/journal/index.js';
 import { logAxis } from './axes.js';
 import { bestOf, designOf, type JournalDesign } from './journal-design.js';
 import { ruleRunner, type RuleRunner } from './rule-runner.js';
+import { fillAdaptive } from './adaptive.js';
 import { referencePoint, scaleCase, type ReferencePoint } from './scale.js';
 
 /**
@@ -18,6 +19,12 @@ import { referencePoint, scaleCase, type ReferencePoint } from './scale.js';
  * rolling checks run in full (they size their own design there), the journal bearing is
  * evaluated as described below, and the advisor ranks the three (advise() with the same
  * rules, the checks passed in).
+ *
+ * Not every cell is evaluated: fillAdaptive (adaptive.ts) evaluates block corners, fills
+ * blocks whose corners agree on the winner and on each option's feasibility, and then
+ * evaluates every filled cell next to a different label until no label changes. A filled
+ * cell has no scores. MapOptions.full evaluates every cell; the map printed is the same (the
+ * tests compare the two cell for cell).
  *
  * Journal design across the map (for speed): checkJournal's full design sweep (324 designs,
  * about 10 ms) runs only at the nodes of a coarse sub-grid (up to 5 × 5, corners included);
@@ -44,15 +51,23 @@ export interface MapOptions {
   rules?: LoadedRule[];
   /** The case at a cell from the load and speed factors (default scaleCase; a whole shaft's support also scales its slope). */
   scale?: (c: CaseSI, loadFactor: number, speedFactor: number) => CaseSI;
-  /** Called after each row of cells: cells done, cells in all. */
+  /** Called as cells become known: cells done, cells in all. */
   onProgress?: (done: number, total: number) => void;
+  /** Evaluate every cell (default: adaptive, see fillAdaptive in adaptive.ts; the same map). */
+  full?: boolean;
+  /** Adaptive block side, cell steps (default DEFAULT_BLOCK). */
+  block?: number;
 }
+
+/** Default block side of the adaptive fill, cell steps. */
+export const DEFAULT_BLOCK = 8;
 
 export interface MapCell {
   winner: OptionName | null;
   /** Per option, in OPTIONS order (bushing, rolling, journal). */
   feasible: [boolean, boolean, boolean];
-  score: [number, number, number];
+  /** Per option, in OPTIONS order; null where the cell was filled from its block's corners (not evaluated). */
+  score: [number, number, number] | null;
 }
 
 export interface MapResult {
@@ -70,17 +85,19 @@ export interface MapResult {
   ranges: { load: [number, number]; speed: [number, number]; loadGiven: boolean; speedGiven: boolean };
   journal: { nodesPerAxis: number; designs: JournalDesign[]; note: string };
   notes: string[];
+  /** Cells evaluated (the rest filled from agreeing block corners; every cell with MapOptions.full). */
+  evaluated: number;
   /** Set for a whole shaft's support: the load axis is shown as the scale k = load / reference of every load on the shaft. */
   loadScale?: { reference: number };
 }
 
 /** Cell summary of an advice. */
-function summary(a: AdviceResult): MapCell {
+function summary(a: AdviceResult): MapCell & { score: [number, number, number] } {
   const f = (o: OptionName) => a.ranking.find((r) => r.option === o)!;
   return {
     winner: a.recommendation,
     feasible: OPTIONS.map((o) => f(o).feasible) as MapCell['feasible'],
-    score: OPTIONS.map((o) => f(o).score) as MapCell['score'],
+    score: OPTIONS.map((o) => f(o).score) as [number, number, number],
   };
 }
 
@@ -148,53 +165,55 @@ function sweepJournalNodes(
   return { designs, nodeDesign };
 }
 
-/** What the cell grid needs besides the axes: the case at a cell, the rules and the journal nodes. */
+/** What a cell needs besides its indices: the case at a cell, the rules and the journal nodes. */
 interface CellInputs {
-  cellsPerAxis: number;
   caseAt: (loadIndex: number, speedIndex: number) => CaseSI;
-  rules: LoadedRule[];
   runRules: RuleRunner['run'];
+  rules: LoadedRule[];
   nodes: number[];
   designs: JournalDesign[];
   nodeDesign: number[][];
-  onProgress?: (done: number, total: number) => void;
 }
 
 /**
- * Every cell of the map, row by row (load index, then speed index): the case scaled to the
- * cell, its journal bearing evaluated with its nearest node's design, and the three options
- * ranked by advise(). Reports progress after each row.
+ * One cell of the map: the case scaled to the cell, its journal bearing evaluated with its
+ * nearest node's design, and the three options ranked by advise().
  */
-async function mapCells(inputs: CellInputs): Promise<MapCell[][]> {
-  const { cellsPerAxis, caseAt, rules, nodes, designs, nodeDesign } = inputs;
+function cellEvaluator(inputs: CellInputs): (loadIndex: number, speedIndex: number) => Promise<MapCell> {
+  const { caseAt, rules, nodes, designs, nodeDesign } = inputs;
+  return async (loadIndex, speedIndex) => {
+    const loadNode = nearest(nodes, loadIndex, bracket(nodes, loadIndex));
+    const speedNode = nearest(nodes, speedIndex, bracket(nodes, speedIndex));
+    const cellCase = caseAt(loadIndex, speedIndex);
+    const journal = bestOf(cellCase, [designs[nodeDesign[loadNode]![speedNode]!]!]).result;
+    const advice = await advise(cellCase, [], rules, {
+      checks: { journal },
+      kernel: { sheet: false },
+      runRules: inputs.runRules,
+      traces: false,
+    });
+    return summary(advice);
+  };
+}
+
+/** Every cell evaluated, row by row (load index, then speed index); progress after each row. */
+async function everyCell(
+  n: number,
+  cellAt: (i: number, j: number) => Promise<MapCell>,
+  onProgress?: (done: number, total: number) => void,
+): Promise<MapCell[][]> {
   const cells: MapCell[][] = [];
-  const total = cellsPerAxis * cellsPerAxis;
-  for (let loadIndex = 0; loadIndex < cellsPerAxis; loadIndex++) {
+  for (let i = 0; i < n; i++) {
     const row: MapCell[] = [];
-    const loadBracket = bracket(nodes, loadIndex);
-    for (let speedIndex = 0; speedIndex < cellsPerAxis; speedIndex++) {
-      const speedBracket = bracket(nodes, speedIndex);
-      const loadNode = nearest(nodes, loadIndex, loadBracket);
-      const speedNode = nearest(nodes, speedIndex, speedBracket);
-      const designIds = [nodeDesign[loadNode]![speedNode]!];
-      const cellCase = caseAt(loadIndex, speedIndex);
-      const journal = bestOf(
-        cellCase,
-        designIds.map((id) => designs[id]!),
-      ).result;
-      const advice = await advise(cellCase, [], rules, {
-        checks: { journal },
-        kernel: { sheet: false },
-        runRules: inputs.runRules,
-        traces: false,
-      });
-      row.push(summary(advice));
-    }
+    for (let j = 0; j < n; j++) row.push(await cellAt(i, j));
     cells.push(row);
-    inputs.onProgress?.((loadIndex + 1) * cellsPerAxis, total);
+    onProgress?.((i + 1) * n, n * n);
   }
   return cells;
 }
+
+/** A cell's label for the adaptive fill: its winner and each option's feasibility (all the map shows). */
+const cellLabel = (c: MapCell): string => `${c.winner ?? '-'}|${c.feasible.map(Number).join('')}`;
 
 /** The map's notes: axes, scaling of the duty, what is kept, the journal approximation, oscillation. */
 function mapNotes(c: CaseSI, ref: ReferencePoint, nodesPerAxis: number): string[] {
@@ -228,16 +247,22 @@ export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOpti
   // Journal design sweep at the coarse nodes, then every cell.
   const nodes = nodeIndices(opts.grid, opts.journalNodes ?? 5);
   const { designs, nodeDesign } = sweepJournalNodes(nodes, caseAt);
-  const cells = await mapCells({
-    cellsPerAxis: opts.grid,
-    caseAt,
-    rules,
-    runRules: runner.run,
-    nodes,
-    designs,
-    nodeDesign,
-    onProgress: opts.onProgress,
-  });
+  const cellAt = cellEvaluator({ caseAt, rules, runRules: runner.run, nodes, designs, nodeDesign });
+  let cells: MapCell[][];
+  let evaluated = opts.grid * opts.grid;
+  if (opts.full) cells = await everyCell(opts.grid, cellAt, opts.onProgress);
+  else {
+    const a = await fillAdaptive({
+      n: opts.grid,
+      block: opts.block ?? DEFAULT_BLOCK,
+      evaluate: cellAt,
+      label: cellLabel,
+      fill: (t) => ({ winner: t.winner, feasible: t.feasible, score: null }),
+      onProgress: opts.onProgress,
+    });
+    cells = a.cells;
+    evaluated = a.count;
+  }
 
   const notes = mapNotes(c, ref, nodes.length);
   return {
@@ -251,6 +276,7 @@ export async function computeMap(c: CaseSI, assumed: Assumption[], opts: MapOpti
     ranges: { load, speed, loadGiven: opts.load !== undefined, speedGiven: opts.speed !== undefined },
     journal: { nodesPerAxis: nodes.length, designs, note: notes[3]! },
     notes,
+    evaluated,
   };
 }
 
