@@ -1,6 +1,6 @@
 import type { LoadedShaftCase } from '../case/shaft-load.js';
 import { describeWarning } from '../report/findings/index.js';
-import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
+import { CAUTION, assumptionsBlock, fitWidth, useColour, warningsBlock } from '../report/text.js';
 import type { UnitSystem } from '../report/units.js';
 
 /**
@@ -59,17 +59,23 @@ export async function runAdviseShaft(
   }
   if (format === 'json') {
     const { shaftAdviceJson } = await import('../report/json.js');
-    return JSON.stringify(shaftAdviceJson(loaded.given, cases, a, { explain: opts.explain }), null, 2);
+    const json = JSON.stringify(shaftAdviceJson(loaded.given, cases, a, { explain: opts.explain }), null, 2);
+    if (opts.out === undefined) return json;
+    const { writeFileSafe } = await import('./write-file.js');
+    writeFileSafe(opts.out, json + '\n', { force: opts.force === true });
+    return '';
   }
   const { shaftAdviceText } = await import('../report/shaft-text.js');
   await useColour();
-  return [
-    title,
-    shaftAdviceText(loaded.shaft, resolved, a, opts.units, opts.explain),
-    assumptionsBlock(a.assumed),
-    warningsBlock(a.warnings, describeWarning),
-    CAUTION,
-  ]
-    .filter(Boolean)
-    .join('\n\n');
+  return fitWidth(
+    [
+      title,
+      shaftAdviceText(loaded.shaft, resolved, a, opts.units, opts.explain),
+      assumptionsBlock(a.assumed),
+      warningsBlock(a.warnings, describeWarning),
+      CAUTION,
+    ]
+      .filter(Boolean)
+      .join('\n\n'),
+  );
 }

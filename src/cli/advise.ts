@@ -1,7 +1,7 @@
 import { UsageError } from '../core/errors.js';
 import { loadAnyCaseFile } from '../case/shaft-load.js';
 import { describeWarning } from '../report/findings/index.js';
-import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
+import { CAUTION, assumptionsBlock, fitWidth, useColour, warningsBlock } from '../report/text.js';
 import { adviceJson } from '../report/json.js';
 import type { UnitSystem } from '../report/units.js';
 import type { OutputOptions } from './check.js';
@@ -14,7 +14,7 @@ export interface AdviseOptions {
   format: AdviseFormat;
   units: UnitSystem;
   explain: boolean;
-  /** Write the note to this file instead of printing it (md and html only). */
+  /** Write the note (md, html) or the JSON to this file instead of printing it. */
   out?: string;
   /** Replace an existing --out file. */
   force?: boolean;
@@ -33,8 +33,8 @@ export async function runAdvise(
 ): Promise<string> {
   const format = opts.format as AdviseFormat;
   const note = format === 'md' || format === 'html';
-  if (!note && opts.out !== undefined)
-    throw new UsageError(`--out: applies to --format md or html (the design-review note); got --format ${format}`);
+  if (format === 'text' && opts.out !== undefined)
+    throw new UsageError(`--out: applies to --format json, md or html; got --format ${format}`);
   if (opts.force && opts.out === undefined)
     throw new UsageError('--force: applies only with --out FILE; got --force without --out');
   if (opts.out !== undefined && opts.out.trim() === '')
@@ -72,19 +72,25 @@ export async function runAdvise(
     return '';
   }
   if (format === 'json') {
-    return JSON.stringify(adviceJson(loaded, a, { explain: opts.explain }), null, 2);
+    const json = JSON.stringify(adviceJson(loaded, a, { explain: opts.explain }), null, 2);
+    if (opts.out === undefined) return json;
+    const { writeFileSafe } = await import('./write-file.js');
+    writeFileSafe(opts.out, json + '\n', { force: opts.force === true });
+    return '';
   }
   const { adviceText } = await import('../report/advice-text.js');
   await useColour();
-  return [
-    loaded.case.title,
-    adviceText(a, opts.units, opts.explain),
-    assumptionsBlock(a.assumed),
-    warningsBlock(a.warnings, describeWarning),
-    CAUTION,
-  ]
-    .filter(Boolean)
-    .join('\n\n');
+  return fitWidth(
+    [
+      loaded.case.title,
+      adviceText(a, opts.units, opts.explain),
+      assumptionsBlock(a.assumed),
+      warningsBlock(a.warnings, describeWarning),
+      CAUTION,
+    ]
+      .filter(Boolean)
+      .join('\n\n'),
+  );
 }
 
 /**

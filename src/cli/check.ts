@@ -7,7 +7,7 @@ import type { UnitSystem } from '../report/units.js';
 import type { Assumption } from '../case/types.js';
 import type { AssumedFinding, Remark } from '../core/finding.js';
 import { worded } from '../report/findings/worded.js';
-import { CAUTION, assumptionsBlock, useColour, warningsBlock } from '../report/text.js';
+import { CAUTION, assumptionsBlock, fitWidth, useColour, warningsBlock } from '../report/text.js';
 
 export type Format = 'text' | 'json';
 export interface OutputOptions {
@@ -60,9 +60,11 @@ async function computeCheck(
   ) => {
     const { option, assumed, ...rest } = worded(r) as typeof r & { assumed: Assumption[] };
     const json = { option, case: caseFileOf(c), assumed: [...loaded.assumed, ...assumed], ...rest };
-    const text = [`${c.title}`, body, assumptionsBlock(json.assumed), warningsBlock(r.warnings), CAUTION]
-      .filter(Boolean)
-      .join('\n\n');
+    const text = fitWidth(
+      [`${c.title}`, body, assumptionsBlock(json.assumed), warningsBlock(r.warnings), CAUTION]
+        .filter(Boolean)
+        .join('\n\n'),
+    );
     return { json, text };
   };
   switch (name) {

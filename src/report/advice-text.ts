@@ -1,10 +1,10 @@
 import { describe } from './findings/index.js';
 import { whatItWouldTake } from './findings/advice.js';
 import type { AdviceResult, RankedOption } from '../advise/engine.js';
-import type { SheetLine } from '../core/check.js';
+import type { CheckRecord, SheetLine } from '../core/check.js';
 import { fmt, type UnitSystem } from './units.js';
 import { table } from './table.js';
-import { checksTable, heading, paint, shorten } from './text.js';
+import { SourceList, checksTable, heading, paint, shorten } from './text.js';
 import { firstExclusion, scoreCell } from './ranking.js';
 
 const NAMES = { bushing: 'Plain bushing', rolling: 'Rolling bearing', journal: 'Journal bearing' } as const;
@@ -21,6 +21,22 @@ function designLine(r: RankedOption, units: UnitSystem): string {
         : 'no candidate';
     case 'journal':
       return `${mm('length')} long (L/D ${(d.lengthToDiameter as number).toFixed(2)}), radial clearance ${fmt(d.radialClearance as number, 'm', units)}, ${d.oil}`;
+  }
+}
+
+/** Every check of the option's chosen design (the material, bearing or journal design the ranking shows). */
+function chosenChecks(a: AdviceResult, option: RankedOption['option']): CheckRecord[] {
+  switch (option) {
+    case 'bushing': {
+      const b = a.checks.bushing;
+      return b.materials.find((m) => m.id === b.best)?.checks ?? [];
+    }
+    case 'rolling': {
+      const r = a.checks.rolling;
+      return r.candidates.find((k) => k.id === r.best)?.checks ?? [];
+    }
+    case 'journal':
+      return a.checks.journal.checks;
   }
 }
 
@@ -50,27 +66,29 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
         fmt(r.figures.frictionPower, 'W', units),
         fmt(r.figures.length, 'm', units),
         fmt(r.figures.outerDiameter, 'm', units),
-        ...(anyOut ? [shorten(firstExclusion(r), 64)] : []),
+        ...(anyOut ? [explain ? firstExclusion(r) : shorten(firstExclusion(r), 30)] : []),
       ]),
     ),
   );
+  // Sources are cited by number in the check tables and listed once after the ranking.
+  const sources = new SourceList();
+  const weighted = (x: RankedOption['reasons'][number]) =>
+    `${Math.abs(x.points).toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`;
   for (const r of a.ranking) {
     out.push(`\n${paint.bold(`${r.rank}. ${NAMES[r.option]}`)} — ${designLine(r, units)}`);
-    const pro = r.reasons.filter((x) => x.points > 0);
-    const con = r.reasons.filter((x) => x.points < 0);
-    for (const x of pro)
-      out.push(
-        `  + ${x.points.toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`,
-      );
-    for (const x of con)
-      out.push(
-        `  − ${Math.abs(x.points).toFixed(2)}  ${x.because}${x.priority ? ` (×${x.weight} for ${x.priority} priority)` : ''}`,
-      );
+    for (const x of r.reasons.filter((x) => x.points > 0)) out.push(`  + ${weighted(x)}`);
+    for (const x of r.reasons.filter((x) => x.points < 0)) out.push(`  − ${weighted(x)}`);
+    if (r.feasible && r.option === a.recommendation) {
+      // The recommended design's own checks, every one, ahead of the other options' failures.
+      const checks = chosenChecks(a, r.option);
+      if (checks.length) out.push(checksTable(checks, units, undefined, sources.cite));
+    }
     if (!r.feasible) {
       for (const e of r.excluded) out.push(`  excluded: ${describe(e)}`);
-      if (r.failed.length) out.push(checksTable(r.failed, units));
+      if (r.failed.length) out.push(checksTable(r.failed, units, undefined, sources.cite));
     }
   }
+  if (sources.size) out.push('\n' + sources.list());
   if (a.recommendation && take.length)
     out.push('\nWhat it would take (each change alone, verified by re-running):', ...take);
   out.push(

@@ -1,21 +1,78 @@
-/** A plain-text table: columns padded to their widest cell; numbers right-aligned. */
-export function table(head: string[], rows: string[][], indent = '  '): string {
-  const widths = head.map((h, i) => Math.max(len(h), ...rows.map((r) => len(r[i] ?? ''))));
+/** The width of the terminal text: every line of the text reports fits in it. */
+export const WIDTH = 100;
+
+/**
+ * A plain-text table: columns padded to their widest cell; numbers right-aligned. When the
+ * table is wider than `width`, the widest text columns wrap between words (a cell over several
+ * lines); number columns never wrap, so a value, limit or margin is always read whole.
+ */
+export function table(head: string[], rows: string[][], indent = '  ', width = WIDTH): string {
   const numeric = head.map(
     // A number, "—" (none) or "excluded" (the ranking's score of an excluded option) right-aligns.
     (_, i) =>
       rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+(e[-+]?\d+)?( .*)?$|^—$|^excluded$/.test(strip(r[i] ?? ''))),
   );
+  const widths = head.map((h, i) => Math.max(len(h), ...rows.map((r) => len(r[i] ?? ''))));
+  fitColumns(widths, numeric, head, width - len(indent));
   const line = (cells: string[]) =>
     indent +
     cells
-      .map((c, i) => (numeric[i] ? ' '.repeat(widths[i]! - len(c)) + c : c + ' '.repeat(widths[i]! - len(c))))
+      .map((c, i) => (numeric[i] ? ' '.repeat(Math.max(0, widths[i]! - len(c))) + c : pad(c, widths[i]!)))
       .join('  ')
       .trimEnd();
-  return [line(head), indent + widths.map((w) => '-'.repeat(w)).join('  '), ...rows.map(line)].join('\n');
+  const block = (cells: string[]) => {
+    const wrapped = cells.map((c, i) => (numeric[i] ? [c] : wrapWords(c, widths[i]!)));
+    const n = Math.max(...wrapped.map((w) => w.length));
+    return Array.from({ length: n }, (_, k) => line(wrapped.map((w) => w[k] ?? '')));
+  };
+  return [
+    ...block(head),
+    indent + widths.map((w) => '-'.repeat(w)).join('  '),
+    ...rows.flatMap((r) => block(head.map((_, i) => r[i] ?? ''))),
+  ].join('\n');
+}
+
+/** Narrow the widest text column, one character at a time, until the row fits (or nothing can give). */
+function fitColumns(widths: number[], numeric: boolean[], head: string[], room: number): void {
+  const total = () => widths.reduce((s, w) => s + w, 0) + 2 * (widths.length - 1);
+  // A text column keeps at least its heading's longest word and 8 characters.
+  const floor = head.map((h, i) => (numeric[i] ? widths[i]! : Math.max(8, ...h.split(' ').map(len))));
+  while (total() > room) {
+    let widest = -1;
+    for (let i = 0; i < widths.length; i++)
+      if (!numeric[i] && widths[i]! > floor[i]! && (widest < 0 || widths[i]! > widths[widest]!)) widest = i;
+    if (widest < 0) return;
+    widths[widest]!--;
+  }
+}
+
+/** Text broken between words into lines of at most `width` characters; a longer word is cut. */
+export function wrapWords(text: string, width: number): string[] {
+  if (len(text) <= width) return [text];
+  const lines: string[] = [];
+  let cur = '';
+  for (const word of text.split(' ')) {
+    let w = word;
+    while (len(w) > width) {
+      if (cur) lines.push(cur);
+      cur = '';
+      lines.push(w.slice(0, width));
+      w = w.slice(width);
+    }
+    if (!cur) cur = w;
+    else if (len(cur) + 1 + len(w) <= width) cur += ' ' + w;
+    else {
+      lines.push(cur);
+      cur = w;
+    }
+  }
+  if (cur || !lines.length) lines.push(cur);
+  return lines;
 }
 
 // Width ignores ANSI colour codes so coloured and plain output line up alike.
 // eslint-disable-next-line no-control-regex -- ANSI escape codes start with ESC
 const strip = (s: string) => s.replace(/\u001b\[[0-9;]*m/g, '');
-const len = (s: string) => [...strip(s)].length;
+/** Printed width of a cell (colour codes left out). */
+export const len = (s: string): number => [...strip(s)].length;
+const pad = (s: string, w: number) => s + ' '.repeat(Math.max(0, w - len(s)));

@@ -3,7 +3,7 @@ import type { Assumption } from '../case/types.js';
 import type { AssumedFinding, Remark } from '../core/finding.js';
 import { describe, describeAssumption } from './findings/index.js';
 import { fmt, type UnitSystem } from './units.js';
-import { table } from './table.js';
+import { WIDTH, len, table, wrapWords } from './table.js';
 
 /** The few styles the reports use; the marks and words read the same without them. */
 interface Painter {
@@ -46,10 +46,16 @@ export function heading(text: string): string {
 /**
  * A table of check records: mark, check, value, limit, margin, source. `rowSource`, when given,
  * is a data row's source printed once below: checks citing it say so instead of repeating it.
+ * `cite`, when given, turns a source into its number in a list printed elsewhere ("[3]").
  */
-export function checksTable(checks: CheckRecord[], units: UnitSystem, rowSource?: string): string {
+export function checksTable(
+  checks: CheckRecord[],
+  units: UnitSystem,
+  rowSource?: string,
+  cite?: (source: string) => string,
+): string {
   return table(
-    ['', 'check', 'value', 'limit', 'margin', 'limit from'],
+    ['', 'check', 'value', 'limit', 'margin', cite ? 'source' : 'limit from'],
     checks.map((k) => [
       mark(k.pass, k.advisory),
       k.label,
@@ -58,20 +64,59 @@ export function checksTable(checks: CheckRecord[], units: UnitSystem, rowSource?
       `${k.margin >= 0 ? '+' : ''}${(k.margin * 100).toFixed(0)} %`,
       rowSource && k.source.startsWith(rowSource)
         ? 'material data, below' + (k.source.length > rowSource.length ? ' + heat model' : '')
-        : shorten(k.source, 48),
+        : cite
+          ? cite(k.source)
+          : shorten(k.source, 48),
     ]),
   );
 }
 
+/** Sources numbered in the order first cited: `cite` gives "[n]", `list` the numbered list. */
+export class SourceList {
+  private readonly order = new Map<string, number>();
+  readonly cite = (source: string): string => {
+    let n = this.order.get(source);
+    if (n === undefined) this.order.set(source, (n = this.order.size + 1));
+    return `[${n}]`;
+  };
+  get size(): number {
+    return this.order.size;
+  }
+  list(): string {
+    if (!this.order.size) return '';
+    return ['Sources:', ...[...this.order].map(([s, n]) => `  [${n}] ${s}`)].join('\n');
+  }
+}
+
+/**
+ * Every line of `text` within `width` columns: a longer line breaks between words and its
+ * continuation lines start under the text after the line's own indent and marker
+ * ("  - ", "  ! ", "  + 1.33  ", "  [4] ", "  excluded: "), so a list reads as a list.
+ */
+export function fitWidth(text: string, width = WIDTH): string {
+  return text
+    .split('\n')
+    .flatMap((line) => {
+      if (len(line) <= width) return [line];
+      const lead = /^(\s*(?:[-!*+−] (?:[\d.]+ {2})?|\[\d+\] |\d+\. |[a-z ]{1,20}: )?)/.exec(line)![1]!;
+      const hang = len(lead) <= width / 2 ? len(lead) : 4;
+      const body = wrapWords(line.slice(lead.length), width - hang);
+      return body.map((b, i) => (i === 0 ? lead : ' '.repeat(hang)) + b);
+    })
+    .join('\n');
+}
+
 export function assumptionsBlock(assumed: readonly (Assumption | AssumedFinding)[]): string {
   if (!assumed.length) return '';
-  return (
-    'Assumed:\n' +
-    assumed
-      .map(describeAssumption)
-      .map((a) => `  - ${a.field} = ${a.value}: ${a.reason}`)
-      .join('\n')
-  );
+  // One line per field and value: a value two kernels assume alike (the grease base oil) is said once.
+  const seen = new Set<string>();
+  const lines = assumed.map(describeAssumption).filter((a) => {
+    const key = `${a.field}=${a.value.replace(/\s*\([^)]*\)/g, '').trim()}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+  return 'Assumed:\n' + lines.map((a) => `  - ${a.field} = ${a.value}: ${a.reason}`).join('\n');
 }
 
 export function warningsBlock(warnings: readonly Remark[], worded: (w: Remark) => string = describe): string {

@@ -28,7 +28,7 @@ const TABLE: Record<string, { SI: Display; US: Display }> = {
   'm^2/s': { SI: scale('mm²/s', 1e6), US: scale('cSt', 1e6) },
   W: { SI: same('W'), US: same('W') },
   'N*m': { SI: same('N·m'), US: scale('lbf·in', 1 / 0.1129848290276167) },
-  'rev/s': { SI: scale('rpm', 60), US: scale('rpm', 60) },
+  'rev/s': { SI: scale('r/min', 60), US: scale('r/min', 60) },
   'Pa*s': { SI: scale('mPa·s', 1e3), US: scale('reyn', 1 / 6894.757293168) },
   'm^2/N': { SI: scale('mm³/(N·m)', 1e9), US: scale('in³·min/(lbf·ft·h)', 1e9 / 201.4) },
   'm^3/s': { SI: scale('L/min', 6e4), US: scale('gal/min', 6e4 / 3.785411784) },

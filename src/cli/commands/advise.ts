@@ -12,7 +12,10 @@ export function registerAdvise(program: Command): void {
     .addOption(formatOption(['text', 'json', 'md', 'html']))
     .addOption(unitsOption())
     .option('--explain', 'every rule evaluated with the values it saw, and the calculation sheet (text and json)')
-    .option('--out <file>', 'write the note (md or html) to this file instead of printing it; an existing file is kept')
+    .option(
+      '--out <file>',
+      'write the note (md, html) or the JSON to this file instead of printing it; an existing file is kept',
+    )
     .option('--force', 'with --out: replace an existing file', false)
     .exitOverride()
     .action(
