@@ -4,7 +4,7 @@ import type { BushingMaterialResult } from '../../calc/bushing/index.js';
 import { basicRatingLife, lifeExponent, lifeHours } from '../../calc/rolling/life.js';
 import type { JournalSpeedCurves } from '../../explore/journal-curves.js';
 import { displayUnit, fmt, fmtValue, type UnitSystem } from '../units.js';
-import { spansDecades, type ChartSpec } from './svg.js';
+import { nice125, spansDecades, type ChartSpec } from './svg.js';
 
 /**
  * The note's charts, as chart specifications in display units. Every curve is either a
@@ -45,7 +45,12 @@ export function bushingWearChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
     { name: `high wear factor (life ${fmt(m.lifeBand.short, 'h', u)})`, depth: m.wearDepthBand.high },
     { name: `low wear factor (life ${fmt(m.lifeBand.long, 'h', u)})`, depth: m.wearDepthBand.low },
   ];
-  const tMax = 1.5 * Math.max(T, Math.min(m.lifeHours, 3 * T));
+  const lives = [m.lifeBand.short, m.lifeBand.typical, m.lifeBand.long].filter((x) => Number.isFinite(x) && x > 0);
+  const tShown = Math.max(T, Math.min(m.lifeHours, 3 * T));
+  // Lives that span a decade or more (a short life against a long target) are read on a log time axis.
+  const logTime = spansDecades(Math.min(...lives, T), Math.max(tShown, Math.min(Math.max(...lives, T), 3 * T)));
+  const tMin = logTime ? nice125(0.5 * Math.min(...lives.filter((x) => x >= T / 1000), T), 'down') : 0;
+  const tMax = logTime ? nice125(1.5 * tShown, 'up') : 1.5 * tShown;
   const yMax = Math.max(1.4 * allowance, Math.min(m.wearDepthBand.typical * (tMax / T), 3 * allowance));
   const lu = c.life.wearAllowance < 1e-3 && u === 'SI' ? 'um' : 'm';
   return {
@@ -53,31 +58,40 @@ export function bushingWearChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
     spec: {
       id,
       title: `Bushing wear: ${m.name}, ${fmt(m.length, 'm', u)} long`,
-      x: { label: 'Running time', unit: 'h', min: 0, max: tMax },
+      x: { label: 'Running time', unit: 'h', min: tMin, max: tMax, log: logTime },
       y: { label: 'Radial wear depth', unit: displayUnit(lu, u), min: 0, max: disp(yMax, lu, u) },
-      // Each line is sampled only up to where it leaves the plot, so its markers stay visible.
+      // Each line is sampled only up to where it reaches the top of the plot, so its markers stay inside.
       series: lines.map((l) => {
         const rate = l.depth / T;
-        const tEnd = rate > 0 ? Math.min(tMax, yMax / rate) : tMax;
-        return { name: l.name, points: range(0, tEnd, 11, false).map((t) => [t, disp(rate * t, lu, u)] as const) };
+        const tEnd = rate > 0 ? Math.max(tMin, Math.min(tMax, yMax / rate)) : tMax;
+        const times = logTime && tEnd > tMin ? range(tMin, tEnd, 11, true) : range(tMin, tEnd, 11, false);
+        return { name: l.name, points: times.map((t) => [t, disp(rate * t, lu, u)] as const) };
       }),
       refs: [
-        { axis: 'y', value: disp(allowance, lu, u), label: `wear allowance ${fmt(allowance, 'm', u)}` },
+        { axis: 'y', value: disp(allowance, lu, u), label: `wear allowance ${fmt(allowance, lu, u)}` },
         { axis: 'x', value: T, label: `life target ${fmt(T, 'h', u)}` },
       ],
     },
     caption:
       `Radial wear depth at the most loaded line against running hours for ${m.name} (${m.feasible ? 'the material chosen' : 'the nearest miss: no material passes'}). ` +
       `Archard wear is linear in time at a steady duty, so each line is depth = (h_T / T)·t with h_T the depth the bushing check computed at the life target T; ` +
-      `the band lines use the high and low wear factors of the material's published scatter. The bushing meets its target where a line crosses the allowance to the right of the target line.`,
+      `the band lines use the high and low wear factors of the material's published scatter.${logTime ? ' The time axis is logarithmic because the lives span a decade or more, so the straight lines of depth against time appear curved.' : ''} ` +
+      `The bushing meets its target where a line crosses the allowance to the right of the target line.`,
   };
 }
 
+/**
+ * Rolling life against load. The life that decides pass or fail is the modified life
+ * L10mh = a1·a_ISO·L10h: for each candidate its line is the basic life scaled by the candidate's
+ * own a1·a_ISO at the operating point (L10mh/L10h as the kernel computed them), so it passes
+ * through the kernel's L10mh at the operating load; the chosen bearing's basic life is drawn
+ * beside it for comparison.
+ */
 export function rollingLifeChart(a: AdviceResult, c: CaseSI, u: UnitSystem): NoteChart {
   const r = a.checks.rolling;
   const id = 'rolling-life';
   const n = r.equivalentSpeed;
-  const cands = [...r.candidates].sort((x, y) => Number(y.id === r.best) - Number(x.id === r.best)).slice(0, 6);
+  const cands = [...r.candidates].sort((x, y) => Number(y.id === r.best) - Number(x.id === r.best)).slice(0, 4);
   if (!(n > 0) || cands.length === 0 || r.equivalentLoad === null || !(r.equivalentLoad > 0))
     return {
       id,
@@ -86,18 +100,31 @@ export function rollingLifeChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
         'No rotation, no load or no candidate bearing: the basic rating life is not defined, so there is no life chart.',
     };
   const Pop = r.equivalentLoad;
+  // 25 loads from 0.2 to 5 × P, equal ratios: the middle one (index 12) is P itself.
   const loads = range(0.2 * Pop, 5 * Pop, 25, true);
-  const series = cands.map((k) => {
-    const p = lifeExponent(k.type);
-    const pts = loads.flatMap((P) => {
-      const L10 = basicRatingLife(k.dynamicRating, P, p);
+  loads[12] = Pop;
+  const lifeLine = (k: (typeof cands)[number], factor: number) =>
+    loads.flatMap((P) => {
+      const L10 = basicRatingLife(k.dynamicRating, P, lifeExponent(k.type));
       const h = L10 === null ? null : lifeHours(L10, n);
-      return h === null ? [] : [[disp(P, 'N', u), h] as const];
+      return h === null ? [] : [[disp(P, 'N', u), factor * h] as const];
     });
-    return {
-      name: `${k.id}, ${k.type}, C ${fmt(k.dynamicRating, 'N', u)}, p = ${k.type === 'ball' ? '3' : '10/3'}${k.id === r.best ? ' (chosen)' : ''}`,
-      points: pts,
-    };
+  const about = (k: (typeof cands)[number]) =>
+    `${k.id}, ${k.type}, C ${fmt(k.dynamicRating, 'N', u)}${k.id === r.best ? ' (chosen)' : ''}`;
+  const series = cands.flatMap((k) => {
+    const factor = k.L10mh !== null && k.L10h !== null && k.L10h > 0 ? k.L10mh / k.L10h : null;
+    const modified =
+      factor === null
+        ? []
+        : [
+            {
+              name: `${about(k)}: modified life L10mh, a1·a_ISO = ${fmtValue(factor, '1', u)}`,
+              points: lifeLine(k, factor),
+            },
+          ];
+    const basic =
+      k.id === (r.best ?? cands[0]!.id) ? [{ name: `${about(k)}: basic life L10h`, points: lifeLine(k, 1) }] : [];
+    return [...modified, ...basic];
   });
   const allH = series.flatMap((s) => s.points.map((p) => p[1]));
   const hMin = Math.min(...allH, c.life.hours);
@@ -106,9 +133,9 @@ export function rollingLifeChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
     id,
     spec: {
       id,
-      title: 'Rolling bearing: basic rating life against load',
+      title: 'Rolling bearing: modified and basic rating life against load',
       x: { label: 'Dynamic equivalent load P', unit: displayUnit('N', u), log: true },
-      y: { label: 'Basic rating life L10h', unit: 'h', log: spansDecades(hMin, hMax) },
+      y: { label: 'Rating life', unit: 'h', log: spansDecades(hMin, hMax) },
       series,
       refs: [
         { axis: 'y', value: c.life.hours, label: `life target ${fmt(c.life.hours, 'h', u)}` },
@@ -116,9 +143,10 @@ export function rollingLifeChart(a: AdviceResult, c: CaseSI, u: UnitSystem): Not
       ],
     },
     caption:
-      `Basic rating life L10h = 10^6·(C/P)^p / (3600·n) (ISO 281), drawn with the kernel's own life functions for each candidate's basic dynamic load rating C, ` +
-      `p = 3 for ball and 10/3 for roller bearings, at the equivalent speed n = ${fmt(n, 'rev/s', u)}; the same formula the check uses. ` +
-      `The check holds the modified life a1·a_ISO·L10h against the target; this chart shows the basic life, before those factors.`,
+      `Rating life against load for the chosen bearing and up to three other candidates, at the equivalent speed n = ${fmt(n, 'rev/s', u)}. ` +
+      `Basic rating life L10h = 10^6·(C/P)^p / (3600·n) (ISO 281), p = 3 for ball and 10/3 for roller bearings, drawn with the same life functions the check uses. ` +
+      `The check holds the modified life L10mh = a1·a_ISO·L10h against the target: each modified-life line is the basic life times the candidate's own a1·a_ISO at the operating point, ` +
+      `so it meets the checked life at the operating load; away from that load a_ISO would change with P, so the lines are a guide there, not a check.`,
   };
 }
 
@@ -160,7 +188,7 @@ export function journalSpeedCharts(a: AdviceResult, curves: JournalSpeedCurves |
             points: rows.map((x) => [rpm(x.speed), disp(x.minFilmThickness, hu, u)] as const),
           },
         ],
-        refs: [{ axis: 'y', value: disp(hAllow, hu, u), label: `allowable h0 ${fmt(hAllow, 'm', u)}` }, opLine],
+        refs: [{ axis: 'y', value: disp(hAllow, hu, u), label: `allowable h0 ${fmt(hAllow, hu, u)}` }, opLine],
       },
       caption: `Minimum film thickness of ${where}, from ${curves.lowFactor} to ${curves.highFactor} times the operating speed, each point computed by the journal kernel (evaluateDesign: load matching and thermal balance). The film is adequate above the allowable line.`,
     },

@@ -63,6 +63,8 @@ const M = { left: 70, right: 18, top: 34, bottom: 52 };
 const PW = W - M.left - M.right;
 const PH = H - M.top - M.bottom;
 const LEGEND_ROW = 18;
+/** Gap between the frame and the ends of each axis range, px: markers and limit lines at an end stay whole. */
+export const INSET = 7;
 
 /** Tick values for a linear axis: 1, 2 or 5 × 10^k steps, about `n` of them. */
 export function linearTicks(min: number, max: number, n = 6): number[] {
@@ -76,22 +78,40 @@ export function linearTicks(min: number, max: number, n = 6): number[] {
   return out;
 }
 
-/** Tick values for a log axis: each decade; with fewer than three decades also 2 and 5. */
+/**
+ * Tick values for a log axis. Over at most three decades every 1, 2 and 5 × 10^k is a major
+ * (labelled) tick and the other integers minor; over more, the decades are major and 2 and 5
+ * minor (so a wide axis keeps its labels apart).
+ */
 export function logTicks(min: number, max: number): { major: number[]; minor: number[] } {
-  const lo = Math.floor(Math.log10(min));
-  const hi = Math.ceil(Math.log10(max));
+  const lo = Math.floor(Math.log10(min) + 1e-9);
+  const hi = Math.ceil(Math.log10(max) - 1e-9);
   const major: number[] = [];
   const minor: number[] = [];
-  const few = Math.log10(max / min) <= 2.5;
+  const few = Math.log10(max / min) <= 3 + 1e-9;
   for (let k = lo; k <= hi; k++) {
     for (let m = 1; m < 10; m++) {
       const v = +(m * 10 ** k).toPrecision(12);
       if (v < min * (1 - 1e-9) || v > max * (1 + 1e-9)) continue;
       if (m === 1 || (few && (m === 2 || m === 5))) major.push(v);
-      else minor.push(v);
+      else if (few || m === 2 || m === 5) minor.push(v);
     }
   }
   return { major, minor };
+}
+
+/** Round values for the ends of a log axis taken from the data: 1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8 × 10^k. */
+const LOG_ENDS = [1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8, 10];
+
+/**
+ * The round value at or below v (down) or at or above it (up), v > 0: from the 1–2–5 × 10^k
+ * steps, or with `fine` from LOG_ENDS (an axis end need not be a tick: it is labelled anyway).
+ */
+export function nice125(v: number, dir: 'down' | 'up', fine = false): number {
+  const k = Math.floor(Math.log10(v));
+  const steps = (fine ? LOG_ENDS : [1, 2, 5, 10]).map((m) => +(m * 10 ** k).toPrecision(12));
+  if (dir === 'down') return [...steps].reverse().find((s) => s <= v * (1 + 1e-9)) ?? steps[0]!;
+  return steps.find((s) => s >= v * (1 - 1e-9)) ?? steps[steps.length - 1]!;
 }
 
 /** Whether values spanning [min, max] (all positive) are better on a log axis: more than a decade. */
@@ -117,28 +137,36 @@ interface Scale {
   to: (v: number) => number;
 }
 
-function makeScale(axis: Axis, values: number[], length: number, flip: boolean): Scale {
+/**
+ * The scale of one axis. A range taken from the data ends on a tick: a log axis at 1–2–5 × 10^k
+ * values, a linear one on its 1–2–5 step (from zero when the data start near it). The range
+ * maps to the frame less INSET at each end, so a point or a limit line at an end of the range
+ * is drawn whole inside the frame, never on it.
+ */
+function makeScale(axis: Axis, values: number[], length: number, flip: boolean, n: number): Scale {
   const finite = values.filter((v) => Number.isFinite(v) && (!axis.log || v > 0));
   let min = axis.min ?? Math.min(...finite);
   let max = axis.max ?? Math.max(...finite);
   if (!Number.isFinite(min) || !Number.isFinite(max)) [min, max] = axis.log ? [1, 10] : [0, 1];
   if (axis.log) {
     if (!(max > min)) [min, max] = [min / 2, min * 2];
-    if (axis.min === undefined) min = 10 ** (Math.floor(Math.log10(min) * 4) / 4);
-    if (axis.max === undefined) max = 10 ** (Math.ceil(Math.log10(max) * 4) / 4);
+    if (axis.min === undefined) min = nice125(min, 'down', true);
+    if (axis.max === undefined) max = nice125(max, 'up', true);
   } else {
     if (!(max > min)) [min, max] = [min - 1, max + 1];
     if (axis.min === undefined && min > 0 && min < (max - min) * 0.5) min = 0;
-    const pad = (max - min) * 0.05;
-    if (axis.max === undefined) max += pad;
-    if (axis.min === undefined && min !== 0) min -= pad;
+    const ticks = linearTicks(min, max, n);
+    const step = ticks.length > 1 ? ticks[1]! - ticks[0]! : max - min;
+    if (axis.min === undefined) min = +(Math.floor(min / step + 1e-9) * step).toPrecision(12);
+    if (axis.max === undefined) max = +(Math.ceil(max / step - 1e-9) * step).toPrecision(12);
   }
   const f = axis.log ? Math.log10 : (v: number) => v;
   const a = f(min);
   const b = f(max);
+  const inner = length - 2 * INSET;
   const to = (v: number) => {
     const t = (f(v) - a) / (b - a);
-    return flip ? length * (1 - t) : length * t;
+    return INSET + (flip ? inner * (1 - t) : inner * t);
   };
   return { min, max, log: axis.log === true, to };
 }
@@ -199,8 +227,8 @@ function chartFrame(spec: ChartSpec): ChartFrame {
     ...spec.series.flatMap((s) => s.points.map((p) => p[1])),
     ...spec.refs.filter((r) => r.axis === 'y').map((r) => r.value),
   ];
-  const xScale = makeScale(spec.x, xs, PW, false);
-  const yScale = makeScale(spec.y, ys, PH, true);
+  const xScale = makeScale(spec.x, xs, PW, false, 6);
+  const yScale = makeScale(spec.y, ys, PH, true, 5);
   return {
     id,
     xScale,
@@ -224,7 +252,35 @@ function chartHead(spec: ChartSpec, id: string): string[] {
   ];
 }
 
-/** Grid lines (minor and major), the plot frame, tick marks with their values, and the two axis labels. */
+/** Approximate width of a tick label at 12 px, px (about 6.7 px a character). */
+const labelWidth = (text: string) => text.length * 6.7;
+
+/**
+ * The labelled ticks of one axis: its major ticks and both ends of its range (an end that is
+ * no tick gets a label of its own), interior labels dropped where they would touch a
+ * neighbour; the ends are kept first. Returns value, page position and text, in order.
+ */
+export function axisLabels(
+  majors: number[],
+  min: number,
+  max: number,
+  at: (v: number) => number,
+  horizontal: boolean,
+): { value: number; pos: number; text: string }[] {
+  const near = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b), 1e-300);
+  const values = [...majors];
+  if (!values.some((v) => near(v, min))) values.unshift(min);
+  if (!values.some((v) => near(v, max))) values.push(max);
+  const all = values.map((value) => ({ value, pos: at(value), text: tickText(value) })).sort((p, q) => p.pos - q.pos);
+  const room = (p: { text: string }, q: { text: string }) =>
+    horizontal ? (labelWidth(p.text) + labelWidth(q.text)) / 2 + 6 : 15;
+  const ends = [all[0]!, all[all.length - 1]!];
+  const kept = [...ends];
+  for (const l of all.slice(1, -1)) if (kept.every((k) => Math.abs(k.pos - l.pos) >= room(k, l))) kept.push(l);
+  return kept.sort((p, q) => p.pos - q.pos);
+}
+
+/** Grid lines (minor and major), the plot frame, tick marks with their values (both ends labelled), and the two axis labels. */
 function gridAndAxes(spec: ChartSpec, frame: ChartFrame): string[] {
   const { xScale: sx, yScale: sy, toX: X, toY: Y } = frame;
   const grid: string[] = [];
@@ -239,32 +295,45 @@ function gridAndAxes(spec: ChartSpec, frame: ChartFrame): string[] {
     grid.push(`<line x1="${r1(X(v))}" y1="${M.top}" x2="${r1(X(v))}" y2="${M.top + PH}" stroke="#eee"/>`);
   for (const v of yt.minor)
     grid.push(`<line x1="${M.left}" y1="${r1(Y(v))}" x2="${M.left + PW}" y2="${r1(Y(v))}" stroke="#eee"/>`);
-  for (const v of xt.major) {
+  for (const v of xt.major)
     grid.push(`<line x1="${r1(X(v))}" y1="${M.top}" x2="${r1(X(v))}" y2="${M.top + PH}" stroke="#d5d5d5"/>`);
-    ticks.push(`<line x1="${r1(X(v))}" y1="${M.top + PH}" x2="${r1(X(v))}" y2="${M.top + PH + 5}" stroke="#333"/>`);
-    ticks.push(`<text x="${r1(X(v))}" y="${M.top + PH + 18}" text-anchor="middle" fill="#222">${tickText(v)}</text>`);
-  }
-  for (const v of yt.major) {
+  for (const v of yt.major)
     grid.push(`<line x1="${M.left}" y1="${r1(Y(v))}" x2="${M.left + PW}" y2="${r1(Y(v))}" stroke="#d5d5d5"/>`);
-    ticks.push(`<line x1="${M.left - 5}" y1="${r1(Y(v))}" x2="${M.left}" y2="${r1(Y(v))}" stroke="#333"/>`);
-    ticks.push(`<text x="${M.left - 8}" y="${r1(Y(v) + 4)}" text-anchor="end" fill="#222">${tickText(v)}</text>`);
+  for (const l of axisLabels(xt.major, sx.min, sx.max, X, true)) {
+    ticks.push(`<line x1="${r1(l.pos)}" y1="${M.top + PH}" x2="${r1(l.pos)}" y2="${M.top + PH + 5}" stroke="#333"/>`);
+    ticks.push(`<text x="${r1(l.pos)}" y="${M.top + PH + 18}" text-anchor="middle" fill="#222">${l.text}</text>`);
+  }
+  for (const l of axisLabels(yt.major, sy.min, sy.max, Y, false)) {
+    ticks.push(`<line x1="${M.left - 5}" y1="${r1(l.pos)}" x2="${M.left}" y2="${r1(l.pos)}" stroke="#333"/>`);
+    ticks.push(`<text x="${M.left - 8}" y="${r1(l.pos + 4)}" text-anchor="end" fill="#222">${l.text}</text>`);
   }
   const unit = (a: Axis) => (a.unit ? ` [${escapeHtml(a.unit)}]` : '');
   return [
     `<g class="grid">${grid.join('')}</g>`,
-    `<rect x="${M.left}" y="${M.top}" width="${PW}" height="${PH}" fill="none" stroke="#333"/>`,
+    `<rect class="frame" x="${M.left}" y="${M.top}" width="${PW}" height="${PH}" fill="none" stroke="#333"/>`,
     `<g class="ticks">${ticks.join('')}</g>`,
     `<text class="axis-label" x="${M.left + PW / 2}" y="${H - 12}" text-anchor="middle" fill="#111">${escapeHtml(spec.x.label)}${unit(spec.x)}${sx.log ? ' (log scale)' : ''}</text>`,
     `<text class="axis-label" transform="translate(16 ${M.top + PH / 2}) rotate(-90)" text-anchor="middle" fill="#111">${escapeHtml(spec.y.label)}${unit(spec.y)}${sy.log ? ' (log scale)' : ''}</text>`,
   ];
 }
 
-/** The limit lines, then each series' line and markers (points a log axis cannot show left out), clipped to the plot. */
+/** Whether v lies within a scale's range (a hair of rounding allowed). */
+const within = (sc: Scale, v: number) => {
+  const tol = 1e-9 * Math.max(Math.abs(sc.min), Math.abs(sc.max));
+  return v >= sc.min - tol && v <= sc.max + tol;
+};
+
+/**
+ * The limit lines, then each series' line and markers (points a log axis cannot show left out),
+ * clipped to the frame. A limit line outside a fixed range is left out (its legend entry stays);
+ * a marker is drawn only where its point lies within both ranges, so none is cut by the frame.
+ */
 function plotBody(spec: ChartSpec, frame: ChartFrame): string {
   const { xScale: sx, yScale: sy, toX: X, toY: Y } = frame;
   const body: string[] = [];
   spec.refs.forEach((ref, refIndex) => {
     const dash = REF_DASHES[refIndex % REF_DASHES.length];
+    if (!within(ref.axis === 'y' ? sy : sx, ref.value)) return;
     if (ref.axis === 'y') {
       const y = r1(Y(ref.value));
       body.push(
@@ -285,12 +354,16 @@ function plotBody(spec: ChartSpec, frame: ChartFrame): string {
     if (!pts.length) return;
     const d = pts.map((p, i) => `${i ? 'L' : 'M'}${r1(X(p[0]))} ${r1(Y(p[1]))}`).join('');
     body.push(
-      `<path class="series" d="${d}" fill="none" stroke="${st.colour}" stroke-width="2.2"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`,
+      `<path class="series" data-series="${seriesIndex}" d="${d}" fill="none" stroke="${st.colour}" stroke-width="2.2"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`,
     );
-    if (series.markers !== false)
-      body.push(...markerIndices(pts.length).map((i) => marker(st.marker, X(pts[i]![0]), Y(pts[i]![1]), st.colour)));
+    if (series.markers !== false) {
+      const shown = markerIndices(pts.length).filter((i) => within(sx, pts[i]![0]) && within(sy, pts[i]![1]));
+      body.push(
+        `<g class="markers" data-series="${seriesIndex}">${shown.map((i) => marker(st.marker, X(pts[i]![0]), Y(pts[i]![1]), st.colour)).join('')}</g>`,
+      );
+    }
   });
-  return `<g clip-path="url(#clip-${frame.id})">${body.join('')}</g>`;
+  return `<g class="plot" clip-path="url(#clip-${frame.id})">${body.join('')}</g>`;
 }
 
 /** The legend below the plot (it never hides a line): series, then limit lines, in one or two columns. */
