@@ -4,7 +4,7 @@ import type { AskDeps, AskHooks, AskOptions } from './types.js';
 export type { AskDeps, AskHooks, AskOptions } from './types.js';
 
 /**
- * Add `shaftwise ask [--save FILE] [--resume FILE]`, the questionnaire that writes a
+ * Add `shaftwise ask [--save FILE] [--resume FILE] [--force]`, the questionnaire that writes a
  * case file answer by answer. Only types are imported here: the questions, the case
  * schema and the prompt library load when the command runs, so the other commands'
  * start-up does not grow. `hooks` replace the terminal in tests.
@@ -24,6 +24,7 @@ export function registerAsk(program: Command, deps: AskDeps, hooks?: AskHooks): 
       'case file to write as you answer (must not exist; default: ./shaftwise-case.yaml, numbered if taken)',
     )
     .option('--resume <file>', 'continue a case file an earlier ask was writing, from its first unanswered question')
+    .option('--force', 'at the end: replace an existing design-review note beside the case file', false)
     .exitOverride()
     .action(async (opts: AskOptions) => {
       const { runAsk, EXIT_INTERRUPTED } = await import('./run.js');

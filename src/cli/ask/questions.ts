@@ -433,10 +433,15 @@ export function nextQuestion(a: Answers, questions: readonly Question[] = QUESTI
   return undefined;
 }
 
-/** How many questions apply to these answers and how many of them are answered. */
+/**
+ * How many questions apply to these answers and how many of them have a usable answer (a
+ * saved value that would be asked again does not count). The one count of questions: the
+ * resume line and each question's place ("3 of 20") both come from it.
+ */
 export function progress(a: Answers, questions: readonly Question[] = QUESTIONS): { answered: number; total: number } {
   const live = questions.filter((q) => applies(q, a));
-  return { answered: live.filter((q) => a[q.id] !== undefined).length, total: live.length };
+  const usable = (q: Question) => a[q.id] !== undefined && checkAnswer(q, a[q.id], a, true).ok;
+  return { answered: live.filter(usable).length, total: live.length };
 }
 
 function getPath(obj: unknown, path: readonly string[]): unknown {

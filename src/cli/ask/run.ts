@@ -1,11 +1,12 @@
 import { UsageError } from '../../core/errors.js';
 import { existsSync } from 'node:fs';
 import { relative, resolve } from 'node:path';
+import { parse } from 'yaml';
 import { validateCase } from '../../case/load.js';
 
-import type { Document } from 'yaml';
 import {
   answersFromCase,
+  applies,
   checkAnswer,
   nextQuestion,
   progress,
@@ -14,7 +15,8 @@ import {
   type Answers,
   type Question,
 } from './questions.js';
-import { applyAnswers, freeName, newDocument, readSaved, renderCase, writeAtomic, type AskState } from './save.js';
+import { applyAnswers, freeName, readSaved, renderCase, writeAtomic, type AskState } from './save.js';
+import { WIDTH, wrapWords } from './wrap.js';
 import type { AskDeps, AskHooks, AskOptions, Prompter, PromptSpec } from './types.js';
 
 /**
@@ -36,13 +38,21 @@ export function isInterrupt(e: unknown): boolean {
   return e instanceof Error && (e.name === 'ExitPromptError' || e.name === 'AbortPromptError');
 }
 
+/** The question's place among those that apply: the same count as the resume line (progress()). */
+function positionOf(q: Question, a: Answers): { n: number; total: number } {
+  const live = QUESTIONS.filter((x) => applies(x, a));
+  return { n: live.indexOf(q) + 1, total: progress(a).total };
+}
+
 function specFor(q: Question, a: Answers, def: string, onDraft: (t: string) => void): PromptSpec {
+  const position = positionOf(q, a);
   if (q.kind === 'choice') {
     const choices = q.choices!().map((c) => ({ ...c }));
     return {
       kind: 'select',
       message: q.message,
       help: q.help,
+      position,
       default: choices.some((c) => c.value === def) ? def : q.default(a),
       choices,
     };
@@ -51,6 +61,7 @@ function specFor(q: Question, a: Answers, def: string, onDraft: (t: string) => v
     kind: 'input',
     message: q.message,
     help: q.help,
+    position,
     default: def,
     validate: (text) => {
       const c = checkAnswer(q, text === '' ? def : text, a);
@@ -64,16 +75,34 @@ export interface Session {
   file: string;
   /** Directory that relative names in messages are relative to. */
   cwd: string;
-  document: Document;
+  /** The file's text below this tool's header, edited answer by answer. */
+  body: string;
+  /** This tool wrote the file: only then does it carry the header (resume hint, steering state). */
+  ours: boolean;
   answers: Answers;
   state: AskState;
+  /** The text last written (or read): an unchanged file is not written again. */
+  written?: string;
 }
 
-/** Save the session: the case keys answered so far, and the steering state in the header comment. */
+/** Save the session: the case keys answered so far, and in a file of ours the steering state in the header comment. */
 function save(session: Session, done: boolean): void {
-  applyAnswers(session.document, session.answers, QUESTIONS);
+  session.body = applyAnswers(session.body, session.answers, QUESTIONS);
   session.state.steer = steeringAnswers(session.answers);
-  writeAtomic(session.file, renderCase(session.document, session.state, displayPath(session.file, session.cwd), done));
+  const text = renderCase(session.body, session.ours, session.state, displayPath(session.file, session.cwd), done);
+  if (text === session.written) return;
+  writeAtomic(session.file, text);
+  session.written = text;
+}
+
+/**
+ * The default offered for a question: the text typed before an interrupt, else the default of
+ * the question — whichever first passes the question's own check ('' when none does). A value
+ * that would be refused is never offered, so Enter never meets a refusal.
+ */
+export function offeredDefault(q: Question, a: Answers, draft: string | undefined): string {
+  for (const c of [draft, q.default(a)]) if (c !== undefined && c !== '' && checkAnswer(q, c, a).ok) return c;
+  return '';
 }
 
 /** The file as the user should type it: relative to the working directory when inside it, quoted for a shell when needed. */
@@ -92,11 +121,13 @@ export async function runQuestions(session: Session, prompt: Prompter, say: (lin
       section = q.section;
       say(`\n${section}`);
     }
-    if (next.stale) say(`  The saved answer is not usable (${next.stale.reason}); please answer again.`);
+    if (next.stale)
+      say(wrapWords(`The saved answer is not usable (${next.stale.reason}); please answer again.`, WIDTH, '  '));
     const draft = session.state.draft?.id === q.id ? session.state.draft.text : undefined;
-    const def =
-      draft ?? (next.stale && typeof next.stale.value === 'string' ? next.stale.value : q.default(session.answers));
-    if (draft !== undefined) say(`  (what you had typed last time is offered as the default)`);
+    const def = offeredDefault(q, session.answers, draft);
+    if (draft !== undefined && def === draft) say(`  (what you had typed last time is offered as the default)`);
+    else if (draft !== undefined)
+      say(wrapWords(`(what you had typed last time, "${draft}", is not usable, so it is not offered)`, WIDTH, '  '));
     let typed = '';
     try {
       const got = await prompt(specFor(q, session.answers, def, (t) => (typed = t)));
@@ -114,6 +145,11 @@ export async function runQuestions(session: Session, prompt: Prompter, say: (lin
     }
   }
   return true;
+}
+
+/** Where the note offered at the end goes: beside the case file, its name with .note.html. */
+export function notePathFor(casePath: string): string {
+  return casePath.replace(/\.(ya?ml|json)$/i, '') + '.note.html';
 }
 
 function resumeHint(session: Session): string {
@@ -134,10 +170,16 @@ function open(opts: AskOptions, cwd: string, say: (l: string) => void): Session 
     const answers = answersFromCase(saved.doc, saved.state.steer);
     const p = progress(answers);
     say(
-      `Resuming ${displayPath(from, cwd)}: ${p.answered} of ${p.total} questions answered.` +
-        (file !== from ? ` Saving to ${displayPath(file, cwd)}.` : ''),
+      wrapWords(
+        `Resuming ${displayPath(from, cwd)}: ${p.answered} of ${p.total} questions answered.` +
+          (file !== from ? ` Saving to ${displayPath(file, cwd)}.` : ''),
+      ),
     );
-    return { file, cwd, document: saved.document, answers, state: saved.state };
+    const body = saved.body;
+    // Resumed in place, the file as read is what is on disk: nothing is written until an answer changes it.
+    const written =
+      file === from ? renderCase(body, saved.ours, saved.state, displayPath(file, cwd), false) : undefined;
+    return { file, cwd, body, ours: saved.ours, answers, state: saved.state, written };
   }
   let file: string;
   if (opts.save !== undefined) {
@@ -150,7 +192,7 @@ function open(opts: AskOptions, cwd: string, say: (l: string) => void): Session 
   } else {
     file = freeName(resolve(cwd, 'shaftwise-case.yaml'));
   }
-  return { file, cwd, document: newDocument(), answers: {}, state: {} };
+  return { file, cwd, body: '', ours: true, answers: {}, state: {} };
 }
 
 /** The whole `ask` command: open, ask, validate, advise, offer the note. */
@@ -171,7 +213,10 @@ export async function runAsk(opts: AskOptions, deps: AskDeps, hooks: AskHooks = 
   // first question follows them at once and nothing typed in between goes astray.
   const prompt = hooks.prompter ?? (await (await import('./prompts.js')).inquirerPrompter());
   say(
-    `Answers are saved to ${displayPath(s.file, s.cwd)} as you go. Enter takes the default in brackets; Ctrl-C stops, and ${resumeHint(s)} continues.`,
+    wrapWords(
+      `Answers are saved to ${displayPath(s.file, s.cwd)} as you go. Enter takes the default shown in [brackets] ` +
+        `(in a list, the one highlighted); Ctrl-C stops, and ${resumeHint(s)} continues.`,
+    ),
   );
 
   const finished = await runQuestions(s, prompt, say);
@@ -180,25 +225,41 @@ export async function runAsk(opts: AskOptions, deps: AskDeps, hooks: AskHooks = 
     return { status: 'interrupted', file: s.file };
   }
   // The whole case must pass exactly as a case file would; a hand-edited key that does not is reported (exit 2).
-  validateCase(s.document.toJS({ maxAliasCount: 50 }), displayPath(s.file, s.cwd));
+  validateCase(parse(s.body, { maxAliasCount: 50 }) ?? {}, displayPath(s.file, s.cwd));
   save(s, true);
   say(`\nThe case is complete and saved in ${displayPath(s.file, s.cwd)}.\n`);
   say(await deps.advise(s.file));
   if (deps.offerNote) {
+    const note = notePathFor(s.file);
+    const shown = displayPath(note, s.cwd);
+    const force = opts.force === true;
+    if (existsSync(note) && !force) {
+      // As --out does: an existing file is kept unless --force says to replace it.
+      say(
+        wrapWords(
+          `\nThe design-review note ${shown} already exists and was left untouched; pass --force to replace it ` +
+            `(${resumeHint(s)} --force), or write it elsewhere with: shaftwise advise ${displayPath(s.file, s.cwd)} --format html --out FILE`,
+        ),
+      );
+      return { status: 'done', file: s.file };
+    }
     let yes: string | boolean;
     try {
       yes = await prompt({
         kind: 'confirm',
-        message: 'Write the design-review note for this case now?',
+        message: existsSync(note)
+          ? `Replace the design-review note ${shown} now?`
+          : `Write the design-review note to ${shown} now?`,
         help: 'The note sets out inputs, checks with margins and why the other options lost.',
         default: true,
+        fresh: true,
       });
     } catch (e) {
       if (!isInterrupt(e)) throw e;
       say(`\nNo note written. The case is complete in ${displayPath(s.file, s.cwd)}.`);
       return { status: 'interrupted', file: s.file };
     }
-    if (yes === true) await deps.offerNote(s.file);
+    if (yes === true) await deps.offerNote(s.file, note, force);
   }
   return { status: 'done', file: s.file };
 }

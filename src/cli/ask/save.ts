@@ -11,16 +11,19 @@ import {
   writeSync,
 } from 'node:fs';
 import { basename, dirname, extname, join } from 'node:path';
-import { Document, isMap, parseDocument } from 'yaml';
+import { parseDocument } from 'yaml';
+import { setInText } from './edit.js';
 
 import type { Answers, Question } from './questions.js';
 
 /**
  * The questionnaire's file: a case file in the case-file YAML shape (schema keys,
- * quantities as typed), rewritten atomically after every answer. What is not a case
- * key — which way the shaft moves before its speed is known, the text of an answer
- * left unfinished by Ctrl-C — rides in a header comment, which every YAML reader
- * ignores, so the file stays a plain case file that `advise` reads unchanged.
+ * quantities as typed), rewritten atomically after every answer. Each answer is spliced
+ * into the text (edit.ts), so a file a person wrote keeps its comments and layout. In a
+ * file this tool started, what is not a case key — which way the shaft moves before its
+ * speed is known, the text of an answer left unfinished by Ctrl-C — rides in a header
+ * comment, which every YAML reader ignores, so the file stays a plain case file that
+ * `advise` reads unchanged. A file a person wrote never gets that header.
  */
 
 export interface AskState {
@@ -31,8 +34,10 @@ export interface AskState {
 }
 
 export interface SavedCase {
-  /** The parsed document: edited in place, so a person's comments and layout survive a resume. */
-  document: Document;
+  /** The file's text without this tool's header lines: edited in place by each answer. */
+  body: string;
+  /** Whether this tool wrote the file (it had the header): only then is the header written again. */
+  ours: boolean;
   /** Its plain value (a mapping; empty for an empty file). */
   doc: Record<string, unknown>;
   state: AskState;
@@ -46,41 +51,39 @@ const OURS = [
   /^Run: shaftwise advise/,
   new RegExp(`^${STATE_TAG}`),
 ];
+const isOurs = (line: string) => /^#/.test(line) && OURS.some((re) => re.test(line.slice(1).trim()));
 
-/** A document for a new case. */
-export function newDocument(): Document {
-  return new Document({});
+/** Split the header this tool wrote off the top of a file: the lines of it, and the rest untouched. */
+export function splitHeader(text: string): { header: string[]; body: string } {
+  const lines = text.split('\n');
+  let n = 0;
+  while (n < lines.length && isOurs(lines[n]!)) n++;
+  return { header: lines.slice(0, n).map((l) => l.slice(1).trim()), body: lines.slice(n).join('\n') };
 }
 
-/** Put each answer at its case key, creating the mappings on the way; other keys are left as they are. */
-export function applyAnswers(document: Document, answers: Answers, questions: readonly Question[]): void {
+/** Put each answer at its case key in the text, creating the mappings on the way; other keys are left as they are. */
+export function applyAnswers(body: string, answers: Answers, questions: readonly Question[]): string {
+  let text = body;
   for (const q of questions) {
     const v = answers[q.id];
     if (!q.path || v === undefined) continue;
-    for (let i = 1; i < q.path.length; i++) {
-      const prefix = q.path.slice(0, i);
-      const node = document.getIn(prefix, true);
-      // A scalar where a mapping belongs (hand-edited "shaft: 40") gives way to the mapping.
-      if (node !== undefined && !isMap(node)) document.setIn(prefix, document.createNode({}));
-    }
-    if (document.getIn(q.path) !== v) document.setIn(q.path, v);
+    const now = parseDocument(text).getIn(q.path);
+    if (now !== v) text = setInText(text, q.path, v);
   }
+  return text;
 }
 
-/** The YAML text for a (partial) case; `done` marks a finished case. */
-export function renderCase(document: Document, state: AskState, file: string, done: boolean): string {
+/** The file's text: this tool's header (in a file it wrote) above the body; `done` marks a finished case. */
+export function renderCase(body: string, ours: boolean, state: AskState, file: string, done: boolean): string {
+  if (!ours) return body;
   const lines = done
-    ? [' Duty case written by shaftwise ask.', ' Run: shaftwise advise ' + file]
-    : [' Duty case being written by shaftwise ask; not finished.', ' Continue with: shaftwise ask --resume ' + file];
+    ? ['Duty case written by shaftwise ask.', 'Run: shaftwise advise ' + file]
+    : ['Duty case being written by shaftwise ask; not finished.', 'Continue with: shaftwise ask --resume ' + file];
   const keep: AskState = {};
   if (!done && state.steer && Object.keys(state.steer).length) keep.steer = state.steer;
   if (!done && state.draft && state.draft.text !== '') keep.draft = state.draft;
-  if (Object.keys(keep).length) lines.push(` ${STATE_TAG} ${JSON.stringify(keep)}`);
-  const theirs = (document.commentBefore ?? '')
-    .split('\n')
-    .filter((l) => l.trim() !== '' && !OURS.some((re) => re.test(l.trim())));
-  document.commentBefore = [...lines, ...theirs].join('\n');
-  return document.toString();
+  if (Object.keys(keep).length) lines.push(`${STATE_TAG} ${JSON.stringify(keep)}`);
+  return lines.map((l) => `# ${l}\n`).join('') + body;
 }
 
 /** Read a saved (possibly partial) case. Throws UsageError naming the file when it cannot be used. */
@@ -111,12 +114,12 @@ export function readSaved(file: string, shownAs = file): SavedCase {
       `--resume ${shownAs}: holds ${Array.isArray(raw) ? 'a list' : `a ${typeof raw}`}; expected a mapping with the case keys (title, shaft, load…)`,
     );
   }
-  const document = raw === null || raw === undefined ? newDocument() : parsed;
-  if (document !== parsed) document.commentBefore = parsed.commentBefore ?? parsed.comment ?? null;
+  const { header, body } = splitHeader(text);
   return {
-    document,
+    body,
+    ours: header.length > 0,
     doc: (raw ?? {}) as Record<string, unknown>,
-    state: parseState(parsed.commentBefore ?? parsed.comment ?? ''),
+    state: header.length ? parseState(header.join('\n')) : {},
   };
 }
 

@@ -191,21 +191,23 @@ describe('interrupt and resume', () => {
   });
 
   it('keeps the text typed into the interrupted question and offers it as the default on resume', async () => {
-    const first = session(['Irrigation pump', { interrupt: true, typed: '35 m' }]);
+    const first = session(['Irrigation pump', { interrupt: true, typed: '1.5 in' }]);
     const { file } = await first.run();
-    expect(readFileSync(file, 'utf8')).toContain('"draft":{"id":"diameter","text":"35 m"}');
-    const second = session(['35 mm'], { resume: file }, first.cwd);
+    expect(readFileSync(file, 'utf8')).toContain('"draft":{"id":"diameter","text":"1.5 in"}');
+    const second = session([''], { resume: file }, first.cwd);
     await second.run();
-    expect(second.asked[0]!.spec.default).toBe('35 m');
+    expect(second.asked[0]!.spec.default).toBe('1.5 in');
     expect(second.said).toContain('  (what you had typed last time is offered as the default)');
-    expect(parse(readFileSync(file, 'utf8')).shaft.diameter).toBe('35 mm');
+    expect(parse(readFileSync(file, 'utf8')).shaft.diameter).toBe('1.5 in');
   });
 
   it('Ctrl-C at the very first question still leaves a file that resumes', async () => {
     const first = session(interruptAt(0));
     const { file, status } = await first.run();
     expect(status).toBe('interrupted');
-    expect(parse(readFileSync(file, 'utf8'))).toEqual({});
+    // Only the header: no keys yet (YAML reads a file of comments as null).
+    expect(parse(readFileSync(file, 'utf8'))).toBeNull();
+    expect(readFileSync(file, 'utf8')).toContain('# Continue with: shaftwise ask --resume shaftwise-case.yaml');
     const second = session([], { resume: file }, first.cwd);
     expect((await second.run()).status).toBe('done');
     expect(second.asked[0]!.spec.message).toBe('Name of this shaft support');
@@ -331,13 +333,13 @@ describe('registerAsk on a commander program', () => {
     process.exitCode = saved;
   });
 
-  it('adds ask with --save and --resume, and sets exit code 130 after Ctrl-C', async () => {
+  it('adds ask with --save, --resume and --force, and sets exit code 130 after Ctrl-C', async () => {
     const cwd = fresh();
     const { prompter } = scripted(['Irrigation pump', { interrupt: true }]);
     const program = new Command().exitOverride();
     registerAsk(program, { advise: async () => '' }, { prompter, say: () => {}, cwd });
     const ask = program.commands.find((c) => c.name() === 'ask')!;
-    expect(ask.options.map((o) => o.long)).toEqual(['--save', '--resume']);
+    expect(ask.options.map((o) => o.long)).toEqual(['--save', '--resume', '--force']);
     await program.parseAsync(['node', 'shaftwise', 'ask', '--save', 'pump.yaml']);
     expect(process.exitCode).toBe(130);
     expect(parse(readFileSync(join(cwd, 'pump.yaml'), 'utf8'))).toEqual({ title: 'Irrigation pump' });
