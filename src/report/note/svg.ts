@@ -266,12 +266,13 @@ export function axisLabels(
   max: number,
   at: (v: number) => number,
   horizontal: boolean,
+  format: (v: number) => string = tickText,
 ): { value: number; pos: number; text: string }[] {
   const near = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b), 1e-300);
   const values = [...majors];
   if (!values.some((v) => near(v, min))) values.unshift(min);
   if (!values.some((v) => near(v, max))) values.push(max);
-  const all = values.map((value) => ({ value, pos: at(value), text: tickText(value) })).sort((p, q) => p.pos - q.pos);
+  const all = values.map((value) => ({ value, pos: at(value), text: format(value) })).sort((p, q) => p.pos - q.pos);
   const room = (p: { text: string }, q: { text: string }) =>
     horizontal ? (labelWidth(p.text) + labelWidth(q.text)) / 2 + 6 : 15;
   const ends = [all[0]!, all[all.length - 1]!];
