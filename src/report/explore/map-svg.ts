@@ -1,7 +1,7 @@
 import { OPTIONS, type OptionName } from '../../core/options.js';
 import type { MapResult } from '../../explore/map.js';
 
-import { logTicks } from '../../explore/axes.js';
+import { axisLabels, logTicks as logTicks125 } from '../note/svg.js';
 import { caseCell, LETTER } from './map-text.js';
 import { esc, fmtLoad, fmtSpeed } from './format.js';
 
@@ -85,7 +85,7 @@ function cellCorner(layout: MapLayout, loadIndex: number, speedIndex: number): {
 
 /** The opening tag, title, pattern definitions, white background and heading. */
 function svgHead(m: MapResult, layout: MapLayout): string[] {
-  const totalHeight = layout.top + layout.height + 150;
+  const totalHeight = layout.top + layout.height + 62 + noteLines(m).length * NOTE_LINE + 8;
   return [
     `<svg xmlns="http://www.w3.org/2000/svg" width="820" height="${totalHeight}" viewBox="0 0 820 ${totalHeight}" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
     `<title>${esc(`Selection map: ${m.title}`)}</title>`,
@@ -144,29 +144,61 @@ function feasibleBorders(m: MapResult, layout: MapLayout): string[] {
   return out;
 }
 
-/** The plot frame, the speed axis (r/min) and the load axis, each with log ticks and a title. */
+/**
+ * Labelled and unlabelled ticks of one log axis between the end cells' centres: 1–2–5 steps
+ * over up to three decades (decades beyond), both range ends labelled with their own values,
+ * interior labels dropped where they would touch a neighbour.
+ */
+function mapTicks(
+  min: number,
+  max: number,
+  at: (v: number) => number,
+  horizontal: boolean,
+  text: (v: number) => string,
+): { labelled: { pos: number; text: string }[]; marks: number[] } {
+  const t = logTicks125(min, max);
+  const labelled = axisLabels(t.major, min, max, at, horizontal, text).map((l) => ({ pos: l.pos, text: l.text }));
+  return { labelled, marks: t.minor.map(at) };
+}
+
+/** The plot frame, the speed axis (r/min) and the load axis, each with log ticks, both ends labelled, and a title. */
 function axesWithTicks(m: MapResult, layout: MapLayout): string[] {
   const { left, top, width, height } = layout;
   const out: string[] = [];
   out.push(
     `<rect x="${left}" y="${top}" width="${width}" height="${height}" fill="none" stroke="#222" stroke-width="1"/>`,
   );
-  for (const t of logTicks(m.speeds[0]! * 60, m.speeds[layout.columns - 1]! * 60)) {
-    const x = n3(layout.speedX(t.value / 60));
-    out.push(`<line x1="${x}" y1="${top + height}" x2="${x}" y2="${top + height + (t.major ? 7 : 4)}" stroke="#222"/>`);
-    out.push(`<text x="${x}" y="${top + height + 20}" text-anchor="middle">${esc(String(t.value))}</text>`);
+  const sx = mapTicks(
+    m.speeds[0]! * 60,
+    m.speeds[layout.columns - 1]! * 60,
+    (rpm) => layout.speedX(rpm / 60),
+    true,
+    (rpm) => String(rpm >= 1e4 ? Math.round(rpm) : +rpm.toPrecision(3)),
+  );
+  for (const x of sx.marks)
+    out.push(`<line x1="${n3(x)}" y1="${top + height}" x2="${n3(x)}" y2="${top + height + 4}" stroke="#222"/>`);
+  for (const l of sx.labelled) {
+    out.push(`<line x1="${n3(l.pos)}" y1="${top + height}" x2="${n3(l.pos)}" y2="${top + height + 7}" stroke="#222"/>`);
+    out.push(
+      `<text class="tick-x" x="${n3(l.pos)}" y="${top + height + 20}" text-anchor="middle">${esc(l.text)}</text>`,
+    );
   }
   out.push(
     `<text x="${left + width / 2}" y="${top + height + 40}" text-anchor="middle">speed of the governing point, r/min (log scale)</text>`,
   );
   // A whole shaft's support: ticks in the load scale k (load = k × reference).
   const k = m.loadScale?.reference ?? 1;
-  for (const t of logTicks(m.loads[0]! / k, m.loads[layout.rows - 1]! / k)) {
-    const y = n3(layout.loadY(t.value * k));
-    out.push(`<line x1="${left - (t.major ? 7 : 4)}" y1="${y}" x2="${left}" y2="${y}" stroke="#222"/>`);
-    out.push(
-      `<text x="${left - 10}" y="${n3(y + 4)}" text-anchor="end">${esc(m.loadScale ? `${t.value}×` : fmtLoad(t.value))}</text>`,
-    );
+  const sy = mapTicks(
+    m.loads[0]! / k,
+    m.loads[layout.rows - 1]! / k,
+    (v) => layout.loadY(v * k),
+    false,
+    (v) => (m.loadScale ? `${+v.toPrecision(3)}×` : fmtLoad(v)),
+  );
+  for (const y of sy.marks) out.push(`<line x1="${left - 4}" y1="${n3(y)}" x2="${left}" y2="${n3(y)}" stroke="#222"/>`);
+  for (const l of sy.labelled) {
+    out.push(`<line x1="${left - 7}" y1="${n3(l.pos)}" x2="${left}" y2="${n3(l.pos)}" stroke="#222"/>`);
+    out.push(`<text class="tick-y" x="${left - 10}" y="${n3(l.pos + 4)}" text-anchor="end">${esc(l.text)}</text>`);
   }
   const yTitle = m.loadScale
     ? `load scale k, every load on the shaft (log scale; k = 1: ${fmtLoad(k)} here)`
@@ -225,17 +257,21 @@ function mapLegend(m: MapResult, layout: MapLayout, inRange: boolean): string[] 
   return out;
 }
 
-/** The map's notes under the plot, wrapped at 120 characters. */
+/** Characters a line of the notes holds (10.5 px type across the 780 px under the plot). */
+const NOTE_CHARS = 120;
+const NOTE_LINE = 13;
+
+/** The map's notes wrapped into lines. */
+function noteLines(m: MapResult): string[] {
+  return m.notes.flatMap((note) => wrap(note, NOTE_CHARS));
+}
+
+/** The map's notes under the plot, wrapped at NOTE_CHARS characters; the drawing is made tall enough for all of them. */
 function notesUnder(m: MapResult, layout: MapLayout): string[] {
-  const out: string[] = [];
-  let y = layout.top + layout.height + 62;
-  for (const note of m.notes) {
-    for (const line of wrap(note, 120)) {
-      out.push(`<text x="${layout.left - 60}" y="${y}" font-size="10.5" fill="#333">${esc(line)}</text>`);
-      y += 13;
-    }
-  }
-  return out;
+  return noteLines(m).map(
+    (line, i) =>
+      `<text class="note" x="${layout.left - 60}" y="${layout.top + layout.height + 62 + i * NOTE_LINE}" font-size="10.5" fill="#333">${esc(line)}</text>`,
+  );
 }
 
 /** The map as a standalone SVG document (no scripts, no external references). */
