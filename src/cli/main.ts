@@ -1,90 +1,9 @@
 #!/usr/bin/env node
-import { CaseError, DataError, UsageError } from '../core/errors.js';
-import { readFileSync } from 'node:fs';
-import { Command, CommanderError } from 'commander';
-import { z } from 'zod';
-
-import { EXIT } from './errors.js';
-import { registerCheck } from './commands/check.js';
-import { registerAdvise } from './commands/advise.js';
-import { registerAsk } from './ask/index.js';
-import { registerMap } from './commands/map.js';
-import { registerSensitivity } from './commands/sensitivity.js';
-import { registerBatch } from './commands/batch.js';
-
-// A one-shot process validates each schema a few times: zod's compiled fast path costs more
-// to build than it saves here, so it is turned off (same results, measured in bench/startup.mjs).
-z.config({ jitless: true });
-
-const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
-
-const debug = process.argv.includes('--debug');
-
-/** Every error ends here: user errors exit 2 with one message per problem; defects exit 70. */
-function fail(e: unknown): never {
-  if (e instanceof CaseError) {
-    process.stderr.write(`shaftwise: ${e.source}: ${e.problems.length} problem${e.problems.length > 1 ? 's' : ''}\n`);
-    for (const p of e.problems) process.stderr.write(`  ${p.field}: ${p.message}\n`);
-    process.exit(EXIT.badInput);
-  }
-  if (e instanceof UsageError || e instanceof DataError) {
-    process.stderr.write(`shaftwise: ${e.message}\n`);
-    process.exit(EXIT.badInput);
-  }
-  if (e instanceof CommanderError) {
-    process.exit(
-      e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help'
-        ? EXIT.ok
-        : EXIT.badInput,
-    );
-  }
-  process.stderr.write(
-    `shaftwise: internal defect (${(e as Error)?.message ?? String(e)}). This is a bug, not your input: please report it with the case file and the command` +
-      (debug ? '' : '; run again with --debug for the full trace') +
-      '.\n',
-  );
-  if (debug) process.stderr.write(`${(e as Error)?.stack ?? ''}\n`);
-  process.exit(EXIT.defect);
-}
-
-// A reader that stops early (`shaftwise advise … | head`) closes the pipe: the rest of the output
-// has nowhere to go, and that is the reader's choice, not a failure. Without a listener Node
-// would throw the EPIPE as an unhandled 'error' event, with a stack trace.
-process.stdout.on('error', (e: NodeJS.ErrnoException) => {
-  if (e.code === 'EPIPE') process.exit(EXIT.ok);
-  fail(e);
-});
-
-const program = new Command()
-  .name('shaftwise')
-  .description(
-    'Choose how a shaft is supported: plain bushing, rolling bearing or oil-film journal bearing.\nConcept-stage estimates: confirm with supplier data and testing.',
-  )
-  .version(pkg.version, '-V, --version', 'print the version')
-  .option('--debug', 'print the full trace of an internal defect')
-  .exitOverride()
-  .showHelpAfterError('(run shaftwise --help for usage)')
-  .configureOutput({ writeErr: (s) => process.stderr.write(s) });
-
-registerCheck(program);
-registerAdvise(program);
-registerMap(program);
-registerSensitivity(program);
-registerBatch(program);
-registerAsk(program, {
-  advise: async (file) =>
-    (await import('./advise.js')).runAdvise(file, { format: 'text', units: 'SI', explain: false }),
-  // At the end of the questionnaire: the HTML note beside the case file, never over an existing one.
-  offerNote: async (file) => {
-    const { writeNote } = await import('./advise.js');
-    const out = file.replace(/\.(ya?ml|json)$/i, '') + '.note.html';
-    await writeNote(file, out, 'html', false);
-    process.stdout.write(`Design-review note written to ${out}\n`);
-  },
-});
-
-try {
-  await program.parseAsync(process.argv);
-} catch (e) {
-  fail(e);
-}
+// The CLI's entry. `--help` and `--version` alone take the light path: the program's
+// registrations only, no schema, no YAML parser. Any other command first turns zod's compiled
+// fast path off (src/cli/jitless.ts), before a module that builds a schema is evaluated.
+const args = process.argv.slice(2);
+const LIGHT = new Set(['--help', '-h', '--version', '-V']);
+if (!(args.length === 1 && LIGHT.has(args[0]!))) await import('./jitless.js');
+const { runProgram } = await import('./program.js');
+await runProgram(process.argv, new URL('../../package.json', import.meta.url));

@@ -1,0 +1,51 @@
+// The entry of the start-up snapshot (scripts/bundle.mjs bundles it into one CommonJS script,
+// bin/build-snapshot.mjs runs it under `node --build-snapshot`). Building the snapshot evaluates
+// every module, reads the data tables and rules into their caches and runs the examples once,
+// so their code is compiled; the process started from the snapshot then only parses its
+// arguments and does the work. Imported first: zod's jitless setting, before any schema.
+import './jitless.js';
+import { readdirSync } from 'node:fs';
+import { startupSnapshot } from 'node:v8';
+import { runProgram } from './program.js';
+import { runAdvise } from './advise.js';
+import { runCheck, CHECKS } from './check.js';
+
+const ROOT = new URL('../../', import.meta.url);
+const PACKAGE_JSON = new URL('package.json', ROOT);
+
+/** The case files advised while the snapshot is built: examples/*.yaml and examples/shaft/*.yaml. */
+function warmingCases(): string[] {
+  const files: string[] = [];
+  for (const sub of ['examples/', 'examples/shaft/']) {
+    const dir = new URL(sub, ROOT);
+    for (const f of readdirSync(dir).sort()) if (f.endsWith('.yaml')) files.push(new URL(f, dir).pathname);
+  }
+  return files;
+}
+
+/**
+ * Advise every example in each format and run each check on the single-support ones. Output
+ * is discarded; a case that fails is skipped (the snapshot still holds what ran before it).
+ */
+async function warm(): Promise<void> {
+  const skip = () => '';
+  for (const file of warmingCases()) {
+    for (const format of ['text', 'json', 'md', 'html'] as const)
+      await runAdvise(file, { format, units: 'SI', explain: false, now: () => new Date(0) }).catch(skip);
+    for (const name of CHECKS)
+      for (const format of ['text', 'json'] as const) await runCheck(name, file, { format, units: 'SI' }).catch(skip);
+  }
+}
+
+// No top-level await: the bundle of this entry is a CommonJS script.
+if (startupSnapshot.isBuildingSnapshot()) {
+  void warm().then(() =>
+    // Started from the snapshot, node gives the arguments after its own: [node, ...args].
+    startupSnapshot.setDeserializeMainFunction(() => {
+      void runProgram([process.argv[0]!, 'shaftwise', ...process.argv.slice(1)], PACKAGE_JSON);
+    }),
+  );
+} else {
+  // Run as a plain script (node dist/snapshot/shaftwise.cjs ARGS): the same program.
+  void runProgram(process.argv, PACKAGE_JSON);
+}
