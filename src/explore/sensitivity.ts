@@ -15,10 +15,13 @@ import { referencePoint, scaleCase } from './scale.js';
  * option its governing margin read: the smallest margin over the limit checks (advisory
  * checks excluded) of the design found (bushing: the material chosen, or the nearest miss;
  * rolling: the bearing chosen, or the nearest miss; journal: the design of its sweep).
- * A flip is a change of the recommendation.
+ * A flip is a change of the recommendation. A check whose margin no step of any parameter
+ * moves and that passes (a fixed geometric check such as a bearing filling its housing room) is left out of
+ * the governing margin, and named in the result's `fixed`, so the margin shown is one the
+ * swept inputs act on.
  *
  * Parameters: load (every duty point, radial and axial), speed (every point; an oscillating
- * shaft's frequency), life target, oil inlet temperature (per cent of its value in °C),
+ * shaft's frequency), life target, oil inlet temperature (in kelvin: −10, −4, +4, +10 K),
  * journal radial clearance (about the design found: its length and oil kept, only the
  * journal check re-run) and bushing wear factor (of the material found, given to the check
  * as an inline material with its low and high values scaled alike).
@@ -32,11 +35,16 @@ export type ParameterId = 'load' | 'speed' | 'life' | 'inletTemperature' | 'clea
 export interface GoverningMargin {
   /** Check id that governs (smallest margin), e.g. "wear-life"; empty when the option has no check. */
   check: string;
+  /** The governing check's own words (its label); empty when the option has no check. */
+  label: string;
   margin: number | null;
 }
 
 export interface Variation {
+  /** The step as a share (−0.25 … +0.25); for the inlet temperature, a share of INLET_SPAN. */
   step: number;
+  /** The change made: a fraction of the case's value, or kelvin for the inlet temperature (see `changeUnit`). */
+  change: number;
   /** The parameter's value used, SI (N, rev/s, h, °C, m, m³/(N·m)). */
   value: number;
   recommendation: OptionName | null;
@@ -49,6 +57,8 @@ export interface ParameterResult {
   label: string;
   unit: string;
   base: number;
+  /** How `change` is counted: a fraction of the case's value ('1') or kelvin ('K'). */
+  changeUnit: '1' | 'K';
   variations: Variation[];
   /** Largest change of any option's governing margin over the steps (for sorting the tornado). */
   swing: number;
@@ -58,27 +68,55 @@ export interface SensitivityResult {
   title: string;
   recommendation: OptionName | null;
   margins: Record<OptionName, GoverningMargin>;
+  /** Per option, the checks no step moved (left out of its governing margin): id and label. */
+  fixed: Record<OptionName, { check: string; label: string }[]>;
   parameters: ParameterResult[];
   /** Every flip, in words. */
   flips: string[];
   notes: string[];
 }
 
-const minLimit = (checks: readonly CheckRecord[]): GoverningMargin => {
-  const k = governingCheck(checks);
-  return k ? { check: k.id, margin: k.margin } : { check: '', margin: null };
+/** The governing limit check, leaving out the checks in `fixed` unless nothing else is left. */
+const minLimit = (checks: readonly CheckRecord[] | null, fixed: ReadonlySet<string> = new Set()): GoverningMargin => {
+  if (!checks) return { check: '', label: '', margin: null };
+  const moving = checks.filter((k) => !fixed.has(k.id));
+  const k = governingCheck(moving.some((x) => !x.advisory) ? moving : checks);
+  return k ? { check: k.id, label: k.label, margin: k.margin } : { check: '', label: '', margin: null };
 };
 
-/** Each option's governing margin in an advice. */
-export function governingMargins(a: AdviceResult): Record<OptionName, GoverningMargin> {
+/** The checks of each option's design found (null when there is none). */
+function designChecks(a: AdviceResult): Record<OptionName, CheckRecord[] | null> {
   const pick = (o: OptionName) => a.ranking.find((r) => r.option === o)!.design;
   const b = a.checks.bushing.materials.find((m) => m.id === pick('bushing')['material']);
   const r = a.checks.rolling.candidates.find((k) => k.id === pick('rolling')['bearing']);
-  return {
-    bushing: b ? minLimit(b.checks) : { check: '', margin: null },
-    rolling: r ? minLimit(r.checks) : { check: '', margin: null },
-    journal: minLimit(a.checks.journal.checks),
-  };
+  return { bushing: b?.checks ?? null, rolling: r?.checks ?? null, journal: a.checks.journal.checks };
+}
+
+/** Each option's governing margin in an advice (every limit check counted). */
+export function governingMargins(a: AdviceResult): Record<OptionName, GoverningMargin> {
+  const c = designChecks(a);
+  return { bushing: minLimit(c.bushing), rolling: minLimit(c.rolling), journal: minLimit(c.journal) };
+}
+
+/** Per option, the passing limit checks whose margin is the same (to 1e-9) in the case and at every step. */
+function fixedChecks(all: Record<OptionName, CheckRecord[] | null>[]): Record<OptionName, Map<string, string>> {
+  const out = {} as Record<OptionName, Map<string, string>>;
+  for (const o of OPTIONS) {
+    const seen = new Map<string, { label: string; margin: number; same: boolean; count: number }>();
+    for (const a of all)
+      for (const k of a[o] ?? []) {
+        if (k.advisory) continue;
+        const s = seen.get(k.id);
+        // A fixed check that fails stays in: it decides feasibility whatever the inputs do.
+        if (!s) seen.set(k.id, { label: k.label, margin: k.margin, same: k.pass, count: 1 });
+        else {
+          s.count++;
+          if (Math.abs(s.margin - k.margin) > 1e-9 || !k.pass) s.same = false;
+        }
+      }
+    out[o] = new Map([...seen].filter(([, s]) => s.same && s.count === all.length).map(([id, s]) => [id, s.label]));
+  }
+  return out;
 }
 
 /** One parameter to vary: what it is, its value in the case, and the advice at a step (−0.25 … +0.25). */
@@ -87,6 +125,8 @@ interface VariedParameter {
   label: string;
   unit: string;
   base: number;
+  /** Steps are kelvin (the inlet temperature, step × INLET_SPAN) rather than a fraction of the value. */
+  kelvin?: boolean;
   make: (step: number) => Promise<AdviceResult>;
 }
 
@@ -128,9 +168,10 @@ function dutyParameters(c: CaseSI, adviseVariant: AdviseVariant): VariedParamete
       id: 'inletTemperature',
       // A percentage of a Celsius value means nothing (0 °C would never move, −5 °C moves the
       // wrong way): the step is that share of a fixed 40 K span, so ±4 K and ±10 K.
-      label: `Oil inlet temperature (±10 % / ±25 % of ${INLET_SPAN} K)`,
+      label: 'Oil inlet temperature',
       unit: 'degC',
       base: c.lubrication.inletTemperature,
+      kelvin: true,
       make: (step) =>
         adviseVariant({
           ...c,
@@ -179,34 +220,67 @@ function wearFactorParameter(c: CaseSI, material: BushingMaterial, adviseVariant
 async function varyParameter(
   parameter: VariedParameter,
   base: AdviceResult,
-  baseMargins: Record<OptionName, GoverningMargin>,
-): Promise<{ result: ParameterResult; flips: string[] }> {
+): Promise<{ result: ParameterResult; checks: Record<OptionName, CheckRecord[] | null>[] }> {
   const variations: Variation[] = [];
-  const flips: string[] = [];
-  let swing = 0;
+  const checks: Record<OptionName, CheckRecord[] | null>[] = [];
   for (const step of STEPS) {
     const advice = await parameter.make(step);
-    const margins = governingMargins(advice);
-    for (const o of OPTIONS) {
-      const m0 = baseMargins[o].margin,
-        m1 = margins[o].margin;
-      if (m0 !== null && m1 !== null) swing = Math.max(swing, Math.abs(m1 - m0));
-    }
-    const flip = advice.recommendation !== base.recommendation;
-    if (flip)
-      flips.push(
-        `${parameter.label} ${step > 0 ? '+' : ''}${Math.round(step * 100)} %: ${base.recommendation ?? 'none feasible'} → ${advice.recommendation ?? 'none feasible'}`,
-      );
+    checks.push(designChecks(advice));
     variations.push({
       step,
-      value: parameter.base * (1 + step),
+      change: parameter.kelvin ? step * INLET_SPAN : step,
+      value: parameter.kelvin ? parameter.base + step * INLET_SPAN : parameter.base * (1 + step),
       recommendation: advice.recommendation,
-      flip,
-      margins,
+      flip: advice.recommendation !== base.recommendation,
+      margins: governingMargins(advice),
     });
   }
   const { id, label, unit } = parameter;
-  return { result: { id, label, unit, base: parameter.base, variations, swing }, flips };
+  const changeUnit = parameter.kelvin ? ('K' as const) : ('1' as const);
+  return { result: { id, label, unit, base: parameter.base, changeUnit, variations, swing: 0 }, checks };
+}
+
+/** A step as written: "+10 %", or "−4 K" for the inlet temperature. */
+export function changeText(v: Pick<Variation, 'change'>, unit: ParameterResult['changeUnit']): string {
+  const sign = v.change > 0 ? '+' : v.change < 0 ? '-' : '';
+  return unit === 'K'
+    ? `${sign}${+Math.abs(v.change).toPrecision(3)} K`
+    : `${sign}${Math.round(Math.abs(v.change) * 100)} %`;
+}
+
+/**
+ * The governing margins again without the fixed checks, each parameter's swing (the largest
+ * change of any option's governing margin from the case's) and every flip in words.
+ */
+function settle(
+  parameters: ParameterResult[],
+  checks: Record<OptionName, CheckRecord[] | null>[][],
+  baseChecks: Record<OptionName, CheckRecord[] | null>,
+  base: AdviceResult,
+  fixed: Record<OptionName, Map<string, string>>,
+): { margins: Record<OptionName, GoverningMargin>; flips: string[] } {
+  const margins = (c: Record<OptionName, CheckRecord[] | null>) =>
+    Object.fromEntries(OPTIONS.map((o) => [o, minLimit(c[o], new Set(fixed[o].keys()))])) as Record<
+      OptionName,
+      GoverningMargin
+    >;
+  const baseMargins = margins(baseChecks);
+  const flips: string[] = [];
+  parameters.forEach((p, i) => {
+    p.variations.forEach((v, j) => {
+      v.margins = margins(checks[i]![j]!);
+      for (const o of OPTIONS) {
+        const m0 = baseMargins[o].margin,
+          m1 = v.margins[o].margin;
+        if (m0 !== null && m1 !== null) p.swing = Math.max(p.swing, Math.abs(m1 - m0));
+      }
+      if (v.flip)
+        flips.push(
+          `${p.label} ${changeText(v, p.changeUnit)}: ${base.recommendation ?? 'none feasible'} → ${v.recommendation ?? 'none feasible'}`,
+        );
+    });
+  });
+  return { margins: baseMargins, flips };
 }
 
 /** The result's notes: how parameters are changed and what the margins are; names the journal design and material found. */
@@ -215,7 +289,7 @@ function sensitivityNotes(design: JournalDesign, material: BushingMaterial | und
     "Each parameter is changed alone; the others keep the case's values. Margins are the smallest limit-check margin of the design found: (limit − value)/limit, positive passes.",
     'Load, speed, life target and inlet temperature re-run all three checks (the bushing and rolling bearing are re-sized and the journal design sweep re-run).',
     `Clearance: the journal design found (${design.label}) with only its radial clearance changed. Wear factor: the bushing material found${material ? ` (${material.name})` : ''}, alone, with its wear factor changed.`,
-    'Inlet temperature is changed by per cent of its value in °C.',
+    `Oil inlet temperature is changed in kelvin: ${STEPS.map((x) => `${x > 0 ? '+' : '-'}${Math.abs(x * INLET_SPAN)} K`).join(', ')} (a percentage of a Celsius value has no meaning).`,
   ];
 }
 
@@ -228,7 +302,6 @@ export async function computeSensitivity(
   const rules = opts.rules ?? loadRules();
   const { run } = ruleRunner(rules);
   const base = await advise(c, assumed, rules, { runRules: run });
-  const baseMargins = governingMargins(base);
   const journalDesign = designOf(base.checks.journal, c);
   const material = bushingMaterialFound(c, base);
 
@@ -248,19 +321,25 @@ export async function computeSensitivity(
   if (material) params.push(wearFactorParameter(c, material, adviseVariant));
 
   const parameters: ParameterResult[] = [];
-  const flips: string[] = [];
+  const checks: Record<OptionName, CheckRecord[] | null>[][] = [];
   for (const p of params) {
-    const varied = await varyParameter(p, base, baseMargins);
+    const varied = await varyParameter(p, base);
     parameters.push(varied.result);
-    flips.push(...varied.flips);
+    checks.push(varied.checks);
   }
-  parameters.sort(
-    (x, y) => y.swing - x.swing || params.findIndex((p) => p.id === x.id) - params.findIndex((p) => p.id === y.id),
-  );
+  const baseChecks = designChecks(base);
+  const fixedIds = fixedChecks([baseChecks, ...checks.flat()]);
+  const { margins, flips } = settle(parameters, checks, baseChecks, base, fixedIds);
+  const order = parameters.map((p) => p.id);
+  parameters.sort((x, y) => y.swing - x.swing || order.indexOf(x.id) - order.indexOf(y.id));
+  const fixed = Object.fromEntries(
+    OPTIONS.map((o) => [o, [...fixedIds[o]].map(([check, label]) => ({ check, label }))]),
+  ) as SensitivityResult['fixed'];
   return {
     title: c.title,
     recommendation: base.recommendation,
-    margins: baseMargins,
+    margins,
+    fixed,
     parameters,
     flips,
     notes: sensitivityNotes(journalDesign, material),

@@ -27,7 +27,7 @@ export function table(head: string[], rows: string[][], indent = '  ', width = W
   };
   return [
     ...block(head),
-    indent + widths.map((w) => '-'.repeat(w)).join('  '),
+    (indent + widths.map((w) => '-'.repeat(w)).join('  ')).trimEnd(),
     ...rows.flatMap((r) => block(head.map((_, i) => r[i] ?? ''))),
   ].join('\n');
 }

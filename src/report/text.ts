@@ -91,14 +91,14 @@ export class SourceList {
 /**
  * Every line of `text` within `width` columns: a longer line breaks between words and its
  * continuation lines start under the text after the line's own indent and marker
- * ("  - ", "  ! ", "  + 1.33  ", "  [4] ", "  excluded: "), so a list reads as a list.
+ * ("  - ", "  ! ", "  + 1.33  ", "  [4] ", "  (b) ", "  excluded: "), so a list reads as a list.
  */
 export function fitWidth(text: string, width = WIDTH): string {
   return text
     .split('\n')
     .flatMap((line) => {
       if (len(line) <= width) return [line];
-      const lead = /^(\s*(?:[-!*+−] (?:[\d.]+ {2})?|\[\d+\] |\d+\. |[a-z ]{1,20}: )?)/.exec(line)![1]!;
+      const lead = /^(\s*(?:[-!*+−] (?:[\d.]+ {2})?|\[\d+\] |\([a-z\d]+\) |\d+\. |[a-z ]{1,20}: )?)/.exec(line)![1]!;
       const hang = len(lead) <= width / 2 ? len(lead) : 4;
       const body = wrapWords(line.slice(lead.length), width - hang);
       return body.map((b, i) => (i === 0 ? lead : ' '.repeat(hang)) + b);

@@ -190,14 +190,7 @@ describe('advise --out: safe writing', () => {
 describe('advise: bad options', () => {
   it.each([
     [['--format', 'pdf'], '--format: got "pdf"; expected one of: text, json, md, html'],
-    [
-      ['--out', join(dir, 'x.txt')],
-      '--out: applies to --format md or html (the design-review note); got --format text',
-    ],
-    [
-      ['--format', 'json', '--out', join(dir, 'x.json')],
-      '--out: applies to --format md or html (the design-review note); got --format json',
-    ],
+    [['--out', join(dir, 'x.txt')], '--out: applies to --format json, md or html; got --format text'],
     [['--format', 'md', '--force'], '--force: applies only with --out FILE; got --force without --out'],
   ])('%j: exit 2 with one message', (args, msg) => {
     const r = runCli(['advise', DEMO, ...args]);

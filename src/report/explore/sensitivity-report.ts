@@ -1,50 +1,80 @@
 import { OPTIONS, type OptionName } from '../../core/options.js';
-import type { SensitivityResult } from '../../explore/sensitivity.js';
+import { changeText, type GoverningMargin, type SensitivityResult } from '../../explore/sensitivity.js';
 
-import { fmt } from '../units.js';
+import { fmt, type UnitSystem } from '../units.js';
 import { table } from '../table.js';
+import { fitWidth } from '../text.js';
 import { esc } from './format.js';
 
 const pct = (m: number | null) => (m === null ? '—' : `${m >= 0 ? '+' : ''}${(m * 100).toFixed(0)} %`);
-const stepText = (s: number) => `${s > 0 ? '+' : ''}${Math.round(s * 100)} %`;
 
-/** The sensitivity as a text table: one row per parameter and step, with each option's governing margin. */
-export function sensitivityText(r: SensitivityResult): string {
-  const head = ['parameter', 'change', 'value', 'recommended', ...OPTIONS.map((o) => `${o} margin`), ''];
+/** Governing checks lettered a, b, c… in order of first appearance, each named in words once. */
+function checkKey(): { letter: (o: OptionName, m: GoverningMargin) => string; key: string[] } {
+  const letters = new Map<string, string>();
+  const key: string[] = [];
+  const letter = (o: OptionName, m: GoverningMargin) => {
+    if (!m.check) return '';
+    const id = `${o}:${m.check}`;
+    let l = letters.get(id);
+    if (l === undefined) {
+      l =
+        String.fromCharCode(97 + (letters.size % 26)) +
+        (letters.size >= 26 ? String(Math.floor(letters.size / 26)) : '');
+      letters.set(id, l);
+      key.push(`  (${l}) ${o}: ${m.label || m.check}`);
+    }
+    return `(${l})`;
+  };
+  return { letter, key };
+}
+
+/**
+ * The sensitivity as a text table: one row per parameter and step, with each option's
+ * governing margin and a letter naming its governing check; the letters are keyed below in
+ * words, with the checks no swept input moves (left out of the margins).
+ */
+export function sensitivityText(r: SensitivityResult, units: UnitSystem = 'SI'): string {
+  const { letter, key } = checkKey();
+  const cell = (o: OptionName, m: GoverningMargin) => `${pct(m.margin)} ${letter(o, m)}`.trim();
+  const head = ['parameter', 'change', 'value', 'advised', ...OPTIONS, ''];
   const rows: string[][] = [
-    [
-      '(the case)',
-      '0 %',
-      '',
-      r.recommendation ?? 'none',
-      ...OPTIONS.map((o) => `${pct(r.margins[o].margin)} ${r.margins[o].check}`),
-      '',
-    ],
+    ['(the case)', '', '', r.recommendation ?? 'none', ...OPTIONS.map((o) => cell(o, r.margins[o])), ''],
   ];
   for (const p of r.parameters) {
-    for (const v of p.variations) {
+    p.variations.forEach((v, i) => {
       rows.push([
-        p.label,
-        stepText(v.step),
-        fmt(v.value, p.unit, 'SI'),
+        i === 0 ? `${p.label}, ${fmt(p.base, p.unit, units)}` : '',
+        changeText(v, p.changeUnit),
+        fmt(v.value, p.unit, units),
         v.recommendation ?? 'none',
-        ...OPTIONS.map((o) => `${pct(v.margins[o].margin)} ${v.margins[o].check}`),
+        ...OPTIONS.map((o) => cell(o, v.margins[o])),
         v.flip ? 'FLIP' : '',
       ]);
-    }
+    });
   }
-  return [
-    `Sensitivity: ${r.title}`,
-    `Recommended at the case's values: ${r.recommendation ?? 'none feasible'}. Parameters sorted by how far they move a margin.`,
-    '',
-    table(head, rows),
-    '',
-    r.flips.length
-      ? `The recommendation flips at:\n${r.flips.map((f) => `  - ${f}`).join('\n')}`
-      : 'The recommendation does not flip within ±25 % of any parameter.',
-    '',
-    ...r.notes.map((n) => `- ${n}`),
-  ].join('\n');
+  const fixed = OPTIONS.flatMap((o) => (r.fixed?.[o] ?? []).map((f) => `${o}: ${f.label}`));
+  return fitWidth(
+    [
+      `Sensitivity: ${r.title}`,
+      `Recommended at the case's values: ${r.recommendation ?? 'none feasible'}. Parameters sorted by how far they move a margin. Columns bushing, rolling, journal: each option's governing margin, (letter) its governing check.`,
+      '',
+      table(head, rows),
+      '',
+      'Governing checks:',
+      ...key,
+      ...(fixed.length
+        ? [
+            `Left out of the governing margins: passing checks no swept input moves (the same at every step): ${fixed.join('; ')}.`,
+          ]
+        : []),
+      '',
+      r.flips.length
+        ? `The recommendation flips at:\n${r.flips.map((f) => `  - ${f}`).join('\n')}`
+        : 'The recommendation does not flip within the steps of any parameter.',
+      '',
+      ...r.notes.map((n) => `- ${n}`),
+    ].join('\n'),
+  );
 }
 
 /** JSON: the result as computed (SI numbers; margins as fractions). */
@@ -58,7 +88,7 @@ export function sensitivityJson(r: SensitivityResult): string {
  * (dark bar with a hatch, so it reads in greyscale), ±10 % as tick marks, the zero-margin
  * line drawn heavy; a flip is marked with a ◆ and named in the list below.
  */
-export function sensitivityHtml(r: SensitivityResult): string {
+export function sensitivityHtml(r: SensitivityResult, units: UnitSystem = 'SI'): string {
   const svg = OPTIONS.map((o) => tornado(r, o)).join('\n');
   return [
     '<!doctype html>',
@@ -78,8 +108,10 @@ export function sensitivityHtml(r: SensitivityResult): string {
     ...r.parameters.flatMap((p) =>
       p.variations.map(
         (v) =>
-          `<tr><td>${esc(p.label)}</td><td>${stepText(v.step)}</td><td>${esc(fmt(v.value, p.unit, 'SI'))}</td><td>${esc(v.recommendation ?? 'none')}${v.flip ? ' ◆' : ''}</td>` +
-          OPTIONS.map((o) => `<td>${esc(`${pct(v.margins[o].margin)} ${v.margins[o].check}`)}</td>`).join('') +
+          `<tr><td>${esc(p.label)}</td><td>${esc(changeText(v, p.changeUnit))}</td><td>${esc(fmt(v.value, p.unit, units))}</td><td>${esc(v.recommendation ?? 'none')}${v.flip ? ' ◆' : ''}</td>` +
+          OPTIONS.map(
+            (o) => `<td>${esc(`${pct(v.margins[o].margin)} ${v.margins[o].label || v.margins[o].check}`)}</td>`,
+          ).join('') +
           '</tr>',
       ),
     ),
@@ -115,7 +147,7 @@ function tornado(r: SensitivityResult, o: OptionName): string {
     `<defs><pattern id="hatch-${o}" width="5" height="5" patternUnits="userSpaceOnUse"><rect width="5" height="5" fill="#3a3a58"/><path d="M0 5 L5 0" stroke="#ffffff" stroke-width="0.9"/></pattern></defs>`,
   );
   out.push(
-    `<text x="10" y="20" font-size="14" font-weight="bold">${esc(`${o}: governing margin ${pct(base)} (${r.margins[o].check})`)}</text>`,
+    `<text x="10" y="20" font-size="14" font-weight="bold">${esc(`${o}: governing margin ${pct(base)} (${r.margins[o].label || r.margins[o].check})`)}</text>`,
   );
   out.push(`<text x="${L}" y="36" fill="#333">light bar: −25 %, hatched bar: +25 %, ticks: ±10 %</text>`);
   ps.forEach((p, k) => {
@@ -146,7 +178,7 @@ function tornado(r: SensitivityResult, o: OptionName): string {
           `<line x1="${x(m).toFixed(1)}" y1="${y + dy - 1}" x2="${x(m).toFixed(1)}" y2="${y + dy + 10}" stroke="#000" stroke-width="1.5"/>`,
         );
     }
-    const flipped = p.variations.filter((q) => q.flip).map((q) => stepText(q.step));
+    const flipped = p.variations.filter((q) => q.flip).map((q) => changeText(q, p.changeUnit));
     if (flipped.length) out.push(`<text x="${L + P + 8}" y="${y + 16}">◆ flips at ${esc(flipped.join(', '))}</text>`);
   });
   const y1 = top + ps.length * rowH;
