@@ -59,7 +59,7 @@ describe('note charts of the examples, read back from the SVG', () => {
   it.each(all)('$label: limit lines drawn inside the frame, clear of its edges', ({ svg }) => {
     const { frame } = read(svg);
     for (const l of byClass(svg, 'ref')) {
-      const [x1, y1, x2, y2] = ['x1', 'y1', 'x2', 'y2'].map((k) => num(l, k)) as [number, number, number, number];
+      const [x1, y1, x2] = ['x1', 'y1', 'x2'].map((k) => num(l, k)) as [number, number, number];
       const at = x1 === x2 ? x1 : y1;
       const [lo, hi] = x1 === x2 ? [frame.x, frame.x + frame.width] : [frame.y, frame.y + frame.height];
       expect(at - lo, l).toBeGreaterThanOrEqual(INSET - 0.1);
