@@ -65,6 +65,9 @@ export type NeedleRow = z.infer<typeof needleRowSchema>;
 
 const rowsOf = <T extends z.ZodType>(row: T) =>
   z.object({ description: z.string(), units: z.record(z.string(), z.string()), rows: z.array(row).min(1) });
+// Built once: the loaders below are called thousands of times in a sweep.
+const taperedTableSchema = rowsOf(taperedRowSchema);
+const needleTableSchema = rowsOf(needleRowSchema);
 
 const factorsSchema = z.object({
   description: z.string(),
@@ -96,12 +99,12 @@ export function boundaryDimensions(): BoundaryTable {
 
 /** ISO 355 tapered roller rows (data/rolling-tapered-dimensions.json), validated and cached. */
 export function taperedDimensions(): { rows: TaperedRow[] } {
-  return loadTable('rolling-tapered-dimensions.json', rowsOf(taperedRowSchema));
+  return loadTable('rolling-tapered-dimensions.json', taperedTableSchema);
 }
 
 /** Needle roller rows (data/rolling-needle-dimensions.json), validated and cached. */
 export function needleDimensions(): { rows: NeedleRow[] } {
-  return loadTable('rolling-needle-dimensions.json', rowsOf(needleRowSchema));
+  return loadTable('rolling-needle-dimensions.json', needleTableSchema);
 }
 
 /** Rolling-bearing factors (data/rolling-factors.json), validated and cached. */

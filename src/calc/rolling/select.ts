@@ -66,13 +66,20 @@ function choiceOrder(a: RollingCandidate, b: RollingCandidate): number {
   );
 }
 
+/** The first of `list` in choiceOrder (what a stable sort would put first), in one pass. */
+function firstInChoiceOrder(list: RollingCandidate[]): RollingCandidate | undefined {
+  let first: RollingCandidate | undefined;
+  for (const k of list) if (first === undefined || choiceOrder(k, first) < 0) first = k;
+  return first;
+}
+
 /**
  * The best candidate: of the feasible ones, the first in the order practice chooses in
  * (choiceOrder). Null when none is feasible; then why the nearest miss of each kind is not
  * suitable is said.
  */
 export function bestCandidate(candidates: RollingCandidate[], notes: Notes): RollingCandidate | null {
-  const best = candidates.filter((k) => k.feasible).sort(choiceOrder)[0] ?? null;
+  const best = firstInChoiceOrder(candidates.filter((k) => k.feasible)) ?? null;
   if (best) return best;
   if (candidates.length === 0) notes.warn(finding('rolling.no-candidate'));
   for (const k of leadOfEachKind(candidates)) {
@@ -101,7 +108,7 @@ export function leadOfEachKind(candidates: RollingCandidate[]): RollingCandidate
   for (const kind of ROLLING_KINDS) {
     const of = candidates.filter((k) => k.kind === kind);
     const lead =
-      of.filter((k) => k.feasible).sort(choiceOrder)[0] ??
+      firstInChoiceOrder(of.filter((k) => k.feasible)) ??
       [...of].sort(
         (a, b) => a.exclusions.length - b.exclusions.length || governingMargin(b.checks) - governingMargin(a.checks),
       )[0];
