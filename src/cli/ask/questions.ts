@@ -439,7 +439,11 @@ export function nextQuestion(a: Answers, questions: readonly Question[] = QUESTI
  * resume line and each question's place ("3 of 20") both come from it.
  */
 export function progress(a: Answers, questions: readonly Question[] = QUESTIONS): { answered: number; total: number } {
-  const live = questions.filter((q) => applies(q, a));
+  // A question not yet answered counts as its default would make it, so the total changes
+  // only when an answer given adds or removes questions (an oil supply adds the grade).
+  const assumed: Answers = { ...a };
+  for (const q of questions) if (assumed[q.id] === undefined && applies(q, assumed)) assumed[q.id] = q.default(assumed);
+  const live = questions.filter((q) => applies(q, assumed));
   const usable = (q: Question) => a[q.id] !== undefined && checkAnswer(q, a[q.id], a, true).ok;
   return { answered: live.filter(usable).length, total: live.length };
 }
