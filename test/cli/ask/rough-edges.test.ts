@@ -131,7 +131,7 @@ describe('one question count', () => {
     // title, motion (read from the speed) and speed are usable; the diameter is not.
     const m = /^Resuming pump\.yaml: (\d+) of (\d+) questions answered\.$/.exec(s.said[0]!);
     expect(m?.slice(1)).toEqual(['3', '20']);
-    const places = s.asked.filter((a) => a.spec.kind !== 'confirm').map((a) => a.spec.position!);
+    const places = s.asked.flatMap((a) => (a.spec.kind === 'confirm' ? [] : [a.spec.position!]));
     expect(places[0]).toEqual({ n: 2, total: 20 }); // the diameter, asked again in its own place
     expect(places[1]).toEqual({ n: 5, total: 20 }); // then the first unanswered: the radial load
     expect(places.at(-1)).toEqual({ n: 20, total: 20 });
@@ -142,7 +142,7 @@ describe('one question count', () => {
     // Enter for the title … the radial space (11 questions), then an oil feed at the supply.
     const s = session([...Array<Step>(11).fill(''), 'oil-feed']);
     await s.run();
-    const places = s.asked.filter((a) => a.spec.kind !== 'confirm').map((a) => a.spec.position!);
+    const places = s.asked.flatMap((a) => (a.spec.kind === 'confirm' ? [] : [a.spec.position!]));
     expect(places.map((p) => p.n)).toEqual(places.map((_, i) => i + 1));
     expect(places.slice(0, 12).every((p) => p.total === 20)).toBe(true);
     expect(places.slice(12).every((p) => p.total === 22)).toBe(true);
