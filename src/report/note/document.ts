@@ -14,7 +14,13 @@ export type Cell = string | { text: string; mark: Mark };
 export type Block =
   | { kind: 'p'; text: string; strong?: boolean }
   | { kind: 'list'; items: string[] }
-  | { kind: 'table'; head: string[]; rows: Cell[][]; caption?: string; numeric?: number[] }
+  /**
+   * A table. `numeric` columns are right-aligned and never wrap (a number with its unit, a
+   * margin, a citation); `widths` are suggested column widths in percent of the table.
+   */
+  | { kind: 'table'; head: string[]; rows: Cell[][]; caption?: string; numeric?: number[]; widths?: number[] }
+  /** The numbered reference list; entry i is cited as [i + 1]. */
+  | { kind: 'refs'; items: string[] }
   | { kind: 'sub'; title: string }
   | { kind: 'chart'; chart: NoteChart }
   /** A drawing our own code wrote as SVG (the shaft sketch), with its caption. */
@@ -24,15 +30,25 @@ export type Block =
 export interface Section {
   id: string;
   title: string;
-  /** Start the section on a new printed page. */
+  /** Start the section on a new printed page (the single note forces none: no near-empty pages). */
   pageBreak?: boolean;
   blocks: Block[];
+}
+
+/** Document control: what identifies this note and its issue. */
+export interface DocumentControl {
+  /** The case's document.number, else derived from the title and the date. */
+  number: string;
+  revision: string;
+  /** The case's document.project, else null. */
+  project: string | null;
 }
 
 export interface NoteModel {
   title: string;
   /** Date of the note, YYYY-MM-DD (UTC). */
   date: string;
+  control: DocumentControl;
   units: UnitSystem;
   summary: string;
   sections: Section[];

@@ -10,6 +10,8 @@ export function renderMarkdown(n: NoteModel): string {
   const out: string[] = [
     `# Design-review note: ${escapeMd(n.title)}`,
     '',
+    `Document ${escapeMd(n.control.number)} · revision ${escapeMd(n.control.revision)} · project ${escapeMd(n.control.project ?? '(not given)')}`,
+    '',
     `Date: ${n.date} · Units: ${n.units} · Written by shaftwise`,
     '',
     `**${escapeMd(n.summary)}**`,
@@ -43,6 +45,8 @@ function block(b: Block): string {
       const rows = b.rows.map((r) => `| ${r.map(cellText).join(' | ')} |`);
       return [...(b.caption ? [`*${escapeMd(b.caption)}*`, ''] : []), head, rule, ...rows].join('\n');
     }
+    case 'refs':
+      return b.items.map((x, i) => `${i + 1}. ${escapeMd(x)}`).join('\n');
     case 'chart':
       return `> **Chart: ${escapeMd(b.chart.spec?.title ?? b.chart.id)}** (drawn in the HTML note: \`--format html\`). ${escapeMd(b.chart.caption)}`;
     case 'figure':

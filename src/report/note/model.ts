@@ -1,14 +1,14 @@
 import { OPTIONS } from '../../core/options.js';
-import { describe, describeAssumption, describeWarning } from '../findings/index.js';
-import { whatItWouldTake } from '../findings/advice.js';
-import { firstExclusion, scoreCell } from '../ranking.js';
+import { describeAssumption } from '../findings/index.js';
 import type { AdviceResult } from '../../advise/engine.js';
 import type { SheetLine } from '../../core/check.js';
 import type { LoadedCase } from '../../case/load.js';
 import { fmt, fmtValue, type UnitSystem } from '../units.js';
-import { noteCharts, shownMaterial, type NoteChart } from './charts.js';
+import { noteCharts, type NoteChart } from './charts.js';
 import { designText, OPTION_NAMES, optionSection } from './option-sections.js';
-import type { Block, Cell, NoteModel, Section } from './document.js';
+import type { Block, Cell, DocumentControl, NoteModel, Section } from './document.js';
+import { References } from './references.js';
+import { summarySection } from './summary.js';
 import type { JournalSpeedCurves } from '../../explore/journal-curves.js';
 
 export interface NoteOptions {
@@ -39,6 +39,31 @@ export function noteDate(now?: () => Date): string {
     d = e !== undefined && /^\d+$/.test(e.trim()) ? new Date(Number(e.trim()) * 1000) : new Date();
   }
   return d.toISOString().slice(0, 10);
+}
+
+/** A short stable hash of a text (FNV-1a, 32 bit), as four upper-case hex digits. */
+function shortHash(text: string): string {
+  let x = 0x811c9dc5;
+  for (const ch of text) x = Math.imul(x ^ ch.codePointAt(0)!, 0x01000193) >>> 0;
+  return ((x ^ (x >>> 16)) & 0xffff).toString(16).toUpperCase().padStart(4, '0');
+}
+
+/**
+ * Document control of a note: the case's `document` key (number, revision, project) where
+ * given, else a number derived from the date and the title ("SW-20240305-3F2A": the same case
+ * on the same day gives the same number) and revision A.
+ */
+export function documentControl(given: unknown, title: string, date: string): DocumentControl {
+  const doc =
+    given !== null && typeof given === 'object'
+      ? (given as { document?: Record<string, unknown> }).document
+      : undefined;
+  const str = (k: string) => (typeof doc?.[k] === 'string' ? (doc[k] as string) : null);
+  return {
+    number: str('number') ?? `SW-${date.replace(/-/g, '')}-${shortHash(title)}`,
+    revision: str('revision') ?? 'A',
+    project: str('project'),
+  };
 }
 
 /** SI unit of a case field, from its key (the case schema's conventions; see src/case/types.ts). */
@@ -108,20 +133,20 @@ function dutyRows(loaded: LoadedCase, u: UnitSystem): Cell[][] {
   // Keys the SI case holds under another name than the case file.
   const givenAs: Record<string, string> = { 'lubrication.oilGrade': 'lubrication.oil' };
   for (const [path, v] of si) {
-    if (path === 'title') continue;
+    if (path === 'title' || path.startsWith('document.')) continue;
     const g = given.get(path) ?? (givenAs[path] ? given.get(givenAs[path]) : undefined);
     rows.push([path, g === undefined ? '(default)' : String(g), siText(path, v, u)]);
   }
   // Fields the user wrote that the SI case holds under another shape (e.g. "oil: ISO VG 68").
   const renamed = new Set(Object.values(givenAs));
   for (const [path, g] of given)
-    if (!si.has(path) && path !== 'title' && !renamed.has(path))
+    if (!si.has(path) && path !== 'title' && !path.startsWith('document.') && !renamed.has(path))
       rows.push([path, String(g), 'read as described under Assumptions']);
   return rows;
 }
 
-function sheetRows(lines: SheetLine[], u: UnitSystem): Cell[][] {
-  return lines.map((l) => [l.label, l.formula, l.substituted, fmt(l.value, l.unit, u), l.source]);
+function sheetRows(lines: SheetLine[], u: UnitSystem, refs: References): Cell[][] {
+  return lines.map((l) => [l.label, l.formula, l.substituted, fmt(l.value, l.unit, u), refs.cite(l.source)]);
 }
 
 const METHODS: Record<'bushing' | 'rolling' | 'journal', string[]> = {
@@ -154,7 +179,12 @@ function dutySection(loaded: LoadedCase, units: UnitSystem, caseFile: string | u
         kind: 'p',
         text: `Case file: ${caseFile ?? '(given)'}. Each field as written in the case, and as the calculation read it (${units === 'SI' ? 'SI, with the base-unit number in brackets' : 'US customary'}); "(default)" marks a value the case did not give.`,
       },
-      { kind: 'table', head: ['field', 'as given', 'as understood'], rows: dutyRows(loaded, units) },
+      {
+        kind: 'table',
+        head: ['field', 'as given', 'as understood'],
+        widths: [30, 30, 40],
+        rows: dutyRows(loaded, units),
+      },
     ],
   };
 }
@@ -169,6 +199,7 @@ function assumptionsSection(advice: AdviceResult): Section {
           {
             kind: 'table',
             head: ['field', 'value', 'reason'],
+            widths: [18, 17, 65],
             rows: advice.assumed.map(describeAssumption).map((x) => [x.field, x.value, x.reason]),
           },
         ]
@@ -176,64 +207,8 @@ function assumptionsSection(advice: AdviceResult): Section {
   };
 }
 
-/** What it would take: each failing option's verified single changes, or that none was found. */
-function takeBlocks(advice: AdviceResult): Block[] {
-  const take = whatItWouldTake(advice);
-  if (!take.length) return [];
-  return [
-    { kind: 'sub', title: 'What it would take' },
-    {
-      kind: 'p',
-      text: 'Each change alone, set in the case file, makes the option feasible: verified by re-running the advice on the changed case.',
-    },
-    { kind: 'list', items: take.map(describe) },
-  ];
-}
-
-/** The recommendation section: the summary, the ranking table, what would make an option feasible, warnings. */
-function recommendationSection(advice: AdviceResult, units: UnitSystem, summary: string): Section {
-  const blocks: Block[] = [{ kind: 'p', text: summary, strong: true }];
-  const take = takeBlocks(advice);
-  // With no option feasible, what it would take comes first.
-  if (!advice.recommendation && take.length) blocks.push(...take);
-  if (advice.tieBreak) blocks.push({ kind: 'p', text: `Tie: ${describe(advice.tieBreak)}.` });
-  const anyOut = advice.ranking.some((r) => !r.feasible);
-  blocks.push({
-    kind: 'table',
-    head: [
-      'rank',
-      'option',
-      'score',
-      'life',
-      'friction power',
-      'length',
-      'outside diameter',
-      ...(anyOut ? ['excluded because'] : []),
-    ],
-    numeric: [0, 2, 3, 4, 5, 6],
-    rows: advice.ranking.map((r) => [
-      String(r.rank),
-      OPTION_NAMES[r.option],
-      r.feasible ? scoreCell(r) : { text: scoreCell(r), mark: 'fail' },
-      r.option === 'journal' ? (r.feasible ? 'full film: no wear life' : '—') : fmt(r.figures.lifeHours, 'h', units),
-      fmt(r.figures.frictionPower, 'W', units),
-      fmt(r.figures.length, 'm', units),
-      fmt(r.figures.outerDiameter, 'm', units),
-      ...(anyOut ? [firstExclusion(r)] : []),
-    ]),
-  });
-  blocks.push({
-    kind: 'p',
-    text: 'Feasibility is decided by the checks; among feasible options the score, the sum of rule points (rules/*.json, common practice) weighted by the case priorities (priority / 3), decides the rank.',
-  });
-  if (advice.recommendation && take.length) blocks.push(...take);
-  if (advice.warnings.length)
-    blocks.push({ kind: 'sub', title: 'Warnings' }, { kind: 'list', items: advice.warnings.map(describeWarning) });
-  return { id: 'recommendation', title: 'Recommendation and ranking', blocks };
-}
-
-/** The calculation sheet: every option's calculation lines, in the fixed option order. */
-function sheetSection(advice: AdviceResult, units: UnitSystem): Section {
+/** The calculation sheet, an appendix: every option's calculation lines, in the fixed option order. */
+function sheetSection(advice: AdviceResult, units: UnitSystem, refs: References): Section {
   const blocks: Block[] = [];
   for (const o of OPTIONS) {
     const lines = advice.checks[o].sheet;
@@ -243,33 +218,39 @@ function sheetSection(advice: AdviceResult, units: UnitSystem): Section {
         ? {
             kind: 'table',
             head: ['figure', 'formula', 'with values', 'result', 'source'],
-            rows: sheetRows(lines, units),
+            numeric: [3, 4],
+            widths: [22, 26, 32, 13, 7],
+            rows: sheetRows(lines, units, refs),
           }
         : { kind: 'p', text: 'No calculation lines (nothing could be sized).' },
     );
   }
-  return { id: 'sheet', title: 'Calculation sheet', pageBreak: true, blocks };
+  return { id: 'sheet', title: 'Appendix: calculation sheet', blocks };
 }
 
-/** The methods section: each option's method, and every source of a limit the note's checks name. */
-function methodsSection(advice: AdviceResult): Section {
-  const sources = [
-    ...new Set([
-      ...(shownMaterial(advice)?.checks.map((k) => k.source) ?? []),
-      ...advice.checks.rolling.candidates.flatMap((k) => k.checks.map((x) => x.source)),
-      ...advice.checks.journal.checks.map((k) => k.source),
-    ]),
-  ].sort();
+/** The methods section: each option's method in words. */
+function methodsSection(): Section {
   return {
     id: 'methods',
-    title: 'Methods and references',
+    title: 'Methods',
+    blocks: OPTIONS.flatMap((o): Block[] => [
+      { kind: 'sub', title: OPTION_NAMES[o] },
+      { kind: 'list', items: METHODS[o] },
+    ]),
+  };
+}
+
+/** The numbered list of every source cited in the note's tables, each once with its marks. */
+function referencesSection(refs: References): Section {
+  return {
+    id: 'references',
+    title: 'References',
     blocks: [
-      ...OPTIONS.flatMap((o): Block[] => [
-        { kind: 'sub', title: OPTION_NAMES[o] },
-        { kind: 'list', items: METHODS[o] },
-      ]),
-      { kind: 'sub', title: 'Sources of the limits in this note' },
-      { kind: 'list', items: sources },
+      {
+        kind: 'p',
+        text: 'Cited as [n] in the check tables and the calculation sheet. Each entry says how its figures were obtained: "seen" (read in that source), "from memory" (recalled, to be confirmed) or "common practice" (a rule of thumb).',
+      },
+      { kind: 'refs', items: refs.list() },
     ],
   };
 }
@@ -298,14 +279,21 @@ export function buildNote(loaded: LoadedCase, advice: AdviceResult, opts: NoteOp
     : 'No option is feasible for this duty as given: see what would make one feasible.';
   const charts = noteCharts(advice, loaded.case, units, opts.journalCurves);
   const chartById = (id: string): NoteChart => charts.find((ch) => ch.id === id)!;
+  const refs = new References();
+  const options = advice.ranking.map((r) => optionSection(r, advice, units, chartById, refs));
+  // The sheet is built before the list is read, so that its citations are numbered too.
+  const sheet = sheetSection(advice, units, refs);
   const sections: Section[] = [
+    summarySection(advice, units, summary),
     dutySection(loaded, units, opts.caseFile),
     assumptionsSection(advice),
-    recommendationSection(advice, units, summary),
-    ...advice.ranking.map((r) => optionSection(r, advice, units, chartById)),
-    sheetSection(advice, units),
-    methodsSection(advice),
+    ...options,
+    methodsSection(),
+    referencesSection(refs),
     ...closingSections(),
+    sheet,
   ];
-  return { title: loaded.case.title, date: noteDate(opts.now), units, summary, sections };
+  const date = noteDate(opts.now);
+  const control = documentControl(loaded.given, loaded.case.title, date);
+  return { title: loaded.case.title, date, control, units, summary, sections };
 }

@@ -14,7 +14,7 @@ import {
 } from '../shaft-text.js';
 import { fmt, type UnitSystem } from '../units.js';
 import type { Block, NoteModel, Section } from './document.js';
-import { buildNote, noteDate, type NoteOptions } from './model.js';
+import { buildNote, documentControl, noteDate, type NoteOptions } from './model.js';
 import { OPTION_NAMES } from './option-sections.js';
 import { shaftDeflectionChart, shaftMomentChart, shaftSketchSvg } from './shaft-svg.js';
 
@@ -157,5 +157,7 @@ export function buildShaftNote(n: ShaftNoteInput, opts: Omit<NoteOptions, 'journ
     sections.push(...supportSections(note.sections, `support-${mark.toLowerCase()}`, `${mark} (${s.name})`, true));
     closing = note.sections.filter((x) => CLOSING.has(x.id));
   });
-  return { title: n.title, date: noteDate(opts.now), units: u, summary, sections: [...sections, ...closing] };
+  const date = noteDate(opts.now);
+  const control = documentControl(null, n.title, date);
+  return { title: n.title, date, control, units: u, summary, sections: [...sections, ...closing] };
 }
