@@ -2,7 +2,7 @@ import type { CaseSI } from '../../case/types.js';
 import { assumedFinding, finding, type Finding } from '../../core/finding.js';
 import { num } from '../../core/format.js';
 import { estimatedFatigueLimit } from './aiso.js';
-import { entriesForShaft, standardBores, type CatalogueEntry } from './catalogue.js';
+import { catalogue, entriesForShaft, standardBores, type CatalogueEntry } from './catalogue.js';
 import type { Notes } from './findings.js';
 import { kindType, type Arrangement, type KindForm, type RollingKind } from './kinds.js';
 import type { RollingType } from './life.js';
@@ -72,9 +72,50 @@ const BALL_C0_OVER_C_MAX = 1.2;
  * The candidates of a case [1–3]: the supplier's bearing first (when both its ratings are
  * given and positive), then the table's bearings of the shaft's bore (of the case's kind or
  * type, if it names one) that fit the axial room and the housing bore. What is left out, and
- * why, is said.
+ * why, is said. The same case (as far as candidates go) gets the same specs and notes from a
+ * memo (specsMemo).
  */
 export function candidateSpecs(c: CaseSI, notes: Notes): CandidateSpec[] {
+  const tables = catalogue();
+  const key = JSON.stringify([c.shaft.diameter, c.space, c.rolling ?? null], exactNumbers);
+  const hit = specsMemo.get(key);
+  if (hit && hit.tables === tables) {
+    for (const again of hit.replay) again(notes);
+    return [...hit.specs];
+  }
+  const replay: ((n: Notes) => void)[] = [];
+  const recorder: Notes = {
+    assumed: notes.assumed,
+    warnings: notes.warnings,
+    assume: (a) => {
+      replay.push((n) => n.assume(a));
+      notes.assume(a);
+    },
+    warn: (w, sameAs) => {
+      replay.push((n) => n.warn(w, sameAs));
+      notes.warn(w, sameAs);
+    },
+  };
+  const specs = specsOf(c, recorder);
+  if (specsMemo.size >= SPECS_MEMO_SIZE) specsMemo.clear();
+  specsMemo.set(key, { tables, specs, replay });
+  return [...specs];
+}
+
+/**
+ * The candidates of the cases seen last, with the notes they added, by what candidateSpecs
+ * reads of a case (the shaft diameter, the space, the rolling settings): a sweep over load
+ * and speed asks for the same candidates at every point. Checked against the tables in use.
+ */
+const specsMemo = new Map<
+  string,
+  { tables: CatalogueEntry[]; specs: CandidateSpec[]; replay: ((n: Notes) => void)[] }
+>();
+const SPECS_MEMO_SIZE = 16;
+/** Numbers in a memo key as their exact text (NaN and ±Infinity kept apart, which JSON would not). */
+const exactNumbers = (_: string, v: unknown): unknown => (typeof v === 'number' ? `${Object.is(v, -0) ? '-0' : v}` : v);
+
+function specsOf(c: CaseSI, notes: Notes): CandidateSpec[] {
   const d = c.shaft.diameter;
   const sameBore = d > 0 && Number.isFinite(d) ? entriesForShaft(d) : [];
   if (!(d > 0) || !Number.isFinite(d)) {
