@@ -112,6 +112,8 @@ function displayPath(file: string, cwd: string): string {
   return /[\s'"$`\\]/.test(p) ? `'${p.replace(/'/g, `'\\''`)}'` : p;
 }
 
+const NO_HEADER = 'the file was written by hand, and ask adds no header to it.';
+
 /** Ask every unanswered question, saving as it goes. Returns false when interrupted. */
 export async function runQuestions(session: Session, prompt: Prompter, say: (line: string) => void): Promise<boolean> {
   let section = '';
@@ -139,7 +141,11 @@ export async function runQuestions(session: Session, prompt: Prompter, say: (lin
       save(session, false);
     } catch (e) {
       if (!isInterrupt(e)) throw e;
-      if (q.kind !== 'choice' && typed.trim() !== '') session.state.draft = { id: q.id, text: typed };
+      if (q.kind !== 'choice' && typed.trim() !== '') {
+        session.state.draft = { id: q.id, text: typed };
+        // Only a file this tool started has the header that holds it; a person's file gets none.
+        if (!session.ours) say(wrapWords(`\n(The unfinished answer "${typed}" is not kept: ${NO_HEADER})`));
+      }
       save(session, false);
       return false;
     }

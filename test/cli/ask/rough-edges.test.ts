@@ -109,6 +109,15 @@ describe('--resume on a hand-written case', () => {
     expect(c.life.hours).toBe(25000);
   });
 
+  it('an answer left unfinished in a hand-written file is not kept there, and the user is told', async () => {
+    const cwd = fresh();
+    writeFileSync(join(cwd, 'pump.yaml'), HAND);
+    const s = session([{ interrupt: true, typed: '0.5 k' }], { resume: 'pump.yaml' }, cwd);
+    await s.run();
+    expect(readFileSync(join(cwd, 'pump.yaml'), 'utf8')).toBe(HAND);
+    expect(s.said.join(' ').replace(/\s+/g, ' ')).toContain('The unfinished answer "0.5 k" is not kept');
+  });
+
   it('a file this tool started keeps its header, and a comment added by hand survives', async () => {
     const first = session(['Irrigation pump', { interrupt: true }], { save: 'pump.yaml' });
     await first.run();
