@@ -1,5 +1,5 @@
 import type { OptionName } from '../../core/options.js';
-import type { GoverningMargin, SensitivityResult } from '../../explore/sensitivity.js';
+import { changeText, type GoverningMargin, type SensitivityResult } from '../../explore/sensitivity.js';
 
 import { axisLabels, linearTicks } from '../note/svg.js';
 import { esc } from './format.js';
@@ -17,8 +17,8 @@ import { esc } from './format.js';
  */
 
 const pct = (m: number | null) => (m === null ? '—' : `${m >= 0 ? '+' : ''}${(m * 100).toFixed(0)} %`);
-/** The governing check in words where the result carries them, else its id. */
-const checkWords = (m: GoverningMargin) => (m as { label?: string }).label || m.check;
+/** The governing check in words, else its id. */
+const checkWords = (m: GoverningMargin) => m.label || m.check;
 
 /** Geometry: whole width, label column, plot left and width, row height, plot top, px. */
 export const TORNADO = { width: 860, left: 300, plotWidth: 500, rowHeight: 26, top: 52, inset: 8 } as const;
@@ -75,9 +75,16 @@ export function tornadoSvg(r: SensitivityResult, o: OptionName): string {
     const steps = [...p.variations].sort((a, b) => a.step - b.step);
     const lowest = steps[0];
     const highest = steps[steps.length - 1];
+    const flipped = steps.filter((q) => q.flip).map((q) => changeText(q, p.changeUnit));
+    const name = p.label.length > 44 ? p.label.slice(0, 43) + '…' : p.label;
+    // A row whose step flips the advice says so under its name, in the label column.
     out.push(
-      `<text class="param" x="${L - 8}" y="${y + 16}" text-anchor="end">${esc(p.label.length > 44 ? p.label.slice(0, 43) + '…' : p.label)}</text>`,
+      `<text class="param" x="${L - 8}" y="${y + (flipped.length ? 11 : 16)}" text-anchor="end">${esc(name)}</text>`,
     );
+    if (flipped.length)
+      out.push(
+        `<text class="flip-note" x="${L - 8}" y="${y + 23}" text-anchor="end" font-size="10" fill="#b03a2e">${esc(`◆ flips at ${flipped.join(', ')}`)}</text>`,
+      );
     for (const [v, fill, dy] of [
       [lowest, '#c6c6d6', 3],
       [highest, `url(#hatch-${o})`, 12],
