@@ -1,7 +1,7 @@
 import { OPTIONS, type OptionName } from '../../core/options.js';
 import type { MapResult } from '../../explore/map.js';
 
-import { axisLabels, logTicks as logTicks125 } from '../note/svg.js';
+import { axisLabels, logTicks as logTicks125 } from '../note/ticks.js';
 import { caseCell, LETTER } from './map-text.js';
 import { esc, fmtLoad, fmtSpeed } from './format.js';
 

@@ -1,7 +1,7 @@
 import type { OptionName } from '../../core/options.js';
 import { changeText, type GoverningMargin, type SensitivityResult } from '../../explore/sensitivity.js';
 
-import { axisLabels, linearTicks } from '../note/svg.js';
+import { axisLabels, linearTicks } from '../note/ticks.js';
 import { esc } from './format.js';
 
 /**
