@@ -29,14 +29,15 @@ describe('note model', () => {
   it('has its sections in order, one per option in rank order', () => {
     const n = buildNote(loaded, a, { units: 'SI', now: clock, journalCurves });
     expect(n.sections.map((s) => s.id)).toEqual([
+      'recommendation',
       'duty',
       'assumptions',
-      'recommendation',
       ...a.ranking.map((r) => `option-${r.option}`),
-      'sheet',
       'methods',
+      'references',
       'cautions',
       'signoff',
+      'sheet',
     ]);
   });
   it('US units change the displayed figures, not the content', () => {

@@ -59,7 +59,7 @@ export class References {
       }
       return n;
     });
-    return `[${[...new Set(nums)].join(', ')}]`;
+    return `[${[...new Set(nums)].sort((a, b) => a - b).join(', ')}]`;
   }
 
   /** Every entry in citation order; entry n − 1 is reference [n]. */
