@@ -18,7 +18,16 @@ export type Block =
    * A table. `numeric` columns are right-aligned and never wrap (a number with its unit, a
    * margin, a citation); `widths` are suggested column widths in percent of the table.
    */
-  | { kind: 'table'; head: string[]; rows: Cell[][]; caption?: string; numeric?: number[]; widths?: number[] }
+  | {
+      kind: 'table';
+      head: string[];
+      rows: Cell[][];
+      caption?: string;
+      numeric?: number[];
+      widths?: number[];
+      /** A long, narrow table that prints in two columns side by side (HTML print only). */
+      twoUp?: boolean;
+    }
   /** The numbered reference list; entry i is cited as [i + 1]. */
   | { kind: 'refs'; items: string[] }
   | { kind: 'sub'; title: string }

@@ -60,9 +60,12 @@ footer { margin-top: 2rem; font-size: .8rem; border-top: 1px solid var(--rule); 
   h2, h3, caption { break-after: avoid; page-break-after: avoid; }
   section.page-break > h2 { break-before: page; page-break-before: always; }
   figure { margin: .5rem 0; }
-  figure svg { max-width: 100%; width: 118mm; }
-  figcaption { max-width: none; font-size: 7.5pt; }
-  ol.refs { font-size: 7pt; line-height: 1.25; }
+  figure svg { max-width: 100%; width: 112mm; }
+  figcaption { max-width: none; font-size: 7pt; }
+  ol.refs { font-size: 7pt; line-height: 1.25; columns: 2; column-gap: 6mm; }
+  .two-up { columns: 2; column-gap: 5mm; }
+  section[id$="sheet"] table { font-size: 6.5pt; }
+  .two-up caption { column-span: none; }
   table.signoff td { height: 1.8rem; }
   footer { margin-top: 1rem; font-size: 7.5pt; }
   a { color: inherit; text-decoration: none; }
@@ -75,7 +78,7 @@ const cssString = (t: string) => `"${t.replace(/[\\"<>\n]/g, (c) => `\\${c.charC
 /** The printed page's foot: the document number and revision, and page x of y. */
 function pageCss(c: DocumentControl): string {
   const id = cssString(`${c.number} rev. ${c.revision}`);
-  return `@page { size: portrait; margin: 14mm 13mm 16mm 13mm;
+  return `@page { size: portrait; margin: 12mm 11mm 14mm 11mm;
   @bottom-left { content: ${id}; font: 7.5pt Helvetica, Arial, sans-serif; color: #555; }
   @bottom-right { content: "page " counter(page) " of " counter(pages); font: 7.5pt Helvetica, Arial, sans-serif; color: #555; }
 }`;
@@ -102,7 +105,8 @@ function block(b: Block): string {
       const rows = b.rows
         .map((r) => `<tr>${r.map((c, i) => cell(c, b.numeric?.includes(i) === true)).join('')}</tr>`)
         .join('\n');
-      return `<table>${cap}${head}<tbody>\n${rows}\n</tbody></table>`;
+      const table = `<table>${cap}${head}<tbody>\n${rows}\n</tbody></table>`;
+      return b.twoUp ? `<div class="two-up">${table}</div>` : table;
     }
     case 'refs':
       return `<ol class="refs">${b.items.map((x, i) => `<li id="ref-${i + 1}">${h(x)}</li>`).join('')}</ol>`;

@@ -182,7 +182,8 @@ function dutySection(loaded: LoadedCase, units: UnitSystem, caseFile: string | u
       {
         kind: 'table',
         head: ['field', 'as given', 'as understood'],
-        widths: [30, 30, 40],
+        widths: [36, 28, 36],
+        twoUp: true,
         rows: dutyRows(loaded, units),
       },
     ],
