@@ -8,6 +8,10 @@ import { advise } from '../../src/advise/engine.js';
 import { noteCharts } from '../../src/report/note/charts.js';
 import { journalSpeedCurves } from '../../src/explore/journal-curves.js';
 import { INSET, lineChart, type ChartSpec } from '../../src/report/note/svg.js';
+import { shaftDeflectionChart, shaftMomentChart } from '../../src/report/note/shaft-svg.js';
+import { resolveLoads, shaftBeam, shaftStatics } from '../../src/calc/shaft/index.js';
+import type { ShaftSI } from '../../src/case/shaft-types.js';
+import type { ShaftAdviceView } from '../../src/report/shaft-text.js';
 import {
   byClass,
   groups,
@@ -172,4 +176,41 @@ describe('limit lines and points at the ends of a fixed range', () => {
     expect(byClass(off, 'ref')).toEqual([]);
     expect(off).toContain('limit above the range');
   });
+});
+
+describe('shaft charts', () => {
+  // Invented setting: a 30 mm conveyor idler shaft, supports at its left end and 400 mm along, one load between.
+  const shaft: ShaftSI = {
+    speed: 2,
+    diameter: 0.03,
+    modulus: 210e9,
+    segments: [],
+    supports: [
+      { name: 'left', at: 0, diameter: 0.03, locates: 'both' },
+      { name: 'right', at: 0.4, diameter: 0.03, locates: 'none' },
+    ],
+    loads: [{ at: 0.15, weight: { mass: 40 } }],
+    shock: 'none',
+  };
+  const resolved = resolveLoads(shaft.loads);
+  const statics = shaftStatics(shaft, resolved);
+  const beam = shaftBeam(shaft, resolved, statics);
+  const view = {
+    shaft: { maxDeflection: beam.maxDeflection, maxMoment: beam.maxMoment, diagram: beam.diagram },
+    supports: shaft.supports.map((x) => ({ name: x.name, at: x.at })),
+  } as unknown as ShaftAdviceView;
+  it.each([shaftMomentChart(view, 'SI'), shaftDeflectionChart(view, 'SI')])(
+    '$id: a support at the end of the shaft is drawn inside the frame; both axis ends labelled',
+    (c) => {
+      const svg = lineChart(c.spec!);
+      const { frame, xs, ys } = read(svg);
+      const refs = byClass(svg, 'ref');
+      expect(refs).toHaveLength(2);
+      for (const l of refs) expect(num(l, 'x1') - frame.x).toBeGreaterThanOrEqual(INSET - 0.1);
+      expect(Math.min(...xs.map((l) => l.x))).toBeCloseTo(frame.x + INSET, 0);
+      expect(Math.max(...ys.map((l) => l.y))).toBeCloseTo(frame.y + frame.height - INSET, 0);
+      expect(overlapsAcross(xs)).toEqual([]);
+      expect(overlapsDown(ys)).toEqual([]);
+    },
+  );
 });
