@@ -57,8 +57,10 @@ function subDict(objs: Map<number, Obj>, dict: string, key: string): string {
   const from = i;
   let depth = 0;
   for (; i < dict.length - 1; i++) {
-    if (dict[i] === '<' && dict[i + 1] === '<') (depth++, i++);
-    else if (dict[i] === '>' && dict[i + 1] === '>') {
+    if (dict[i] === '<' && dict[i + 1] === '<') {
+      depth++;
+      i++;
+    } else if (dict[i] === '>' && dict[i + 1] === '>') {
       depth--;
       i++;
       if (depth === 0) break;
