@@ -1,4 +1,5 @@
 import type { Command } from 'commander';
+import { unitsOption } from '../options.js';
 
 /** `shaftwise map <case>`: where each option wins over a load × speed plane. */
 export function registerMap(program: Command): void {
@@ -8,6 +9,7 @@ export function registerMap(program: Command): void {
     .argument('<case>', 'duty case file (YAML or JSON)')
     .option('--out <file>', 'write an SVG (.svg) or self-contained HTML (.html) map instead of the text map')
     .option('--force', 'replace an existing --out file')
+    .addOption(unitsOption())
     .option('--grid <n>', 'cells per axis, 2 to 200 (default: 60 for --out, 30 for text)')
     .option(
       '--load <min..max>',
@@ -31,6 +33,7 @@ export function registerMap(program: Command): void {
           speed?: string;
           scale?: string;
           full?: boolean;
+          units?: string;
         },
       ) => {
         const { UsageError } = await import('../../core/errors.js');
@@ -41,6 +44,8 @@ export function registerMap(program: Command): void {
           if (!m) throw new UsageError(`--out: got "${raw.out}"; expected a file name ending in .svg or .html`);
           kind = m[1]!.toLowerCase() === 'svg' ? 'svg' : 'html';
         }
+        const { outputOptions } = await import('../check.js');
+        const { units } = outputOptions({ units: raw.units });
         const grid = parseGrid(raw.grid, kind === 'text' ? 30 : 60);
         const load = raw.load === undefined ? undefined : parseRange('--load', raw.load, 'force', '100N..20kN');
         const speed = raw.speed === undefined ? undefined : parseRange('--speed', raw.speed, 'speed', '10rpm..5000rpm');
@@ -66,7 +71,7 @@ export function registerMap(program: Command): void {
           }
           const rep = await import('../../report/explore/shaft-map.js');
           if (kind === 'text') {
-            process.stdout.write(rep.shaftMapText(sm) + '\n');
+            process.stdout.write(rep.shaftMapText(sm, units) + '\n');
             return;
           }
           const { writeFileSafe } = await import('../write-file.js');
@@ -96,7 +101,7 @@ export function registerMap(program: Command): void {
         }
         if (kind === 'text') {
           const { mapText } = await import('../../report/explore/map-text.js');
-          process.stdout.write(mapText(m) + '\n');
+          process.stdout.write(mapText(m, units) + '\n');
           return;
         }
         const { mapSvg, mapHtml } = await import('../../report/explore/map-svg.js');

@@ -1,5 +1,6 @@
 import type { Command } from 'commander';
-import { formatOption } from '../options.js';
+import { formatOption, unitsOption } from '../options.js';
+import type { UnitSystem } from '../../report/units.js';
 import type { LoadedCase } from '../../case/load.js';
 
 /** `shaftwise sensitivity <case>`: which inputs move the margins, and where the advice flips. */
@@ -13,12 +14,15 @@ export function registerSensitivity(program: Command): void {
     .addOption(formatOption(['text', 'json', 'html']))
     .option('--out <file>', 'write to this file instead of standard output')
     .option('--force', 'replace an existing --out file')
+    .addOption(unitsOption())
     .exitOverride()
-    .action(async (file: string, raw: { format?: string; out?: string; force?: boolean }) => {
+    .action(async (file: string, raw: { format?: string; out?: string; force?: boolean; units?: string }) => {
       const { UsageError } = await import('../../core/errors.js');
       const format = raw.format ?? 'text';
       if (!['text', 'json', 'html'].includes(format))
         throw new UsageError(`--format: got "${format}"; expected one of: text, json, html`);
+      const { outputOptions } = await import('../check.js');
+      const { units } = outputOptions({ units: raw.units });
       const { loadAnyCaseFile } = await import('../../case/shaft-load.js');
       const any = loadAnyCaseFile(file);
       let text: string;
@@ -31,9 +35,9 @@ export function registerSensitivity(program: Command): void {
             ? rep.shaftSensitivityJson(r)
             : format === 'html'
               ? rep.shaftSensitivityHtml(r)
-              : rep.shaftSensitivityText(r);
+              : rep.shaftSensitivityText(r, units);
       } else {
-        text = await singleSupport(any.loaded, format);
+        text = await singleSupport(any.loaded, format, units);
       }
       if (raw.out === undefined) {
         process.stdout.write(text.endsWith('\n') ? text : text + '\n');
@@ -46,13 +50,13 @@ export function registerSensitivity(program: Command): void {
 }
 
 /** The sensitivity of a single-support case in the format asked for. */
-async function singleSupport(loaded: LoadedCase, format: string): Promise<string> {
+async function singleSupport(loaded: LoadedCase, format: string, units: UnitSystem): Promise<string> {
   const { computeSensitivity } = await import('../../explore/sensitivity.js');
   const r = await computeSensitivity(loaded.case, loaded.assumed);
   const rep = await import('../../report/explore/sensitivity-report.js');
   return format === 'json'
     ? rep.sensitivityJson(r)
     : format === 'html'
-      ? rep.sensitivityHtml(r)
-      : rep.sensitivityText(r);
+      ? rep.sensitivityHtml(r, units)
+      : rep.sensitivityText(r, units);
 }

@@ -1,5 +1,12 @@
-/** Axis and legend numbers for the explore reports: SI with an engineering multiple, 3 figures. */
-export function fmtLoad(n: number): string {
+/** Newtons in one pound-force. */
+export const LBF = 4.4482216152605;
+
+/**
+ * Axis and legend numbers for the explore reports, 3 figures: SI with an engineering
+ * multiple, or pound-force for US units.
+ */
+export function fmtLoad(n: number, units: 'SI' | 'US' = 'SI'): string {
+  if (units === 'US') return `${+(n / LBF).toPrecision(3)} lbf`;
   return n >= 1e6
     ? `${+(n / 1e6).toPrecision(3)} MN`
     : n >= 1e3

@@ -2,7 +2,9 @@ import { OPTIONS } from '../../core/options.js';
 import type { MapResult } from '../../explore/map.js';
 
 import { logTicks } from '../../explore/axes.js';
-import { fmtLoad, fmtSpeed } from './format.js';
+import { LBF, fmtLoad, fmtSpeed } from './format.js';
+import { fitWidth } from '../text.js';
+import type { UnitSystem } from '../units.js';
 
 export const LETTER = { bushing: 'B', rolling: 'R', journal: 'J' } as const;
 export const NONE = '.';
@@ -41,19 +43,21 @@ function tickCells(xs: number[], scale = 1): Map<number, number> {
  * 40 or fewer), load up the page, speed across; B/R/J the winner, '.' none feasible, '@'
  * the case's own point. Below it, where each option is feasible ('#'), at half width.
  */
-export function mapText(m: MapResult): string {
+export function mapText(m: MapResult, units: UnitSystem = 'SI'): string {
   const n = m.speeds.length;
   const w = n <= 40 ? 2 : 1;
   const at = caseCell(m);
   const k = m.loadScale?.reference;
-  const yTicks = tickCells(m.loads, k ? 1 / k : 1);
-  const yLabel = (v: number) => (k ? `${v}×` : fmtLoad(v));
+  // Load ticks fall on round numbers of the unit shown (N or lbf); a shaft map's on round factors k.
+  const yTicks = tickCells(m.loads, k ? 1 / k : units === 'US' ? 1 / LBF : 1);
+  const yLabel = (v: number) => (k ? `${v}×` : fmtLoad(units === 'US' ? v * LBF : v, units));
+  const load = (n: number) => fmtLoad(n, units);
   const pad = Math.max(...[...yTicks.values()].map((v) => yLabel(v).length), 6) + 1;
   const lines: string[] = [];
   lines.push(`Selection map: ${m.title}`);
   lines.push(
     k
-      ? `load scale k of every load on the shaft (up; k = 1: ${fmtLoad(k)} at this support) × speed (across), log scales`
+      ? `load scale k of every load on the shaft (up; k = 1: ${load(k)} at this support) × speed (across), log scales`
       : `radial load of the governing point (up) × speed (across), log scales`,
   );
   lines.push('');
@@ -82,7 +86,7 @@ export function mapText(m: MapResult): string {
   lines.push('');
   const winner = at ? m.cells[at.i]![at.j]!.winner : null;
   lines.push(
-    `Legend: B bushing wins, R rolling bearing wins, J journal bearing wins, ${NONE} none feasible, ${CASE_MARK} the case (${k ? 'k = 1, ' : ''}${fmtLoad(m.reference.load)}, ${fmtSpeed(m.reference.speed)}; ` +
+    `Legend: B bushing wins, R rolling bearing wins, J journal bearing wins, ${NONE} none feasible, ${CASE_MARK} the case (${k ? 'k = 1, ' : ''}${load(m.reference.load)}, ${fmtSpeed(m.reference.speed)}; ` +
       (at ? `map cell: ${winner ?? 'none'}; ` : 'outside the map; ') +
       `full advice: ${m.atCase.recommendation ?? 'none feasible'})`,
   );
@@ -91,15 +95,19 @@ export function mapText(m: MapResult): string {
   const cols = [...Array(n).keys()].filter((j) => n <= 40 || j % 2 === 0);
   const share = OPTIONS.map((_, k) => m.cells.flat().filter((c) => c.feasible[k]).length / (n * m.loads.length));
   lines.push('Where each option is feasible (#), same axes:');
-  lines.push(OPTIONS.map((o, k) => `${o} ${Math.round(share[k]! * 100)} %`.padEnd(cols.length)).join('   '));
+  lines.push(
+    OPTIONS.map((o, k) => `${o} ${Math.round(share[k]! * 100)} %`.padEnd(cols.length))
+      .join('   ')
+      .trimEnd(),
+  );
   for (let i = m.loads.length - 1; i >= 0; i--) {
     lines.push(OPTIONS.map((_, k) => cols.map((j) => (m.cells[i]![j]!.feasible[k] ? '#' : '.')).join('')).join('   '));
   }
   lines.push('');
   lines.push(
-    `Ranges: ${k ? `load scale ${+(m.ranges.load[0] / k).toPrecision(3)}× to ${+(m.ranges.load[1] / k).toPrecision(3)}× (` : 'load '}${fmtLoad(m.ranges.load[0])} to ${fmtLoad(m.ranges.load[1])}${k ? ' at this support)' : m.ranges.loadGiven ? '' : ' (0.1× to 10× the case)'}, speed ${fmtSpeed(m.ranges.speed[0])} to ${fmtSpeed(m.ranges.speed[1])}${m.ranges.speedGiven ? '' : ' (0.1× to 10× the case)'}; ${m.loads.length} × ${n} cells.`,
+    `Ranges: ${k ? `load scale ${+(m.ranges.load[0] / k).toPrecision(3)}× to ${+(m.ranges.load[1] / k).toPrecision(3)}× (` : 'load '}${load(m.ranges.load[0])} to ${load(m.ranges.load[1])}${k ? ' at this support)' : m.ranges.loadGiven ? '' : ' (0.1× to 10× the case)'}, speed ${fmtSpeed(m.ranges.speed[0])} to ${fmtSpeed(m.ranges.speed[1])}${m.ranges.speedGiven ? '' : ' (0.1× to 10× the case)'}; ${m.loads.length} × ${n} cells.`,
   );
   for (const note of m.notes) lines.push(`- ${note}`);
   lines.push(`- Journal designs used: ${m.journal.designs.map((d) => d.label).join('; ')}.`);
-  return lines.join('\n');
+  return fitWidth(lines.join('\n'));
 }

@@ -3,30 +3,32 @@ import type { ShaftMapResult } from '../../explore/shaft-map.js';
 import { mapSvg } from './map-svg.js';
 import { mapText } from './map-text.js';
 import { esc, fmtLoad } from './format.js';
+import { fmt, type UnitSystem } from '../units.js';
+import { fitWidth } from '../text.js';
 
 const letter = (i: number) => String.fromCharCode(65 + i);
 const deg = (rad: number) => `${+((rad * 180) / Math.PI).toPrecision(3)}°`;
 
 /** One line per support: its position, radial load and slope at k = 1, and the whole-shaft advice. */
-function supportLines(r: ShaftMapResult): string[] {
+function supportLines(r: ShaftMapResult, units: UnitSystem = 'SI'): string[] {
   return r.supports.map(
     (s, i) =>
-      `support ${letter(i)} "${s.name}" at ${+(s.at * 1e3).toPrecision(4)} mm: radial load ${fmtLoad(s.radial)} and slope ${deg(s.slope)} at k = 1; advised: ${s.recommendation ?? 'none feasible'}`,
+      `support ${letter(i)} "${s.name}" at ${fmt(s.at, 'm', units, 4)}: radial load ${fmtLoad(s.radial, units)} and slope ${deg(s.slope)} at k = 1; advised: ${s.recommendation ?? 'none feasible'}`,
   );
 }
 
 /** The maps of a whole shaft as text: a heading, then each support's map under its name. */
-export function shaftMapText(r: ShaftMapResult): string {
+export function shaftMapText(r: ShaftMapResult, units: UnitSystem = 'SI'): string {
   const head = [
     `Selection maps of a whole shaft: ${r.title}`,
     `Every load on the shaft scaled together by k (${r.loadScale[0]}× to ${r.loadScale[1]}×) against shaft speed; one map per support.`,
-    ...supportLines(r).map((l) => `  ${l}`),
+    ...supportLines(r, units).map((l) => `  ${l}`),
   ];
   const maps = r.supports.map((s, i) => {
     const title = `Support ${letter(i)}: ${s.name}`;
-    return [title, '='.repeat(title.length), mapText(s.map)].join('\n');
+    return [title, '='.repeat(title.length), mapText(s.map, units)].join('\n');
   });
-  return [head.join('\n'), ...maps].join('\n\n');
+  return fitWidth([head.join('\n'), ...maps].join('\n\n'));
 }
 
 /** Each support's SVG, its outer tag turned into a nested svg at (0, y); the pattern definitions kept once. */

@@ -2,17 +2,19 @@ import type { ShaftSensitivityResult } from '../../explore/shaft-sensitivity.js'
 
 import { sensitivityHtml, sensitivityText } from './sensitivity-report.js';
 import { esc } from './format.js';
+import { fitWidth } from '../text.js';
+import type { UnitSystem } from '../units.js';
 
 const letter = (i: number) => String.fromCharCode(65 + i);
 
 /** A whole shaft's sensitivity as text: what the inputs are, then each support's table under its name. */
-export function shaftSensitivityText(r: ShaftSensitivityResult): string {
+export function shaftSensitivityText(r: ShaftSensitivityResult, units: UnitSystem = 'SI'): string {
   const head = [`Sensitivity of a whole shaft: ${r.title}`, ...r.notes.map((n) => `- ${n}`)].join('\n');
   const parts = r.supports.map((s, i) => {
     const title = `Support ${letter(i)}: ${s.name} (the support's own inputs)`;
-    return [title, '='.repeat(title.length), sensitivityText(s.sensitivity)].join('\n');
+    return [title, '='.repeat(title.length), sensitivityText(s.sensitivity, units)].join('\n');
   });
-  return [head, ...parts].join('\n\n');
+  return fitWidth([head, ...parts].join('\n\n'));
 }
 
 /** JSON: { title, notes, supports: [{ name, at (m), sensitivity }] }, SI numbers, margins as fractions. */
