@@ -140,8 +140,8 @@ describe('shaft note', () => {
     expect(html).toContain('id="chart-shaft-moment"');
     expect(html).toContain('id="chart-shaft-deflection"');
     expect(html).toContain('Reactions, bending and slopes');
-    expect(html).toContain('A (motor side): Recommendation and ranking');
-    expect(html).toContain('B (outboard): Recommendation and ranking');
+    expect(html).toContain('A (motor side): Summary and recommendation');
+    expect(html).toContain('B (outboard): Summary and recommendation');
     // Every element id once: the two supports' charts are told apart.
     const ids = [...html.matchAll(/ id="([^"]+)"/g)].map((m) => m[1]);
     expect(new Set(ids).size).toBe(ids.length);

@@ -109,7 +109,7 @@ function block(b: Block): string {
       return b.twoUp ? `<div class="two-up">${table}</div>` : table;
     }
     case 'refs':
-      return `<ol class="refs">${b.items.map((x, i) => `<li id="ref-${i + 1}">${h(x)}</li>`).join('')}</ol>`;
+      return `<ol class="refs">${b.items.map((x) => `<li>${h(x)}</li>`).join('')}</ol>`;
     case 'chart':
       return b.chart.spec
         ? `<figure class="chart-figure" data-chart="${h(b.chart.id)}">${lineChart(b.chart.spec)}<figcaption>${h(b.chart.caption)}</figcaption></figure>`

@@ -40,7 +40,7 @@ export interface ShaftNoteInput {
 const CLOSING = new Set(['cautions', 'signoff']);
 
 /** A support's note sections, ids and chart ids prefixed so that two supports never share one. */
-function supportSections(sections: Section[], prefix: string, name: string, first: boolean): Section[] {
+function supportSections(sections: Section[], prefix: string, name: string): Section[] {
   const block = (b: Block): Block =>
     b.kind === 'chart'
       ? {
@@ -54,11 +54,11 @@ function supportSections(sections: Section[], prefix: string, name: string, firs
       : b;
   return sections
     .filter((s) => !CLOSING.has(s.id))
-    .map((s, i) => ({
+    .map((s) => ({
       ...s,
       id: `${prefix}-${s.id}`,
       title: `${name}: ${s.title}`,
-      pageBreak: s.pageBreak === true || (first && i === 0),
+      pageBreak: s.pageBreak === true,
       blocks: s.blocks.map(block),
     }));
 }
@@ -154,7 +154,7 @@ export function buildShaftNote(n: ShaftNoteInput, opts: Omit<NoteOptions, 'journ
       journalCurves: n.journalCurves[i] ?? null,
     });
     const mark = SUPPORT_MARKS[i]!;
-    sections.push(...supportSections(note.sections, `support-${mark.toLowerCase()}`, `${mark} (${s.name})`, true));
+    sections.push(...supportSections(note.sections, `support-${mark.toLowerCase()}`, `${mark} (${s.name})`));
     closing = note.sections.filter((x) => CLOSING.has(x.id));
   });
   const date = noteDate(opts.now);
