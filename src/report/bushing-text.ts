@@ -13,9 +13,10 @@ function outOfRange(m: BushingResult['materials'][number]): boolean {
 /** The plain-bushing check for a person: a summary over materials, then each material's checks. */
 export function bushingText(r: BushingResult, units: UnitSystem): string {
   const out: string[] = [heading('Plain bushing (boundary lubricated)')];
+  // Two tables so each fits 100 columns: the size of each material, then its duty figures.
   out.push(
     table(
-      ['', 'material', 'needs', 'length', 'shortest', 'OD', 'P', 'PV', 'life: short / typical / long', 'temp'],
+      ['', 'material', 'needs', 'length', 'shortest', 'OD'],
       r.materials.map((m) => [
         mark(m.feasible),
         m.id,
@@ -23,6 +24,14 @@ export function bushingText(r: BushingResult, units: UnitSystem): string {
         fmt(m.length, 'm', units),
         fmt(m.minLength, 'm', units),
         fmt(m.outerDiameter, 'm', units),
+      ]),
+    ),
+  );
+  out.push(
+    table(
+      ['material', 'P', 'PV', 'life: short / typical / long', 'temp'],
+      r.materials.map((m) => [
+        m.id,
         fmt(m.pressure, 'Pa', units),
         fmt(m.pv, 'Pa*m/s', units),
         `${fmt(m.lifeBand.short, 'h', units, 2)} / ${fmt(m.lifeBand.typical, 'h', units, 2)} / ${fmt(m.lifeBand.long, 'h', units, 2)}`,

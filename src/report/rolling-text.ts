@@ -1,7 +1,7 @@
 import type { RollingCandidate, RollingResult } from '../calc/rolling/types.js';
 import { describe } from './findings/index.js';
 import { num } from '../core/format.js';
-import { fmt, type UnitSystem } from './units.js';
+import { fmt, fmtValue, type UnitSystem } from './units.js';
 import { table } from './table.js';
 import { checksTable, heading, mark, paint } from './text.js';
 
@@ -43,34 +43,27 @@ export function rollingText(r: RollingResult, units: UnitSystem): string {
     out.push(
       `${r.candidates.length} candidates of ${r.kinds.length} kinds fit the space; each kind's choice (or nearest miss) is shown, every candidate is in --format json.`,
     );
+    // Two tables so each fits 100 columns: the bearing and its ratings, then its lives and running figures.
     out.push(
       table(
-        [
-          '',
-          'bearing',
-          'kind',
-          'd × D × B',
-          'C',
-          'C needed',
-          'C0',
-          'rating',
-          'L10h',
-          'a_ISO',
-          'κ',
-          'L10mh',
-          's0',
-          'n·dm',
-          'friction',
-        ],
+        ['', 'bearing', 'kind', 'd × D × B', 'C', 'C needed', 'C0', 'rating'],
         shown.map((k) => [
           mark(k.feasible),
           k.id,
           k.arrangement === 'single' ? k.kind : `${k.kind}, ${k.arrangement}`,
-          `${fmt(k.bore, 'm', units)} × ${k.outerDiameter === null ? '—' : fmt(k.outerDiameter, 'm', units)} × ${k.width === null ? '—' : fmt(k.width, 'm', units)}`,
+          `${fmtValue(k.bore, 'm', units)} × ${fmtValue(k.outerDiameter, 'm', units)} × ${fmt(k.width, 'm', units)}`,
           fmt(k.dynamicRating, 'N', units),
           k.requiredDynamicRating === null ? '—' : fmt(k.requiredDynamicRating, 'N', units),
           fmt(k.staticRating, 'N', units),
           k.ratingSource,
+        ]),
+      ),
+    );
+    out.push(
+      table(
+        ['bearing', 'L10h', 'a_ISO', 'κ', 'L10mh', 's0', 'n·dm', 'friction'],
+        shown.map((k) => [
+          k.id,
           fmt(k.L10h, 'h', units),
           k.aISO === null ? '—' : k.aISO.toFixed(2),
           k.kappa === null ? '—' : k.kappa.toFixed(2),

@@ -13,7 +13,8 @@ export function table(head: string[], rows: string[][], indent = '  ', width = W
       rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+(e[-+]?\d+)?( .*)?$|^—$|^excluded$/.test(strip(r[i] ?? ''))),
   );
   const widths = head.map((h, i) => Math.max(len(h), ...rows.map((r) => len(r[i] ?? ''))));
-  fitColumns(widths, numeric, head, width - len(indent));
+  const words = head.map((h, i) => [h, ...rows.map((r) => r[i] ?? '')].flatMap((c) => c.split(' ')));
+  fitColumns(widths, numeric, words, width - len(indent));
   const line = (cells: string[]) =>
     indent +
     cells
@@ -33,10 +34,12 @@ export function table(head: string[], rows: string[][], indent = '  ', width = W
 }
 
 /** Narrow the widest text column, one character at a time, until the row fits (or nothing can give). */
-function fitColumns(widths: number[], numeric: boolean[], head: string[], room: number): void {
+function fitColumns(widths: number[], numeric: boolean[], words: string[][], room: number): void {
   const total = () => widths.reduce((s, w) => s + w, 0) + 2 * (widths.length - 1);
-  // A text column keeps at least its heading's longest word and 8 characters.
-  const floor = head.map((h, i) => (numeric[i] ? widths[i]! : Math.max(8, ...h.split(' ').map(len))));
+  // A text column keeps at least 8 characters and its longest word (up to 24), so words break between them.
+  const floor = words.map((_, i) =>
+    numeric[i] ? widths[i]! : Math.min(widths[i]!, Math.max(8, ...words[i]!.map((w) => Math.min(24, len(w))))),
+  );
   while (total() > room) {
     let widest = -1;
     for (let i = 0; i < widths.length; i++)
