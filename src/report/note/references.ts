@@ -24,8 +24,8 @@ export function sourceParts(source: string): string[] {
   return out.map((s) => s.trim()).filter((s) => s.length > 0);
 }
 
-/** A part that names a source of its own (a year, a standard, a mark); other parts continue the one before. */
-const STANDALONE = /\d{4}|\bISO\b|ASTM|common practice|from memory|\bseen\b|the case|definition/i;
+/** A part that names a source of its own (a year 1800–2099, a standard, a mark); other parts continue the one before. */
+const STANDALONE = /\b(?:1[89]|20)\d\d\b|\bISO\b|ASTM|common practice|from memory|\bseen\b|the case|definition/i;
 
 /**
  * The works a source string names: its top-level parts, each part that does not name a source
