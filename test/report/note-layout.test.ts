@@ -101,7 +101,7 @@ describe('document control', () => {
     );
     expect(html.stdout).toContain('<th scope="row">Project</th><td>Snub line 2</td>');
     expect(html.stdout).toMatch(
-      /@bottom-left \{ content: "DR-7\\3c \/style\\3e \\3c script\\3e x\\3c \/script\\3e  rev\. C"/,
+      /@bottom-left \{ content: "DR-7\\3c \/style\\3e \\3c script\\3e x\\3c \/script\\3e {2}rev\. C"/,
     );
     const md = runCli(['advise', file, '--format', 'md']);
     expect(md.stdout).toContain('revision C · project Snub line 2');
