@@ -128,7 +128,7 @@ describe('shaftwise map', () => {
     expect(r.code).toBe(0);
     const s = readFileSync(svg, 'utf8');
     expect(s.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
-    for (const tick of ['>1 kN<', '>10 kN<', '>100<', '>200<', '>500<', '>1000<', '>5000<']) expect(s).toContain(tick);
+    for (const tick of ['>1 kN<', '>10 kN<', '>100<', '>200<', '>500<', '>1000<', '>6000<']) expect(s).toContain(tick);
     const html = join(d, 'm.html');
     expect(runCli(['map', demo, '--grid', '10', '--out', html]).code).toBe(0);
     expect(readFileSync(html, 'utf8')).toMatch(/^<!doctype html>[\s\S]*<svg[\s\S]*<\/html>/);
