@@ -67,6 +67,8 @@ beforeAll(() => {
       dependencies: repoPkg.dependencies,
       bin: repoPkg.bin,
       engines: repoPkg.engines,
+      // npm ci runs a package's install scripts only when its lockfile entry says it has one.
+      ...(repoPkg.scripts.postinstall ? { hasInstallScript: true } : {}),
     },
   };
   for (const [path, entry] of Object.entries(repoLock.packages as Record<string, { dev?: true; devOptional?: true }>))
@@ -91,6 +93,10 @@ describe('the tarball', () => {
       expect(files).toContain(f.replace(/^\.\//, ''));
     for (const f of EXAMPLES) expect(files).toContain(`examples/${f}`);
     for (const dir of ['data/', 'rules/']) expect(files.some((f) => f.startsWith(dir))).toBe(true);
+    // The start-up snapshot's script ships; its blob is built at install (postinstall), never packed.
+    for (const f of ['bin/build-snapshot.mjs', 'dist/snapshot/shaftwise.cjs', 'dist/snapshot/shaftwise.cjs.sha256'])
+      expect(files).toContain(f);
+    expect(files.filter((f) => /\.blob|shaftwise\.meta$/.test(f))).toEqual([]);
     const sources = (f: string) => /^(src|test|bench|scripts)\//.test(f) || (f.endsWith('.ts') && !f.endsWith('.d.ts'));
     expect(files.filter(sources)).toEqual([]);
   });
@@ -244,6 +250,15 @@ describe('the installed shaftwise command', () => {
     const r = run(bin(), ['--help']);
     expect(r.code, r.stderr).toBe(0);
     expect(r.stdout).toMatch(/\badvise\b/);
+  });
+
+  it('starts from the snapshot that postinstall built', () => {
+    const r = run('sh', ['-x', bin(), '--version']);
+    expect(r.code, r.stderr).toBe(0);
+    expect(r.stdout.trim()).toBe(repoPkg.version);
+    expect(r.stderr).toMatch(
+      /^\+ exec .* --snapshot-blob \S*node_modules\/shaftwise\/dist\/snapshot\/shaftwise\.blob/m,
+    );
   });
 
   it('advise on a shipped example prints what the repository CLI prints', () => {
