@@ -62,3 +62,6 @@ export interface NoteModel {
   summary: string;
   sections: Section[];
 }
+
+/** A note that opens with its summary section states the recommendation there, not again above it. */
+export const summaryFirst = (n: NoteModel): boolean => n.sections[0]?.id === 'recommendation';

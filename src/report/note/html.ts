@@ -1,5 +1,5 @@
 import { escapeHtml as h } from './escape.js';
-import type { Block, Cell, DocumentControl, NoteModel } from './document.js';
+import { summaryFirst, type Block, type Cell, type DocumentControl, type NoteModel } from './document.js';
 import { lineChart } from './svg.js';
 
 /**
@@ -159,8 +159,7 @@ ${pageCss(n.control)}</style>
 <h1>Design-review note: ${h(n.title)}</h1>
 ${controlTable(n)}
 </header>
-<p class="summary">${h(n.summary)}</p>
-${sections}
+${summaryFirst(n) ? '' : `<p class="summary">${h(n.summary)}</p>\n`}${sections}
 <footer>${h("Concept-stage estimate: confirm with the supplier's data and by test. Bearing failure can injure people: follow local codes, standards and licensed engineering practice.")}</footer>
 </body>
 </html>

@@ -1,5 +1,5 @@
 import { escapeMd } from './escape.js';
-import type { Block, Cell, NoteModel } from './document.js';
+import { summaryFirst, type Block, type Cell, type NoteModel } from './document.js';
 
 /**
  * The note as GitHub-flavoured Markdown: headings, pipe tables, lists. Charts are not drawn
@@ -14,8 +14,7 @@ export function renderMarkdown(n: NoteModel): string {
     '',
     `Date: ${n.date} · Units: ${n.units} · Written by shaftwise`,
     '',
-    `**${escapeMd(n.summary)}**`,
-    '',
+    ...(summaryFirst(n) ? [] : [`**${escapeMd(n.summary)}**`, '']),
   ];
   for (const s of n.sections) {
     out.push(`## ${escapeMd(s.title)}`, '');
