@@ -3,25 +3,28 @@
 // round — and compared by their medians, so drift in machine load hits all of them alike.
 import { spawnSync } from 'node:child_process';
 
-/** Wall time of one run of `node ...args`, ms; `ok` lists the exit codes that count as success. */
-export function once(args, { cwd, ok = [0] } = {}) {
+/**
+ * Wall time of one run of `node ...args` (or of `cmd ...args`), ms; `ok` lists the exit codes
+ * that count as success.
+ */
+export function once(args, { cwd, ok = [0], cmd = process.execPath } = {}) {
   const t0 = process.hrtime.bigint();
-  const r = spawnSync(process.execPath, args, { cwd, stdio: 'ignore' });
-  if (!ok.includes(r.status)) throw new Error(`node ${args.join(' ')} exited ${r.status}`);
+  const r = spawnSync(cmd, args, { cwd, stdio: 'ignore' });
+  if (!ok.includes(r.status)) throw new Error(`${cmd} ${args.join(' ')} exited ${r.status}`);
   return Number(process.hrtime.bigint() - t0) / 1e6;
 }
 
 export const median = (t) => [...t].sort((x, y) => x - y)[Math.floor(t.length / 2)];
 
 /**
- * Time each entry of `commands` ({ name, args, ok? }) over `runs` interleaved rounds, after one
+ * Time each entry of `commands` ({ name, args, ok?, cmd? }) over `runs` interleaved rounds, after one
  * warm-up round (`warmup: false` when the caller has just run each command itself).
  * Returns { name: { median, fastest, all } }.
  */
 export function interleaved(commands, runs, cwd, { warmup = true } = {}) {
-  if (warmup) for (const c of commands) once(c.args, { cwd, ok: c.ok });
+  if (warmup) for (const c of commands) once(c.args, { cwd, ok: c.ok, cmd: c.cmd });
   const times = commands.map(() => []);
-  for (let i = 0; i < runs; i++) commands.forEach((c, k) => times[k].push(once(c.args, { cwd, ok: c.ok })));
+  for (let i = 0; i < runs; i++) commands.forEach((c, k) => times[k].push(once(c.args, { cwd, ok: c.ok, cmd: c.cmd })));
   return Object.fromEntries(
     commands.map((c, k) => [c.name, { median: median(times[k]), fastest: Math.min(...times[k]), all: times[k] }]),
   );

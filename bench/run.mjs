@@ -37,6 +37,12 @@ const BENCHMARKS = [
     full: ['21', '--', 'advise', DEMO],
     quick: ['3', '--', 'advise', DEMO],
   },
+  {
+    name: 'startup help',
+    file: 'startup.mjs',
+    full: ['15', '--', '--help'],
+    quick: ['3', '--', '--help'],
+  },
   { name: 'batch', file: 'batch.mjs', full: ['3', '200'], quick: ['1', '20'] },
   // In process (solver cost per point, no start-up): its figures are times, not ratios.
   {

@@ -88,14 +88,22 @@ describe('bin/shaftwise', () => {
     const root = pkg('linked', usable);
     mkdirSync(join(tmp, 'linked-bin'));
     symlinkSync(join(root, 'bin/shaftwise'), join(tmp, 'linked-bin/shaftwise'));
-    const r = spawnSync('sh', ['-x', join(tmp, 'linked-bin/shaftwise'), '--version'], {
+    const r = spawnSync('sh', ['-x', join(tmp, 'linked-bin/shaftwise'), 'check', '--help'], {
       cwd: ROOT,
       encoding: 'utf8',
       env,
     });
     expect(r.stderr).toContain('--snapshot-blob');
-    expect(r.stdout.trim()).toBe(JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')).version);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/^Usage: shaftwise check/);
   });
+
+  for (const flag of ['--help', '--version'])
+    it(`runs the bundle's light path for ${flag} alone, even with a usable snapshot`, () => {
+      const r = launch(pkg(`light${flag}`, usable), [flag]);
+      expect(r.ran).toBe('bundle');
+      expect(r.code).toBe(0);
+    });
 
   const fallbacks: [string, (dir: string, root: string) => void, NodeJS.ProcessEnv?][] = [
     ['no blob', () => {}],

@@ -93,7 +93,7 @@ afterAll(() => {
 describe('the start-up snapshot', () => {
   it('is built (npm run build) and used by the launcher', async () => {
     expect(existsSync(BLOB), 'npm run build makes dist/snapshot/shaftwise.blob').toBe(true);
-    const r = await both(['--version']);
+    const r = await both(['advise', '--help']);
     expect(r.usedBlob).toBe(true);
     expect(r.snap).toEqual(r.plain);
   });
@@ -119,8 +119,8 @@ describe('the start-up snapshot', () => {
       ['advise', 'examples/shaft/cider-mill-crusher-shaft.yaml', '--format', 'html'],
       ['advise', 'examples/packaging-worm-drive.yaml', '--units', 'US', '--explain'],
       ['check', 'journal', 'examples/irrigation-pump-lineshaft.yaml', '--format', 'json'],
-      ['--help'],
       ['advise', '--help'],
+      ['--debug', '--help'],
       [],
       ['frobnicate'],
       ['advise', join(tmp, 'missing.yaml')],
