@@ -23,8 +23,13 @@ export function decidingReasons(r: RankedOption, a: AdviceResult, u: UnitSystem)
           `${k.label}: ${fmt(k.value, k.unit, u)} against ${k.sense === 'max' ? '≤' : '≥'} ${fmt(k.limit, k.unit, u)}`,
       );
     for (const e of r.excluded) {
-      if (out.length >= 3) break;
-      out.push(describe(e));
+      const text = describe(e);
+      // An exclusion that restates a failing check already listed adds nothing.
+      const restates = r.failed
+        .slice(0, 2)
+        .some((k) => text.toLowerCase().startsWith(`fails: ${k.label.toLowerCase()}`));
+      if (out.length >= 3 || restates) continue;
+      out.push(text);
     }
     return out.length ? out : ['its check found no feasible design'];
   }
@@ -80,7 +85,12 @@ export function summarySection(advice: AdviceResult, units: UnitSystem, recommen
     { kind: 'sub', title: 'What decided' },
     {
       kind: 'list',
-      items: advice.ranking.map((r) => `${OPTION_NAMES[r.option]}: ${decidingReasons(r, advice, units).join('; ')}.`),
+      items: advice.ranking.map(
+        (r) =>
+          `${OPTION_NAMES[r.option]}: ${decidingReasons(r, advice, units)
+            .map((x) => x.replace(/\.+$/, ''))
+            .join('; ')}.`,
+      ),
     },
     { kind: 'p', text: recommendation, strong: true },
     {
