@@ -53,7 +53,11 @@ export function buildProgram(packageJson: URL): Command {
     .option('--debug', 'print the full trace of an internal defect')
     .exitOverride()
     .showHelpAfterError('(run shaftwise --help for usage)')
-    .configureOutput({ writeErr: (s) => process.stderr.write(s) });
+    // Commander's own messages ("error: unknown option …") in the style of every other message: "shaftwise: …".
+    .configureOutput({
+      writeErr: (s) => process.stderr.write(s),
+      outputError: (s, write) => write(s.replace(/^error: /, 'shaftwise: ')),
+    });
 
   registerCheck(program);
   registerAdvise(program);

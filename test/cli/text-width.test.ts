@@ -186,3 +186,17 @@ describe('advise --format json --out', () => {
     expect(readFileSync(out, 'utf8')).not.toBe('mine\n');
   });
 });
+
+describe('one style for error messages', () => {
+  it.each([
+    [['advise', SINGLE[0]!, '--colour'], /^shaftwise: unknown option '--colour'/],
+    [['advise'], /^shaftwise: missing required argument 'case'/],
+    [['advise', SINGLE[0]!, '--units', 'metric'], /^shaftwise: --units: got "metric"; expected SI or US/],
+    [['map', SINGLE[0]!, '--units', 'metric'], /^shaftwise: --units: got "metric"; expected SI or US/],
+  ])('%j: exit 2, "shaftwise: " and the message', (args, msg) => {
+    const r = runCli(args);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(msg);
+    expect(r.stderr).not.toMatch(/^error:/m);
+  });
+});
