@@ -188,6 +188,9 @@ describe('start-up order (the normal bundle)', () => {
   it("zod's compiled parser is never built: jitless is set before the first schema", () => {
     expect(calls(MAIN, ['advise', 'examples/sawmill-infeed-roller.yaml', '--format', 'json'])).toBe(0);
     expect(calls(MAIN, ['check', 'rolling', 'examples/packaging-worm-drive.yaml'])).toBe(0);
+    // The snapshot's script, run as a plain script: the order its modules are evaluated in when the snapshot is built.
+    const script = join(ROOT, 'dist/snapshot/shaftwise.cjs');
+    expect(calls(script, ['advise', 'examples/packaging-worm-drive.yaml', '--format', 'json'])).toBe(0);
   });
 
   it('the count does see a schema built before the setting', () => {
