@@ -119,9 +119,9 @@ function siText(path: string, v: unknown, u: UnitSystem): string {
   if (unit === 'Hz' || unit === '%') return `${fmtValue(v, '1', u)} ${unit}`;
   if (!unit) return fmtValue(v, '1', u);
   const shown = fmt(v, unit, u);
-  return u === 'SI' && unit !== 'h' && unit !== 'degC'
-    ? `${shown} (${fmtValue(v, '1', u)} ${unit.replace('*', '·')})`
-    : shown;
+  const plain = `${fmtValue(v, '1', u)} ${unit.replace('*', '·')}`;
+  // The SI number beside the display, once: not for zero ("0 kN (0 N)") nor when both read the same.
+  return u === 'SI' && unit !== 'h' && unit !== 'degC' && v !== 0 && plain !== shown ? `${shown} (${plain})` : shown;
 }
 
 function dutyRows(loaded: LoadedCase, u: UnitSystem): Cell[][] {
