@@ -38,7 +38,7 @@ describe('adaptive map = every cell evaluated', async () => {
   const rules = loadRules();
   for (const [name, load] of cases)
     for (const [rangeName, range] of ranges)
-      for (const grid of [9, 14]) {
+      for (const grid of [7, 12]) {
         it(`${name}, ${rangeName}, ${grid} × ${grid}, blocks of 2, 4 and 8`, async () => {
           const l = load();
           const opts: MapOptions = { grid, ...range, rules, journalNodes: 3 };
