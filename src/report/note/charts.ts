@@ -170,7 +170,7 @@ export function journalSpeedCharts(a: AdviceResult, curves: JournalSpeedCurves |
   const hAllow = j.allowableFilmThickness;
   const filmLog = spansDecades(Math.min(...h, hAllow), Math.max(...h, hAllow));
   const runaway = rows.some((x) => x.thermalRunaway)
-    ? ' Points marked as thermal runaway by the kernel carry temperatures that are lower bounds.'
+    ? ' Points marked as thermal runaway carry temperatures that are lower bounds.'
     : '';
   const where = `the chosen design (${fmt(j.length, 'm', u)} long, radial clearance ${fmt(j.radialClearance, 'm', u)}, ${j.oil}) at the governing load ${fmt(gov.load, 'N', u)}`;
   const opLine = { axis: 'x' as const, value: rpm(N), label: `operating speed ${fmt(N, 'rev/s', u)}` };
@@ -190,7 +190,7 @@ export function journalSpeedCharts(a: AdviceResult, curves: JournalSpeedCurves |
         ],
         refs: [{ axis: 'y', value: disp(hAllow, hu, u), label: `allowable h0 ${fmt(hAllow, hu, u)}` }, opLine],
       },
-      caption: `Minimum film thickness of ${where}, from ${curves.lowFactor} to ${curves.highFactor} times the operating speed, each point computed by the journal kernel (evaluateDesign: load matching and thermal balance). The film is adequate above the allowable line.`,
+      caption: `Minimum film thickness of ${where}, from ${curves.lowFactor} to ${curves.highFactor} times the operating speed, each point computed for this design with the load matched and the thermal balance solved. The film is adequate above the allowable line.`,
     },
     {
       id: ids[1]!,
@@ -218,7 +218,7 @@ export function journalSpeedCharts(a: AdviceResult, curves: JournalSpeedCurves |
           opLine,
         ],
       },
-      caption: `Effective and maximum film temperature of ${where}, by the journal kernel's thermal balance at each speed. The allowable line applies to the maximum temperature (${curves.maxTemperatureSource}).${runaway}`,
+      caption: `Effective and maximum film temperature of ${where}, from the thermal balance at each speed. The allowable line applies to the maximum temperature (${curves.maxTemperatureSource}).${runaway}`,
     },
   ];
 }
@@ -261,7 +261,7 @@ export function journalPressureChart(a: AdviceResult, u: UnitSystem): NoteChart 
       ],
     },
     caption:
-      'Pressure of the oil film at mid-length around the journal at the governing operating point, as solved by the journal kernel (finite-difference Reynolds equation with the Reynolds cavitation condition: zero gauge pressure where the film ruptures).',
+      'Pressure of the oil film at mid-length around the journal at the governing operating point, as solved for this design (finite-difference Reynolds equation with the Reynolds cavitation condition: zero gauge pressure where the film ruptures).',
   };
 }
 

@@ -132,7 +132,7 @@ export function shaftMomentChart(a: ShaftAdviceView, u: UnitSystem): NoteChart {
       ],
       refs: supportRefs(a, u),
     },
-    caption: `Bending moment along the shaft from the statics and beam kernels (both planes and their resultant √(My² + Mz²); sagging positive in each plane). Largest resultant ${fmt(a.shaft.maxMoment, mu, u)}.`,
+    caption: `Bending moment along the shaft from the statics of the shaft on its two supports (both planes and their resultant √(My² + Mz²); sagging positive in each plane). Largest resultant ${fmt(a.shaft.maxMoment, mu, u)}.`,
   };
 }
 
@@ -160,6 +160,6 @@ export function shaftDeflectionChart(a: ShaftAdviceView, u: UnitSystem): NoteCha
       ],
       refs: supportRefs(a, u),
     },
-    caption: `Deflection of the shaft axis from the beam kernel (simply supported on the two supports, each segment with its own second moment of area). Largest resultant ${fmt(a.shaft.maxDeflection, 'um', u)}; the slope at each support is in the reactions table.`,
+    caption: `Deflection of the shaft axis as a beam (simply supported on the two supports, each segment with its own second moment of area). Largest resultant ${fmt(a.shaft.maxDeflection, 'um', u)}; the slope at each support is in the reactions table.`,
   };
 }
