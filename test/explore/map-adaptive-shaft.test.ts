@@ -38,12 +38,12 @@ describe('map CASE --full prints what map CASE prints', () => {
     it(`${file}: text and SVG`, () => {
       const a = runCli(['map', file, '--grid', grid]);
       const b = runCli(['map', file, '--grid', grid, '--full']);
-      expect(a.code).toBe(0);
-      expect(b.code).toBe(0);
+      expect(a.code, a.stderr).toBe(0);
+      expect(b.code, b.stderr).toBe(0);
       expect(b.stdout).toBe(a.stdout);
       const svg = (name: string, extra: string[]) => {
         const r = runCli(['map', file, '--grid', grid, '--out', join(out, name), ...extra]);
-        expect(r.code).toBe(0);
+        expect(r.code, r.stderr).toBe(0);
         return readFileSync(join(out, name), 'utf8');
       };
       expect(svg('full.svg', ['--full'])).toBe(svg('adaptive.svg', []));
