@@ -57,7 +57,7 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
   const anyOut = a.ranking.some((r) => !r.feasible);
   out.push(
     table(
-      ['rank', 'option', 'score', 'life', 'friction power', 'length', 'OD', ...(anyOut ? ['excluded because'] : [])],
+      ['rank', 'option', 'score', 'life', 'friction', 'length', 'OD', ...(anyOut ? ['excluded because'] : [])],
       a.ranking.map((r) => [
         String(r.rank),
         r.option,
@@ -66,7 +66,7 @@ export function adviceText(a: AdviceResult, units: UnitSystem, explain = false):
         fmt(r.figures.frictionPower, 'W', units),
         fmt(r.figures.length, 'm', units),
         fmt(r.figures.outerDiameter, 'm', units),
-        ...(anyOut ? [explain ? firstExclusion(r) : shorten(firstExclusion(r), 30)] : []),
+        ...(anyOut ? [explain ? firstExclusion(r) : shorten(firstExclusion(r), 35)] : []),
       ]),
     ),
   );
