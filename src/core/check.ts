@@ -70,7 +70,9 @@ export function makeCheck(
   source: string,
   reference?: number,
 ): CheckRecord {
-  const zero = unit === 'degC' ? (reference ?? -273.15) : 0;
+  // A reference at or above the limit (an inlet or a room already hotter than allowed) leaves no
+  // rise to share out: the margin is then measured from absolute zero, so its sign follows pass.
+  const zero = unit === 'degC' ? (reference !== undefined && reference < limit ? reference : -273.15) : 0;
   const span = limit - zero;
   const margin = sense === 'max' ? (limit - value) / span : (value - limit) / span;
   const pass = sense === 'max' ? value <= limit : value >= limit;
