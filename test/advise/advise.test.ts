@@ -105,12 +105,13 @@ describe('ranking table', () => {
     const a = await advice;
     const out = a.ranking.find((r) => !r.feasible)!;
     const md = await renderNote(loaded, a, 'md', { units: 'SI', journalCurves: null });
-    const row = md.split('\n').find((l) => l.startsWith(`| ${out.rank} |`))!;
-    expect(row).toMatch(/\| excluded \|/);
+    // The summary table: one row per option, "1. Rolling bearing | yes | 2.00 | …".
+    const row = md.split('\n').find((l) => l.startsWith(`| ${out.rank}. `))!;
+    expect(row).toMatch(/\| NO \| excluded \|/);
     expect(row).not.toContain(`| ${out.score.toFixed(2)} |`);
     const html = await renderNote(loaded, a, 'html', { units: 'SI', journalCurves: null });
-    expect(html).toMatch(/<th[^>]*>excluded because<\/th>/);
     expect(html).toMatch(/>excluded</);
+    expect(html).not.toMatch(new RegExp(`>${out.score.toFixed(2).replace('.', '\\.')}<`));
   });
 });
 

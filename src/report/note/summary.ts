@@ -64,7 +64,7 @@ export function summarySection(advice: AdviceResult, units: UnitSystem, recommen
     return [
       `${r.rank}. ${OPTION_NAMES[r.option]}`,
       r.feasible ? { text: 'yes', mark: 'pass' } : { text: 'NO', mark: 'fail' },
-      r.feasible ? scoreCell(r) : '—',
+      scoreCell(r),
       gov ? gov.label : '—',
       gov ? { text: pct(gov.margin), mark: gov.pass ? 'pass' : 'fail' } : '—',
       r.option === 'journal' ? (r.feasible ? 'full film' : '—') : fmt(r.figures.lifeHours, 'h', units),
