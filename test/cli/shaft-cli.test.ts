@@ -109,8 +109,8 @@ describe('advise on a shaft case', () => {
     for (const id of ['chart-shaft-sketch', 'chart-shaft-moment', 'chart-shaft-deflection'])
       expect(html).toContain(`id="${id}"`);
     expect(html).toContain('Reactions, bending and slopes');
-    expect(html).toContain('A (motor side): Recommendation and ranking');
-    expect(html).toContain('B (outboard): Recommendation and ranking');
+    expect(html).toContain('A (motor side): Summary and recommendation');
+    expect(html).toContain('B (outboard): Summary and recommendation');
     const ids = [...html.matchAll(/ id="([^"]+)"/g)].map((m) => m[1]);
     expect(new Set(ids).size).toBe(ids.length);
   });
