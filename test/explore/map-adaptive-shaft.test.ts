@@ -41,10 +41,12 @@ describe('map CASE --full prints what map CASE prints', () => {
       expect(a.code, a.stderr).toBe(0);
       expect(b.code, b.stderr).toBe(0);
       expect(b.stdout).toBe(a.stdout);
+      // One file name per case: the folder is shared by the cases of this loop.
       const svg = (name: string, extra: string[]) => {
-        const r = runCli(['map', file, '--grid', grid, '--out', join(out, name), ...extra]);
+        const path = join(out, `grid${grid}-${name}`);
+        const r = runCli(['map', file, '--grid', grid, '--out', path, ...extra]);
         expect(r.code, r.stderr).toBe(0);
-        return readFileSync(join(out, name), 'utf8');
+        return readFileSync(path, 'utf8');
       };
       expect(svg('full.svg', ['--full'])).toBe(svg('adaptive.svg', []));
     });
