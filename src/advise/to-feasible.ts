@@ -2,6 +2,7 @@ import { Engine } from 'json-rules-engine';
 import { validateCase } from '../case/load.js';
 import type { Assumption, CaseSI } from '../case/types.js';
 import { CaseError } from '../core/errors.js';
+import { journalOil } from '../calc/rolling/index.js';
 import { finding, type Finding } from '../core/finding.js';
 import { governingMargin } from '../core/check.js';
 import { OPTIONS, type OptionName } from '../core/options.js';
@@ -81,6 +82,10 @@ export async function toMakeFeasible(
     const option = r.option;
     const searchRun = runnerOf(exclusions.filter((x) => x.event.option === option));
     const others = Object.fromEntries(OPTIONS.filter((o) => o !== option).map((o) => [o, advice.checks[o]]));
+    // A rolling bearing that takes the journal's oil grade (an oil supply, no oil named) must see
+    // the journal of the changed case, not the original one: leave the journal to be recomputed.
+    const othersFor = (c: CaseSI) =>
+      option === 'rolling' && journalOil(c, () => 0).sharedGrade ? { ...others, journal: undefined } : others;
     let runs = 0;
     // The option's own result on a changed document, from its search run: the kernels are pure,
     // so the full run reuses it and computes the other options afresh.
@@ -99,7 +104,7 @@ export async function toMakeFeasible(
       }
       // A kernel that throws on a changed case (outside its model) cannot verify that change.
       const a = await advise(c, [], full ? exclusions : exclusions.filter((x) => x.event.option === option), {
-        checks: full ? (own.has(key) ? { [option]: own.get(key) } : {}) : others,
+        checks: full ? (own.has(key) ? { [option]: own.get(key) } : {}) : othersFor(c),
         kernel: QUIET,
         traces: false,
         runRules: full ? verifyRun : searchRun,

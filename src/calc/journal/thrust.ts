@@ -251,7 +251,8 @@ function rubbingPath(
   });
   const worst = results.reduce((a, b) => (governingMargin(b.checks) < governingMargin(a.checks) ? b : a));
   const damage = points.reduce((s, p, i) => s + p.share / results[i]!.lifeHours, 0);
-  const lifeHours = damage > 0 ? points.reduce((s, p) => s + p.share, 0) / damage : Infinity;
+  // Shares are of the whole duty: a point without axial load wears the face not at all.
+  const lifeHours = damage > 0 ? 1 / damage : Infinity;
   const fig = {
     pressure: bounded(worst.pressure),
     velocity: worst.velocity,
@@ -275,7 +276,8 @@ function roomCheck(c: CaseSI, journalLength: number, thickness: number): CheckRe
   return makeCheck(
     'thrust-axial-room',
     'Journal length plus thrust collar or washer thickness within the axial room',
-    journalLength + thickness,
+    // To the nanometre: whole millimetres plus a collar add up with a floating-point residue.
+    Math.round((journalLength + thickness) * 1e9) / 1e9,
     c.space.maxLength,
     'm',
     'max',

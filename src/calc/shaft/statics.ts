@@ -63,8 +63,7 @@ function thrustTaker(supports: ShaftSI['supports'], fx: number): 0 | 1 {
   const [s0, s1] = supports;
   // The support the shaft is pushed towards: larger x for fx > 0, smaller x for fx < 0.
   const towards: 0 | 1 = fx > 0 === s1.at > s0.at ? 1 : 0;
+  // The other support of a cross-located pair holds the shaft the opposite way only: no fallback.
   if (supports[towards].locates === 'one-direction') return towards;
-  const other: 0 | 1 = towards === 0 ? 1 : 0;
-  if (supports[other].locates === 'one-direction') return other;
-  throw new RangeError('an axial load on a shaft with no locating support');
+  throw new RangeError('an axial load towards a support that does not locate the shaft that way');
 }

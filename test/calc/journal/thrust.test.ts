@@ -107,3 +107,26 @@ describe('journal thrust path', () => {
     expect(thrustPadsSchema.safeParse(raw).success).toBe(true);
   });
 });
+
+describe('rubbing thrust face life over a duty', () => {
+  it('a face loaded half the time lasts twice as long as one loaded all the time (damage over the whole duty)', () => {
+    // Linear damage: t = 1/Σ(share_i/t_i) with shares of the whole duty; a point with no axial
+    // load adds no wear (Palmgren–Miner, as the bushing's thrust face sums it).
+    const greased = (duty: string) =>
+      checkJournal(
+        load(
+          WORM.replace('supply: oil-bath, oil: ISO VG 220, inletTemperature: 55 degC', 'supply: grease').replace(
+            'load: { radial: 1.5 kN, axial: 4 kN, shock: light }',
+            `load: { radial: 1.5 kN, axial: 0 N, shock: light }\n${duty}`,
+          ),
+        ),
+        { sheet: false, pressureProfile: false },
+      ).thrust!.rubbing!.lifeHours;
+    const always = greased('duty: [{ share: 1, radial: 1.5 kN, axial: 1 kN, speed: 200 rpm }]');
+    const half = greased(
+      'duty: [{ share: 0.5, radial: 1.5 kN, axial: 1 kN, speed: 200 rpm }, { share: 0.5, radial: 1.5 kN, axial: 0 N, speed: 200 rpm }]',
+    );
+    expect(Number.isFinite(always)).toBe(true);
+    expect(half / always).toBeCloseTo(2, 9);
+  });
+});
