@@ -14,14 +14,19 @@ import { z } from 'zod';
  * call so a test or a script can point it elsewhere.
  */
 export function dataDir(): URL {
-  const dir = process.env.SHAFTWISE_DATA_DIR;
-  if (resolved && resolved.env === dir) return resolved.url;
-  const url = dir ? pathToFileURL(dir.endsWith('/') ? dir : `${dir}/`) : new URL('../../data/', import.meta.url);
-  resolved = { env: dir, url };
-  return url;
+  return resolvedDir().url;
 }
-// Sweeps call the loaders thousands of times: the folder is resolved once per setting.
-let resolved: { env: string | undefined; url: URL } | undefined;
+/** The folder and its href, resolved once per value of SHAFTWISE_DATA_DIR. */
+function resolvedDir(): { env: string | undefined; url: URL; href: string } {
+  const dir = process.env.SHAFTWISE_DATA_DIR;
+  if (resolved && resolved.env === dir) return resolved;
+  const url = dir ? pathToFileURL(dir.endsWith('/') ? dir : `${dir}/`) : new URL('../../data/', import.meta.url);
+  resolved = { env: dir, url, href: url.href };
+  return resolved;
+}
+// Sweeps call the loaders thousands of times: the folder (and its href, a costly getter) is
+// resolved once per setting.
+let resolved: { env: string | undefined; url: URL; href: string } | undefined;
 const cache = new Map<string, unknown>();
 
 /** A table's name in messages: data/<file>, or the full path when SHAFTWISE_DATA_DIR points elsewhere. */
@@ -38,11 +43,11 @@ function shownPath(file: string): string {
  * someone's own rows and is validated on every read.
  */
 export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
-  const dir = dataDir();
+  const dir = resolvedDir();
   const key = `${dir.href}${file}`;
   const hit = cache.get(key);
   if (hit !== undefined) return hit as T;
-  const url = new URL(file, dir);
+  const url = new URL(file, dir.url);
   let raw: unknown;
   try {
     raw = JSON.parse(readFileSync(url, 'utf8'));
