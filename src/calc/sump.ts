@@ -31,6 +31,8 @@
  * bound with `runaway` set.
  */
 import { lubricants } from '../data/load.js';
+import { DEFAULTS } from '../case/defaults.js';
+import type { CaseSI } from '../case/types.js';
 
 /** The sump model's figures (data/lubricants.json → sump). */
 export interface SumpModel {
@@ -60,6 +62,18 @@ export function sumpModel(): SumpModel & { source: string } {
     maxRise: s.maxRise.value,
     source: s.heatTransfer.source,
   };
+}
+
+/**
+ * The sump of case `c`: its model, the housing's dissipating area from the case's room (m²) and
+ * the ambient the balance starts from (°C): the case's, or the loader's default for a case built
+ * without one (src/case/defaults.ts). One place for the journal and the rolling bearing alike.
+ */
+export function caseSump(c: CaseSI): { model: SumpModel; area: number; ambient: number } {
+  const model = sumpModel();
+  const area = housingArea(c.space.maxOuterDiameter, c.space.maxLength, model);
+  const ambient = Number.isFinite(c.environment.ambient) ? c.environment.ambient : DEFAULTS.ambient.value;
+  return { model, area, ambient };
 }
 
 /**

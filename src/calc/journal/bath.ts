@@ -3,7 +3,7 @@ import type { JournalCriteria } from '../../data/journal-criteria.js';
 import { THERMAL_CEILING_C } from './operating-point.js';
 import { journalThrust } from './thrust.js';
 import { tableGeneration } from './table.js';
-import { bathTemperature, housingArea, sumpModel, type BathTemperature } from '../sump.js';
+import { bathTemperature, caseSump, type BathTemperature } from '../sump.js';
 import {
   evaluateDesign,
   sweepDesigns,
@@ -101,9 +101,7 @@ export function sweepWithInlet(
     const { chosen, rows } = sweepDesigns(diameter, candidates, points, tCase, startLoad, crit);
     return { chosen, rows, inletTemperature: tCase, bath: null, thrustLoss: 0 };
   }
-  const model = sumpModel();
-  const area = housingArea(c.space.maxOuterDiameter, c.space.maxLength, model);
-  const ambient = Number.isFinite(c.environment.ambient) ? c.environment.ambient : 20;
+  const { model, area, ambient } = caseSump(c);
   // The search stays below the ceiling of the film's thermal balance (operating-point.ts).
   const search = {
     heatTransfer: model.heatTransfer,

@@ -1,8 +1,7 @@
 import type { CaseSI } from '../../case/types.js';
 import { assumedFinding } from '../../core/finding.js';
-import { bathTemperature, bathValues, housingArea, sumpModel, type BathTemperature } from '../sump.js';
+import { bathTemperature, bathValues, caseSump, sumpModel, type BathTemperature } from '../sump.js';
 import type { CandidateSpec } from './candidates.js';
-import { finiteOr } from './conditions.js';
 import type { EvalContext } from './context.js';
 import { evaluate } from './evaluate.js';
 import { newNotes, type Notes } from './findings.js';
@@ -46,9 +45,7 @@ const lastBath = new WeakMap<EvalContext, number>();
  */
 export function evaluateInBath(spec: CandidateSpec, ctx: EvalContext, system: OilSystem, notes: Notes): BathCandidate {
   const c = ctx.c;
-  const model = sumpModel();
-  const area = housingArea(c.space.maxOuterDiameter, c.space.maxLength, model);
-  const ambient = finiteOr(c.environment.ambient, 20);
+  const { model, area, ambient } = caseSump(c);
   const at = (t: number): EvalContext => ({
     ...ctx,
     lubrication: bearingLubrication(c, newNotes(), { ...system, bath: { temperature: t, values: {} } }),
