@@ -228,8 +228,12 @@ export function checkMaterial(
   const kLow = m.wearFactorLow ?? m.wearFactor / 3;
   const kHigh = m.wearFactorHigh ?? m.wearFactor * 3;
   // Wear depth per hour of a bushing of unit length (÷ L gives m/h): Σ share·f_m·f_e·k·p_peak(L = 1)·V·3600 s
-  const wearRateTimesL = (k: number) =>
-    points.reduce((s, p) => s + p.share * wearDepth(k, peakPressure(p.F, D, 1), p.V, HOUR, fMotion, fEnv), 0);
+  // Linear in k (Archard), so the sum over the duty is taken once, at k = 1.
+  const perUnitK = points.reduce(
+    (s, p) => s + p.share * wearDepth(1, peakPressure(p.F, D, 1), p.V, HOUR, fMotion, fEnv),
+    0,
+  );
+  const wearRateTimesL = (k: number) => k * perUnitK;
   const { minLengthBy, minLength } = shortestLengths(c, m, points, wearRateTimesL(m.wearFactor));
 
   const Fmax = Math.max(...points.map((p) => p.F));
