@@ -1,4 +1,4 @@
-import { finding, remarkKey, type AssumedFinding, type Finding, type Remark } from '../core/finding.js';
+import { finding, uniqueRemarks, type AssumedFinding, type Finding, type Remark } from '../core/finding.js';
 import { OPTIONS, type OptionName } from '../core/options.js';
 import { Engine, type RuleResult } from 'json-rules-engine';
 import type { Assumption, CaseSI } from '../case/types.js';
@@ -249,7 +249,7 @@ function scoreOption(
     },
     reasons,
     failed: f.failed,
-    excluded: dedupe(excluded),
+    excluded: uniqueRemarks(excluded),
   };
 }
 
@@ -288,7 +288,7 @@ export async function advise(
   const tieBreak =
     tied.length > 1 ? finding('advice.tie-broken', { options: tied.map((r) => r.option), score: top.score }) : null;
   const recommendation = top.feasible ? top.option : null;
-  const warnings = dedupe([
+  const warnings = uniqueRemarks([
     ...checks.bushing.warnings.map((w) => (typeof w === 'string' ? `bushing: ${w}` : w)),
     ...checks.rolling.warnings.map((w) => (typeof w === 'string' ? `rolling: ${w}` : w)),
     ...checks.journal.warnings.map((w) => (typeof w === 'string' ? `journal: ${w}` : w)),
@@ -321,8 +321,3 @@ function flatten(cond: Condition | undefined): ConditionTrace[] {
 }
 
 const round2 = (x: number) => Math.round(x * 100) / 100;
-/** The remarks without repeats, first occurrence kept. */
-const dedupe = (xs: Remark[]): Remark[] => {
-  const seen = new Set<string>();
-  return xs.filter((x) => !seen.has(remarkKey(x)) && !!seen.add(remarkKey(x)));
-};

@@ -38,3 +38,32 @@ export type Remark = string | Finding;
 export function remarkKey(r: Remark): string {
   return typeof r === 'string' ? r : JSON.stringify(r);
 }
+
+/**
+ * The remarks without repeats (equal `remarkKey`), first occurrence kept, in order. The same
+ * as filtering on remarkKey, without serialising every finding: two findings with different
+ * codes never have equal keys (the code is in the key), so a finding is serialised only when
+ * another finding shares its code, or when a sentence could read like a serialised finding
+ * (starts with "{").
+ */
+export function uniqueRemarks(xs: readonly Remark[]): Remark[] {
+  if (xs.length < 2) return xs.slice();
+  const codes = new Map<unknown, number>();
+  let jsonLike = false;
+  for (const x of xs)
+    if (typeof x === 'string') jsonLike ||= x.startsWith('{');
+    else codes.set(x.code, (codes.get(x.code) ?? 0) + 1);
+  const seen = new Set<string>();
+  const out: Remark[] = [];
+  for (const x of xs) {
+    if (typeof x !== 'string' && !jsonLike && typeof x.code === 'string' && codes.get(x.code) === 1) {
+      out.push(x);
+      continue;
+    }
+    const k = remarkKey(x);
+    if (seen.has(k)) continue;
+    seen.add(k);
+    out.push(x);
+  }
+  return out;
+}
