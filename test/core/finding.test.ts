@@ -39,7 +39,7 @@ describe('uniqueRemarks', () => {
     const f = fc.record({ code, values: fc.dictionary(fc.constantFrom('n', 'm'), value, { maxKeys: 2 }) });
     const s = fc.constantFrom('one', 'two', '{"code":"x.a","values":{}}');
     fc.assert(
-      fc.property(fc.array(fc.oneof(f, s), { maxLength: 8 }), (xs) => {
+      fc.property(fc.array(fc.oneof(f, s), { maxLength: 8 }), (xs: Remark[]) => {
         expect(uniqueRemarks(xs)).toEqual(byKey(xs));
         const out = uniqueRemarks(xs);
         expect(out.every((x) => xs.includes(x))).toBe(true);
