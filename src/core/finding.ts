@@ -39,31 +39,69 @@ export function remarkKey(r: Remark): string {
   return typeof r === 'string' ? r : JSON.stringify(r);
 }
 
+/** What JSON.stringify writes under `key` of `o` (own enumerable properties only); NONE when absent. */
+const NONE = Symbol('none');
+const own = (o: object, key: string): unknown =>
+  Object.prototype.propertyIsEnumerable.call(o, key) ? (o as Record<string, unknown>)[key] : NONE;
+/** A value that JSON writes as itself and reads back equal: a string, a boolean or a finite number. */
+const scalar = (v: unknown): boolean =>
+  typeof v === 'string' || typeof v === 'boolean' || (typeof v === 'number' && Number.isFinite(v));
+const plain = (v: unknown): v is object =>
+  typeof v === 'object' && v !== null && typeof (v as { toJSON?: unknown }).toJSON !== 'function';
+
 /**
- * The remarks without repeats (equal `remarkKey`), first occurrence kept, in order. The same
- * as filtering on remarkKey, without serialising every finding: two findings with different
- * codes never have equal keys (the code is in the key), so a finding is serialised only when
- * another finding shares its code, or when a sentence could read like a serialised finding
- * (starts with "{").
+ * True only when `a` and `b` surely serialise differently: JSON that is equal reads back
+ * equal, so a scalar that differs under the same key (the code, a value, an element of a
+ * list of values) or lists of different lengths prove the texts differ. False means "maybe
+ * equal", to be settled by comparing remarkKey.
+ */
+function surelyDifferent(a: Finding, b: Finding): boolean {
+  if (!plain(a) || !plain(b)) return false;
+  const ca = own(a, 'code');
+  const cb = own(b, 'code');
+  if (scalar(ca) && scalar(cb) && ca !== cb) return true;
+  const va = own(a, 'values');
+  const vb = own(b, 'values');
+  if (!plain(va) || !plain(vb)) return false;
+  for (const k of Object.keys(va)) {
+    const p = own(va, k);
+    const q = own(vb, k);
+    if (scalar(p) && scalar(q)) {
+      if (p !== q) return true;
+    } else if (Array.isArray(p) && Array.isArray(q) && plain(p) && plain(q)) {
+      if (p.length !== q.length) return true;
+      for (let i = 0; i < p.length; i++) if (scalar(p[i]) && scalar(q[i]) && p[i] !== q[i]) return true;
+    }
+  }
+  return false;
+}
+
+/**
+ * The remarks without repeats (equal `remarkKey`), first occurrence kept, in order: the same
+ * as filtering on remarkKey, without serialising every finding. A finding is serialised only
+ * when an earlier kept one cannot be told from it by surelyDifferent (a different code, or a
+ * scalar value that differs). A list with a sentence that could read as a serialised finding
+ * (starting with "{"), a finding that serialises itself (toJSON) or more than 64 remarks is
+ * filtered on remarkKey directly.
  */
 export function uniqueRemarks(xs: readonly Remark[]): Remark[] {
-  if (xs.length < 2) return xs.slice();
-  const codes = new Map<unknown, number>();
-  let jsonLike = false;
-  for (const x of xs)
-    if (typeof x === 'string') jsonLike ||= x.startsWith('{');
-    else codes.set(x.code, (codes.get(x.code) ?? 0) + 1);
-  const seen = new Set<string>();
+  if (xs.length > 64 || xs.some((x) => (typeof x === 'string' ? x.startsWith('{') : !plain(x)))) {
+    const seen = new Set<string>();
+    return xs.filter((x) => !seen.has(remarkKey(x)) && !!seen.add(remarkKey(x)));
+  }
   const out: Remark[] = [];
+  const keys = new Map<Finding, string>();
+  const keyOf = (f: Finding): string => {
+    let k = keys.get(f);
+    if (k === undefined) keys.set(f, (k = remarkKey(f)));
+    return k;
+  };
   for (const x of xs) {
-    if (typeof x !== 'string' && !jsonLike && typeof x.code === 'string' && codes.get(x.code) === 1) {
-      out.push(x);
-      continue;
-    }
-    const k = remarkKey(x);
-    if (seen.has(k)) continue;
-    seen.add(k);
-    out.push(x);
+    const repeat =
+      typeof x === 'string'
+        ? out.includes(x)
+        : out.some((y) => typeof y !== 'string' && !surelyDifferent(x, y) && keyOf(x) === keyOf(y));
+    if (!repeat) out.push(x);
   }
   return out;
 }
