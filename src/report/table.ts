@@ -7,14 +7,13 @@ export const WIDTH = 100;
  * lines); number columns never wrap, so a value, limit or margin is always read whole.
  */
 export function table(head: string[], rows: string[][], indent = '  ', width = WIDTH): string {
-  const numeric = head.map(
-    // A number, "—" (none) or "excluded" (the ranking's score of an excluded option) right-aligns.
-    (_, i) =>
-      rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+(e[-+]?\d+)?( .*)?$|^—$|^excluded$/.test(strip(r[i] ?? ''))),
-  );
-  const widths = head.map((h, i) => Math.max(len(h), ...rows.map((r) => len(r[i] ?? ''))));
-  const words = head.map((h, i) => [h, ...rows.map((r) => r[i] ?? '')].flatMap((c) => c.split(' ')));
-  fitColumns(widths, numeric, words, width - len(indent));
+  // Each column's cells, heading first, and their printed widths, measured once.
+  const cols = head.map((h, i) => [h, ...rows.map((r) => r[i] ?? '')]);
+  const widthsOf = cols.map((col) => col.map(len));
+  // A number, "—" (none) or "excluded" (the ranking's score of an excluded option) right-aligns.
+  const numeric = cols.map((col) => rows.length > 0 && col.every((c, k) => k === 0 || NUMERIC.test(plain(c))));
+  const widths = widthsOf.map((ws) => Math.max(...ws));
+  fitColumns(widths, numeric, cols, width - len(indent));
   const line = (cells: string[]) =>
     indent +
     cells
@@ -33,13 +32,19 @@ export function table(head: string[], rows: string[][], indent = '  ', width = W
   ].join('\n');
 }
 
-/** Narrow the widest text column, one character at a time, until the row fits (or nothing can give). */
-function fitColumns(widths: number[], numeric: boolean[], words: string[][], room: number): void {
+/** A cell that right-aligns: a number (with a unit after a space), "—" or "excluded". */
+const NUMERIC = /^[-+]?[\d.,]+(e[-+]?\d+)?( .*)?$|^—$|^excluded$/;
+
+/**
+ * Narrow the widest text column, one character at a time, until the row fits (or nothing can
+ * give). `cols` holds each column's cells, heading first.
+ */
+function fitColumns(widths: number[], numeric: boolean[], cols: string[][], room: number): void {
   const total = () => widths.reduce((s, w) => s + w, 0) + 2 * (widths.length - 1);
+  if (total() <= room) return;
   // A text column keeps at least 8 characters and its longest word (up to 24), so words break between them.
-  const floor = words.map((_, i) =>
-    numeric[i] ? widths[i]! : Math.min(widths[i]!, Math.max(8, ...words[i]!.map((w) => Math.min(24, len(w))))),
-  );
+  const longestWord = (col: string[]) => Math.max(...col.flatMap((c) => c.split(' ')).map((w) => Math.min(24, len(w))));
+  const floor = cols.map((col, i) => (numeric[i] ? widths[i]! : Math.min(widths[i]!, Math.max(8, longestWord(col)))));
   while (total() > room) {
     let widest = -1;
     for (let i = 0; i < widths.length; i++)
@@ -76,6 +81,26 @@ export function wrapWords(text: string, width: number): string[] {
 // Width ignores ANSI colour codes so coloured and plain output line up alike.
 // eslint-disable-next-line no-control-regex -- ANSI escape codes start with ESC
 const strip = (s: string) => s.replace(/\u001b\[[0-9;]*m/g, '');
-/** Printed width of a cell (colour codes left out). */
-export const len = (s: string): number => [...strip(s)].length;
+/** The cell without colour codes (the cell itself when it has none). */
+const plain = (s: string) => (s.includes('\u001b') ? strip(s) : s);
+/**
+ * Printed width of a cell (colour codes left out): its code points, a surrogate pair counted
+ * once as the string iterator does. Called for every word of every cell while tables are
+ * fitted, so it neither allocates nor strips when there is nothing to strip.
+ */
+export function len(s: string): number {
+  const t = plain(s);
+  let n = t.length;
+  if (!SURROGATE.test(t)) return n;
+  for (let i = 0; i < t.length - 1; i++) {
+    const c = t.charCodeAt(i);
+    const d = t.charCodeAt(i + 1);
+    if (c >= 0xd800 && c <= 0xdbff && d >= 0xdc00 && d <= 0xdfff) {
+      n--;
+      i++;
+    }
+  }
+  return n;
+}
+const SURROGATE = /[\ud800-\udfff]/;
 const pad = (s: string, w: number) => s + ' '.repeat(Math.max(0, w - len(s)));
