@@ -16,18 +16,31 @@ import { z } from 'zod';
 export function dataDir(): URL {
   return resolvedDir().url;
 }
+/** A resolved folder: its URL, its href and the tables read from it, by file name. */
+interface ResolvedDir {
+  env: string | undefined;
+  url: URL;
+  href: string;
+  tables: Map<string, unknown>;
+}
 /** The folder and its href, resolved once per value of SHAFTWISE_DATA_DIR. */
-function resolvedDir(): { env: string | undefined; url: URL; href: string } {
+function resolvedDir(): ResolvedDir {
   const dir = process.env.SHAFTWISE_DATA_DIR;
   if (resolved && resolved.env === dir) return resolved;
   const url = dir ? pathToFileURL(dir.endsWith('/') ? dir : `${dir}/`) : new URL('../../data/', import.meta.url);
-  resolved = { env: dir, url, href: url.href };
+  let tables = cache.get(url.href);
+  if (!tables) {
+    tables = new Map();
+    cache.set(url.href, tables);
+  }
+  resolved = { env: dir, url, href: url.href, tables };
   return resolved;
 }
 // Sweeps call the loaders thousands of times: the folder (and its href, a costly getter) is
-// resolved once per setting.
-let resolved: { env: string | undefined; url: URL; href: string } | undefined;
-const cache = new Map<string, unknown>();
+// resolved once per setting, and its tables are kept by file name (no key to build per call).
+let resolved: ResolvedDir | undefined;
+/** The tables read, per folder href (a folder set again later finds its tables still read). */
+const cache = new Map<string, Map<string, unknown>>();
 
 /** A table's name in messages: data/<file>, or the full path when SHAFTWISE_DATA_DIR points elsewhere. */
 function shownPath(file: string): string {
@@ -44,8 +57,7 @@ function shownPath(file: string): string {
  */
 export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
   const dir = resolvedDir();
-  const key = `${dir.href}${file}`;
-  const hit = cache.get(key);
+  const hit = dir.tables.get(file);
   if (hit !== undefined) return hit as T;
   const url = new URL(file, dir.url);
   let raw: unknown;
@@ -55,7 +67,7 @@ export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
     throw new DataError(`${shownPath(file)}: cannot be read as JSON (${(e as Error).message})`);
   }
   if (!process.env.SHAFTWISE_DATA_DIR) {
-    cache.set(key, raw);
+    dir.tables.set(file, raw);
     return raw as T;
   }
   const parsed = schema.safeParse(raw);
@@ -63,7 +75,7 @@ export function loadTable<T>(file: string, schema: z.ZodType<T>): T {
     const issue = parsed.error.issues[0]!;
     throw new DataError(`${shownPath(file)}: field ${issue.path.join('.') || '(root)'}: ${issue.message}`);
   }
-  cache.set(key, parsed.data);
+  dir.tables.set(file, parsed.data);
   return parsed.data;
 }
 

@@ -1,6 +1,7 @@
 import type { CaseSI } from '../../case/types.js';
 import { finding } from '../../core/finding.js';
-import { rollingFactors } from '../../data/rolling.js';
+import { kindTraits, rollingFactors } from '../../data/rolling.js';
+import { rollingRunning } from '../../data/rolling-running.js';
 import { loadFactors } from '../../data/rolling-load-factors.js';
 import { candidateSpecs } from './candidates.js';
 import { dutyPoints, lifeFactors, shockFactors } from './conditions.js';
@@ -28,6 +29,7 @@ export function evalContext(c: CaseSI, notes: Notes, system: OilSystem = {}): { 
   const ctx: EvalContext = {
     c,
     f,
+    tables: { load: loadFactors(), running: rollingRunning(), kinds: kindTraits() },
     points: duty.points,
     maxSpeed: duty.maxSpeed,
     serviceFactor: shock.serviceFactor,
@@ -95,6 +97,7 @@ export function checkRolling(
   const requiredC = requiredDynamicRating(equivalentLoad, meanSpeed, c.life.hours, lifeExponent(leadType), ctx.a1);
   if (!(c.life.hours > 0)) notes.warn(finding('rolling.no-life-target'));
 
+  const leads = leadOfEachKind(candidates);
   return {
     option: 'rolling',
     equivalentLoad,
@@ -103,9 +106,9 @@ export function checkRolling(
     requiredDynamicRatingFor: requiredC !== null ? { type: leadType, p: lifeExponent(leadType) } : null,
     candidates,
     best: best ? best.id : null,
-    kinds: leadOfEachKind(candidates).map(kindFacts),
+    kinds: leads.map(kindFacts),
     chosen: best ? kindFacts(best) : null,
-    choice: choiceFinding(best, candidates),
+    choice: choiceFinding(best, candidates, leads),
     feasible: best !== null,
     assumed: notes.assumed,
     warnings: notes.warnings,

@@ -2,9 +2,8 @@ import { advisory, makeCheck, type CheckRecord } from '../../core/check.js';
 import { KAPPA_MIN } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import type { CandidateFigures, EvalContext } from './context.js';
-import { speedLimit } from './speed.js';
+import { speedLimitFrom } from './speed.js';
 import { rollingRunning } from '../../data/rolling-running.js';
-import { kindTraits } from '../../data/rolling.js';
 
 /**
  * The checks of one candidate, from its figures: life, lubrication, load ratio and static
@@ -92,7 +91,7 @@ function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext
 function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
   const checks: CheckRecord[] = [];
   const { c, lubrication } = ctx;
-  const lim = speedLimit(spec.kind, lubrication.supply, spec.form);
+  const lim = speedLimitFrom(ctx.tables.running, spec.kind, lubrication.supply, spec.form);
   if (fig.ndm > 0) {
     checks.push(
       makeCheck(
@@ -145,14 +144,15 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext)
         c.life.hours,
         'h',
         'min',
-        rollingRunning().greaseLife.source,
+        ctx.tables.running.greaseLife.source,
       ),
     );
   }
   const plan = c.lubrication.regreaseInterval;
   if (!lubrication.sealed && lubrication.supply === 'grease' && fig.greaseHours !== null && plan !== undefined)
     checks.push(regreaseCheck(fig.greaseHours, plan));
-  return [...checks, ...misalignmentChecks(spec, ctx), ...temperatureChecks(ctx)];
+  checks.push(...misalignmentChecks(spec, ctx), ...temperatureChecks(ctx));
+  return checks;
 }
 
 /**
@@ -188,7 +188,7 @@ const ARCMIN = Math.PI / (180 * 60);
 function misalignmentChecks(spec: CandidateSpec, ctx: EvalContext): CheckRecord[] {
   const theta = ctx.c.shaft.misalignment;
   if (theta === undefined) return [];
-  const t = kindTraits().find((k) => k.kind === spec.kind)!;
+  const t = ctx.tables.kinds.find((k) => k.kind === spec.kind)!;
   return [
     makeCheck(
       'misalignment',
@@ -211,7 +211,7 @@ function misalignmentChecks(spec: CandidateSpec, ctx: EvalContext): CheckRecord[
  * data/rolling-running.json → temperatureLimits (common practice, from memory).
  */
 function temperatureChecks(ctx: EvalContext): CheckRecord[] {
-  const lim = rollingRunning().temperatureLimits;
+  const lim = ctx.tables.running.temperatureLimits;
   const T = ctx.lubrication.temperature;
   // Margins as the share of the allowed rise above the surroundings (from absolute zero where they are not below the limit).
   const ambient = ctx.c.environment.ambient;
@@ -247,5 +247,7 @@ function temperatureChecks(ctx: EvalContext): CheckRecord[] {
 
 /** Every check of one candidate, in a fixed order: what it carries, then what its surroundings allow. */
 export function candidateChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
-  return [...loadChecks(spec, fig, ctx), ...fitChecks(spec, fig, ctx)];
+  const checks = loadChecks(spec, fig, ctx);
+  checks.push(...fitChecks(spec, fig, ctx));
+  return checks;
 }

@@ -82,7 +82,12 @@ export function shockFactors(c: CaseSI, f: RollingFactors, notes: Notes): ShockF
       source: sf.source,
     }),
   );
-  return { serviceFactor: sf.serviceFactor, s0Guidance: (type) => staticSafetyGuidance(c.load.shock, type) };
+  // Looked up once per type: every candidate of the case asks.
+  const guidance: Partial<Record<RollingType, StaticSafetyGuidance>> = {};
+  return {
+    serviceFactor: sf.serviceFactor,
+    s0Guidance: (type) => (guidance[type] ??= staticSafetyGuidance(c.load.shock, type)),
+  };
 }
 
 /**

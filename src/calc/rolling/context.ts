@@ -1,5 +1,7 @@
 import type { CaseSI } from '../../case/types.js';
-import type { RollingFactors } from '../../data/rolling.js';
+import type { KindTraits, RollingFactors } from '../../data/rolling.js';
+import type { LoadFactors } from '../../data/rolling-load-factors.js';
+import type { RollingRunning } from '../../data/rolling-running.js';
 import type { LoadPoint, ShockFactors } from './conditions.js';
 import type { Lubrication } from './lubrication.js';
 
@@ -8,10 +10,21 @@ import type { Lubrication } from './lubrication.js';
  * evaluated in (evaluate.ts) and the figures its checks read (checks.ts). Not public.
  */
 
+/**
+ * The tables a candidate's evaluation reads, read once per check (a sweep evaluates every
+ * candidate at every point; the loaders read SHAFTWISE_DATA_DIR at each call).
+ */
+export interface RollingTables {
+  load: LoadFactors;
+  running: RollingRunning;
+  kinds: KindTraits[];
+}
+
 /** What every candidate of one case is evaluated in: the case, its factors, points and lubricant. */
 export interface EvalContext {
   c: CaseSI;
   f: RollingFactors;
+  tables: RollingTables;
   points: LoadPoint[];
   /** Highest point speed, rev/s. */
   maxSpeed: number;

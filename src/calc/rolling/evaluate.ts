@@ -7,10 +7,20 @@ import { candidateChecks } from './checks.js';
 import { contaminationFactor, type LoadPoint } from './conditions.js';
 import type { EvalContext } from './context.js';
 import type { Notes } from './findings.js';
-import { frictionMoment } from './friction.js';
-import { regreasingInterval } from './grease.js';
+import { frictionMomentWith, frictionRow } from './friction.js';
+import { regreasingIntervalFrom } from './grease.js';
 import { lifeExponent, requiredDynamicRating } from './life.js';
-import { axialCapacity, dynamicLoad, staticLoad, type BearingLoadSpec, type DynamicLoad } from './load-factors.js';
+import {
+  axialCapacity,
+  dynamicLoadFrom,
+  staticLoadFrom,
+  type AxialCapacity,
+  type BearingLoadSpec,
+  type DynamicLoad,
+} from './load-factors.js';
+import type { FrictionRow } from '../../data/rolling-running.js';
+import type { LoadFactors } from '../../data/rolling-load-factors.js';
+import type { RollingTables } from './context.js';
 import { STATIC_SPEED_LIMIT, spectrumLife, type SpectrumLife } from './spectrum.js';
 import { criticalSwingAngle, frictionPower, speedFactor } from './speed.js';
 import { inducedAxialForce, inducedAxialForceFromE } from './tapered-pair.js';
@@ -65,6 +75,34 @@ export function needsOpposedPartner(spec: Pick<CandidateSpec, 'kind' | 'arrangem
 }
 
 /**
+ * What a candidate's evaluation reads that depends on neither load nor speed: its load spec, its
+ * rows of the tables and whether it needs an opposed partner. Worked once per candidate and
+ * tables read (a sweep evaluates the same candidates at every point).
+ */
+interface Prepared {
+  tables: RollingTables;
+  ls: BearingLoadSpec;
+  partner: boolean;
+  friction: FrictionRow;
+  axialCapacity: AxialCapacity;
+}
+const preparedSpecs = new WeakMap<CandidateSpec, Prepared>();
+
+function prepared(spec: CandidateSpec, tables: RollingTables): Prepared {
+  const hit = preparedSpecs.get(spec);
+  if (hit && hit.tables === tables) return hit;
+  const p: Prepared = {
+    tables,
+    ls: loadSpecOf(spec),
+    partner: needsOpposedPartner(spec),
+    friction: frictionRow(tables.running, spec.kind),
+    axialCapacity: axialCapacity(spec.kind, spec.form, spec.arrangement),
+  };
+  preparedSpecs.set(spec, p);
+  return p;
+}
+
+/**
  * Axial load the bearing carries at one point, N [3]: the case's Fa, plus, for a bearing that
  * needs an opposed partner, that partner's induced force. The partner is taken as the same
  * bearing under the same radial load (the two supports of a symmetric shaft), mounted so that
@@ -72,10 +110,10 @@ export function needsOpposedPartner(spec: Pick<CandidateSpec, 'kind' | 'arrangem
  * other, this one then carries Fa + 0.5·Fr/Y (tapered roller) or Fa + e·Fr (angular-contact ball,
  * common practice).
  */
-function bearingAxialLoad(spec: CandidateSpec, ls: BearingLoadSpec, Fr: number, Fa: number): number {
-  if (!needsOpposedPartner(spec) || !(Fr > 0)) return Fa;
+function bearingAxialLoad(t: LoadFactors, spec: CandidateSpec, p: Prepared, Fr: number, Fa: number): number {
+  if (!p.partner || !(Fr > 0)) return Fa;
   // The factors at a large axial load: Y above e for a tapered roller bearing, e for an angular-contact one.
-  const above = dynamicLoad(ls, Fr, 10 * Fr + Fa);
+  const above = dynamicLoadFrom(t, p.ls, Fr, 10 * Fr + Fa);
   if (spec.kind === 'angular-contact ball') return above.e !== null ? Fa + inducedAxialForceFromE(Fr, above.e) : Fa;
   return above.Y > 0 ? Fa + inducedAxialForce(Fr, above.Y) : Fa;
 }
@@ -86,26 +124,40 @@ function bearingAxialLoad(spec: CandidateSpec, ls: BearingLoadSpec, Fr: number, 
  */
 function pointLoads(
   spec: CandidateSpec,
+  p: Prepared,
   ctx: EvalContext,
   notes: Notes,
 ): { per: PointLoad[]; exclusions: Finding[]; heaviest: PointLoad } {
-  const ls = loadSpecOf(spec);
+  const t = ctx.tables.load;
   const exclusions: Finding[] = [];
-  const excludedFor = new Set<string>();
-  const per = ctx.points.map((q): PointLoad => {
-    const FaBearing = bearingAxialLoad(spec, ls, q.Fr, q.Fa);
-    const r = dynamicLoad(ls, q.Fr, FaBearing, q.n);
-    if (r.exclusion && !excludedFor.has(r.exclusion.code)) {
-      excludedFor.add(r.exclusion.code);
+  const per: PointLoad[] = [];
+  let raised = false;
+  for (const q of ctx.points) {
+    const FaBearing = bearingAxialLoad(t, spec, p, q.Fr, q.Fa);
+    const r = dynamicLoadFrom(t, p.ls, q.Fr, FaBearing, q.n);
+    if (r.exclusion && !exclusions.some((x) => x.code === r.exclusion!.code))
       exclusions.push(finding(r.exclusion.code, r.exclusion.values));
-    }
     if (r.range === 'below' && r.key !== null && r.key > 0 && r.Y > 0)
       notes.warn(finding('rolling.key-below-table', { designation: spec.designation, key: r.key }), 'once');
-    return { ...r, Pf: ctx.serviceFactor * r.P, FaBearing, n: q.n, t: q.t, Fr: q.Fr, Fa: q.Fa };
-  });
+    if (FaBearing > q.Fa) raised = true;
+    per.push({
+      P: r.P,
+      X: r.X,
+      Y: r.Y,
+      e: r.e,
+      key: r.key,
+      range: r.range,
+      exclusion: r.exclusion,
+      Pf: ctx.serviceFactor * r.P,
+      FaBearing,
+      n: q.n,
+      t: q.t,
+      Fr: q.Fr,
+      Fa: q.Fa,
+    });
+  }
   const heaviest = per.reduce((a, b) => (b.Pf > a.Pf ? b : a), per[0]!);
-  if (needsOpposedPartner(spec) && per.some((q) => q.FaBearing > q.Fa))
-    notes.warn(finding('rolling.opposed-partner', {}), 'opposed-partner');
+  if (p.partner && raised) notes.warn(finding('rolling.opposed-partner', {}), 'opposed-partner');
   return { per, exclusions, heaviest };
 }
 
@@ -148,13 +200,13 @@ function lives(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: N
  * point's loads without f_d; on grease, the grease life (sealed) or relubrication interval
  * (open) at the highest speed, h.
  */
-function running(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], P: number, notes: Notes) {
+function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointLoad[], P: number, notes: Notes) {
   const ndm = speedFactor(ctx.maxSpeed, spec.dm);
   let sumT = 0;
   let sumM = 0;
   let sumW = 0;
   const moments = per.map((q) => {
-    const m = frictionMoment({
+    const m = frictionMomentWith(p.friction, {
       kind: spec.kind,
       form: spec.form,
       arrangement: spec.arrangement,
@@ -183,7 +235,7 @@ function running(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], P: num
       temperature: ctx.lubrication.temperature,
       load: { P, C: spec.C },
     };
-    const r = regreasingInterval(input);
+    const r = regreasingIntervalFrom(ctx.tables.running, input);
     grease = ctx.lubrication.sealed ? r.life.l10Hours : r.hours;
     for (const f of r.life.findings) notes.warn(f, 'once');
   }
@@ -217,12 +269,12 @@ function swingAngle(spec: CandidateSpec, c: CaseSI, notes: Notes): number | null
  * safety s0 = C0/P0 uses the peak static equivalent load P0 over the points, without f_d [2].
  */
 export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): RollingCandidate {
-  const loads = pointLoads(spec, ctx, notes);
+  const p = prepared(spec, ctx.tables);
+  const loads = pointLoads(spec, p, ctx, notes);
   const life = lives(spec, ctx, loads.per, notes);
-  const ls = loadSpecOf(spec);
-  const P0 = loads.per.reduce((m, q) => Math.max(m, staticLoad(ls, q.Fr, q.FaBearing).P0), 0);
+  const P0 = loads.per.reduce((m, q) => Math.max(m, staticLoadFrom(ctx.tables.load, p.ls, q.Fr, q.FaBearing).P0), 0);
   const s0 = P0 > 0 ? spec.C0 / P0 : null;
-  const run = running(spec, ctx, loads.per, life.P, notes);
+  const run = running(spec, p, ctx, loads.per, life.P, notes);
   const swing = swingAngle(spec, ctx.c, notes);
   // The lowest κ over the turning points: the point that is lubricated least well.
   const kappa = life.points.reduce<number | null>(
@@ -251,7 +303,7 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
     form: spec.form,
     arrangement: spec.arrangement,
     contactAngle: spec.contactAngle,
-    axialCapacity: axialCapacity(spec.kind, spec.form, spec.arrangement),
+    axialCapacity: p.axialCapacity,
     series: spec.series,
     designation: spec.designation,
     bore: spec.bore,

@@ -28,10 +28,22 @@ export function newNotes(): Notes {
     assume: (a) => void assumed.push(a),
     warn: (w, sameAs) => {
       // A given name is kept apart from the default key (a JSON object, which starts with "{").
-      const key = sameAs === undefined ? remarkKey(w) : `${w.code}:${sameAs}`;
+      const key = sameAs === undefined ? keyOf(w) : `${w.code}:${sameAs}`;
       if (seen.has(key)) return;
       seen.add(key);
       warnings.push(w);
     },
   };
+}
+
+/**
+ * The default key of a caution, kept per finding: a sweep's memo hands the same findings
+ * (a list of every bearing left out for its size, say) to every point's collector. Findings
+ * are data, never changed once made.
+ */
+const keys = new WeakMap<Finding, string>();
+function keyOf(w: Finding): string {
+  let key = keys.get(w);
+  if (key === undefined) keys.set(w, (key = remarkKey(w)));
+  return key;
 }

@@ -1,4 +1,4 @@
-import { rollingRunning, type FrictionRow } from '../../data/rolling-running.js';
+import { rollingRunning, type FrictionRow, type RollingRunning } from '../../data/rolling-running.js';
 import type { Arrangement, KindForm, RollingKind } from './kinds.js';
 import type { BearingSupply } from './lubrication.js';
 
@@ -113,8 +113,18 @@ export function loadFactor(row: Pick<FrictionRow, 'z' | 'y'>, P0: number, C0: nu
  * (bearingShares). Loads are taken as magnitudes.
  */
 export function frictionMoment(x: FrictionInput): FrictionMoment {
-  const row = rollingRunning().friction.find((r) => r.kind === x.kind);
-  if (!row) throw new Error(`no friction factors for ${x.kind}`);
+  return frictionMomentWith(frictionRow(rollingRunning(), x.kind), x);
+}
+
+/** The friction factors of a kind (data/rolling-running.json → friction); a kind missing is a data defect. */
+export function frictionRow(t: RollingRunning, kind: RollingKind): FrictionRow {
+  const row = t.friction.find((r) => r.kind === kind);
+  if (!row) throw new Error(`no friction factors for ${kind}`);
+  return row;
+}
+
+/** frictionMoment with the kind's row of factors given (a sweep looks it up once per bearing). */
+export function frictionMomentWith(row: FrictionRow, x: FrictionInput): FrictionMoment {
   const f0 = row.f0[x.supply];
   const shares = bearingShares(x.arrangement, Math.abs(x.Fr), Math.abs(x.Fa));
   const f1: number[] = [];

@@ -1,7 +1,7 @@
 import { finding, type Finding } from '../../core/finding.js';
-import { rollingRunning } from '../../data/rolling-running.js';
+import { rollingRunning, type RollingRunning } from '../../data/rolling-running.js';
 import type { KindForm, RollingKind } from './kinds.js';
-import { speedFactor, speedLimit } from './speed.js';
+import { speedFactor, speedLimitFrom } from './speed.js';
 
 /**
  * Grease life of a rolling bearing: how long one fill of grease keeps lubricating, for a
@@ -78,12 +78,16 @@ const KELVIN = 273.15;
  * rolling.grease-heavy-load.
  */
 export function greaseLife(x: GreaseLifeInput): GreaseLife {
-  const t = rollingRunning();
+  return greaseLifeFrom(rollingRunning(), x);
+}
+
+/** greaseLife with the running table given (a sweep reads it once per case). */
+export function greaseLifeFrom(t: RollingRunning, x: GreaseLifeInput): GreaseLife {
   const g = t.greaseLife;
   const findings: Finding[] = [];
   const dm = (x.d + x.D) / 2;
   const ndm = speedFactor(x.n, dm);
-  const ndmLimit = speedLimit(x.kind, 'grease', x.form ?? null).ndm;
+  const ndmLimit = speedLimitFrom(t, x.kind, 'grease', x.form ?? null).ndm;
   const temperatureUsed = Math.max(x.temperature, g.coolTemperature);
   if (x.temperature < g.coolTemperature)
     findings.push(finding('rolling.grease-life-cool-held', { temperature: x.temperature, used: temperatureUsed }));
@@ -141,7 +145,12 @@ export interface RegreasingInterval {
  * for life has no interval: hold greaseLife(x).l10Hours against its required life.
  */
 export function regreasingInterval(x: GreaseLifeInput): RegreasingInterval {
-  const life = greaseLife(x);
-  const fraction = rollingRunning().greaseLife.regreaseFraction;
+  return regreasingIntervalFrom(rollingRunning(), x);
+}
+
+/** regreasingInterval with the running table given (a sweep reads it once per case). */
+export function regreasingIntervalFrom(t: RollingRunning, x: GreaseLifeInput): RegreasingInterval {
+  const life = greaseLifeFrom(t, x);
+  const fraction = t.greaseLife.regreaseFraction;
   return { hours: life.l10Hours === null ? null : fraction * life.l10Hours, life, fraction };
 }

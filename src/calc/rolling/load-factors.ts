@@ -1,5 +1,6 @@
-import { loadFactors, type KeyedAngle, type LoadFactors } from '../../data/rolling-load-factors.js';
-import { interpolate, type Interpolated } from './interpolate.js';
+import { loadFactors, type LoadFactors } from '../../data/rolling-load-factors.js';
+import { bracketOf, entryFactors, factors, prepared, type Factors } from './load-factor-rows.js';
+import { interpolatedRange, interpolatedValue, type Interpolated } from './interpolate.js';
 import type { Arrangement, KindForm, RollingKind } from './kinds.js';
 import { permissibleRibAxialLoad } from './rib-axial-load.js';
 
@@ -93,33 +94,9 @@ export function axialCapacity(kind: RollingKind, form: KindForm | null, arrangem
   }
 }
 
-/** e and the factors either side of it. */
-interface Factors {
-  e: number;
-  belowX: number;
-  belowY: number;
-  aboveX: number;
-  aboveY: number;
-}
-
 const cot = (deg: number) => 1 / Math.tan((deg * Math.PI) / 180);
 const tan = (deg: number) => Math.tan((deg * Math.PI) / 180);
 const lerp = (a: number, b: number, t: number) => a + t * (b - a);
-/** The factors with X = 1 below e (every kind). */
-const factors = (e: number, belowY: number, aboveX: number, aboveY: number): Factors => ({
-  e,
-  belowX: 1,
-  belowY,
-  aboveX,
-  aboveY,
-});
-/** Linear interpolation of a column ys over keys xs at x (the end value outside, with its range). */
-const col = (xs: readonly number[], ys: readonly number[], x: number): Interpolated =>
-  interpolate(
-    xs.map((k, i) => ({ x: k, y: ys[i]! })),
-    x,
-  );
-
 /** Apply the factors: below-e pair when Fa ≤ e·Fr (Fa/Fr ≤ e), the above-e pair otherwise. */
 function apply(
   f: Factors,
@@ -158,28 +135,11 @@ export function relativeAxialLoad(b: BearingLoadSpec, Fa: number): number | null
 }
 
 /** e, X, Y of a radial-contact ball bearing at the key, with where the key lies. */
-function radialBallFactors(t: LoadFactors, key: number): { f: Factors; at: Interpolated } {
-  const keys = t.radialBall.rows.map((r) => r.key);
-  const at = col(
-    keys,
-    t.radialBall.rows.map((r) => r.e),
-    key,
-  );
-  const Y = col(
-    keys,
-    t.radialBall.rows.map((r) => r.Y),
-    key,
-  ).value;
-  return { f: factors(at.value, 0, t.radialBall.xAboveE, Y), at };
-}
-
-/** Factors of one tabulated contact angle with key-dependent rows (5, 10, 15°). */
-function keyedAngleFactors(keys: number[], a: KeyedAngle, key: number, double: boolean): Factors {
-  const at = (ys: number[]) => col(keys, ys, key).value;
-  const d = a.double;
-  return double
-    ? factors(at(d.e), at(d.yBelowE), d.xAboveE, at(d.yAboveE))
-    : factors(at(a.single.e), 0, a.single.xAboveE, at(a.single.Y));
+function radialBallFactors(t: LoadFactors, key: number): { f: Factors; range: Interpolated['range'] } {
+  const p = prepared(t);
+  const e = interpolatedValue(p.radialBallE, key);
+  const Y = interpolatedValue(p.radialBallY, key);
+  return { f: factors(e, 0, t.radialBall.xAboveE, Y), range: interpolatedRange(p.radialBallE, key) };
 }
 
 /**
@@ -194,36 +154,19 @@ export function angularContactFactors(
   key: number,
   double: boolean,
 ): { f: Factors; range: DynamicLoad['range'] } | null {
-  const keys = t.angularContactKeyed.keys;
-  const at = col(keys, keys, key);
-  const entries: { angle: number; f: () => Factors }[] = [
-    ...t.angularContactKeyed.angles.map((a) => ({ angle: a.angle, f: () => keyedAngleFactors(keys, a, key, double) })),
-    ...t.angularContactFixed.rows.map((r) => ({
-      angle: r.angle,
-      f: () => (double ? factors(r.e, r.doubleYBelowE, r.doubleX, r.doubleY) : factors(r.e, 0, r.singleX, r.singleY)),
-    })),
-  ];
-  const first = entries[0]!;
-  const last = entries[entries.length - 1]!;
-  if (!(alpha >= first.angle - 1e-9 && alpha <= last.angle + 1e-9)) return null;
-  const j = Math.max(
-    1,
-    entries.findIndex((x) => x.angle >= alpha - 1e-9),
-  );
-  const lo = entries[j - 1]!;
-  const hi = entries[j]!;
-  const s = Math.min(1, Math.max(0, (alpha - lo.angle) / (hi.angle - lo.angle)));
-  const a = lo.f();
-  const b = hi.f();
+  const p = prepared(t);
+  const at = bracketOf(p, alpha);
+  if (!at) return null;
+  const { lo, hi, s } = at;
+  const a = entryFactors(lo, key, double);
+  const b = entryFactors(hi, key, double);
   const f = factors(
     lerp(a.e, b.e, s),
     lerp(a.belowY, b.belowY, s),
     lerp(a.aboveX, b.aboveX, s),
     lerp(a.aboveY, b.aboveY, s),
   );
-  const isKeyed = (angle: number) => t.angularContactKeyed.angles.some((k) => k.angle === angle);
-  const keyed = (s < 1 && isKeyed(lo.angle)) || (s > 0 && isKeyed(hi.angle));
-  return { f, range: keyed ? at.range : 'inside' };
+  return { f, range: at.keyed ? interpolatedRange(p.acKeys, key) : 'inside' };
 }
 
 /** Factors from the closed forms in α (self-aligning ball; tapered and spherical roller). */
@@ -256,10 +199,16 @@ const CLOSED_FORM_ANGLES = { min: 0, max: 45 } as const;
  * rib load the axial load is taken not to shorten raceway fatigue life (common practice).
  */
 export function dynamicLoad(b: BearingLoadSpec, Fr: number, Fa: number, n?: number): DynamicLoad {
-  const t = loadFactors();
+  return dynamicLoadFrom(loadFactors(), b, Fr, Fa, n);
+}
+
+/** An exclusion of dynamicLoad: its code and values. */
+const excl = (code: string, values: Record<string, number | string | null>) => ({ code, values });
+
+/** dynamicLoad with the load-factor table given (a sweep reads it once per case, not per point). */
+export function dynamicLoadFrom(t: LoadFactors, b: BearingLoadSpec, Fr: number, Fa: number, n?: number): DynamicLoad {
   const alpha = b.contactAngle;
   const double = actsAsDoubleRow(b.kind, b.arrangement);
-  const excl = (code: string, values: Record<string, number | string | null>) => ({ code, values });
   switch (b.kind) {
     case 'deep-groove ball': {
       const key = relativeAxialLoad(b, Fa);
@@ -267,14 +216,14 @@ export function dynamicLoad(b: BearingLoadSpec, Fr: number, Fa: number, n?: numb
         const f = radialBallFactors(t, 0).f;
         return apply(f, Fr, Fa, null, 'inside', Fa > 0 ? excl('rolling.load-key-unknown', { kind: b.kind }) : null);
       }
-      const { f, at } = radialBallFactors(t, key);
+      const { f, range } = radialBallFactors(t, key);
       if (!(Fa > 0)) return apply(f, Fr, 0, key, 'inside', null);
       const keyMax = t.radialBall.rows[t.radialBall.rows.length - 1]!.key;
       const exclusion =
-        at.range === 'above'
+        range === 'above'
           ? excl('rolling.axial-load-beyond-table', { kind: b.kind, key, keyMax, f0: b.f0, Fa, C0: b.C0 })
           : null;
-      return apply(f, Fr, Fa, key, at.range, exclusion);
+      return apply(f, Fr, Fa, key, range, exclusion);
     }
     case 'angular-contact ball': {
       const key = relativeAxialLoad(b, Fa);
@@ -332,7 +281,17 @@ export function dynamicLoad(b: BearingLoadSpec, Fr: number, Fa: number, n?: numb
  * 1° … 45° (indicative only: dynamicLoad excludes such a bearing).
  */
 export function staticLoad(b: BearingLoadSpec, Fr: number, Fa: number): { P0: number; X0: number; Y0: number } {
-  const s = loadFactors().static;
+  return staticLoadFrom(loadFactors(), b, Fr, Fa);
+}
+
+/** staticLoad with the load-factor table given (a sweep reads it once per case, not per point). */
+export function staticLoadFrom(
+  t: LoadFactors,
+  b: BearingLoadSpec,
+  Fr: number,
+  Fa: number,
+): { P0: number; X0: number; Y0: number } {
+  const s = t.static;
   const double = actsAsDoubleRow(b.kind, b.arrangement);
   const alpha = Math.min(45, Math.max(1, b.contactAngle));
   let X0 = 1;
@@ -344,8 +303,8 @@ export function staticLoad(b: BearingLoadSpec, Fr: number, Fa: number): { P0: nu
       break;
     case 'angular-contact ball': {
       X0 = double ? s.angularContactX0.double : s.angularContactX0.single;
-      const rows = s.angularContact.map((r) => ({ x: r.angle, y: double ? r.doubleY0 : r.singleY0 }));
-      Y0 = interpolate(rows, b.contactAngle).value;
+      const p = prepared(t);
+      Y0 = interpolatedValue(double ? p.staticDoubleY0 : p.staticSingleY0, b.contactAngle);
       break;
     }
     case 'self-aligning ball':

@@ -30,22 +30,28 @@ function orderNullLast(a: number | null, b: number | null): number {
 /** The traits of each kind, by kind, per table read (the sort below asks for them many times). */
 const traitsByTable = new WeakMap<KindTraits[], Map<RollingKind, KindTraits>>();
 
-/** A kind's traits (data/rolling-kinds.json, common practice); a kind missing from the table is a data defect. */
-function traitsOf(kind: RollingKind): KindTraits {
+/** The traits of each kind of the table in use (read once per choice, not per comparison). */
+type TraitsByKind = Map<RollingKind, KindTraits>;
+function traitsNow(): TraitsByKind {
   const table = kindTraits();
   let byKind = traitsByTable.get(table);
   if (!byKind) {
     byKind = new Map(table.map((t) => [t.kind, t]));
     traitsByTable.set(table, byKind);
   }
+  return byKind;
+}
+
+/** A kind's traits (data/rolling-kinds.json, common practice); a kind missing from the table is a data defect. */
+function traitsOf(kind: RollingKind, byKind: TraitsByKind): KindTraits {
   const t = byKind.get(kind);
   if (!t) throw new Error(`no row for kind "${kind}" in data/rolling-kinds.json`);
   return t;
 }
 
 /** Cost class of a candidate (data/rolling-kinds.json, common practice): its kind's or form's, one more for a matched pair. */
-function costClass(k: Pick<RollingCandidate, 'kind' | 'form' | 'arrangement'>): number {
-  const t = traitsOf(k.kind);
+function costClass(k: Pick<RollingCandidate, 'kind' | 'form' | 'arrangement'>, byKind: TraitsByKind): number {
+  const t = traitsOf(k.kind, byKind);
   const byForm = k.form !== null ? t.costClassByForm?.[k.form] : undefined;
   return (byForm ?? t.costClass) + (k.arrangement === 'single' ? 0 : 1);
 }
@@ -55,11 +61,11 @@ function costClass(k: Pick<RollingCandidate, 'kind' | 'form' | 'arrangement'>): 
  * about), then the least costly kind, then the kind practice reaches for first, then the
  * smallest outside diameter, then the narrowest (unknown sizes last), then a ball bearing.
  */
-function choiceOrder(a: RollingCandidate, b: RollingCandidate): number {
+function choiceOrder(a: RollingCandidate, b: RollingCandidate, byKind: TraitsByKind): number {
   return (
     (a.ratingSource === 'supplier' ? -1 : 0) - (b.ratingSource === 'supplier' ? -1 : 0) ||
-    costClass(a) - costClass(b) ||
-    traitsOf(a.kind).preference - traitsOf(b.kind).preference ||
+    costClass(a, byKind) - costClass(b, byKind) ||
+    traitsOf(a.kind, byKind).preference - traitsOf(b.kind, byKind).preference ||
     orderNullLast(a.outerDiameter, b.outerDiameter) ||
     orderNullLast(a.width, b.width) ||
     (a.type === 'ball' ? -1 : 0) - (b.type === 'ball' ? -1 : 0)
@@ -67,9 +73,9 @@ function choiceOrder(a: RollingCandidate, b: RollingCandidate): number {
 }
 
 /** The first of `list` in choiceOrder (what a stable sort would put first), in one pass. */
-function firstInChoiceOrder(list: RollingCandidate[]): RollingCandidate | undefined {
+function firstInChoiceOrder(list: RollingCandidate[], byKind: TraitsByKind): RollingCandidate | undefined {
   let first: RollingCandidate | undefined;
-  for (const k of list) if (first === undefined || choiceOrder(k, first) < 0) first = k;
+  for (const k of list) if (first === undefined || choiceOrder(k, first, byKind) < 0) first = k;
   return first;
 }
 
@@ -79,7 +85,11 @@ function firstInChoiceOrder(list: RollingCandidate[]): RollingCandidate | undefi
  * suitable is said.
  */
 export function bestCandidate(candidates: RollingCandidate[], notes: Notes): RollingCandidate | null {
-  const best = firstInChoiceOrder(candidates.filter((k) => k.feasible)) ?? null;
+  const best =
+    firstInChoiceOrder(
+      candidates.filter((k) => k.feasible),
+      traitsNow(),
+    ) ?? null;
   if (best) return best;
   if (candidates.length === 0) notes.warn(finding('rolling.no-candidate'));
   for (const k of leadOfEachKind(candidates)) {
@@ -104,15 +114,24 @@ export function bestCandidate(candidates: RollingCandidate[], notes: Notes): Rol
  * governing margin). What a person reads first; every candidate stays in the result.
  */
 export function leadOfEachKind(candidates: RollingCandidate[]): RollingCandidate[] {
+  const byKind = traitsNow();
   const out: RollingCandidate[] = [];
   for (const kind of ROLLING_KINDS) {
     const of = candidates.filter((k) => k.kind === kind);
-    const lead =
-      firstInChoiceOrder(of.filter((k) => k.feasible)) ??
-      [...of].sort(
-        (a, b) => a.exclusions.length - b.exclusions.length || governingMargin(b.checks) - governingMargin(a.checks),
-      )[0];
-    if (lead) out.push(lead);
+    const lead = firstInChoiceOrder(
+      of.filter((k) => k.feasible),
+      byKind,
+    );
+    if (lead) {
+      out.push(lead);
+      continue;
+    }
+    // The nearest miss: each governing margin worked once, not at every comparison of the sort.
+    const margin = new Map(of.map((k) => [k, governingMargin(k.checks)]));
+    const miss = [...of].sort(
+      (a, b) => a.exclusions.length - b.exclusions.length || margin.get(b)! - margin.get(a)!,
+    )[0];
+    if (miss) out.push(miss);
   }
   return out;
 }
@@ -151,7 +170,8 @@ export function equivalentLoadBound(
 
 /** The facts of a candidate's kind (common-practice traits from data/rolling-kinds.json). */
 export function kindFacts(k: RollingCandidate): KindFacts {
-  const t = traitsOf(k.kind);
+  const byKind = traitsNow();
+  const t = traitsOf(k.kind, byKind);
   return {
     kind: k.kind,
     id: k.id,
@@ -159,7 +179,7 @@ export function kindFacts(k: RollingCandidate): KindFacts {
     axialCapacity: k.axialCapacity,
     misalignment_arcmin: t.misalignment_arcmin,
     sectionHeight: k.outerDiameter === null ? null : (k.outerDiameter - k.bore) / 2,
-    costClass: costClass(k),
+    costClass: costClass(k, byKind),
     speedClass: t.speedClass,
   };
 }
@@ -169,10 +189,15 @@ export function kindFacts(k: RollingCandidate): KindFacts {
  * meets every check (then the smallest), and each less costly or equally costly kind that
  * does not, with its first reason. Null when nothing is feasible.
  */
-export function choiceFinding(best: RollingCandidate | null, candidates: RollingCandidate[]): Finding | null {
+export function choiceFinding(
+  best: RollingCandidate | null,
+  candidates: RollingCandidate[],
+  leads: RollingCandidate[] = leadOfEachKind(candidates),
+): Finding | null {
   if (!best) return null;
-  const passedOver = leadOfEachKind(candidates)
-    .filter((k) => k.kind !== best.kind && !k.feasible && costClass(k) <= costClass(best))
+  const byKind = traitsNow();
+  const passedOver = leads
+    .filter((k) => k.kind !== best.kind && !k.feasible && costClass(k, byKind) <= costClass(best, byKind))
     .map((k) => {
       const failing = k.checks.find((x) => !x.pass && !x.advisory);
       return finding('rolling.passed-over', {
@@ -184,7 +209,7 @@ export function choiceFinding(best: RollingCandidate | null, candidates: Rolling
   return finding('rolling.kind-chosen', {
     kind: best.kind,
     arrangement: best.arrangement,
-    costClass: costClass(best),
+    costClass: costClass(best, byKind),
     axialCapacity: best.axialCapacity,
     passedOver,
   });

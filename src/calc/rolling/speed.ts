@@ -1,5 +1,5 @@
 import type { Shock } from '../../case/types.js';
-import { rollingRunning } from '../../data/rolling-running.js';
+import { rollingRunning, type RollingRunning, type SpeedLimitRow } from '../../data/rolling-running.js';
 import type { BearingSupply, KindForm, RollingKind } from './kinds.js';
 import type { RollingType } from './life.js';
 
@@ -64,10 +64,35 @@ export interface SpeedLimit {
  * below them. Throws when the table has no row for the kind (a data defect).
  */
 export function speedLimit(kind: RollingKind, supply: BearingSupply, form: KindForm | null = null): SpeedLimit {
-  const rows = rollingRunning().speedLimits.filter((r) => r.kind === kind);
+  return speedLimitFrom(rollingRunning(), kind, supply, form);
+}
+
+/** speedLimit with the running table given (a sweep reads it once per case). */
+export function speedLimitFrom(
+  t: RollingRunning,
+  kind: RollingKind,
+  supply: BearingSupply,
+  form: KindForm | null = null,
+): SpeedLimit {
+  const row = speedRow(t, kind, form);
+  return { ndm: row.ndm[supply], source: row.source };
+}
+
+/** The row of each kind and form, per table read (every candidate at every point asks). */
+const speedRows = new WeakMap<RollingRunning, Map<RollingKind, Map<KindForm | null, SpeedLimitRow>>>();
+
+function speedRow(t: RollingRunning, kind: RollingKind, form: KindForm | null): SpeedLimitRow {
+  let byKind = speedRows.get(t);
+  if (!byKind) speedRows.set(t, (byKind = new Map()));
+  let byForm = byKind.get(kind);
+  if (!byForm) byKind.set(kind, (byForm = new Map()));
+  const hit = byForm.get(form);
+  if (hit) return hit;
+  const rows = t.speedLimits.filter((r) => r.kind === kind);
   const row = rows.find((r) => form !== null && r.form === form) ?? rows.find((r) => r.form === null);
   if (!row) throw new Error(`no speed limit for ${kind}`);
-  return { ndm: row.ndm[supply], source: row.source };
+  byForm.set(form, row);
+  return row;
 }
 
 /** Static-safety guidance: the least s0 = C0/P0 for a shock level, its label and its source. */
