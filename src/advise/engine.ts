@@ -202,21 +202,16 @@ function traceRules(rules: LoadedRule[], run: RuleRun, fired: Set<string>): Rule
 }
 
 /**
- * One option's place before ranking: its check's exclusions, then each fired rule for it — an
- * exclusion, or points weighted by the priority it names (priority/3, 3 neutral).
+ * One option's place before ranking: its check's exclusions, then each fired rule for it (in
+ * the rules' order) — an exclusion, or points weighted by the priority it names (priority/3,
+ * 3 neutral).
  */
-function scoreOption(
-  option: OptionName,
-  f: OptionFigures,
-  rules: LoadedRule[],
-  fired: Set<string>,
-  c: CaseSI,
-): RankedOption {
+function scoreOption(option: OptionName, f: OptionFigures, fired: readonly LoadedRule[], c: CaseSI): RankedOption {
   const reasons: Reason[] = [];
   const excluded: Remark[] = [];
   if (!f.feasible) excluded.push(...(f.why.length ? f.why : ['its check found no feasible design']));
-  for (const r of rules) {
-    if (!fired.has(r.name) || r.event.option !== option) continue;
+  for (const r of fired) {
+    if (r.event.option !== option) continue;
     if (r.event.type === 'exclude') {
       excluded.push(r.because);
       reasons.push({ rule: r.name, points: 0, basePoints: 0, weight: 1, because: r.because, file: r.file });
@@ -282,7 +277,9 @@ export async function advise(
   const traces = opts.traces === false ? [] : traceRules(rules, run, fired);
   const fig = lazy.figures();
   const checks = { bushing: lazy.bushing(), rolling: lazy.rolling(), journal: lazy.journal() };
-  const ranking = rank(OPTIONS.map((option) => scoreOption(option, fig[option], rules, fired, c)));
+  // The rules that fired, in the rules' order (each option's reasons keep that order).
+  const firedRules = rules.filter((r) => fired.has(r.name));
+  const ranking = rank(OPTIONS.map((option) => scoreOption(option, fig[option], firedRules, c)));
   const top = ranking[0]!;
   const tied = ranking.filter((r) => r.feasible === top.feasible && r.score === top.score);
   const tieBreak =

@@ -178,10 +178,25 @@ export function bushingFigures(r: BushingResult, c: CaseSI): OptionFigures {
   };
 }
 
+/**
+ * The candidate with the largest governing margin, the first of equals: what a stable sort on
+ * descending margin puts first, found in one pass with each margin computed once. A NaN margin
+ * makes that sort's order depend on its comparisons, so then the sort itself is run (on the
+ * margins computed once).
+ */
+function nearestMiss<T extends { checks: CheckRecord[] }>(candidates: readonly T[]): T | undefined {
+  const margins = candidates.map((x) => governingMargin(x.checks));
+  if (margins.some(Number.isNaN)) {
+    const order = margins.map((_, i) => i).sort((a, b) => margins[b]! - margins[a]!);
+    return candidates[order[0]!];
+  }
+  let best = 0;
+  for (let i = 1; i < margins.length; i++) if (margins[i]! > margins[best]!) best = i;
+  return candidates[best];
+}
+
 export function rollingFigures(r: RollingResult, c: CaseSI): OptionFigures {
-  const k =
-    r.candidates.find((x) => x.id === r.best) ??
-    [...r.candidates].sort((a, b) => governingMargin(b.checks) - governingMargin(a.checks))[0];
+  const k = r.candidates.find((x) => x.id === r.best) ?? nearestMiss(r.candidates);
   if (!k)
     return {
       feasible: false,

@@ -47,7 +47,7 @@ describe('uniqueRemarks', () => {
       [{ n: Infinity }, { n: NaN }],
       [{ n: -0 }, { n: 0 }],
       [{ n: 1, m: undefined as unknown as null }, { n: 1 }],
-      [{ n: [NaN, 1] }, { n: [null, 1] }],
+      [{ n: [NaN, 1] }, { n: [null, 1] as unknown as number[] }],
       [
         { n: 's', k: NaN },
         { n: 's', k: NaN },
