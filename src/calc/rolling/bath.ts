@@ -5,7 +5,7 @@ import type { CandidateSpec } from './candidates.js';
 import type { EvalContext } from './context.js';
 import { evaluate } from './evaluate.js';
 import { newNotes, type Notes } from './findings.js';
-import { bearingLubrication, type OilSystem } from './lubrication.js';
+import { bathLubrication, type Lubrication, type OilSystem } from './lubrication.js';
 import type { RollingCandidate } from './types.js';
 
 /**
@@ -44,12 +44,8 @@ const lastBath = new WeakMap<EvalContext, number>();
  * search to a scratch collector. `system` the case's oil system (the shared grade, if any).
  */
 export function evaluateInBath(spec: CandidateSpec, ctx: EvalContext, system: OilSystem, notes: Notes): BathCandidate {
-  const c = ctx.c;
-  const { model, area, ambient } = caseSump(c);
-  const at = (t: number): EvalContext => ({
-    ...ctx,
-    lubrication: bearingLubrication(c, newNotes(), { ...system, bath: { temperature: t, values: {} } }),
-  });
+  const { model, area, ambient, lubricationAt } = bathOf(ctx, system);
+  const at = (t: number): EvalContext => ({ ...ctx, lubrication: lubricationAt(t) });
   // Each evaluation of the search keeps what it noted; the one at the bath temperature found is
   // the candidate's own, its notes passed on in order (no evaluation is repeated).
   const tried = new Map<number, { candidate: RollingCandidate; ctx: EvalContext; replay: (to: Notes) => void }>();
@@ -69,6 +65,20 @@ export function evaluateInBath(spec: CandidateSpec, ctx: EvalContext, system: Oi
   }
   const own = at(bath.temperature);
   return { candidate: evaluate(spec, own, notes), ctx: own, bath };
+}
+
+/** The case's sump and its oil at any bath temperature, per context and oil system (the same for every candidate). */
+const baths = new WeakMap<
+  EvalContext,
+  { system: OilSystem; sump: ReturnType<typeof caseSump>; lubricationAt: (t: number) => Lubrication }
+>();
+function bathOf(ctx: EvalContext, system: OilSystem) {
+  let hit = baths.get(ctx);
+  if (!hit || hit.system !== system) {
+    hit = { system, sump: caseSump(ctx.c), lubricationAt: bathLubrication(ctx.c, system) };
+    baths.set(ctx, hit);
+  }
+  return { ...hit.sump, lubricationAt: hit.lubricationAt };
 }
 
 /** A collector that records what is noted, to be passed on to another collector later in the same order. */

@@ -4,7 +4,7 @@ import { lubricants, oilGrade } from '../../data/load.js';
 import { kinematicViscosity } from '../lubricant.js';
 import { sumpModel } from '../sump.js';
 import { finiteOr } from './conditions.js';
-import type { Notes } from './findings.js';
+import { newNotes, type Notes } from './findings.js';
 import type { BearingSupply } from './kinds.js';
 
 /**
@@ -93,6 +93,19 @@ export function bearingLubrication(c: CaseSI, notes: Notes, system: OilSystem = 
  * the table falls back to the grease base oil's, and says so.
  */
 function caseViscosity(c: CaseSI, supply: BearingSupply, tC: number, notes: Notes): number {
+  return viscosityAt(caseOil(c, supply, notes), tC);
+}
+
+/** A fixed kinematic viscosity (m²/s), or the grade whose law gives it at each temperature. */
+type CaseOil = number | { nu40: number; nu100: number };
+
+/** The kinematic viscosity of a case's oil at tC (°C), m²/s. */
+function viscosityAt(oil: CaseOil, tC: number): number {
+  return typeof oil === 'number' ? oil : kinematicViscosity(oil, tC) * 1e-6;
+}
+
+/** The case's lubricant as caseViscosity reads it, with what it assumes and cautions. */
+function caseOil(c: CaseSI, supply: BearingSupply, notes: Notes): CaseOil {
   const mu = c.lubrication.viscosity;
   if (mu !== undefined && mu > 0) {
     const nu = mu / OIL_DENSITY;
@@ -123,7 +136,26 @@ function caseViscosity(c: CaseSI, supply: BearingSupply, tC: number, notes: Note
     notes.warn(finding('rolling.grade-not-in-table', { grade, fallback: lub.greaseBaseOil.grade }));
     oil = oilGrade(lub.greaseBaseOil.grade) ?? lub.grades[0]!;
   }
-  return kinematicViscosity(oil, tC) * 1e-6;
+  return oil;
+}
+
+/**
+ * The lubrication of a bearing in an oil bath at any bath temperature T (°C): what
+ * bearingLubrication(c, notes, { ...system, bath: { temperature: T, values: {} } }) gives, its
+ * notes left out, with the oil and the bearing's rise over the bath read once (the bath's
+ * search tries several temperatures for every candidate).
+ */
+export function bathLubrication(c: CaseSI, system: OilSystem): (bathTemperature: number) => Lubrication {
+  if (c.lubrication.supply !== 'oil-bath')
+    return (t) => bearingLubrication(c, newNotes(), { ...system, bath: { temperature: t, values: {} } });
+  const rise = sumpModel().bearingRise;
+  const shared = c.lubrication.oilGrade === undefined ? system.sharedGrade : undefined;
+  const cs: CaseSI = shared ? { ...c, lubrication: { ...c.lubrication, oilGrade: shared.grade } } : c;
+  const oil = caseOil(cs, 'oil-bath', newNotes());
+  return (t) => {
+    const temperature = t + rise;
+    return { sealed: false, supply: 'oil-bath', temperature, viscosity: viscosityAt(oil, temperature) };
+  };
 }
 
 /**
