@@ -9,6 +9,10 @@ import { startupSnapshot } from 'node:v8';
 import { runProgram } from './program.js';
 import { runAdvise } from './advise.js';
 import { runCheck, CHECKS } from './check.js';
+import { loadCaseFile } from '../case/load.js';
+import { computeMap } from '../explore/map.js';
+import { mapText } from '../report/explore/map-text.js';
+import { mapSvg } from '../report/explore/map-svg.js';
 
 const ROOT = new URL('../../', import.meta.url);
 const PACKAGE_JSON = new URL('package.json', ROOT);
@@ -23,17 +27,30 @@ function warmingCases(): string[] {
   return files;
 }
 
+/** Cells a side of the map drawn while warming (the first example, a single-support case). */
+const MAP_WARMING_GRID = 12;
+
 /**
- * Advise every example in each format and run each check on the single-support ones. Output
- * is discarded; a case that fails is skipped (the snapshot still holds what ran before it).
+ * Advise every example in each format and run each check on the single-support ones; draw a
+ * small map of the first single-support example, as text and SVG. Output is discarded; a case
+ * that fails is skipped (the snapshot still holds what ran before it).
  */
 async function warm(): Promise<void> {
   const skip = () => '';
-  for (const file of warmingCases()) {
+  const files = warmingCases();
+  for (const file of files) {
     for (const format of ['text', 'json', 'md', 'html'] as const)
       await runAdvise(file, { format, units: 'SI', explain: false, now: () => new Date(0) }).catch(skip);
     for (const name of CHECKS)
       for (const format of ['text', 'json'] as const) await runCheck(name, file, { format, units: 'SI' }).catch(skip);
+  }
+  try {
+    const loaded = loadCaseFile(files[0]!);
+    const m = await computeMap(loaded.case, loaded.assumed, { grid: MAP_WARMING_GRID });
+    mapText(m);
+    mapSvg(m);
+  } catch {
+    // A map that cannot be drawn leaves its code cold, nothing else.
   }
 }
 

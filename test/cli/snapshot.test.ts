@@ -134,6 +134,9 @@ describe('the start-up snapshot', () => {
     const out = (k: string) => join(tmp, k);
     await expectSame([
       ['map', 'examples/sawmill-infeed-roller.yaml', '--grid', '6'],
+      // The example whose 12 × 12 map warmed the snapshot: that grid again, and another.
+      ['map', 'examples/irrigation-pump-lineshaft.yaml', '--grid', '12'],
+      ['map', 'examples/irrigation-pump-lineshaft.yaml', '--grid', '17', '--full'],
       ['map', 'examples/shaft/cider-mill-crusher-shaft.yaml', '--grid', '4'],
       ['sensitivity', 'examples/packaging-worm-drive.yaml'],
       ['sensitivity', 'examples/shaft/cider-mill-crusher-shaft.yaml', '--format', 'json'],
