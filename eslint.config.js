@@ -18,6 +18,8 @@ export default tseslint.config(
         Buffer: 'readonly',
         setTimeout: 'readonly',
         clearTimeout: 'readonly',
+        setInterval: 'readonly',
+        clearInterval: 'readonly',
         performance: 'readonly',
         structuredClone: 'readonly',
         TextEncoder: 'readonly',

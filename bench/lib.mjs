@@ -29,3 +29,33 @@ export function interleaved(commands, runs, cwd, { warmup = true } = {}) {
     commands.map((c, k) => [c.name, { median: median(times[k]), fastest: Math.min(...times[k]), all: times[k] }]),
   );
 }
+
+/**
+ * Peak resident memory of one run of `cmd ...args`, MB: the child's VmHWM (high-water mark) read
+ * from /proc/<pid>/status every few milliseconds while it runs, the last reading kept. Works for
+ * any process (a start-up snapshot ignores `node -r`); null where /proc is not there (not Linux).
+ * The mark only rises, so a reading misses at most what the last few milliseconds added.
+ */
+export async function peakRss(cmd, args, { cwd, ok = [0] } = {}) {
+  const { spawn } = await import('node:child_process');
+  const { readFileSync } = await import('node:fs');
+  return new Promise((resolve, reject) => {
+    const child = spawn(cmd, args, { cwd, stdio: 'ignore' });
+    let kb = null;
+    const read = () => {
+      try {
+        const m = /VmHWM:\s+(\d+) kB/.exec(readFileSync(`/proc/${child.pid}/status`, 'utf8'));
+        if (m) kb = Math.max(kb ?? 0, Number(m[1]));
+      } catch {
+        // The process is gone or /proc is absent: keep the last reading.
+      }
+    };
+    const timer = setInterval(read, 2);
+    child.on('error', reject);
+    child.on('exit', (code) => {
+      clearInterval(timer);
+      if (!ok.includes(code)) reject(new Error(`${cmd} ${args.join(' ')} exited ${code}`));
+      else resolve(kb === null ? null : kb / 1024);
+    });
+  });
+}

@@ -1,13 +1,13 @@
 // Selection-map benchmark (run on demand, not part of the test suite). Build first: npm run build
 // Usage: node bench/map.mjs [runs] [case] [--quick]
-// Prints: whole-process time of a 60×60 map (SVG out) against bare `node -e 0`, the map's peak
-// resident memory (median over the runs, each map run once more alone), per-point
+// Prints: whole-process time of a 60×60 map (SVG out) against bare `node -e 0`, run as users run
+// it (bin/shaftwise: the start-up snapshot where usable) and through the normal bundle; the map's
+// peak resident memory through bin/shaftwise (median over the runs, each run once more alone); per-point
 // costs of each part in-process, and the agreement of the map's winners with full advise()
 // (journal design sweep at every point) on a 12×12 sub-grid. --quick: a 30×30 map, per-point
 // costs over 10×10 points instead of 20×20, agreement on a 6×6 sub-grid.
-import { interleaved } from './lib.mjs';
-import { spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { interleaved, peakRss } from './lib.mjs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -33,45 +33,35 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 const main = join(root, 'dist/bundle/shaftwise.mjs');
 const out = mkdtempSync(join(tmpdir(), 'shaftwise-bench-'));
 
+const launcher = join(root, 'bin/shaftwise');
+const mapArgs = ['map', file, '--grid', String(grid), '--out', join(out, 'm.svg'), '--force'];
 const w = interleaved(
   [
     { name: 'bare', args: ['-e', '0'] },
-    { name: 'map', args: [main, 'map', file, '--grid', String(grid), '--out', join(out, 'm.svg'), '--force'] },
-    { name: 'advise', args: [main, 'advise', file] },
+    { name: 'map', cmd: launcher, args: mapArgs },
+    { name: 'mapBundle', args: [main, ...mapArgs] },
+    { name: 'advise', cmd: launcher, args: ['advise', file] },
   ],
   runs,
   root,
 );
 const bare = w.bare.median;
-const mapMs = w.map.median;
-const adv = w.advise.median;
+const ratio = (ms) => `${ms.toFixed(0)} ms  (${(ms / bare).toFixed(1)}x)`;
 console.log(`== whole process, median of ${runs} interleaved rounds ==`);
 console.log(`node -e 0:                 ${bare.toFixed(0)} ms`);
-console.log(`shaftwise advise:          ${adv.toFixed(0)} ms  (${(adv / bare).toFixed(1)}x)`);
-const budget = grid === 60 ? '; budget 3000 ms' : '';
-console.log(`shaftwise map --grid ${grid}:   ${mapMs.toFixed(0)} ms  (${(mapMs / bare).toFixed(1)}x${budget})`);
+console.log(`shaftwise advise:          ${ratio(w.advise.median)}`);
+console.log(`shaftwise map --grid ${grid}:   ${ratio(w.map.median)} map (bin/shaftwise)`);
+console.log(`  the same, normal bundle: ${ratio(w.mapBundle.median)} bundle (node dist/bundle/shaftwise.mjs)`);
 
-// Peak resident memory of the map's process: a preloaded script prints maxRSS at exit.
-const probe = join(out, 'rss.cjs');
-writeFileSync(
-  probe,
-  "process.on('exit', () => require('fs').writeSync(2, 'maxrss ' + process.resourceUsage().maxRSS + '\\n'));\n",
-);
+// Peak resident memory of the map's process (bin/shaftwise), read from /proc while it runs.
 const peaks = [];
-for (let i = 0; i < runs; i++) {
-  const r = spawnSync(
-    process.execPath,
-    ['-r', probe, main, 'map', file, '--grid', String(grid), '--out', join(out, 'm.svg'), '--force'],
-    { cwd: root, encoding: 'utf8' },
+for (let i = 0; i < runs; i++) peaks.push(await peakRss(launcher, mapArgs, { cwd: root }));
+if (peaks.every((p) => p !== null)) {
+  const peakSorted = [...peaks].sort((x, y) => x - y);
+  console.log(
+    `map peak RSS:              ${peakSorted[Math.floor(runs / 2)].toFixed(0)} MB median of ${runs} (${peakSorted[0].toFixed(0)}–${peakSorted[runs - 1].toFixed(0)} MB)`,
   );
-  const kb = Number(/maxrss (\d+)/.exec(r.stderr ?? '')?.[1]);
-  if (r.status !== 0 || !(kb > 0)) throw new Error(`map for peak memory exited ${r.status}: ${r.stderr}`);
-  peaks.push(kb / 1024);
-}
-const peakSorted = [...peaks].sort((x, y) => x - y);
-console.log(
-  `map peak RSS:              ${peakSorted[Math.floor(runs / 2)].toFixed(0)} MB median of ${runs} (${peakSorted[0].toFixed(0)}–${peakSorted[runs - 1].toFixed(0)} MB)`,
-);
+} else console.log('map peak RSS:              not measured (no /proc here)');
 
 // Per-point costs, in-process, warm.
 const l = loadCaseFile(join(root, file));

@@ -75,18 +75,21 @@ const RATIO = /(\d+\.\d+)x(?![.\d])(?: \(([a-z]+)\)|((?: [a-z]+)+))?/g;
 
 /**
  * The figures a benchmark printed: each line with a ratio, as "what: 3.9x medians, 4.1x
- * fastest"; for an in-process benchmark (no ratio), the lines its plan names in `figures`.
+ * fastest"; for an in-process benchmark (no ratio), the lines its plan names in `figures`; and any peak-memory line.
  */
 function figuresIn(output, figures) {
   const lines = output.split('\n');
   if (figures) return lines.filter((line) => figures.test(line)).map((line) => line.trim().replace(/\s+/g, ' '));
-  return lines
+  // A peak memory line ("map peak RSS: 99 MB median of 3 (…)") is a figure of its own.
+  const memory = lines.filter((line) => /peak RSS:/.test(line)).map((line) => line.trim().replace(/\s+/g, ' '));
+  const ratios = lines
     .filter((line) => new RegExp(RATIO.source).test(line))
     .map((line) => {
       const what = line.split(/[:(]/)[0].trim().replace(/\s+/g, ' ');
       const found = [...line.matchAll(RATIO)].map((m) => `${m[1]}x${m[2] ? ` ${m[2]}` : (m[3] ?? '')}`);
       return `${what}: ${found.join(', ')}`;
     });
+  return [...ratios, ...memory];
 }
 
 const t0 = Date.now();
