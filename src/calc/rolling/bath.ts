@@ -3,8 +3,8 @@ import { assumedFinding } from '../../core/finding.js';
 import { bathTemperature, bathValues, caseSump, sumpModel, type BathTemperature } from '../sump.js';
 import type { CandidateSpec } from './candidates.js';
 import type { EvalContext } from './context.js';
-import { evaluate } from './evaluate.js';
-import { newNotes, type Notes } from './findings.js';
+import { evaluate, frictionLoss } from './evaluate.js';
+import type { Notes } from './findings.js';
 import { bathLubrication, type Lubrication, type OilSystem } from './lubrication.js';
 import type { RollingCandidate } from './types.js';
 
@@ -40,29 +40,15 @@ export interface BathCandidate {
 const lastBath = new WeakMap<EvalContext, number>();
 
 /**
- * Evaluate one candidate at its own bath temperature; its cautions go to `notes`, those of the
- * search to a scratch collector. `system` the case's oil system (the shared grade, if any).
+ * Evaluate one candidate at its own bath temperature; its cautions go to `notes` (the search
+ * notes nothing). `system` the case's oil system (the shared grade, if any).
  */
 export function evaluateInBath(spec: CandidateSpec, ctx: EvalContext, system: OilSystem, notes: Notes): BathCandidate {
   const { model, area, ambient, lubricationAt } = bathOf(ctx, system);
   const at = (t: number): EvalContext => ({ ...ctx, lubrication: lubricationAt(t) });
-  // Each evaluation of the search keeps what it noted; the one at the bath temperature found is
-  // the candidate's own, its notes passed on in order (no evaluation is repeated).
-  const tried = new Map<number, { candidate: RollingCandidate; ctx: EvalContext; replay: (to: Notes) => void }>();
-  const loss = (t: number) => {
-    const own = at(t);
-    const log = recorder();
-    const candidate = evaluate(spec, own, log.notes);
-    tried.set(t, { candidate, ctx: own, replay: log.replay });
-    return candidate.frictionPower;
-  };
-  const bath = bathTemperature(ambient, area, model, loss, lastBath.get(ctx));
+  // The search asks only for the friction loss; the candidate is evaluated once, at the bath temperature found.
+  const bath = bathTemperature(ambient, area, model, (t) => frictionLoss(spec, at(t)), lastBath.get(ctx));
   lastBath.set(ctx, bath.temperature);
-  const hit = tried.get(bath.temperature);
-  if (hit) {
-    hit.replay(notes);
-    return { candidate: hit.candidate, ctx: hit.ctx, bath };
-  }
   const own = at(bath.temperature);
   return { candidate: evaluate(spec, own, notes), ctx: own, bath };
 }
@@ -79,25 +65,6 @@ function bathOf(ctx: EvalContext, system: OilSystem) {
     baths.set(ctx, hit);
   }
   return { ...hit.sump, lubricationAt: hit.lubricationAt };
-}
-
-/** A collector that records what is noted, to be passed on to another collector later in the same order. */
-function recorder(): { notes: Notes; replay: (to: Notes) => void } {
-  const calls: ((to: Notes) => void)[] = [];
-  const scratch = newNotes();
-  const notes: Notes = {
-    assumed: scratch.assumed,
-    warnings: scratch.warnings,
-    assume: (a) => {
-      scratch.assume(a);
-      calls.push((to) => to.assume(a));
-    },
-    warn: (w, sameAs) => {
-      scratch.warn(w, sameAs);
-      calls.push((to) => to.warn(w, sameAs));
-    },
-  };
-  return { notes, replay: (to) => calls.forEach((call) => call(to)) };
 }
 
 /** The assumption that states the bath of the bearing shown: the model, its figures, the rise. */

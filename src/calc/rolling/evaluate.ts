@@ -195,13 +195,15 @@ function lives(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: N
 }
 
 /**
- * Speed, friction and grease [4]: n·dm at the highest speed (mm·r/min); the time means over the
- * duty of the friction moment Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W), Mi from the
- * point's loads without f_d; on grease, the grease life (sealed) or relubrication interval
- * (open) at the highest speed, h.
+ * The friction moment at each point [4], Mi from the point's loads without f_d, and its time
+ * means over the duty: torque Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W).
  */
-function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointLoad[], P: number, notes: Notes) {
-  const ndm = speedFactor(ctx.maxSpeed, spec.dm);
+function friction(
+  spec: CandidateSpec,
+  p: Prepared,
+  ctx: EvalContext,
+  per: readonly Pick<PointLoad, 'Fr' | 'FaBearing' | 'n' | 't'>[],
+) {
   let sumT = 0;
   let sumM = 0;
   let sumW = 0;
@@ -224,6 +226,34 @@ function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointL
     sumW += q.t * frictionPower(m.total, q.n);
     return m;
   });
+  return { moments, torque: sumT > 0 ? sumM / sumT : 0, power: sumT > 0 ? sumW / sumT : 0 };
+}
+
+/**
+ * A candidate's time-mean friction power in a context, W: evaluate's frictionPower, worked
+ * without its other figures and notes (an oil bath's search asks for it at several temperatures).
+ */
+export function frictionLoss(spec: CandidateSpec, ctx: EvalContext): number {
+  const p = prepared(spec, ctx.tables);
+  const t = ctx.tables.load;
+  const per = ctx.points.map((q) => ({
+    Fr: q.Fr,
+    FaBearing: bearingAxialLoad(t, spec, p, q.Fr, q.Fa),
+    n: q.n,
+    t: q.t,
+  }));
+  return friction(spec, p, ctx, per).power;
+}
+
+/**
+ * Speed, friction and grease [4]: n·dm at the highest speed (mm·r/min); the time means over the
+ * duty of the friction moment Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W), Mi from the
+ * point's loads without f_d; on grease, the grease life (sealed) or relubrication interval
+ * (open) at the highest speed, h.
+ */
+function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointLoad[], P: number, notes: Notes) {
+  const ndm = speedFactor(ctx.maxSpeed, spec.dm);
+  const { moments, torque, power } = friction(spec, p, ctx, per);
   let grease: number | null = null;
   if (ctx.lubrication.supply === 'grease' && ctx.maxSpeed > 0) {
     const input = {
@@ -239,7 +269,7 @@ function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointL
     grease = ctx.lubrication.sealed ? r.life.l10Hours : r.hours;
     for (const f of r.life.findings) notes.warn(f, 'once');
   }
-  return { ndm, moments, torque: sumT > 0 ? sumM / sumT : 0, power: sumT > 0 ? sumW / sumT : 0, grease };
+  return { ndm, moments, torque, power, grease };
 }
 
 /**
