@@ -49,11 +49,31 @@ export class RuleFileError extends DataError {}
 /** rules/ beside the program, or the folder named by SHAFTWISE_RULES_DIR (a team's own rule set). */
 export function rulesDir(): URL {
   const dir = process.env.SHAFTWISE_RULES_DIR;
-  return dir ? pathToFileURL(dir.endsWith('/') ? dir : `${dir}/`) : new URL('../../rules/', import.meta.url);
+  return dir ? pathToFileURL(dir.endsWith('/') ? dir : `${dir}/`) : ownRulesDir();
 }
 
-/** Load and validate every rules/*.json, in file-name order (so results are deterministic). */
+/** The program's own rules/ folder. */
+const ownRulesDir = (): URL => new URL('../../rules/', import.meta.url);
+
+/** The rules of the program's own rules/ folder, read once (see loadRules). */
+let shipped: { href: string; rules: LoadedRule[] } | undefined;
+
+/**
+ * Load and validate every rules/*.json, in file-name order (so results are deterministic).
+ * The program's own rules/ folder is read once per process, as the tables in data/ are, and
+ * each call gets its own copy (a caller may change what it is given without touching what the
+ * next one gets); any other folder (named by SHAFTWISE_RULES_DIR or passed in) holds someone's
+ * own rules and is read on every call.
+ */
 export function loadRules(dir: URL = rulesDir()): LoadedRule[] {
+  const own = !process.env.SHAFTWISE_RULES_DIR && dir.href === ownRulesDir().href;
+  if (own && shipped?.href === dir.href) return structuredClone(shipped.rules);
+  const rules = readRules(dir);
+  if (own) shipped = { href: dir.href, rules: structuredClone(rules) };
+  return rules;
+}
+
+function readRules(dir: URL): LoadedRule[] {
   let listing: string[];
   try {
     listing = readdirSync(dir);
