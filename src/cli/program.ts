@@ -79,9 +79,10 @@ export function buildProgram(packageJson: URL): Command {
 
 /**
  * Run the program on `argv` (node's form: program, script, then the arguments). The one place
- * for errors and exit codes.
+ * for errors and exit codes. `program`: one built beforehand by buildProgram (the start-up
+ * snapshot builds it while building); it parses one command line, so a process runs it once.
  */
-export async function runProgram(argv: string[], packageJson: URL): Promise<void> {
+export async function runProgram(argv: string[], packageJson: URL, program?: Command): Promise<void> {
   const debug = argv.includes('--debug');
   // A reader that stops early (`shaftwise advise … | head`) closes the pipe: the rest of the output
   // has nowhere to go, and that is the reader's choice, not a failure. Without a listener Node
@@ -91,7 +92,7 @@ export async function runProgram(argv: string[], packageJson: URL): Promise<void
     fail(e, debug);
   });
   try {
-    await buildProgram(packageJson).parseAsync(argv);
+    await (program ?? buildProgram(packageJson)).parseAsync(argv);
   } catch (e) {
     fail(e, debug);
   }

@@ -6,7 +6,7 @@
 import './jitless.js';
 import { readdirSync } from 'node:fs';
 import { startupSnapshot } from 'node:v8';
-import { runProgram } from './program.js';
+import { buildProgram, runProgram } from './program.js';
 import { runAdvise } from './advise.js';
 import { runCheck, CHECKS } from './check.js';
 import { loadCaseFile } from '../case/load.js';
@@ -56,12 +56,15 @@ async function warm(): Promise<void> {
 
 // No top-level await: the bundle of this entry is a CommonJS script.
 if (startupSnapshot.isBuildingSnapshot()) {
-  void warm().then(() =>
+  void warm().then(() => {
+    // The command-line program is built here, once, and parses the command line of the process
+    // started from the snapshot (its version read from package.json now).
+    const program = buildProgram(PACKAGE_JSON);
     // Started from the snapshot, node gives the arguments after its own: [node, ...args].
     startupSnapshot.setDeserializeMainFunction(() => {
-      void runProgram([process.argv[0]!, 'shaftwise', ...process.argv.slice(1)], PACKAGE_JSON);
-    }),
-  );
+      void runProgram([process.argv[0]!, 'shaftwise', ...process.argv.slice(1)], PACKAGE_JSON, program);
+    });
+  });
 } else {
   // Run as a plain script (node dist/snapshot/shaftwise.cjs ARGS): the same program.
   void runProgram(process.argv, PACKAGE_JSON);

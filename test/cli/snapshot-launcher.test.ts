@@ -124,6 +124,16 @@ describe('bin/shaftwise', () => {
     ],
     ['a blob built from another script', (dir, root) => usable(dir, root, (l) => (l[2] = '0'.repeat(64)))],
     ['a blob built in another package folder', (dir, root) => usable(dir, root, (l) => (l[3] = `${root}-moved`))],
+    [
+      'a package.json written after the blob (the blob holds the program with the version it read)',
+      (dir, root) => {
+        usable(dir, root);
+        rmSync(join(root, 'package.json'));
+        copyFileSync(join(ROOT, 'package.json'), join(root, 'package.json'));
+        const later = new Date(Date.now() + 60_000);
+        utimesSync(join(root, 'package.json'), later, later);
+      },
+    ],
     ['SHAFTWISE_DATA_DIR set', usable, { SHAFTWISE_DATA_DIR: join(ROOT, 'data') }],
     ['SHAFTWISE_RULES_DIR set', usable, { SHAFTWISE_RULES_DIR: join(ROOT, 'rules') }],
   ];
