@@ -19,8 +19,9 @@ import type { Condition } from '../advise/rule-schema.js';
  *    compare. For each leaf condition the key records, for a number compared with a number,
  *    only the sign of (fact value − rule value), which is all that equal, notEqual,
  *    lessThan(Inclusive) and greaterThan(Inclusive) can see; for anything else (strings,
- *    booleans, lists, comparisons between two facts) the exact value. Two fact sets with the
- *    same key therefore fire the same rules, and the stored run is reused. A map of 3600
+ *    booleans, lists, comparisons between two facts) the exact value. Each distinct fact path
+ *    is read once per run and each distinct comparison enters the key once. Two fact sets with
+ *    the same key therefore fire the same rules, and the stored run is reused. A map of 3600
  *    points has a few dozen distinct keys. The condition trees of a reused run carry the
  *    fact values of the first point with that key (advise's `rules` trace), so callers that
  *    show traces do not use memo.
@@ -64,8 +65,41 @@ function leaves(c: Condition, out: Leaf[]): Leaf[] {
 }
 
 const fact = (facts: RuleFacts, name: string): unknown => (facts as unknown as Record<string, unknown>)[name];
-const exact = (v: unknown): string =>
-  v === undefined ? 'u' : typeof v === 'number' && !Number.isFinite(v) ? `n${v}` : JSON.stringify(v);
+/**
+ * A value as a key part that no other value (nor a sign) can be read as: a length-prefixed
+ * string, a number's text ended by "|", a letter for true, false, null and undefined, JSON
+ * (length-prefixed) for anything else.
+ */
+const exact = (v: unknown): string => {
+  switch (typeof v) {
+    case 'string':
+      return `s${v.length}:${v}`;
+    case 'number':
+      return `n${v}|`;
+    case 'boolean':
+      return v ? 't' : 'f';
+    case 'undefined':
+      return 'u';
+    default: {
+      if (v === null) return 'z';
+      const j = String(JSON.stringify(v));
+      return `j${j.length}:${j}`;
+    }
+  }
+};
+/** The sign of a − b as one character, for two numbers neither of which is NaN. */
+const sign = (a: number, b: number): string => (a < b ? '<' : a > b ? '>' : '=');
+
+/** What a key reads of the facts: a fact's value at a path, walked once per run however many conditions read it. */
+interface Read {
+  fact: string;
+  steps: string[];
+}
+/** One part of the key: a fact value against a number, a fact value itself, or two fact values against each other. */
+type Part =
+  | { kind: 'number'; read: number; limit: number }
+  | { kind: 'exact'; read: number }
+  | { kind: 'pair'; read: number; other: number };
 
 export function ruleRunner(rules: readonly LoadedRule[], opts: { memo?: boolean } = {}): RuleRunner {
   const engine = new Engine([], { allowUndefinedFacts: true, pathResolver: resolvePath });
@@ -76,39 +110,58 @@ export function ruleRunner(rules: readonly LoadedRule[], opts: { memo?: boolean 
       event: { type: r.event.type, params: { ...r.event } },
     }),
   );
-  const all = rules
-    .flatMap((r) => leaves(r.conditions as Condition, []))
-    .map((l) => {
-      const ref =
-        l.value !== null && typeof l.value === 'object' && !Array.isArray(l.value)
-          ? (l.value as { fact: string; path?: string })
-          : undefined;
-      return {
-        fact: l.fact,
-        steps: stepsOf(l.path),
-        value: l.value,
-        ref: ref && { fact: ref.fact, steps: stepsOf(ref.path) },
-      };
-    });
+  // The key's parts, each distinct one once (many conditions compare one fact with one value),
+  // and the fact paths they read, each distinct one once.
+  const reads: Read[] = [];
+  const readIndex = new Map<string, number>();
+  const readOf = (factName: string, path: string | undefined): number => {
+    const id = `${factName}\u0000${path ?? ''}`;
+    let i = readIndex.get(id);
+    if (i === undefined) {
+      readIndex.set(id, (i = reads.length));
+      reads.push({ fact: factName, steps: stepsOf(path) });
+    }
+    return i;
+  };
+  const parts: Part[] = [];
+  const partIds = new Set<string>();
+  for (const l of rules.flatMap((r) => leaves(r.conditions as Condition, []))) {
+    const read = readOf(l.fact, l.path);
+    const ref =
+      l.value !== null && typeof l.value === 'object' && !Array.isArray(l.value)
+        ? (l.value as { fact: string; path?: string })
+        : undefined;
+    const part: Part = ref
+      ? { kind: 'pair', read, other: readOf(ref.fact, ref.path) }
+      : typeof l.value === 'number'
+        ? { kind: 'number', read, limit: l.value }
+        : { kind: 'exact', read };
+    // Object.is keeps -0 and 0 apart (they compare alike, so this only costs a part).
+    const id = `${part.kind}:${read}:${part.kind === 'pair' ? part.other : part.kind === 'number' ? String(Object.is(part.limit, -0) ? '-0' : part.limit) : ''}`;
+    if (partIds.has(id)) continue;
+    partIds.add(id);
+    parts.push(part);
+  }
+  const values: unknown[] = new Array<unknown>(reads.length);
   const stored = new Map<string, RuleRun>();
   const stats = { runs: 0, hits: 0 };
 
   const key = (facts: RuleFacts): string => {
+    for (let i = 0; i < reads.length; i++) values[i] = walk(fact(facts, reads[i]!.fact), reads[i]!.steps);
     let k = '';
-    for (const l of all) {
-      const v = walk(fact(facts, l.fact), l.steps);
-      const ref = l.value;
-      if (l.ref) {
+    for (const p of parts) {
+      const v = values[p.read];
+      if (p.kind === 'pair') {
         // Fact against fact: numbers by the sign of their difference, anything else exactly.
-        const w = walk(fact(facts, l.ref.fact), l.ref.steps);
+        const w = values[p.other];
         k +=
           typeof v === 'number' && typeof w === 'number' && !Number.isNaN(v) && !Number.isNaN(w)
-            ? (v < w ? '<' : v > w ? '>' : '=') + '|'
-            : exact(v) + '~' + exact(w) + '|';
-      } else if (typeof v === 'number' && typeof ref === 'number' && !Number.isNaN(v)) {
-        k += (v < ref ? '<' : v > ref ? '>' : '=') + '|';
+            ? sign(v, w)
+            : `~${exact(v)}${exact(w)}`;
+      } else if (p.kind === 'number' && typeof v === 'number' && !Number.isNaN(v)) {
+        k += sign(v, p.limit);
       } else {
-        k += exact(v) + '|';
+        k += exact(v);
       }
     }
     return k;
