@@ -16,6 +16,10 @@ import { z } from 'zod';
 export function dataDir(): URL {
   return resolvedDir().url;
 }
+/** dataDir()'s href, kept with it (a URL's href getter is costly in a sweep's inner loop). */
+export function dataDirHref(): string {
+  return resolvedDir().href;
+}
 /** A resolved folder: its URL, its href and the tables read from it, by file name. */
 interface ResolvedDir {
   env: string | undefined;

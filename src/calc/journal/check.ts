@@ -2,7 +2,7 @@ import type { CaseSI } from '../../case/types.js';
 import { allLimitsPass } from '../../core/check.js';
 import { journalCriteria } from '../../data/journal-criteria.js';
 import { shippedJournalTables } from '../../data/journal-tables.js';
-import { dataDir } from '../../data/load.js';
+import { dataDirHref } from '../../data/load.js';
 import { designSpace, journalDuty } from './candidates.js';
 import { sweepWithInlet } from './bath.js';
 import { allowableFilm, designChecks, evaluateDesign } from './design.js';
@@ -26,7 +26,7 @@ let seededFrom: string | undefined;
  * before it rather than answering with another folder's rows.
  */
 function seedShippedTables(): void {
-  const folder = dataDir().href;
+  const folder = dataDirHref();
   if (seededFrom === folder) return;
   if (seededFrom !== undefined) {
     clearTableCache();

@@ -48,12 +48,39 @@ export function meanPowerLoss(points: readonly { share: number; powerLoss: numbe
   return sumShare > 0 ? sumPower / sumShare : 0;
 }
 
-/** Throw if any number in the result is NaN or infinite (fail loudly, never report them). */
-export function assertFinite(v: unknown, path: () => string = () => 'result'): void {
-  // The path is built only when a number fails: building it for every number cost more
-  // than the check itself (a sweep calls this thousands of times).
-  if (typeof v === 'number') {
-    if (!Number.isFinite(v)) throw new Error(`journal: internal error, ${path()} is ${v}`);
-  } else if (Array.isArray(v)) v.forEach((x, k) => assertFinite(x, () => `${path()}[${k}]`));
-  else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) assertFinite(x, () => `${path()}.${k}`);
+/**
+ * Throw if any number in the result is NaN or infinite (fail loudly, never report them); the
+ * message names the first such number's path ("result.points[2].flow"). The walk allocates
+ * nothing: the path is worked out only when a number fails (a map checks thousands of results).
+ */
+export function assertFinite(v: unknown): void {
+  if (!allFinite(v)) throw new Error(`journal: internal error, ${badPath(v, 'result')}`);
+}
+
+/** Whether every number in v (own enumerable keys and array items, at any depth) is finite. */
+function allFinite(v: unknown): boolean {
+  if (typeof v === 'number') return Number.isFinite(v);
+  if (Array.isArray(v)) {
+    for (let i = 0; i < v.length; i++) if (!allFinite(v[i])) return false;
+  } else if (v && typeof v === 'object') {
+    for (const k in v) if (Object.hasOwn(v, k) && !allFinite((v as Record<string, unknown>)[k])) return false;
+  }
+  return true;
+}
+
+/** "path is value" for the first number in v that is not finite (v holds one). */
+function badPath(v: unknown, path: string): string | undefined {
+  if (typeof v === 'number') return Number.isFinite(v) ? undefined : `${path} is ${v}`;
+  if (Array.isArray(v)) {
+    for (let i = 0; i < v.length; i++) {
+      const found = badPath(v[i], `${path}[${i}]`);
+      if (found) return found;
+    }
+  } else if (v && typeof v === 'object') {
+    for (const [k, x] of Object.entries(v)) {
+      const found = badPath(x, `${path}.${k}`);
+      if (found) return found;
+    }
+  }
+  return undefined;
 }

@@ -1,4 +1,4 @@
-import { dataDir } from '../../data/load.js';
+import { dataDirHref } from '../../data/load.js';
 import { shippedPadTables, type ShippedPadTables } from '../../data/thrust-pad-tables.js';
 import { pchipSlopes } from '../journal/table.js';
 import { PAD_MESH, solvePad, type PadPerformance } from './pad.js';
@@ -74,7 +74,7 @@ export function solvePadRows(widthToLength: number): PadPerformance[] {
 
 /** The table of pad shape L/B (> 0): shipped rows interpolated in L/B, or solved, on first use. */
 export function padTable(widthToLength: number): PadTable {
-  const folder = dataDir().href;
+  const folder = dataDirHref();
   if (folder !== cacheFolder) {
     cache.clear();
     cacheFolder = folder;
