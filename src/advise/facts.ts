@@ -255,26 +255,21 @@ export type Figures = Record<OptionName, OptionFigures>;
 
 type Measure = 'frictionPower' | 'lifeHours' | 'length' | 'outerDiameter';
 
-/** This option's figure over the best (lowest, or highest for life) of the feasible options'. */
-function ratioToBest(figs: Figures, option: OptionName, key: Measure, best: 'min' | 'max'): number | null {
-  const own = figs[option][key];
-  const pool = OPTIONS.filter((o) => figs[o].feasible)
+/** The best (lowest, or highest for life) of the feasible options' finite figures of one measure; null when none has one. */
+function bestOf(figs: Figures, feasible: readonly OptionName[], key: Measure, best: 'min' | 'max'): number | null {
+  const pool = feasible
     .map((o) => figs[o][key])
     .filter((x): x is number => typeof x === 'number' && Number.isFinite(x));
-  if (own === null || !Number.isFinite(own) || !pool.length) return null;
-  const ref = best === 'min' ? Math.min(...pool) : Math.max(...pool);
+  if (!pool.length) return null;
+  return best === 'min' ? Math.min(...pool) : Math.max(...pool);
+}
+
+/** This option's figure over the best of the feasible options' (`ref`, from bestOf). */
+function ratioToBest(own: number | null, ref: number | null): number | null {
+  if (own === null || !Number.isFinite(own) || ref === null) return null;
   // No ratio to a best of 0 (a figure that is 0 W, say): 1 when this is 0 too, else null.
   if (ref === 0) return own === 0 ? 1 : null;
   return own / ref;
-}
-
-/** This option's friction power above the lowest of the feasible options', W. */
-function aboveLowest(figs: Figures, option: OptionName): number | null {
-  const own = figs[option].frictionPower;
-  const pool = OPTIONS.filter((o) => figs[o].feasible)
-    .map((o) => figs[o].frictionPower)
-    .filter((x): x is number => x !== null);
-  return own === null || !pool.length ? null : own - Math.min(...pool);
 }
 
 /**
@@ -283,6 +278,14 @@ function aboveLowest(figs: Figures, option: OptionName): number | null {
  */
 export function compareFigures(figs: Figures): Figures {
   const feasible = OPTIONS.filter((o) => figs[o].feasible);
+  // The best of each measure over the feasible options: the same for every option.
+  const lowestFriction = bestOf(figs, feasible, 'frictionPower', 'min');
+  const longestLife = bestOf(figs, feasible, 'lifeHours', 'max');
+  const shortest = bestOf(figs, feasible, 'length', 'min');
+  const smallest = bestOf(figs, feasible, 'outerDiameter', 'min');
+  // The lowest friction power of the feasible options that have one (finite or not), for frictionAboveLowest.
+  const powers = feasible.map((o) => figs[o].frictionPower).filter((x): x is number => x !== null);
+  const lowestPower = powers.length ? Math.min(...powers) : null;
   const out = {} as Figures;
   for (const o of OPTIONS) {
     const f = figs[o];
@@ -295,13 +298,13 @@ export function compareFigures(figs: Figures): Figures {
       ...f,
       compare: {
         feasibleCount: feasible.length,
-        frictionToLowest: ratioToBest(figs, o, 'frictionPower', 'min'),
+        frictionToLowest: ratioToBest(mine, lowestFriction),
         frictionLowest: f.feasible && mine !== null && others.length > 0 && others.every((x) => mine <= x),
         frictionMargin: mine === null || !others.length ? null : Math.min(...others) - mine,
-        frictionAboveLowest: aboveLowest(figs, o),
-        lifeToLongest: ratioToBest(figs, o, 'lifeHours', 'max'),
-        lengthToShortest: ratioToBest(figs, o, 'length', 'min'),
-        outerDiameterToSmallest: ratioToBest(figs, o, 'outerDiameter', 'min'),
+        frictionAboveLowest: mine === null || lowestPower === null ? null : mine - lowestPower,
+        lifeToLongest: ratioToBest(f.lifeHours, longestLife),
+        lengthToShortest: ratioToBest(f.length, shortest),
+        outerDiameterToSmallest: ratioToBest(f.outerDiameter, smallest),
       },
     };
   }

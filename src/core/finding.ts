@@ -76,6 +76,13 @@ function surelyDifferent(a: Finding, b: Finding): boolean {
   return false;
 }
 
+/** Whether `x` repeats one of `kept` (the same sentence, or a finding with the same key). */
+function repeats(x: Remark, kept: readonly Remark[], keyOf: (f: Finding) => string): boolean {
+  if (typeof x === 'string') return kept.includes(x);
+  for (const y of kept) if (typeof y !== 'string' && !surelyDifferent(x, y) && keyOf(x) === keyOf(y)) return true;
+  return false;
+}
+
 /**
  * The remarks without repeats (equal `remarkKey`), first occurrence kept, in order: the same
  * as filtering on remarkKey, without serialising every finding. A finding is serialised only
@@ -90,18 +97,13 @@ export function uniqueRemarks(xs: readonly Remark[]): Remark[] {
     return xs.filter((x) => !seen.has(remarkKey(x)) && !!seen.add(remarkKey(x)));
   }
   const out: Remark[] = [];
-  const keys = new Map<Finding, string>();
+  // Each finding serialised at most once, and only when needed.
+  let keys: Map<Finding, string> | undefined;
   const keyOf = (f: Finding): string => {
-    let k = keys.get(f);
+    let k = (keys ??= new Map()).get(f);
     if (k === undefined) keys.set(f, (k = remarkKey(f)));
     return k;
   };
-  for (const x of xs) {
-    const repeat =
-      typeof x === 'string'
-        ? out.includes(x)
-        : out.some((y) => typeof y !== 'string' && !surelyDifferent(x, y) && keyOf(x) === keyOf(y));
-    if (!repeat) out.push(x);
-  }
+  for (const x of xs) if (!repeats(x, out, keyOf)) out.push(x);
   return out;
 }
