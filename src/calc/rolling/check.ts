@@ -1,11 +1,10 @@
 import type { CaseSI } from '../../case/types.js';
 import { finding } from '../../core/finding.js';
-import { kindTraits, rollingFactors } from '../../data/rolling.js';
-import { rollingRunning } from '../../data/rolling-running.js';
+import { rollingFactors } from '../../data/rolling.js';
 import { loadFactors } from '../../data/rolling-load-factors.js';
 import { candidateSpecs } from './candidates.js';
 import { dutyPoints, lifeFactors, shockFactors } from './conditions.js';
-import type { EvalContext } from './context.js';
+import { rollingTables, type EvalContext } from './context.js';
 import { evaluate } from './evaluate.js';
 import { newNotes, type Notes } from './findings.js';
 import { lifeExponent, requiredDynamicRating, type RollingType } from './life.js';
@@ -29,7 +28,7 @@ export function evalContext(c: CaseSI, notes: Notes, system: OilSystem = {}): { 
   const ctx: EvalContext = {
     c,
     f,
-    tables: { load: loadFactors(), running: rollingRunning(), kinds: kindTraits() },
+    tables: rollingTables(),
     points: duty.points,
     maxSpeed: duty.maxSpeed,
     serviceFactor: shock.serviceFactor,

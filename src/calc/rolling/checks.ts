@@ -27,8 +27,7 @@ const LOAD_RATIO_MAX = 0.5;
  * rating life: static safety governs it), κ ≥ 0.1 (advice: below it the method's limiting value
  * is taken; it never rules a bearing out), P/C ≤ 0.5, s0 ≥ the guidance for the shock level.
  */
-function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
-  const checks: CheckRecord[] = [];
+function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext, checks: CheckRecord[]): void {
   if (fig.L10mh !== null && ctx.c.life.hours > 0 && !fig.staticOnly) {
     checks.push(
       makeCheck(
@@ -75,28 +74,50 @@ function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext
     checks.push(
       makeCheck(
         'static-safety',
-        `static safety s0 = C0/P0 (${g.label})`,
+        kept(staticLabels, g.label, 'static safety s0 = C0/P0 (', ')'),
         fig.s0,
         g.min,
         '1',
         'min',
-        `ISO 76 s0 = C0/P0; limit: ${g.source}`,
+        kept(staticSources, g.source, 'ISO 76 s0 = C0/P0; limit: ', ''),
       ),
     );
   }
-  return checks;
+}
+
+/**
+ * Words built from a table's words, kept per what they are built from (every candidate at every
+ * point of a sweep words the same few; a string built each time is garbage the next moment).
+ */
+function kept(words: Map<string, string>, key: string, prefix: string, suffix: string): string {
+  let text = words.get(key);
+  if (text === undefined) {
+    if (words.size >= 64) words.clear();
+    words.set(key, (text = `${prefix}${key}${suffix}`));
+  }
+  return text;
+}
+const staticLabels = new Map<string, string>();
+const staticSources = new Map<string, string>();
+const greaseLabels = new Map<string, string>();
+const speedLabels = new Map<string, Map<string, string>>();
+function speedLabel(kind: string, supply: string): string {
+  let bySupply = speedLabels.get(kind);
+  if (!bySupply) speedLabels.set(kind, (bySupply = new Map()));
+  let text = bySupply.get(supply);
+  if (text === undefined) bySupply.set(supply, (text = `speed factor n·dm (${kind}, ${supply})`));
+  return text;
 }
 
 /** Checks of what the surroundings allow [2, 3]: n·dm for the kind and supply, outside diameter and width, grease life of a sealed bearing, temperatures. */
-function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
-  const checks: CheckRecord[] = [];
+function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext, checks: CheckRecord[]): void {
   const { c, lubrication } = ctx;
   const lim = speedLimitFrom(ctx.tables.running, spec.kind, lubrication.supply, spec.form);
   if (fig.ndm > 0) {
     checks.push(
       makeCheck(
         'speed-factor',
-        `speed factor n·dm (${spec.kind}, ${lubrication.supply})`,
+        speedLabel(spec.kind, lubrication.supply),
         fig.ndm,
         lim.ndm,
         'mm*r/min',
@@ -151,8 +172,8 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext)
   const plan = c.lubrication.regreaseInterval;
   if (!lubrication.sealed && lubrication.supply === 'grease' && fig.greaseHours !== null && plan !== undefined)
     checks.push(regreaseCheck(fig.greaseHours, plan));
-  checks.push(...misalignmentChecks(spec, ctx), ...temperatureChecks(ctx));
-  return checks;
+  misalignmentChecks(spec, ctx, checks);
+  temperatureChecks(ctx, checks);
 }
 
 /**
@@ -185,11 +206,11 @@ const ARCMIN = Math.PI / (180 * 60);
  * rigid, aligned housing). A pair mounted as one support is held to its kind's single-row
  * figure, an upper bound (a pair tolerates less).
  */
-function misalignmentChecks(spec: CandidateSpec, ctx: EvalContext): CheckRecord[] {
+function misalignmentChecks(spec: CandidateSpec, ctx: EvalContext, checks: CheckRecord[]): void {
   const theta = ctx.c.shaft.misalignment;
-  if (theta === undefined) return [];
+  if (theta === undefined) return;
   const t = ctx.tables.kinds.find((k) => k.kind === spec.kind)!;
-  return [
+  checks.push(
     makeCheck(
       'misalignment',
       `slope of the shaft at the bearing against the misalignment a ${spec.kind} bearing tolerates`,
@@ -199,7 +220,7 @@ function misalignmentChecks(spec: CandidateSpec, ctx: EvalContext): CheckRecord[
       'max',
       `${t.source}; model: the shaft's slope at the support tilts the inner ring against an aligned housing`,
     ),
-  ];
+  );
 }
 
 /**
@@ -210,18 +231,17 @@ function misalignmentChecks(spec: CandidateSpec, ctx: EvalContext): CheckRecord[
  * T the bearing's operating temperature, °C (lubrication.ts); limits in
  * data/rolling-running.json → temperatureLimits (common practice, from memory).
  */
-function temperatureChecks(ctx: EvalContext): CheckRecord[] {
+function temperatureChecks(ctx: EvalContext, checks: CheckRecord[]): void {
   const lim = ctx.tables.running.temperatureLimits;
   const T = ctx.lubrication.temperature;
   // Margins as the share of the allowed rise above the surroundings (from absolute zero where they are not below the limit).
   const ambient = ctx.c.environment.ambient;
   const ref = (limit: number) => (Number.isFinite(ambient) && ambient < limit ? ambient : undefined);
-  const checks: CheckRecord[] = [];
   if (ctx.lubrication.supply === 'grease')
     checks.push(
       makeCheck(
         'grease-temperature',
-        `operating temperature against the grease's upper limit (${lim.greaseAssumed})`,
+        kept(greaseLabels, lim.greaseAssumed, "operating temperature against the grease's upper limit (", ')'),
         T,
         lim.grease,
         'degC',
@@ -242,12 +262,12 @@ function temperatureChecks(ctx: EvalContext): CheckRecord[] {
       ref(lim.steel),
     ),
   );
-  return checks;
 }
 
 /** Every check of one candidate, in a fixed order: what it carries, then what its surroundings allow. */
 export function candidateChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
-  const checks = loadChecks(spec, fig, ctx);
-  checks.push(...fitChecks(spec, fig, ctx));
+  const checks: CheckRecord[] = [];
+  loadChecks(spec, fig, ctx, checks);
+  fitChecks(spec, fig, ctx, checks);
   return checks;
 }

@@ -1,13 +1,14 @@
 import type { CaseSI } from '../../case/types.js';
-import type { KindTraits, RollingFactors } from '../../data/rolling.js';
-import type { LoadFactors } from '../../data/rolling-load-factors.js';
-import type { RollingRunning } from '../../data/rolling-running.js';
+import { kindTraits, type KindTraits, type RollingFactors } from '../../data/rolling.js';
+import { loadFactors, type LoadFactors } from '../../data/rolling-load-factors.js';
+import { rollingRunning, type RollingRunning } from '../../data/rolling-running.js';
 import type { LoadPoint, ShockFactors } from './conditions.js';
 import type { Lubrication } from './lubrication.js';
 
 /*
  * The data passed between the rolling kernel's steps: the case's context every candidate is
- * evaluated in (evaluate.ts) and the figures its checks read (checks.ts). Not public.
+ * evaluated in (evaluate.ts), the tables it reads, and the figures its checks read (checks.ts).
+ * Not public.
  */
 
 /**
@@ -19,6 +20,17 @@ export interface RollingTables {
   running: RollingRunning;
   kinds: KindTraits[];
 }
+
+/** The tables in use, as one object for as long as none of them is read anew (what is worked per candidate is kept against it). */
+export function rollingTables(): RollingTables {
+  const load = loadFactors();
+  const running = rollingRunning();
+  const kinds = kindTraits();
+  if (!tablesInUse || tablesInUse.load !== load || tablesInUse.running !== running || tablesInUse.kinds !== kinds)
+    tablesInUse = { load, running, kinds };
+  return tablesInUse;
+}
+let tablesInUse: RollingTables | undefined;
 
 /** What every candidate of one case is evaluated in: the case, its factors, points and lubricant. */
 export interface EvalContext {

@@ -7,7 +7,7 @@ import { candidateChecks } from './checks.js';
 import { contaminationFactor, type LoadPoint } from './conditions.js';
 import type { EvalContext } from './context.js';
 import type { Notes } from './findings.js';
-import { frictionMomentWith, frictionRow } from './friction.js';
+import { frictionRow, frictionTerms, type FrictionInput, type FrictionTerms } from './friction.js';
 import { regreasingIntervalFrom } from './grease.js';
 import { lifeExponent, requiredDynamicRating } from './life.js';
 import {
@@ -207,25 +207,31 @@ function friction(
   let sumT = 0;
   let sumM = 0;
   let sumW = 0;
-  const moments = per.map((q) => {
-    const m = frictionMomentWith(p.friction, {
-      kind: spec.kind,
-      form: spec.form,
-      arrangement: spec.arrangement,
-      supply: ctx.lubrication.supply,
-      nu: ctx.lubrication.viscosity,
-      n: q.n,
-      dm: spec.dm,
-      Fr: q.Fr,
-      Fa: q.FaBearing,
-      // The moment's load factor is worked per bearing: one bearing's C0 (a pair's is twice it, ISO 76).
-      C0: spec.arrangement === 'single' ? spec.C0 : spec.C0 / 2,
-    });
+  // One input, its point's speed and loads set in turn.
+  const x: FrictionInput = {
+    kind: spec.kind,
+    form: spec.form,
+    arrangement: spec.arrangement,
+    supply: ctx.lubrication.supply,
+    nu: ctx.lubrication.viscosity,
+    n: 0,
+    dm: spec.dm,
+    Fr: 0,
+    Fa: 0,
+    // The moment's load factor is worked per bearing: one bearing's C0 (a pair's is twice it, ISO 76).
+    C0: spec.arrangement === 'single' ? spec.C0 : spec.C0 / 2,
+  };
+  const moments: FrictionTerms[] = [];
+  for (const q of per) {
+    x.n = q.n;
+    x.Fr = q.Fr;
+    x.Fa = q.FaBearing;
+    const m = frictionTerms(p.friction, x);
     sumT += q.t;
     sumM += q.t * m.total;
     sumW += q.t * frictionPower(m.total, q.n);
-    return m;
-  });
+    moments.push(m);
+  }
   return { moments, torque: sumT > 0 ? sumM / sumT : 0, power: sumT > 0 ? sumW / sumT : 0 };
 }
 

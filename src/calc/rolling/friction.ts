@@ -69,17 +69,19 @@ export interface FrictionMoment {
  * direction given; a tandem pair sharing both (common practice).
  */
 export function bearingShares(arrangement: Arrangement, Fr: number, Fa: number): BearingShare[] {
-  if (arrangement === 'single') return [{ Fr, Fa }];
-  if (arrangement === 'pair tandem')
-    return [
-      { Fr: Fr / 2, Fa: Fa / 2 },
-      { Fr: Fr / 2, Fa: Fa / 2 },
-    ];
-  return [
-    { Fr: Fr / 2, Fa },
-    { Fr: Fr / 2, Fa: 0 },
-  ];
+  const shares: BearingShare[] = [];
+  for (let i = 0; i < bearingCount(arrangement); i++)
+    shares.push({ Fr: shareFr(arrangement, Fr), Fa: shareFa(arrangement, Fa, i) });
+  return shares;
 }
+
+/** Bearings in a support: one, or the two of a pair. */
+const bearingCount = (a: Arrangement) => (a === 'single' ? 1 : 2);
+/** A bearing's share of the radial load, N: all of it alone, half in a pair. */
+const shareFr = (a: Arrangement, Fr: number) => (a === 'single' ? Fr : Fr / 2);
+/** Bearing i's share of the axial load, N: all alone, half each in tandem, all on the first of an opposed pair. */
+const shareFa = (a: Arrangement, Fa: number, i: number) =>
+  a === 'single' ? Fa : a === 'pair tandem' ? Fa / 2 : i === 0 ? Fa : 0;
 
 /**
  * Viscous moment of one bearing, N·m [1]: 10⁻⁷·f0·(ν·n)^(2/3)·dm³ N·mm for ν·n ≥ 2000,
@@ -125,20 +127,37 @@ export function frictionRow(t: RollingRunning, kind: RollingKind): FrictionRow {
 
 /** frictionMoment with the kind's row of factors given (a sweep looks it up once per bearing). */
 export function frictionMomentWith(row: FrictionRow, x: FrictionInput): FrictionMoment {
-  const f0 = row.f0[x.supply];
-  const shares = bearingShares(x.arrangement, Math.abs(x.Fr), Math.abs(x.Fa));
   const f1: number[] = [];
   const P1: number[] = [];
+  const m = momentOver(row, x, f1, P1);
+  return { viscous: m.viscous, load: m.load, total: m.total, f0: row.f0[x.supply], f1, P1 };
+}
+
+/** The viscous, load and total moments of frictionMomentWith, N·m, without the factors of each bearing. */
+export type FrictionTerms = Pick<FrictionMoment, 'viscous' | 'load' | 'total'>;
+
+/** frictionMomentWith's moments alone (a sweep works them at every point of every candidate). */
+export function frictionTerms(row: FrictionRow, x: FrictionInput): FrictionTerms {
+  return momentOver(row, x, null, null);
+}
+
+/** The sum over the support's bearings [1]; f1 and P1 of each bearing pushed where lists are given. */
+function momentOver(row: FrictionRow, x: FrictionInput, f1: number[] | null, P1: number[] | null): FrictionTerms {
+  const f0 = row.f0[x.supply];
+  const Fr = Math.abs(x.Fr);
+  const Fa = Math.abs(x.Fa);
   let viscous = 0;
   let load = 0;
-  for (const s of shares) {
-    const P0 = x.P0 ?? Math.max(s.Fr, 0.6 * s.Fr + 0.5 * s.Fa);
+  for (let i = 0; i < bearingCount(x.arrangement); i++) {
+    const sFr = shareFr(x.arrangement, Fr);
+    const sFa = shareFa(x.arrangement, Fa, i);
+    const P0 = x.P0 ?? Math.max(sFr, 0.6 * sFr + 0.5 * sFa);
     const f = loadFactor(row, P0, x.C0);
-    const p = frictionLoad(row, s.Fr, s.Fa);
-    f1.push(f);
-    P1.push(p);
+    const p = frictionLoad(row, sFr, sFa);
+    f1?.push(f);
+    P1?.push(p);
     viscous += viscousMoment(f0, x.nu, x.n, x.dm);
-    load += f * p * x.dm + row.ribFactor * s.Fa * x.dm;
+    load += f * p * x.dm + row.ribFactor * sFa * x.dm;
   }
-  return { viscous, load, total: viscous + load, f0, f1, P1 };
+  return { viscous, load, total: viscous + load };
 }

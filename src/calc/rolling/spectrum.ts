@@ -142,21 +142,29 @@ function pointLife(q: SpectrumPointIn, b: SpectrumBearing): SpectrumPointLife {
  *   life (no load, no time), or when C ≤ 0.
  */
 export function spectrumLife(points: SpectrumPointIn[], b: SpectrumBearing): SpectrumLife {
-  const per = points.map((q) => pointLife(q, b));
-  const counted = points.map((q, i) => ({ q, life: per[i]! })).filter((x) => counts(x.q));
-  const staticOnly = counted.length > 0 && counted.every((x) => x.life.static);
-  const mean = spectrumMean(
-    counted.map((x) => ({ P: x.q.P, n: x.q.n, t: x.q.t })),
-    lifeExponent(b.type),
-  );
-  const none = { L10: null, L10h: null, L10mh: null, aISOEquivalent: null };
+  const per: SpectrumPointLife[] = [];
+  // The points with a time share, in order (spectrumMean reads their P, n and t).
+  const counted: SpectrumPointIn[] = [];
+  let allStatic = true;
+  for (const q of points) {
+    const life = pointLife(q, b);
+    per.push(life);
+    if (!counts(q)) continue;
+    counted.push(q);
+    if (!life.static) allStatic = false;
+  }
+  const staticOnly = counted.length > 0 && allStatic;
+  const mean = spectrumMean(counted, lifeExponent(b.type));
   if (staticOnly || counted.length === 0 || !(b.C > 0))
-    return { ...none, P: mean.P, n: mean.n, points: per, staticOnly };
+    return { L10: null, L10h: null, L10mh: null, aISOEquivalent: null, P: mean.P, n: mean.n, points: per, staticOnly };
   const L10 = basicRatingLife(b.C, mean.P, lifeExponent(b.type));
   const L10h = L10 !== null ? lifeHours(L10, mean.n) : null;
   let time = 0;
   let damage = 0;
-  for (const { q, life } of counted) {
+  for (let i = 0; i < points.length; i++) {
+    const q = points[i]!;
+    if (!counts(q)) continue;
+    const life = per[i]!;
     time += q.t;
     if (life.L10mh !== null && life.L10mh > 0) damage += q.t / life.L10mh;
   }
