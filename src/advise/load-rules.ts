@@ -2,6 +2,7 @@ import { DataError } from '../core/errors.js';
 import { readdirSync, readFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 
+import { copyData } from './copy.js';
 import { ruleFileSchema, type Rule } from './rule-schema.js';
 
 interface Issue {
@@ -67,7 +68,7 @@ let shipped: { href: string; rules: LoadedRule[] } | undefined;
  */
 export function loadRules(dir: URL = rulesDir()): LoadedRule[] {
   const own = !process.env.SHAFTWISE_RULES_DIR && dir.href === ownRulesDir().href;
-  if (own && shipped?.href === dir.href) return structuredClone(shipped.rules);
+  if (own && shipped?.href === dir.href) return copyData(shipped.rules) as LoadedRule[];
   const rules = readRules(dir);
   if (own) shipped = { href: dir.href, rules: structuredClone(rules) };
   return rules;

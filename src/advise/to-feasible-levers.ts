@@ -8,6 +8,7 @@ import { entriesForShaft } from '../calc/rolling/catalogue.js';
 import { kindType } from '../calc/rolling/kinds.js';
 import { bushingMaterials } from '../data/bushing.js';
 import { lubricants } from '../data/load.js';
+import { copyData } from './copy.js';
 
 /**
  * The single case inputs a designer can change to make an option feasible, each as the values
@@ -56,47 +57,9 @@ export function getPath(doc: unknown, path: string): unknown {
   return o;
 }
 
-/** Thrown inside copyTree when the tree is not one it copies as structuredClone would. */
-const NOT_PLAIN = Symbol('not plain');
-
-/**
- * A deep copy of a parsed document, what structuredClone gives: a tree of plain objects,
- * dense arrays and primitives is copied directly (several times faster for a case file);
- * anything else (a Date, an object of another prototype, a sparse array, a "__proto__" key, an
- * object reached twice, as a YAML alias gives) is left to structuredClone itself.
- */
-function copyDoc(doc: unknown): unknown {
-  const seen = new Set<object>();
-  const copyTree = (v: unknown): unknown => {
-    if (typeof v !== 'object' || v === null) {
-      if (typeof v === 'function' || typeof v === 'symbol') throw NOT_PLAIN;
-      return v;
-    }
-    if (seen.has(v)) throw NOT_PLAIN;
-    seen.add(v);
-    if (Array.isArray(v)) {
-      if (Object.getPrototypeOf(v) !== Array.prototype || Object.keys(v).length !== v.length) throw NOT_PLAIN;
-      return v.map(copyTree);
-    }
-    if (Object.getPrototypeOf(v) !== Object.prototype) throw NOT_PLAIN;
-    const out: Record<string, unknown> = {};
-    for (const k of Object.keys(v)) {
-      if (k === '__proto__') throw NOT_PLAIN;
-      out[k] = copyTree((v as Record<string, unknown>)[k]);
-    }
-    return out;
-  };
-  try {
-    return copyTree(doc);
-  } catch (e) {
-    if (e === NOT_PLAIN) return structuredClone(doc);
-    throw e;
-  }
-}
-
 /** A deep copy of the document with `path` set to `value` (parents made as needed). */
 export function withPath(doc: unknown, path: string, value: unknown): Record<string, unknown> {
-  const copy = copyDoc(doc) as Record<string, unknown>;
+  const copy = copyData(doc) as Record<string, unknown>;
   const keys = path.split('.');
   let o = copy;
   for (const k of keys.slice(0, -1)) {
