@@ -290,17 +290,24 @@ export function compareFigures(figs: Figures): Figures {
   for (const o of OPTIONS) {
     const f = figs[o];
     const mine = f.frictionPower;
-    const others = feasible
-      .filter((x) => x !== o)
-      .map((x) => figs[x].frictionPower)
-      .filter((x): x is number => x !== null);
+    // The other feasible options' friction powers: how many, their lowest, and whether mine is no higher than any.
+    let others = 0;
+    let lowestOther = Infinity;
+    let noHigher = true;
+    for (const x of feasible) {
+      const p = figs[x].frictionPower;
+      if (x === o || p === null) continue;
+      others++;
+      lowestOther = Math.min(lowestOther, p);
+      noHigher &&= mine !== null && mine <= p;
+    }
     out[o] = {
       ...f,
       compare: {
         feasibleCount: feasible.length,
         frictionToLowest: ratioToBest(mine, lowestFriction),
-        frictionLowest: f.feasible && mine !== null && others.length > 0 && others.every((x) => mine <= x),
-        frictionMargin: mine === null || !others.length ? null : Math.min(...others) - mine,
+        frictionLowest: f.feasible && mine !== null && others > 0 && noHigher,
+        frictionMargin: mine === null || !others ? null : lowestOther - mine,
         frictionAboveLowest: mine === null || lowestPower === null ? null : mine - lowestPower,
         lifeToLongest: ratioToBest(f.lifeHours, longestLife),
         lengthToShortest: ratioToBest(f.length, shortest),
