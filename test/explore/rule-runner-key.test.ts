@@ -36,7 +36,7 @@ describe('rule runner memo key', () => {
     const xs: unknown[] = ['a|b', 'a', 'b', 'a|', '|b', 's1:', 1, '1', null, undefined, 'null', 'u'];
     const ys: unknown[] = [1, 5, 9, NaN, '3', undefined];
     const ws: unknown[] = [2, 7, 'x', NaN];
-    const zs: unknown[] = [true, 'true', 1, 't', undefined];
+    const zs: unknown[] = [true, false, 'true', 1, 't', 'f', undefined];
     const memo = ruleRunner(RULES, { memo: true });
     const fresh = ruleRunner(RULES);
     const names = (r: { results: { name: string }[] }) => r.results.map((x) => x.name).sort();
