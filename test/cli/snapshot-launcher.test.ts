@@ -68,7 +68,7 @@ function launch(root: string, args: string[], extra: NodeJS.ProcessEnv = {}) {
     : execs[0]!.includes('dist/bundle/shaftwise.mjs')
       ? 'bundle'
       : '?';
-  return { ran, code: r.status, stdout: r.stdout };
+  return { ran, code: r.status, stdout: r.stdout, exec: execs[0]! };
 }
 const DEMO = ['advise', 'examples/sawmill-infeed-roller.yaml', '--format', 'json'];
 const expected = () =>
@@ -81,6 +81,15 @@ describe('bin/shaftwise', () => {
     const r = launch(root, DEMO);
     expect(r.ran).toBe('blob');
     expect(r.code).toBe(0);
+    expect(r.stdout).toBe(expected());
+  });
+
+  it("runs node with the V8 flags the blob was built with (the record's fifth line)", () => {
+    const flags = readFileSync(join(SNAP, 'shaftwise.meta'), 'utf8').split('\n')[4]!;
+    expect(flags).toMatch(/^--[a-z-]+=\d+/);
+    const r = launch(pkg('flags', usable), DEMO);
+    expect(r.ran).toBe('blob');
+    expect(r.exec).toContain(` ${flags} --snapshot-blob `);
     expect(r.stdout).toBe(expected());
   });
 
