@@ -37,12 +37,19 @@ delete env.SHAFTWISE_DATA_DIR;
 delete env.SHAFTWISE_RULES_DIR;
 /**
  * V8 flags the blob is built with and run with (a blob loads only under the flags it was built
- * with; shaftwise.meta records them for bin/shaftwise). A CLI run lasts a tenth of a second: at
- * V8's default interrupt budget the optimising compiler starts on code it never gets to use, and
- * a budget four times the default (67 584 bytes of bytecode run in Node 20's V8) saved about
- * 5 ms of `check` and 3 ms of `advise` in bench/startup.mjs, and nothing of a 60 × 60 map.
+ * with; shaftwise.meta records them for bin/shaftwise), each measured with bench/startup.mjs and
+ * bench/map.mjs on a two-core machine:
+ * - the interrupt budget at four times V8's default (67 584 bytes of bytecode run, Node 20): a
+ *   CLI run lasts a tenth of a second, and at the default the optimising compiler starts on code
+ *   it never gets to use (about 5 ms of `check`, 3 ms of `advise`; nothing of a map);
+ * - the young generation capped at 4 MB a semi-space and scavenged on the main thread: a map
+ *   makes hundreds of megabytes of short-lived objects, and a capped young generation that may
+ *   grow to 4 MB collects them with a quarter of the scavenges of one held at 1 MB (src/cli/
+ *   commands/map.ts holds it there without this cap) for a few MB more peak memory; the helper
+ *   threads of a parallel scavenge cost more than they save on two cores (a 60 × 60 map 12.3x ->
+ *   9.3x bare node, peak RSS 91 -> 94 MB).
  */
-const FLAGS = ['--interrupt-budget=270336'];
+const FLAGS = ['--interrupt-budget=270336', '--max-semi-space-size=4', '--no-parallel-scavenge'];
 const r = spawnSync(process.execPath, [...FLAGS, '--snapshot-blob', tmp, '--build-snapshot', script], {
   cwd: root,
   encoding: 'utf8',

@@ -37,9 +37,12 @@ export function registerMap(program: Command): void {
         },
       ) => {
         const { UsageError } = await import('../../core/errors.js');
-        // The map makes many short-lived objects: a young generation that does not grow keeps a
-        // 60 × 60 map's peak memory near 100 MB instead of 130 MB, for a few per cent more time (bench/map.mjs).
-        (await import('node:v8')).setFlagsFromString('--semi-space-growth-factor=1');
+        // The map makes many short-lived objects. Started from the snapshot, node runs with the young
+        // generation capped at 4 MB a semi-space (bin/build-snapshot.mjs); otherwise a young generation
+        // that does not grow keeps a 60 × 60 map's peak memory near 100 MB instead of 130 MB, for a few
+        // per cent more time (bench/map.mjs).
+        if (!process.execArgv.some((a) => a.startsWith('--max-semi-space-size')))
+          (await import('node:v8')).setFlagsFromString('--semi-space-growth-factor=1');
         const { parseGrid, parseRange } = await import('../../explore/axes.js');
         let kind: 'svg' | 'html' | 'text' = 'text';
         if (raw.out !== undefined) {
