@@ -106,24 +106,38 @@ const MAX_ITERATIONS = 60;
 
 /**
  * The temperature where g = 0 on the inverse interpolant (T as a polynomial in g) through the
- * points tried: quadratic through three, linear (the secant) through two or when two g agree.
+ * points tried, (ta, ga) the oldest, (tc, gc) the last: quadratic through the three when `three`
+ * and no two g agree, else linear (the secant) through the last two.
  */
-function interpolate(p: readonly { t: number; g: number }[]): number {
-  const [a, b, c] = p.length === 3 ? p : [undefined, p[0]!, p[1]!];
-  if (a && a.g !== b!.g && a.g !== c!.g && b!.g !== c!.g)
+function interpolate(three: boolean, ta: number, ga: number, tb: number, gb: number, tc: number, gc: number): number {
+  if (three && ga !== gb && ga !== gc && gb !== gc)
     return (
-      (a.t * b!.g * c!.g) / ((a.g - b!.g) * (a.g - c!.g)) +
-      (b!.t * a.g * c!.g) / ((b!.g - a.g) * (b!.g - c!.g)) +
-      (c!.t * a.g * b!.g) / ((c!.g - a.g) * (c!.g - b!.g))
+      (ta * gb * gc) / ((ga - gb) * (ga - gc)) +
+      (tb * ga * gc) / ((gb - ga) * (gb - gc)) +
+      (tc * ga * gb) / ((gc - ga) * (gc - gb))
     );
-  return c!.t - (c!.g * (c!.t - b!.t)) / (c!.g - b!.g);
+  return tc - (gc * (tc - tb)) / (gc - gb);
+}
+
+/** The balance's answer (one object shape for every exit). */
+function answer(
+  ambient: number,
+  area: number,
+  heatTransfer: number,
+  temperature: number,
+  loss: number,
+  runaway: boolean,
+  iterations: number,
+): BathTemperature {
+  return { ambient, area, heatTransfer, temperature, loss, runaway, iterations };
 }
 
 /**
  * The bath temperature of the balance above (°C), for a loss P_loss(T) (W) that does not rise
  * with the bath temperature T (°C); ambient °C, area m², heat transfer W/(m²·K). `start` (°C):
  * where to begin (a neighbouring solution's bath temperature; the default is the ambient), which
- * changes the number of evaluations, not the root.
+ * changes the number of evaluations, not the root. Called once per candidate bearing in a map
+ * cell, so the search keeps its points in plain numbers (no object per evaluation).
  */
 export function bathTemperature(
   ambient: number,
@@ -132,59 +146,91 @@ export function bathTemperature(
   loss: (tC: number) => number,
   start?: number,
 ): BathTemperature {
-  const hA = model.heatTransfer * area;
+  const h = model.heatTransfer;
+  const hA = h * area;
   if (!(hA > 0) || !Number.isFinite(ambient)) throw new Error(`sump: h·A must be positive, got ${hA} W/K`);
-  const base = { ambient, area, heatTransfer: model.heatTransfer };
   // g(T) = (T − T_amb)·h·A − P(T), |T − T*| ≤ |g(T)|/(h·A) (module comment).
   const close = 0.5 * BATH_TOLERANCE_K * hA;
-  let evaluations = 0;
-  const at = (t: number) => {
-    evaluations++;
-    const p = loss(t);
-    return { t, p, g: (t - ambient) * hA - Math.max(0, p) };
-  };
-  const done = (x: { t: number; p: number }, runaway: boolean): BathTemperature => ({
-    ...base,
-    temperature: x.t,
-    loss: x.p,
-    runaway,
-    iterations: evaluations,
-  });
   const top = ambient + model.maxRise;
   // Each evaluation at T bounds the root from the other side: T* lies between T and its image
   // T_amb + P(T)/(h·A) (module comment). From ambient, that image is the upper bound.
-  const first = at(Math.min(Math.max(start ?? ambient, ambient), top));
-  if (Math.abs(first.g) <= close) return done(first, false);
-  const image = ambient + Math.max(0, first.p) / hA;
-  let lo = first;
-  let hi = first;
-  if (first.g < 0) {
-    hi = at(Math.min(image, top));
+  const t0 = Math.min(Math.max(start ?? ambient, ambient), top);
+  const p0 = loss(t0);
+  const g0 = (t0 - ambient) * hA - Math.max(0, p0);
+  let evaluations = 1;
+  if (Math.abs(g0) <= close) return answer(ambient, area, h, t0, p0, false, evaluations);
+  const image = ambient + Math.max(0, p0) / hA;
+  // The bracket [lo, hi]: g(lo) < 0 ≤ g(hi), each end its temperature, loss and excess.
+  let tLo = t0;
+  let pLo = p0;
+  let gLo = g0;
+  let tHi = t0;
+  let pHi = p0;
+  let gHi = g0;
+  if (g0 < 0) {
+    tHi = Math.min(image, top);
+    pHi = loss(tHi);
+    gHi = (tHi - ambient) * hA - Math.max(0, pHi);
+    evaluations++;
     // A loss that rises a little with T (a last-digit effect of its own solver) may leave g < 0 below the top.
-    if (hi.g < 0 && hi.t < top) hi = at(top);
-    if (hi.g < 0) return done(hi, true);
+    if (gHi < 0 && tHi < top) {
+      tHi = top;
+      pHi = loss(tHi);
+      gHi = (tHi - ambient) * hA - Math.max(0, pHi);
+      evaluations++;
+    }
+    if (gHi < 0) return answer(ambient, area, h, tHi, pHi, true, evaluations);
   } else {
-    lo = at(Math.max(image, ambient));
-    if (lo.g >= 0 && lo.t > ambient) lo = at(ambient);
+    tLo = Math.max(image, ambient);
+    pLo = loss(tLo);
+    gLo = (tLo - ambient) * hA - Math.max(0, pLo);
+    evaluations++;
+    if (gLo >= 0 && tLo > ambient) {
+      tLo = ambient;
+      pLo = loss(tLo);
+      gLo = (tLo - ambient) * hA - Math.max(0, pLo);
+      evaluations++;
+    }
   }
-  if (Math.abs(hi.g) <= close) return done(hi, false);
-  if (Math.abs(lo.g) <= close) return done(lo, false);
+  if (Math.abs(gHi) <= close) return answer(ambient, area, h, tHi, pHi, false, evaluations);
+  if (Math.abs(gLo) <= close) return answer(ambient, area, h, tLo, pLo, false, evaluations);
   // Inverse quadratic interpolation through the last three temperatures tried (a secant step
   // through the last two while there are only two), kept inside the bracket [lo, hi]: the
   // midpoint when a step would leave it. The bracket narrows with each evaluation.
-  const tried = [first, first === lo ? hi : lo];
-  for (let k = 0; k < MAX_ITERATIONS && hi.t - lo.t > BATH_TOLERANCE_K; k++) {
-    const step = interpolate(tried);
-    const inset = 1e-3 * (hi.t - lo.t);
-    const t = step > lo.t + inset && step < hi.t - inset ? step : (lo.t + hi.t) / 2;
-    const x = at(t);
-    if (Math.abs(x.g) <= close) return done(x, false);
-    if (x.g < 0) lo = x;
-    else hi = x;
-    tried.push(x);
-    if (tried.length > 3) tried.shift();
+  // The points tried, oldest first: (ta, ga) (none yet while `three` is false), (tb, gb), (tc, gc).
+  let three = false;
+  let ta = 0;
+  let ga = 0;
+  let tb = t0;
+  let gb = g0;
+  let tc = g0 < 0 ? tHi : tLo;
+  let gc = g0 < 0 ? gHi : gLo;
+  for (let k = 0; k < MAX_ITERATIONS && tHi - tLo > BATH_TOLERANCE_K; k++) {
+    const step = interpolate(three, ta, ga, tb, gb, tc, gc);
+    const inset = 1e-3 * (tHi - tLo);
+    const t = step > tLo + inset && step < tHi - inset ? step : (tLo + tHi) / 2;
+    const p = loss(t);
+    const g = (t - ambient) * hA - Math.max(0, p);
+    evaluations++;
+    if (Math.abs(g) <= close) return answer(ambient, area, h, t, p, false, evaluations);
+    if (g < 0) {
+      tLo = t;
+      gLo = g;
+    } else {
+      tHi = t;
+      gHi = g;
+    }
+    three = true;
+    ta = tb;
+    ga = gb;
+    tb = tc;
+    gb = gc;
+    tc = t;
+    gc = g;
   }
-  return done(at((lo.t + hi.t) / 2), false);
+  const t = (tLo + tHi) / 2;
+  const p = loss(t);
+  return answer(ambient, area, h, t, p, false, evaluations + 1);
 }
 
 /**
