@@ -70,13 +70,37 @@ export function makeCheck(
   source: string,
   reference?: number,
 ): CheckRecord {
+  const margin = marginOf(value, limit, unit, sense, reference);
+  const pass = sense === 'max' ? value <= limit : value >= limit;
+  return { id, label, value, limit, unit, margin, pass, source, sense };
+}
+
+/**
+ * advisory(makeCheck(...)) built as one record (the same fields in the same order), for checks
+ * made in sweeps.
+ */
+export function makeAdvisoryCheck(
+  id: string,
+  label: string,
+  value: number,
+  limit: number,
+  unit: string,
+  sense: 'max' | 'min',
+  source: string,
+  reference?: number,
+): CheckRecord {
+  const margin = marginOf(value, limit, unit, sense, reference);
+  const pass = sense === 'max' ? value <= limit : value >= limit;
+  return { id, label, value, limit, unit, margin, pass, source, sense, advisory: true };
+}
+
+/** The signed margin of the convention above. */
+function marginOf(value: number, limit: number, unit: string, sense: 'max' | 'min', reference?: number): number {
   // A reference at or above the limit (an inlet or a room already hotter than allowed) leaves no
   // rise to share out: the margin is then measured from absolute zero, so its sign follows pass.
   const zero = unit === 'degC' ? (reference !== undefined && reference < limit ? reference : -273.15) : 0;
   const span = limit - zero;
-  const margin = sense === 'max' ? (limit - value) / span : (value - limit) / span;
-  const pass = sense === 'max' ? value <= limit : value >= limit;
-  return { id, label, value, limit, unit, margin, pass, source, sense };
+  return sense === 'max' ? (limit - value) / span : (value - limit) / span;
 }
 
 /**
