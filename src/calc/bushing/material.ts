@@ -1,9 +1,9 @@
-import type { BushingMaterial, CaseSI, Medium, Supply } from '../../case/types.js';
-import { advisory, allLimitsPass, makeCheck, type CheckRecord } from '../../core/check.js';
-import { finding, type Finding } from '../../core/finding.js';
-import type { BushingFactors, BushingMaterialRow, LubricantNeed, MediumRating } from '../../data/bushing.js';
+import type { BushingMaterial, CaseSI, Medium } from '../../case/types.js';
+import { allLimitsPass, makeAdvisoryCheck, makeCheck, type CheckRecord } from '../../core/check.js';
+import type { BushingFactors, BushingMaterialRow } from '../../data/bushing.js';
 import { rubbingThrust, thrustChecks, thrustWearRate, type ThrustFace } from '../thrust/rubbing.js';
 import { dryTemperatureRise, frictionHeat, heatResistance, meanPressure, peakPressure, wearDepth } from './formulas.js';
+import { suitability } from './suitability.js';
 import type { BushingMaterialResult, BushingThrust, DutyPoint } from './types.js';
 
 /** Seconds in an hour: wear is summed over the life target in hours. */
@@ -12,15 +12,6 @@ export const HOUR = 3600;
 export const LENGTH_STEP = 1e-3;
 
 type Material = BushingMaterial | BushingMaterialRow;
-
-/**
- * Rank of a lubricant need and of a supply on one scale: none 1 < grease 2 < oil 3 (oil bath and
- * oil feed). Water is off this scale: a water-lubricated class is met by the medium, not the supply.
- */
-const NEED_RANK: Record<Exclude<LubricantNeed, 'water'>, number> = { none: 1, grease: 2, oil: 3 };
-const SUPPLY_RANK: Record<Supply, number> = { none: 1, grease: 2, 'oil-bath': 3, 'oil-feed': 3 };
-/** Rank of a medium rating: good 1, fair 2, poor 3; a material must be at least fair (2) in the case's medium. */
-const RATING_RANK: Record<MediumRating, number> = { good: 1, fair: 2, poor: 3 };
 
 /** The length every material is checked at, and the thrust face when the case has axial load. */
 export interface Setting {
@@ -34,16 +25,44 @@ export interface Setting {
 /**
  * Shortest length for each limit of the bore (each scales as 1/L, so each is a closed form):
  *   L_p = F_max/(D·p_max),  L_PV = (F·V)_max/(D·PV_max),  L_w = (Σ share·f_m·f_e·k·p_peak(L=1)·V·3600)·T/δ
- * F N, V m/s, D m, T the life target h, δ the wear allowance m. Source: ./formulas.ts.
+ * F N, V m/s, D m, T the life target h, δ the wear allowance m; `Fmax` the largest F and `FVmax`
+ * the largest F·V over the duty, `wearRateTimesL` the sum in L_w. Source: ./formulas.ts.
  */
-function shortestLengths(c: CaseSI, m: Material, points: DutyPoint[], wearRateTimesL: number) {
+function shortestLengths(c: CaseSI, m: Material, Fmax: number, FVmax: number, wearRateTimesL: number) {
   const D = c.shaft.diameter;
   const by = {
-    pressure: Math.max(...points.map((p) => p.F)) / (D * m.maxPressure),
-    pv: Math.max(...points.map((p) => p.F * p.V)) / (D * m.maxPV),
+    pressure: Fmax / (D * m.maxPressure),
+    pv: FVmax / (D * m.maxPV),
     wear: (wearRateTimesL * c.life.hours) / c.life.wearAllowance,
   };
   return { minLengthBy: by, minLength: Math.max(by.pressure, by.pv, by.wear) };
+}
+
+/**
+ * The sources of a material's checks that add words to its row's source, built once per
+ * material row and heat model (a map checks every material at every cell).
+ */
+interface Sources {
+  heat: BushingFactors['heat'];
+  wear: string;
+  temperature: string;
+  edge: string;
+  ambient: string;
+}
+const sourcesOf = new WeakMap<Material, Sources>();
+function sources(m: Material, heat: BushingFactors['heat']): Sources {
+  const hit = sourcesOf.get(m);
+  if (hit && hit.heat === heat) return hit;
+  const src = m.source;
+  const made: Sources = {
+    heat,
+    wear: `Archard wear law, The Tribology Handbook 2nd ed. 1995, A5; wear factor: ${src}`,
+    temperature: `${src}; heat balance: ${heat.source}; margin: share of the allowed rise above ambient`,
+    edge: `${src}; model: the tilted shaft bears only where its gap θ·x is within the wear allowance (common practice, our own estimate)`,
+    ambient: `${src}; margin: share of the rise from ${heat.referenceAmbient} degC`,
+  };
+  sourcesOf.set(m, made);
+  return made;
 }
 
 /**
@@ -56,20 +75,18 @@ function shortestLengths(c: CaseSI, m: Material, points: DutyPoint[], wearRateTi
  * radial load, N; p_max the material's pressure limit, Pa. Elastic conformity of the liner and
  * the running clearance are neglected (conservative). Advisory: the model is a first estimate.
  */
-function edgeLoadCheck(c: CaseSI, Fmax: number, L: number, pMax: number, src: string): CheckRecord | null {
+function edgeLoadCheck(c: CaseSI, Fmax: number, L: number, pMax: number, source: string): CheckRecord | null {
   const theta = c.shaft.misalignment;
   if (theta === undefined) return null;
   const Leff = theta > 0 ? Math.min(L, c.life.wearAllowance / theta) : L;
-  return advisory(
-    makeCheck(
-      'edge-pressure',
-      'Pressure on the bedded-in length min(L, δ/θ) with the shaft tilted (advisory)',
-      meanPressure(Fmax, c.shaft.diameter, Leff),
-      pMax,
-      'Pa',
-      'max',
-      `${src}; model: the tilted shaft bears only where its gap θ·x is within the wear allowance (common practice, our own estimate)`,
-    ),
+  return makeAdvisoryCheck(
+    'edge-pressure',
+    'Pressure on the bedded-in length min(L, δ/θ) with the shaft tilted (advisory)',
+    meanPressure(Fmax, c.shaft.diameter, Leff),
+    pMax,
+    'Pa',
+    'max',
+    source,
   );
 }
 
@@ -122,87 +139,6 @@ function thrustOverDuty(
 }
 
 /**
- * Whether the case can give the material what it needs, whether it stands the service medium,
- * and whether the shaft moves as the material's limits assume (a pin class: oscillating only). Each unmet condition is a failing limit check (value and limit on the rank scales
- * above: lubricant none 1, grease 2, oil 3; medium rating good 1, fair 2, poor 3) and a finding;
- * met conditions add no check, so they never decide a margin.
- */
-function suitability(c: CaseSI, m: Material, medium: Medium): { checks: CheckRecord[]; reasons: Finding[] } {
-  const checks: CheckRecord[] = [];
-  const reasons: Finding[] = [];
-  const needs = m.needs ?? 'none';
-  const supply = c.lubrication.supply;
-  if (needs === 'water') {
-    // A water-lubricated class: the medium is its lubricant and coolant (wet 1, dry or chemical 2).
-    if (medium !== 'water' && medium !== 'slurry') {
-      checks.push(
-        makeCheck(
-          'lubricant-need',
-          'Runs in the water it needs (in water or slurry 1, otherwise 2)',
-          2,
-          1,
-          '1',
-          'max',
-          m.needsSource ?? m.source,
-        ),
-      );
-      reasons.push(finding('bushing.needs-water', { material: m.name, medium }));
-    }
-  } else if (NEED_RANK[needs] > SUPPLY_RANK[supply]) {
-    checks.push(
-      makeCheck(
-        'lubricant-need',
-        'Lubricant the material needs, within the supply (none 1, grease 2, oil 3)',
-        NEED_RANK[needs],
-        SUPPLY_RANK[supply],
-        '1',
-        'max',
-        m.needsSource ?? m.source,
-      ),
-    );
-    reasons.push(finding('bushing.needs-lubricant', { material: m.name, needs, supply }));
-  }
-  const slurry = 'slurry' in m ? m.slurry : undefined;
-  const rating =
-    medium === 'slurry'
-      ? (slurry ?? m.water)
-      : medium === 'water'
-        ? m.water
-        : medium === 'chemical'
-          ? m.chemical
-          : undefined;
-  if (rating !== undefined && RATING_RANK[rating] > RATING_RANK.fair) {
-    checks.push(
-      makeCheck(
-        'medium',
-        `Resistance in ${medium} (good 1, fair 2, poor 3)`,
-        RATING_RANK[rating],
-        RATING_RANK.fair,
-        '1',
-        'max',
-        m.mediaSource ?? m.source,
-      ),
-    );
-    reasons.push(finding('bushing.medium-unsuited', { material: m.name, medium, rating }));
-  }
-  if (m.motion === 'oscillating' && !c.shaft.oscillation) {
-    checks.push(
-      makeCheck(
-        'motion',
-        'Motion the limits hold for (oscillating only 1, any 2)',
-        2,
-        1,
-        '1',
-        'max',
-        m.motionSource ?? m.source,
-      ),
-    );
-    reasons.push(finding('bushing.motion-unsuited', { material: m.name }));
-  }
-  return { checks, reasons };
-}
-
-/**
  * Check one material class at the setting's length: mean pressure, sliding speed, PV and wear
  * life of the bore against the material's limits; the thrust face (when there is axial load)
  * with the same material; the lubricant need and the service medium; the outer diameter in the
@@ -222,37 +158,53 @@ export function checkMaterial(
   const D = c.shaft.diameter;
   const T = c.life.hours;
   const L = setting.length;
+  const allowance = c.life.wearAllowance;
   // A class whose grit passes (flutes flush it, an elastomer face yields to it) is not held to the
   // contamination factor: its wear factor is measured in the wet, gritty service it is built for.
   const fEnv = 'gritPasses' in m && m.gritPasses ? 1 : fEnvCase;
   const kLow = m.wearFactorLow ?? m.wearFactor / 3;
   const kHigh = m.wearFactorHigh ?? m.wearFactor * 3;
-  // Wear depth per hour of a bushing of unit length (÷ L gives m/h): Σ share·f_m·f_e·k·p_peak(L = 1)·V·3600 s
-  // Linear in k (Archard), so the sum over the duty is taken once, at k = 1.
-  const perUnitK = points.reduce(
-    (s, p) => s + p.share * wearDepth(1, peakPressure(p.F, D, 1), p.V, HOUR, fMotion, fEnv),
-    0,
-  );
-  const wearRateTimesL = (k: number) => k * perUnitK;
-  const { minLengthBy, minLength } = shortestLengths(c, m, points, wearRateTimesL(m.wearFactor));
+  // One pass over the duty: the largest F, V and F·V (the governing point, the first of equals),
+  // the smallest V, the time-mean friction power of the bore, and the wear depth per hour of a
+  // bushing of unit length (÷ L gives m/h): Σ share·f_m·f_e·k·p_peak(L = 1)·V·3600 s, linear in k
+  // (Archard), so the sum over the duty is taken once, at k = 1.
+  let perUnitK = 0;
+  let meanFriction = 0;
+  let Fmax = -Infinity;
+  let Vmax = -Infinity;
+  let Vmin = Infinity;
+  let FVmax = -Infinity;
+  let governing = points[0]!;
+  for (let i = 0; i < points.length; i++) {
+    const p = points[i]!;
+    perUnitK += p.share * wearDepth(1, peakPressure(p.F, D, 1), p.V, HOUR, fMotion, fEnv);
+    meanFriction += p.share * frictionHeat(m.friction, p.F, p.V);
+    Fmax = Math.max(Fmax, p.F);
+    Vmax = Math.max(Vmax, p.V);
+    Vmin = Math.min(Vmin, p.V);
+    FVmax = Math.max(FVmax, p.F * p.V);
+    if (p.F * p.V > governing.F * governing.V) governing = p;
+  }
+  // Wear rate (m/h) and hours to the allowance at wear factor k: rate = k·perUnitK/L, life = δ/rate.
+  const rateTyp = (m.wearFactor * perUnitK) / L;
+  const rateHigh = (kHigh * perUnitK) / L;
+  const rateLow = (kLow * perUnitK) / L;
+  const lifeTyp = allowance / rateTyp;
+  const { minLengthBy, minLength } = shortestLengths(c, m, Fmax, FVmax, m.wearFactor * perUnitK);
 
-  const Fmax = Math.max(...points.map((p) => p.F));
-  const Vmax = Math.max(...points.map((p) => p.V));
-  const governing = points.reduce((a, b) => (b.F * b.V > a.F * a.V ? b : a));
   // An inline material (a case's own row) carries no wall sizing: 1.5 mm and 10 % of the bore (common practice).
   const wall = Math.max('minWall' in m ? m.minWall : 1.5e-3, ('wallFraction' in m ? m.wallFraction : 0.1) * D);
   const outerDiameter = D + 2 * wall;
   const pressure = meanPressure(Fmax, D, L);
   const pv = (governing.F * governing.V) / (D * L);
-  const rate = (k: number) => wearRateTimesL(k) / L; // m/h
-  const life = (k: number) => c.life.wearAllowance / rate(k);
-  const wearDepthTyp = rate(m.wearFactor) * T;
+  const wearDepthTyp = rateTyp * T;
   const Q = frictionHeat(m.friction, governing.F, governing.V);
   const R = heatResistance(m.maxTemperature, factors.heat.referenceAmbient, m.friction, m.maxPV);
   const temperature = c.environment.ambient + dryTemperatureRise(R, m.friction, pv);
   const lOverD = L / D;
 
   const src = m.source;
+  const words = sources(m, factors.heat);
   const ld = factors.lengthToDiameter;
   const thickness = setting.thrust?.thickness ?? 0;
   const checks: CheckRecord[] = [
@@ -262,24 +214,22 @@ export function checkMaterial(
     makeCheck(
       'wear-life',
       'Hours to wear through the allowance (typical wear factor)',
-      life(m.wearFactor),
+      lifeTyp,
       T,
       'h',
       'min',
-      `Archard wear law, The Tribology Handbook 2nd ed. 1995, A5; wear factor: ${src}`,
+      words.wear,
     ),
     // Advisory: the heat balance takes its resistance from the PV limit, which is the published criterion.
-    advisory(
-      makeCheck(
-        'temperature',
-        'Rubbing-surface temperature (heat balance, advisory)',
-        temperature,
-        m.maxTemperature,
-        'degC',
-        'max',
-        `${src}; heat balance: ${factors.heat.source}; margin: share of the allowed rise above ambient`,
-        c.environment.ambient,
-      ),
+    makeAdvisoryCheck(
+      'temperature',
+      'Rubbing-surface temperature (heat balance, advisory)',
+      temperature,
+      m.maxTemperature,
+      'degC',
+      'max',
+      words.temperature,
+      c.environment.ambient,
     ),
     makeCheck(
       'radial-space',
@@ -291,41 +241,35 @@ export function checkMaterial(
       'the case (space.maxOuterDiameter); wall thickness common practice',
     ),
     // Length/diameter is advice (edge loading, misalignment), not a limit.
-    advisory(
-      lOverD < 1
-        ? makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.min, '1', 'min', ld.source)
-        : 'maxLengthToDiameter' in m && m.maxLengthToDiameter !== undefined
-          ? makeCheck(
-              'length-to-diameter',
-              'Length/diameter (advisory)',
-              lOverD,
-              m.maxLengthToDiameter,
-              '1',
-              'max',
-              m.wetSource ?? src,
-            )
-          : makeCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.max, '1', 'max', ld.source),
-    ),
+    lOverD < 1
+      ? makeAdvisoryCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.min, '1', 'min', ld.source)
+      : 'maxLengthToDiameter' in m && m.maxLengthToDiameter !== undefined
+        ? makeAdvisoryCheck(
+            'length-to-diameter',
+            'Length/diameter (advisory)',
+            lOverD,
+            m.maxLengthToDiameter,
+            '1',
+            'max',
+            m.wetSource ?? src,
+          )
+        : makeAdvisoryCheck('length-to-diameter', 'Length/diameter (advisory)', lOverD, ld.max, '1', 'max', ld.source),
   ];
-  const edge = edgeLoadCheck(c, Fmax, L, m.maxPressure, src);
+  const edge = edgeLoadCheck(c, Fmax, L, m.maxPressure, words.edge);
   if (edge) checks.push(edge);
   // A water-lubricated class forms its film only above a sliding speed: below it, advice (a maker's figure).
-  if ('minVelocity' in m && m.minVelocity !== undefined) {
-    const Vmin = Math.min(...points.map((p) => p.V));
+  if ('minVelocity' in m && m.minVelocity !== undefined)
     checks.push(
-      advisory(
-        makeCheck(
-          'min-velocity',
-          'Sliding speed for the water film (advisory)',
-          Vmin,
-          m.minVelocity,
-          'm/s',
-          'min',
-          m.wetSource ?? src,
-        ),
+      makeAdvisoryCheck(
+        'min-velocity',
+        'Sliding speed for the water film (advisory)',
+        Vmin,
+        m.minVelocity,
+        'm/s',
+        'min',
+        m.wetSource ?? src,
       ),
     );
-  }
   // Whole millimetres plus a washer add up with a floating-point residue (57 mm + 3 mm comes to
   // 60.000000000000005 mm): the sum is taken to the nanometre, far below any drawing's precision.
   const axialTaken = Math.round((L + thickness) * 1e9) / 1e9;
@@ -352,14 +296,13 @@ export function checkMaterial(
         m.maxTemperature,
         'degC',
         'max',
-        `${src}; margin: share of the rise from ${factors.heat.referenceAmbient} degC`,
+        words.ambient,
         factors.heat.referenceAmbient,
       ),
     );
   const thrust = setting.thrust ? thrustOverDuty(c, m, points, setting.thrust, fMotion, fEnv) : null;
-  if (thrust) checks.push(...thrust.checks);
-  const fit = suitability(c, m, setting.medium);
-  checks.push(...fit.checks);
+  if (thrust) for (const k of thrust.checks) checks.push(k);
+  const reasons = suitability(c, m, setting.medium, checks);
 
   return {
     id: m.id,
@@ -370,7 +313,7 @@ export function checkMaterial(
     water: m.water ?? 'fair',
     chemical: m.chemical ?? 'fair',
     thrust: thrust?.thrust ?? null,
-    reasons: fit.reasons,
+    reasons,
     outerDiameter,
     lengthToDiameter: lOverD,
     pressure,
@@ -382,16 +325,15 @@ export function checkMaterial(
     wearDepth: wearDepthTyp,
     wearDepthMeanPressure: (wearDepthTyp * Math.PI) / 4,
     wearBasis: 'peak-pressure',
-    lifeHours: life(m.wearFactor),
-    lifeBand: { short: life(kHigh), typical: life(m.wearFactor), long: life(kLow) },
-    wearDepthBand: { high: rate(kHigh) * T, typical: wearDepthTyp, low: rate(kLow) * T },
+    lifeHours: lifeTyp,
+    lifeBand: { short: allowance / rateHigh, typical: lifeTyp, long: allowance / rateLow },
+    wearDepthBand: { high: rateHigh * T, typical: wearDepthTyp, low: rateLow * T },
     minLength,
     minLengthBy,
     temperature,
     frictionCoefficient: m.friction,
     frictionPower: Q + (thrust?.thrust.frictionPower ?? 0),
-    meanFrictionPower:
-      points.reduce((sum, p) => sum + p.share * frictionHeat(m.friction, p.F, p.V), 0) + (thrust?.meanPower ?? 0),
+    meanFrictionPower: meanFriction + (thrust?.meanPower ?? 0),
     feasible: allLimitsPass(checks),
     checks,
     source: src,
