@@ -1,4 +1,4 @@
-import { advisory, makeCheck, type CheckRecord } from '../../core/check.js';
+import { makeCheck, type CheckRecord } from '../../core/check.js';
 import { KAPPA_MIN } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import type { CandidateFigures, EvalContext } from './context.js';
@@ -43,7 +43,7 @@ function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext
   }
   if (fig.kappa !== null && !fig.staticOnly) {
     checks.push(
-      advisory(
+      asAdvice(
         makeCheck(
           'viscosity-ratio',
           'viscosity ratio κ = ν/ν1 within the a_ISO method (below it the method’s limiting value is taken)',
@@ -83,6 +83,16 @@ function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext
       ),
     );
   }
+}
+
+/**
+ * A check record of our own marked as advice in place: the record advisory() (core/check.ts)
+ * returns, same fields in the same order, without building it twice (every candidate at every
+ * point of a sweep has one).
+ */
+function asAdvice(record: CheckRecord): CheckRecord {
+  record.advisory = true;
+  return record;
 }
 
 /**

@@ -21,17 +21,20 @@ export interface SpectrumPoint {
  *   P_m = (Σ Pi^p·ni·ti / Σ ni·ti)^(1/p),   n_m = Σ ni·ti / Σ ti
  * Pi N, ni rev/s, ti time shares, p life exponent. Loads are weighted by revolutions,
  * speed by time [1]. When no point turns (Σ ni·ti = 0) the loads are weighted by time
- * instead and `byRevolutions` is false (lives are then not defined anyway).
+ * instead and `byRevolutions` is false (lives are then not defined anyway). `include`, when
+ * given, names the points that count (the others are left out as if absent).
  */
-export function spectrumMean(
-  points: ReadonlyArray<SpectrumPoint>,
+export function spectrumMean<T extends SpectrumPoint>(
+  points: ReadonlyArray<T>,
   p: number,
+  include?: (q: T) => boolean,
 ): { P: number; n: number; byRevolutions: boolean } {
   let sumT = 0;
   let sumNT = 0;
   let sumPNT = 0;
   let sumPT = 0;
   for (const q of points) {
+    if (include !== undefined && !include(q)) continue;
     const t = Math.max(0, q.t);
     const n = Math.max(0, q.n);
     sumT += t;

@@ -4,7 +4,7 @@ import { finding, type Finding } from '../../core/finding.js';
 import { AISO_CAP, KAPPA_MAX, KAPPA_MIN } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import { candidateChecks } from './checks.js';
-import { contaminationFactor, type LoadPoint } from './conditions.js';
+import { contaminationFactor } from './conditions.js';
 import type { EvalContext } from './context.js';
 import type { Notes } from './findings.js';
 import { frictionRow, frictionTerms, type FrictionInput, type FrictionTerms } from './friction.js';
@@ -13,15 +13,23 @@ import { lifeExponent, requiredDynamicRating } from './life.js';
 import {
   axialCapacity,
   dynamicLoadFrom,
-  staticLoadFrom,
+  staticEquivalentLoad,
+  staticFactorsFrom,
   type AxialCapacity,
   type BearingLoadSpec,
   type DynamicLoad,
+  type StaticFactors,
 } from './load-factors.js';
 import type { FrictionRow } from '../../data/rolling-running.js';
 import type { LoadFactors } from '../../data/rolling-load-factors.js';
 import type { RollingTables } from './context.js';
-import { STATIC_SPEED_LIMIT, spectrumLife, type SpectrumLife } from './spectrum.js';
+import {
+  STATIC_SPEED_LIMIT,
+  spectrumLife,
+  type SpectrumBearing,
+  type SpectrumLife,
+  type SpectrumPointIn,
+} from './spectrum.js';
 import { criticalSwingAngle, frictionPower, speedFactor } from './speed.js';
 import { inducedAxialForce, inducedAxialForceFromE } from './tapered-pair.js';
 import type { RollingCandidate } from './types.js';
@@ -41,8 +49,18 @@ import type { RollingCandidate } from './types.js';
  *     (speed.ts, friction.ts, grease.ts).
  */
 
-/** A point's loads: the axial load the bearing carries (N), its dynamic equivalent load without f_d (P) and with it (Pf), N. */
-type PointLoad = DynamicLoad & { Pf: number; FaBearing: number } & LoadPoint;
+/**
+ * A point's loads, N: its dynamic equivalent load with f_d (P, what the lives read, with the
+ * point's speed, time share and viscosity: a spectrum point of spectrum.ts), the case's loads Fr
+ * and Fa, the axial load the bearing carries (FaBearing), and the dynamic load without f_d with
+ * its X, Y, e and key (load).
+ */
+interface PointLoad extends SpectrumPointIn {
+  Fr: number;
+  Fa: number;
+  FaBearing: number;
+  load: DynamicLoad;
+}
 
 /** The load kernels' view of a candidate. */
 function loadSpecOf(spec: CandidateSpec): BearingLoadSpec {
@@ -85,18 +103,26 @@ interface Prepared {
   partner: boolean;
   friction: FrictionRow;
   axialCapacity: AxialCapacity;
+  static: StaticFactors;
+  /** The spectrum life's view of the bearing, kept for the contamination row and a1 it was worked with. */
+  bearing: SpectrumBearing | null;
+  bearingCont: EvalContext['cont'] | null;
 }
 const preparedSpecs = new WeakMap<CandidateSpec, Prepared>();
 
 function prepared(spec: CandidateSpec, tables: RollingTables): Prepared {
   const hit = preparedSpecs.get(spec);
   if (hit && hit.tables === tables) return hit;
+  const ls = loadSpecOf(spec);
   const p: Prepared = {
     tables,
-    ls: loadSpecOf(spec),
+    ls,
     partner: needsOpposedPartner(spec),
     friction: frictionRow(tables.running, spec.kind),
     axialCapacity: axialCapacity(spec.kind, spec.form, spec.arrangement),
+    static: staticFactorsFrom(tables.load, ls),
+    bearing: null,
+    bearingCont: null,
   };
   preparedSpecs.set(spec, p);
   return p;
@@ -129,36 +155,32 @@ function pointLoads(
   notes: Notes,
 ): { per: PointLoad[]; exclusions: Finding[]; heaviest: PointLoad } {
   const t = ctx.tables.load;
+  const nu = ctx.lubrication.viscosity;
   const exclusions: Finding[] = [];
   const per: PointLoad[] = [];
   let raised = false;
+  let heaviest: PointLoad | undefined;
   for (const q of ctx.points) {
     const FaBearing = bearingAxialLoad(t, spec, p, q.Fr, q.Fa);
     const r = dynamicLoadFrom(t, p.ls, q.Fr, FaBearing, q.n);
-    if (r.exclusion && !exclusions.some((x) => x.code === r.exclusion!.code))
+    if (r.exclusion && !excludedFor(exclusions, r.exclusion.code))
       exclusions.push(finding(r.exclusion.code, r.exclusion.values));
     if (r.range === 'below' && r.key !== null && r.key > 0 && r.Y > 0)
       notes.warn(finding('rolling.key-below-table', { designation: spec.designation, key: r.key }), 'once');
     if (FaBearing > q.Fa) raised = true;
-    per.push({
-      P: r.P,
-      X: r.X,
-      Y: r.Y,
-      e: r.e,
-      key: r.key,
-      range: r.range,
-      exclusion: r.exclusion,
-      Pf: ctx.serviceFactor * r.P,
-      FaBearing,
-      n: q.n,
-      t: q.t,
-      Fr: q.Fr,
-      Fa: q.Fa,
-    });
+    const point: PointLoad = { P: ctx.serviceFactor * r.P, n: q.n, t: q.t, nu, Fr: q.Fr, Fa: q.Fa, FaBearing, load: r };
+    per.push(point);
+    // The first of the largest f_d·P (NaN never replaces it).
+    if (heaviest === undefined || point.P > heaviest.P) heaviest = point;
   }
-  const heaviest = per.reduce((a, b) => (b.Pf > a.Pf ? b : a), per[0]!);
   if (p.partner && raised) notes.warn(finding('rolling.opposed-partner', {}), 'opposed-partner');
-  return { per, exclusions, heaviest };
+  return { per, exclusions, heaviest: heaviest! };
+}
+
+/** Whether an exclusion of this code is already kept. */
+function excludedFor(exclusions: readonly Finding[], code: string): boolean {
+  for (const x of exclusions) if (x.code === code) return true;
+  return false;
 }
 
 /**
@@ -167,11 +189,8 @@ function pointLoads(
  * diameter (conditions.ts). Where κ or a_ISO leave the method's range it is said; κ below 0.1
  * informs, it never rules a bearing out.
  */
-function lives(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: Notes): SpectrumLife {
-  const life = spectrumLife(
-    per.map((q) => ({ P: q.Pf, n: q.n, t: q.t, nu: ctx.lubrication.viscosity })),
-    { type: spec.type, C: spec.C, Cu: spec.Cu, dm: spec.dm, eC: contaminationFactor(ctx.cont, spec.dm), a1: ctx.a1 },
-  );
+function lives(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointLoad[], notes: Notes): SpectrumLife {
+  const life = spectrumLife(per, spectrumBearing(spec, p, ctx));
   const designation = spec.designation;
   if (life.staticOnly)
     notes.warn(
@@ -192,6 +211,16 @@ function lives(spec: CandidateSpec, ctx: EvalContext, per: PointLoad[], notes: N
     if (q.capped) notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }), 'once');
   }
   return life;
+}
+
+/** The spectrum life's view of a candidate [1]: its ratings and size, e_C for its pitch diameter, a1; kept while the case's contamination row and a1 stay. */
+function spectrumBearing(spec: CandidateSpec, p: Prepared, ctx: EvalContext): SpectrumBearing {
+  if (p.bearing === null || p.bearingCont !== ctx.cont || p.bearing.a1 !== ctx.a1) {
+    const eC = contaminationFactor(ctx.cont, spec.dm);
+    p.bearing = { type: spec.type, C: spec.C, Cu: spec.Cu, dm: spec.dm, eC, a1: ctx.a1 };
+    p.bearingCont = ctx.cont;
+  }
+  return p.bearing;
 }
 
 /**
@@ -299,6 +328,34 @@ function swingAngle(spec: CandidateSpec, c: CaseSI, notes: Notes): number | null
   return swing;
 }
 
+/** The candidate's figures at each point, in the order of the points. */
+function pointRecords(per: PointLoad[], life: SpectrumLife, moments: FrictionTerms[]): RollingCandidate['points'] {
+  const out: RollingCandidate['points'] = [];
+  for (let i = 0; i < per.length; i++) {
+    const q = per[i]!;
+    const l = life.points[i]!;
+    const m = moments[i]!;
+    out.push({
+      Fr: q.Fr,
+      Fa: q.FaBearing,
+      n: q.n,
+      t: q.t,
+      X: q.load.X,
+      Y: q.load.Y,
+      e: q.load.e,
+      key: q.load.key,
+      P: q.load.P,
+      kappa: l.kappa,
+      aISO: l.aISO,
+      L10mh: l.L10mh,
+      static: l.static,
+      frictionViscous: m.viscous,
+      frictionLoad: m.load,
+    });
+  }
+  return out;
+}
+
 /**
  * One candidate, evaluated [1–4]: every figure of RollingCandidate (SI; lives h) and its
  * checks. It is feasible when nothing excludes it and every check that decides passes. Static
@@ -307,17 +364,21 @@ function swingAngle(spec: CandidateSpec, c: CaseSI, notes: Notes): number | null
 export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): RollingCandidate {
   const p = prepared(spec, ctx.tables);
   const loads = pointLoads(spec, p, ctx, notes);
-  const life = lives(spec, ctx, loads.per, notes);
-  const P0 = loads.per.reduce((m, q) => Math.max(m, staticLoadFrom(ctx.tables.load, p.ls, q.Fr, q.FaBearing).P0), 0);
+  const life = lives(spec, p, ctx, loads.per, notes);
+  // The peak static load and the largest axial load the bearing carries over the points.
+  let P0 = 0;
+  let axialLoad = 0;
+  for (const q of loads.per) {
+    P0 = Math.max(P0, staticEquivalentLoad(p.static, q.Fr, q.FaBearing));
+    axialLoad = Math.max(axialLoad, q.FaBearing);
+  }
   const s0 = P0 > 0 ? spec.C0 / P0 : null;
   const run = running(spec, p, ctx, loads.per, life.P, notes);
   const swing = swingAngle(spec, ctx.c, notes);
   // The lowest κ over the turning points: the point that is lubricated least well.
-  const kappa = life.points.reduce<number | null>(
-    (m, q) => (q.kappa === null || q.static ? m : m === null ? q.kappa : Math.min(m, q.kappa)),
-    null,
-  );
-  const axialLoad = loads.per.reduce((m, q) => Math.max(m, q.FaBearing), 0);
+  let kappa: number | null = null;
+  for (const q of life.points)
+    if (q.kappa !== null && !q.static) kappa = kappa === null ? q.kappa : Math.min(kappa, q.kappa);
   const checks = candidateChecks(
     spec,
     {
@@ -352,9 +413,9 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
     pitchDiameter: spec.dm,
     elementDiameter: spec.Dw,
     elementCount: spec.Z,
-    X: loads.heaviest.X,
-    Y: loads.heaviest.Y,
-    e: loads.heaviest.e,
+    X: loads.heaviest.load.X,
+    Y: loads.heaviest.load.Y,
+    e: loads.heaviest.load.e,
     axialLoad,
     equivalentLoad: life.P,
     staticEquivalentLoad: P0,
@@ -377,23 +438,7 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
     viscosity: ctx.lubrication.viscosity,
     ratedViscosity: kappa !== null && kappa > 0 ? ctx.lubrication.viscosity / kappa : null,
     criticalSwingAngle: swing,
-    points: loads.per.map((q, i) => ({
-      Fr: q.Fr,
-      Fa: q.FaBearing,
-      n: q.n,
-      t: q.t,
-      X: q.X,
-      Y: q.Y,
-      e: q.e,
-      key: q.key,
-      P: q.P,
-      kappa: life.points[i]!.kappa,
-      aISO: life.points[i]!.aISO,
-      L10mh: life.points[i]!.L10mh,
-      static: life.points[i]!.static,
-      frictionViscous: run.moments[i]!.viscous,
-      frictionLoad: run.moments[i]!.load,
-    })),
+    points: pointRecords(loads.per, life, run.moments),
     exclusions: loads.exclusions,
     feasible: loads.exclusions.length === 0 && allLimitsPass(checks),
     checks,

@@ -291,6 +291,22 @@ export function staticLoadFrom(
   Fr: number,
   Fa: number,
 ): { P0: number; X0: number; Y0: number } {
+  const f = staticFactorsFrom(t, b);
+  return { P0: staticEquivalentLoad(f, Fr, Fa), X0: f.X0, Y0: f.Y0 };
+}
+
+/** A support's static factors X0, Y0 (see staticLoad); `radial`: the kind takes P0 = Fr. */
+export interface StaticFactors {
+  X0: number;
+  Y0: number;
+  radial: boolean;
+}
+
+/**
+ * The static factors X0, Y0 of staticLoad, which depend on the support alone (kind,
+ * arrangement, contact angle), not on its loads: a sweep works them once per bearing.
+ */
+export function staticFactorsFrom(t: LoadFactors, b: BearingLoadSpec): StaticFactors {
   const s = t.static;
   const double = actsAsDoubleRow(b.kind, b.arrangement);
   const alpha = Math.min(45, Math.max(1, b.contactAngle));
@@ -320,7 +336,12 @@ export function staticLoadFrom(
     }
     case 'cylindrical roller':
     case 'needle roller':
-      return { P0: Fr, X0: 1, Y0: 0 };
+      return { X0: 1, Y0: 0, radial: true };
   }
-  return { P0: Math.max(X0 * Fr + Y0 * Fa, Fr), X0, Y0 };
+  return { X0, Y0, radial: false };
+}
+
+/** P0 of a support from its static factors, N: max(X0·Fr + Y0·Fa, Fr), or Fr where the kind takes P0 = Fr (Fr, Fa in N). */
+export function staticEquivalentLoad(f: StaticFactors, Fr: number, Fa: number): number {
+  return f.radial ? Fr : Math.max(f.X0 * Fr + f.Y0 * Fa, Fr);
 }

@@ -72,10 +72,23 @@ function choiceOrder(a: RollingCandidate, b: RollingCandidate, byKind: TraitsByK
   );
 }
 
-/** The first of `list` in choiceOrder (what a stable sort would put first), in one pass. */
-function firstInChoiceOrder(list: RollingCandidate[], byKind: TraitsByKind): RollingCandidate | undefined {
+/**
+ * The first feasible candidate of `list` (of one kind, when given) in choiceOrder: what a stable
+ * sort of those candidates would put first, found in one pass without a list of them.
+ */
+function firstFeasible(
+  list: readonly RollingCandidate[],
+  byKind: TraitsByKind,
+  kind?: RollingKind,
+): RollingCandidate | undefined {
   let first: RollingCandidate | undefined;
-  for (const k of list) if (first === undefined || choiceOrder(k, first, byKind) < 0) first = k;
+  for (const k of list)
+    if (
+      k.feasible &&
+      (kind === undefined || k.kind === kind) &&
+      (first === undefined || choiceOrder(k, first, byKind) < 0)
+    )
+      first = k;
   return first;
 }
 
@@ -85,11 +98,7 @@ function firstInChoiceOrder(list: RollingCandidate[], byKind: TraitsByKind): Rol
  * suitable is said.
  */
 export function bestCandidate(candidates: RollingCandidate[], notes: Notes): RollingCandidate | null {
-  const best =
-    firstInChoiceOrder(
-      candidates.filter((k) => k.feasible),
-      traitsNow(),
-    ) ?? null;
+  const best = firstFeasible(candidates, traitsNow()) ?? null;
   if (best) return best;
   if (candidates.length === 0) notes.warn(finding('rolling.no-candidate'));
   for (const k of leadOfEachKind(candidates)) {
@@ -117,23 +126,37 @@ export function leadOfEachKind(candidates: RollingCandidate[]): RollingCandidate
   const byKind = traitsNow();
   const out: RollingCandidate[] = [];
   for (const kind of ROLLING_KINDS) {
-    const of = candidates.filter((k) => k.kind === kind);
-    const lead = firstInChoiceOrder(
-      of.filter((k) => k.feasible),
-      byKind,
-    );
-    if (lead) {
-      out.push(lead);
-      continue;
-    }
-    // The nearest miss: each governing margin worked once, not at every comparison of the sort.
-    const margin = new Map(of.map((k) => [k, governingMargin(k.checks)]));
-    const miss = [...of].sort(
-      (a, b) => a.exclusions.length - b.exclusions.length || margin.get(b)! - margin.get(a)!,
-    )[0];
-    if (miss) out.push(miss);
+    const lead = firstFeasible(candidates, byKind, kind) ?? nearestMiss(candidates, kind);
+    if (lead) out.push(lead);
   }
   return out;
+}
+
+/**
+ * The nearest miss of a kind: the candidate a stable sort on (exclusions ascending, governing
+ * margin descending) puts first, each margin worked once, in one pass. A NaN margin makes that
+ * sort's order depend on its comparisons, so then the sort itself is run.
+ */
+function nearestMiss(candidates: readonly RollingCandidate[], kind: RollingKind): RollingCandidate | undefined {
+  let miss: RollingCandidate | undefined;
+  let missMargin = 0;
+  for (const k of candidates) {
+    if (k.kind !== kind) continue;
+    const m = governingMargin(k.checks);
+    if (Number.isNaN(m)) return nearestMissBySort(candidates.filter((x) => x.kind === kind));
+    const d = miss === undefined ? -1 : k.exclusions.length - miss.exclusions.length;
+    if (d < 0 || (d === 0 && m > missMargin)) {
+      miss = k;
+      missMargin = m;
+    }
+  }
+  return miss;
+}
+
+/** nearestMiss by the sort itself (the candidates of one kind). */
+function nearestMissBySort(of: RollingCandidate[]): RollingCandidate | undefined {
+  const margin = new Map(of.map((k) => [k, governingMargin(k.checks)]));
+  return [...of].sort((a, b) => a.exclusions.length - b.exclusions.length || margin.get(b)! - margin.get(a)!)[0];
 }
 
 /**

@@ -141,21 +141,21 @@ function pointLife(q: SpectrumPointIn, b: SpectrumBearing): SpectrumPointLife {
  * - An unloaded point (Pi = 0) consumes no life. L10mh is null when no point consumes
  *   life (no load, no time), or when C ≤ 0.
  */
-export function spectrumLife(points: SpectrumPointIn[], b: SpectrumBearing): SpectrumLife {
+export function spectrumLife(points: readonly SpectrumPointIn[], b: SpectrumBearing): SpectrumLife {
   const per: SpectrumPointLife[] = [];
-  // The points with a time share, in order (spectrumMean reads their P, n and t).
-  const counted: SpectrumPointIn[] = [];
+  // How many points have a time share (spectrumMean reads only theirs, in order).
+  let counted = 0;
   let allStatic = true;
   for (const q of points) {
     const life = pointLife(q, b);
     per.push(life);
     if (!counts(q)) continue;
-    counted.push(q);
+    counted++;
     if (!life.static) allStatic = false;
   }
-  const staticOnly = counted.length > 0 && allStatic;
-  const mean = spectrumMean(counted, lifeExponent(b.type));
-  if (staticOnly || counted.length === 0 || !(b.C > 0))
+  const staticOnly = counted > 0 && allStatic;
+  const mean = spectrumMean(points, lifeExponent(b.type), counts);
+  if (staticOnly || counted === 0 || !(b.C > 0))
     return { L10: null, L10h: null, L10mh: null, aISOEquivalent: null, P: mean.P, n: mean.n, points: per, staticOnly };
   const L10 = basicRatingLife(b.C, mean.P, lifeExponent(b.type));
   const L10h = L10 !== null ? lifeHours(L10, mean.n) : null;

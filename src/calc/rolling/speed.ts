@@ -67,7 +67,7 @@ export function speedLimit(kind: RollingKind, supply: BearingSupply, form: KindF
   return speedLimitFrom(rollingRunning(), kind, supply, form);
 }
 
-/** speedLimit with the running table given (a sweep reads it once per case). */
+/** speedLimit with the running table given (a sweep reads it once per case); one frozen record per row and supply. */
 export function speedLimitFrom(
   t: RollingRunning,
   kind: RollingKind,
@@ -75,13 +75,21 @@ export function speedLimitFrom(
   form: KindForm | null = null,
 ): SpeedLimit {
   const row = speedRow(t, kind, form);
-  return { ndm: row.ndm[supply], source: row.source };
+  let limit = row.limits[supply];
+  if (!limit) row.limits[supply] = limit = Object.freeze({ ndm: row.row.ndm[supply], source: row.row.source });
+  return limit;
+}
+
+/** A kind's row of speed limits and the limit records given out for it, per supply. */
+interface KeptRow {
+  row: SpeedLimitRow;
+  limits: Partial<Record<BearingSupply, SpeedLimit>>;
 }
 
 /** The row of each kind and form, per table read (every candidate at every point asks). */
-const speedRows = new WeakMap<RollingRunning, Map<RollingKind, Map<KindForm | null, SpeedLimitRow>>>();
+const speedRows = new WeakMap<RollingRunning, Map<RollingKind, Map<KindForm | null, KeptRow>>>();
 
-function speedRow(t: RollingRunning, kind: RollingKind, form: KindForm | null): SpeedLimitRow {
+function speedRow(t: RollingRunning, kind: RollingKind, form: KindForm | null): KeptRow {
   let byKind = speedRows.get(t);
   if (!byKind) speedRows.set(t, (byKind = new Map()));
   let byForm = byKind.get(kind);
@@ -91,8 +99,9 @@ function speedRow(t: RollingRunning, kind: RollingKind, form: KindForm | null): 
   const rows = t.speedLimits.filter((r) => r.kind === kind);
   const row = rows.find((r) => form !== null && r.form === form) ?? rows.find((r) => r.form === null);
   if (!row) throw new Error(`no speed limit for ${kind}`);
-  byForm.set(form, row);
-  return row;
+  const kept: KeptRow = { row, limits: {} };
+  byForm.set(form, kept);
+  return kept;
 }
 
 /** Static-safety guidance: the least s0 = C0/P0 for a shock level, its label and its source. */
