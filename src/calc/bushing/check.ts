@@ -1,6 +1,5 @@
 import { assumedFinding, finding, type AssumedFinding, type Finding } from '../../core/finding.js';
 import type { BushingMaterial, CaseSI } from '../../case/types.js';
-import { governingMargin } from '../../core/check.js';
 import { operatingPoints } from '../duty.js';
 import { bushingFactors, bushingMaterials, type BushingMaterialRow } from '../../data/bushing.js';
 import { sizeThrustFace, washerThickness } from '../thrust/rubbing.js';
@@ -40,7 +39,12 @@ const SPACE_CHECKS = new Set(['radial-space', 'axial-space']);
  * every material at the common length shares or which only measures its wall thickness.
  */
 export function materialMargin(m: BushingMaterialResult): number {
-  return governingMargin(m.checks.filter((k) => !SPACE_CHECKS.has(k.id)));
+  // governingMargin over the checks less the space checks, without building that list (a map
+  // compares materials at every cell): the first smallest margin of a limit check.
+  let margin: number | undefined;
+  for (const k of m.checks)
+    if (!k.advisory && !SPACE_CHECKS.has(k.id) && (margin === undefined || k.margin < margin)) margin = k.margin;
+  return margin ?? Infinity;
 }
 
 /**
