@@ -3,6 +3,7 @@ import { petroffFriction } from './closed-forms.js';
 import {
   eccentricityFromSommerfeld,
   pointAtEccentricity,
+  thermalVariablesAt,
   type DimensionlessPoint,
   type JournalTable,
 } from './table.js';
@@ -117,10 +118,6 @@ export interface OperatingResult {
   point: DimensionlessPoint;
 }
 
-function viscosityAt(fluid: Fluid, tC: number): number {
-  return fluid.kind === 'fixed' ? fluid.viscosity : dynamicViscosity(fluid.oil, tC);
-}
-
 /**
  * Isothermal load matching at viscosity μ: the state of the bearing carrying W at N.
  * The temperature fields are filled from the heat balance at that μ (ΔT, T_in + k·ΔT,
@@ -135,12 +132,11 @@ export function matchLoad(
 ): OperatingResult {
   const { geometry: g, load: w, speed: n } = input;
   validate(input);
-  if (!(mu > 0 && Number.isFinite(mu)))
-    throw new Error(`journal: viscosity must be positive and finite, got ${mu} Pa·s`);
+  checkViscosity(mu);
   const r = g.diameter / 2;
   const c = g.radialClearance;
   const unitLoad = w / (g.length * g.diameter);
-  const s = (r / c) ** 2 * ((mu * n) / unitLoad);
+  const s = sommerfeldNumber(r, c, unitLoad, mu, n);
   const eps = eccentricityFromSommerfeld(table, s);
   const pt = pointAtEccentricity(table, eps);
   const f = pt.frictionVariable * (c / r);
@@ -148,8 +144,7 @@ export function matchLoad(
   const power = torque * 2 * Math.PI * n;
   const flow = pt.flowVariable * r * c * n * g.length;
   const sideFlow = pt.sideFlowRatio * flow;
-  const rise =
-    (4 * Math.PI * unitLoad * pt.frictionVariable) / (rho * cp * pt.flowVariable * (1 - 0.5 * pt.sideFlowRatio));
+  const rise = temperatureRise(unitLoad, pt.frictionVariable, pt.flowVariable, pt.sideFlowRatio, rho, cp);
   return {
     load: w,
     speed: n,
@@ -180,19 +175,76 @@ export function matchLoad(
   };
 }
 
+/** S = (r/c)²·μN/P: r, c m; P Pa; μ Pa·s; N rev/s. */
+function sommerfeldNumber(r: number, c: number, unitLoad: number, mu: number, n: number): number {
+  return (r / c) ** 2 * ((mu * n) / unitLoad);
+}
+
+/** ΔT = 4π·P·[(r/c)f] / (ρ·cp·[Q/(rcNL)]·(1 − ½·Qs/Q)), K (module comment): P Pa, ρ kg/m³, cp J/(kg·K). */
+function temperatureRise(
+  unitLoad: number,
+  frictionVariable: number,
+  flowVariable: number,
+  sideFlowRatio: number,
+  rho: number,
+  cp: number,
+): number {
+  return (4 * Math.PI * unitLoad * frictionVariable) / (rho * cp * flowVariable * (1 - 0.5 * sideFlowRatio));
+}
+
+function checkViscosity(mu: number): void {
+  if (!(mu > 0 && Number.isFinite(mu)))
+    throw new Error(`journal: viscosity must be positive and finite, got ${mu} Pa·s`);
+}
+
+function positive(name: string, v: number): void {
+  if (!(v > 0 && Number.isFinite(v))) throw new Error(`journal: ${name} must be positive and finite, got ${v}`);
+}
+
 function validate(input: OperatingInput): void {
-  const { geometry: g, load, speed } = input;
-  const positive: [string, number][] = [
-    ['diameter', g.diameter],
-    ['length', g.length],
-    ['radial clearance', g.radialClearance],
-    ['load', load],
-    ['speed', speed],
-  ];
-  for (const [name, v] of positive)
-    if (!(v > 0 && Number.isFinite(v))) throw new Error(`journal: ${name} must be positive and finite, got ${v}`);
+  const g = input.geometry;
+  positive('diameter', g.diameter);
+  positive('length', g.length);
+  positive('radial clearance', g.radialClearance);
+  positive('load', input.load);
+  positive('speed', input.speed);
   if (!Number.isFinite(input.inletTemperature))
     throw new Error(`journal: inlet temperature must be finite, got ${input.inletTemperature}`);
+}
+
+/** Where the thermal variables of each step of the balance are written (no point built per step). */
+const thermal = new Float64Array(3);
+
+/**
+ * The effective film temperature T_in + k·ΔT (°C) of the load matched at the viscosity and density
+ * of the oil at t (°C): the effectiveTemperature of matchLoad at that oil state, without its result.
+ */
+function effectiveTemperatureAt(table: JournalTable, input: OperatingInput, oil: OilGrade, t: number): number {
+  const mu = dynamicViscosity(oil, t);
+  checkViscosity(mu);
+  const g = input.geometry;
+  const r = g.diameter / 2;
+  const c = g.radialClearance;
+  const unitLoad = input.load / (g.length * g.diameter);
+  const eps = eccentricityFromSommerfeld(table, sommerfeldNumber(r, c, unitLoad, mu, input.speed));
+  thermalVariablesAt(table, eps, thermal);
+  const rise = temperatureRise(unitLoad, thermal[0]!, thermal[1]!, thermal[2]!, density(oil, t), oil.specificHeat);
+  return input.inletTemperature + THERMAL_SHARE * rise;
+}
+
+/** matchLoad at the oil's state at t (°C), with the balance's outcome: runaway and the evaluations counted. */
+function thermalResult(
+  table: JournalTable,
+  input: OperatingInput,
+  oil: OilGrade,
+  t: number,
+  runaway: boolean,
+  count: number,
+): OperatingResult {
+  const res = matchLoad(table, input, dynamicViscosity(oil, t), density(oil, t), oil.specificHeat);
+  res.thermalRunaway = runaway;
+  res.thermalIterations = count;
+  return res;
 }
 
 /**
@@ -205,58 +257,56 @@ export function operatingPoint(table: JournalTable, input: OperatingInput): Oper
   if (fluid.kind === 'fixed') return matchLoad(table, input, fluid.viscosity, fluid.density, fluid.specificHeat);
 
   const tIn = input.inletTemperature;
-  const evalAt = (t: number): OperatingResult =>
-    matchLoad(table, input, viscosityAt(fluid, t), density(fluid.oil, t), fluid.oil.specificHeat);
-  // g(T) = T_in + k·ΔT(T) − T: positive at T_in (ΔT > 0), decreasing as T rises.
-  const gOf = (res: OperatingResult, t: number): number => res.effectiveTemperature - t;
-
+  const oil = fluid.oil;
+  // The search follows T_eff(T) alone (effectiveTemperatureAt: no result object per step); the
+  // result is built once, at the temperature it settles on (matchLoad there gives the numbers the
+  // search saw). g(T) = T_in + k·ΔT(T) − T: positive at T_in (ΔT > 0), decreasing as T rises;
+  // ea, eb are T_eff at a, b.
   if (!(tIn < THERMAL_CEILING_C))
     throw new Error(
       `journal: inlet temperature ${tIn} °C is at or above the ${THERMAL_CEILING_C} °C ceiling of the thermal balance`,
     );
   let a = tIn;
-  let ra = evalAt(a);
-  let ga = gOf(ra, a);
+  let ea = effectiveTemperatureAt(table, input, oil, a);
+  let ga = ea - a;
   let span = Math.max(10, ga * 2);
   let b = Math.min(THERMAL_CEILING_C, a + span);
-  let rb = evalAt(b);
-  let gb = gOf(rb, b);
+  let eb = effectiveTemperatureAt(table, input, oil, b);
+  let gb = eb - b;
   let count = 2;
   // Expand the bracket until the sign changes, up to the ceiling.
   while (gb > 0) {
-    if (b >= THERMAL_CEILING_C) return { ...rb, thermalRunaway: true, thermalIterations: count };
+    if (b >= THERMAL_CEILING_C) return thermalResult(table, input, oil, b, true, count);
     a = b;
-    ra = rb;
+    ea = eb;
     ga = gb;
     span *= 2;
     b = Math.min(THERMAL_CEILING_C, tIn + span);
-    rb = evalAt(b);
-    gb = gOf(rb, b);
+    eb = effectiveTemperatureAt(table, input, oil, b);
+    gb = eb - b;
     count++;
   }
-  // ga, gb may be halved by the Illinois rule; the residuals of ra, rb are recomputed.
+  // ga, gb may be halved by the Illinois rule; the residuals at a, b are recomputed.
   let side = 0;
   for (let it = 0; it < 200; it++) {
-    const resA = Math.abs(gOf(ra, a));
-    const resB = Math.abs(gOf(rb, b));
-    if (b - a < THERMAL_TOLERANCE_K || Math.min(resA, resB) < THERMAL_TOLERANCE_K / 10) {
-      const res = resA < resB ? ra : rb;
-      return { ...res, thermalIterations: count };
-    }
+    const resA = Math.abs(ea - a);
+    const resB = Math.abs(eb - b);
+    if (b - a < THERMAL_TOLERANCE_K || Math.min(resA, resB) < THERMAL_TOLERANCE_K / 10)
+      return thermalResult(table, input, oil, resA < resB ? a : b, false, count);
     let t = (a * gb - b * ga) / (gb - ga);
     if (!(t > a && t < b)) t = 0.5 * (a + b);
-    const rt = evalAt(t);
-    const gt = gOf(rt, t);
+    const et = effectiveTemperatureAt(table, input, oil, t);
+    const gt = et - t;
     count++;
     if (gt > 0) {
       a = t;
-      ra = rt;
+      ea = et;
       ga = gt;
       if (side === -1) gb /= 2;
       side = -1;
     } else {
       b = t;
-      rb = rt;
+      eb = et;
       gb = gt;
       if (side === 1) ga /= 2;
       side = 1;

@@ -279,6 +279,23 @@ export function pointAtEccentricity(t: JournalTable, eps: number): Dimensionless
 }
 
 /**
+ * The three variables of the thermal balance at ε (0 < ε < 1), the same numbers as the fields of
+ * pointAtEccentricity, written to `out` without building the point (the balance's iteration
+ * evaluates them at every step): out[0] (r/c)f, out[1] Q/(rcNL), out[2] Qs/Q.
+ */
+export function thermalVariablesAt(t: JournalTable, eps: number, out: Float64Array): void {
+  if (!(eps > 0 && eps < 1)) throw new Error(`journal table: eccentricity ratio must be in (0, 1), got ${eps}`);
+  const n = t.eps.length;
+  const ec = Math.min(Math.max(eps, t.eps[0]!), t.eps[n - 1]!);
+  const k = segment(t.eps, ec);
+  const sommerfeld = sommerfeldAt(t, eps);
+  const attitudeDeg = hermite(t.eps, t.attitude, k, ec);
+  out[0] = frictionVariableIdentity(sommerfeld, eps, (attitudeDeg * Math.PI) / 180);
+  out[1] = hermite(t.eps, t.flow, k, ec);
+  out[2] = hermite(t.eps, t.sideRatio, k, ec);
+}
+
+/**
  * Eccentricity ratio for a Sommerfeld number S > 0: the root of S_table(ε) = S on the
  * monotone interpolant, by Newton's method safeguarded by bisection (to double precision).
  * Beyond the table the out-of-table laws are inverted in closed form.
@@ -314,8 +331,11 @@ export function eccentricityFromSommerfeld(t: JournalTable, sommerfeld: number):
   let a = t.eps[lo]!;
   let b = t.eps[hi]!;
   let m = 0.5 * (a + b);
+  const hs = slopeScratch;
   for (let it = 0; it < 100 && b - a > 1e-14; it++) {
-    const [h, dh] = hermiteWithSlope(t.eps, t.lnSe, lo, m);
+    hermiteWithSlope(t.eps, t.lnSe, lo, m, hs);
+    const h = hs[0]!;
+    const dh = hs[1]!;
     const g = h - Math.log(m) - target;
     if (g >= 0) a = m;
     else b = m;
@@ -328,8 +348,11 @@ export function eccentricityFromSommerfeld(t: JournalTable, sommerfeld: number):
   return m;
 }
 
-/** Cubic Hermite value and slope on segment k at v. */
-function hermiteWithSlope(x: Float64Array, s: Series, k: number, v: number): [number, number] {
+/** Where hermiteWithSlope writes (one for the module: the Newton steps build no pair each). */
+const slopeScratch = new Float64Array(2);
+
+/** Cubic Hermite value and slope on segment k at v, written to out[0] and out[1]. */
+function hermiteWithSlope(x: Float64Array, s: Series, k: number, v: number, out: Float64Array): void {
   const x0 = x[k]!;
   const h = x[k + 1]! - x0;
   const t = (v - x0) / h;
@@ -344,7 +367,8 @@ function hermiteWithSlope(x: Float64Array, s: Series, k: number, v: number): [nu
     (-2 * t2 * t + 3 * t2) * y1 +
     (t2 * t - t2) * h * d1;
   const slope = ((6 * t2 - 6 * t) * (y0 - y1)) / h + (3 * t2 - 4 * t + 1) * d0 + (3 * t2 - 2 * t) * d1;
-  return [value, slope];
+  out[0] = value;
+  out[1] = slope;
 }
 
 /** The interpolated dimensionless state for a Sommerfeld number. */
