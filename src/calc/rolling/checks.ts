@@ -119,6 +119,57 @@ function speedLabel(kind: string, supply: string): string {
   return text;
 }
 
+/**
+ * The bearing's size against the case's room: outside diameter and width, where both are known.
+ * They read neither load nor speed, so one frozen pair of records is kept per candidate and
+ * given to every point of a sweep with the same room (shared records are never changed).
+ */
+function spaceChecks(spec: CandidateSpec, c: EvalContext['c'], checks: CheckRecord[]): void {
+  const { maxOuterDiameter, maxLength } = c.space;
+  let k = keptSpace.get(spec);
+  if (!k || !Object.is(k.maxOuterDiameter, maxOuterDiameter) || !Object.is(k.maxLength, maxLength)) {
+    k = { maxOuterDiameter, maxLength, outer: null, width: null };
+    const source =
+      'case space; bearing dimensions ISO 15, ISO 355 and the needle roller standards (from memory) or supplier';
+    if (spec.outerDiameter !== null && maxOuterDiameter > 0)
+      k.outer = Object.freeze(
+        makeCheck(
+          'space-outer-diameter',
+          'bearing outside diameter against the housing room',
+          spec.outerDiameter,
+          maxOuterDiameter,
+          'm',
+          'max',
+          source,
+        ),
+      );
+    if (spec.width !== null && maxLength > 0)
+      k.width = Object.freeze(
+        makeCheck(
+          'space-width',
+          spec.arrangement === 'single'
+            ? 'bearing width against the axial room'
+            : 'width of the pair against the axial room',
+          spec.width,
+          maxLength,
+          'm',
+          'max',
+          source,
+        ),
+      );
+    keptSpace.set(spec, k);
+  }
+  if (k.outer) checks.push(k.outer);
+  if (k.width) checks.push(k.width);
+}
+interface KeptSpace {
+  maxOuterDiameter: number;
+  maxLength: number;
+  outer: CheckRecord | null;
+  width: CheckRecord | null;
+}
+const keptSpace = new WeakMap<CandidateSpec, KeptSpace>();
+
 /** Checks of what the surroundings allow [2, 3]: n·dm for the kind and supply, outside diameter and width, grease life of a sealed bearing, temperatures. */
 function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext, checks: CheckRecord[]): void {
   const { c, lubrication } = ctx;
@@ -136,36 +187,7 @@ function fitChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext,
       ),
     );
   }
-  const spaceSource =
-    'case space; bearing dimensions ISO 15, ISO 355 and the needle roller standards (from memory) or supplier';
-  if (spec.outerDiameter !== null && c.space.maxOuterDiameter > 0) {
-    checks.push(
-      makeCheck(
-        'space-outer-diameter',
-        'bearing outside diameter against the housing room',
-        spec.outerDiameter,
-        c.space.maxOuterDiameter,
-        'm',
-        'max',
-        spaceSource,
-      ),
-    );
-  }
-  if (spec.width !== null && c.space.maxLength > 0) {
-    checks.push(
-      makeCheck(
-        'space-width',
-        spec.arrangement === 'single'
-          ? 'bearing width against the axial room'
-          : 'width of the pair against the axial room',
-        spec.width,
-        c.space.maxLength,
-        'm',
-        'max',
-        spaceSource,
-      ),
-    );
-  }
+  spaceChecks(spec, c, checks);
   if (lubrication.sealed && fig.greaseHours !== null && c.life.hours > 0 && !fig.staticOnly) {
     checks.push(
       makeCheck(
@@ -244,11 +266,19 @@ function misalignmentChecks(spec: CandidateSpec, ctx: EvalContext, checks: Check
 function temperatureChecks(ctx: EvalContext, checks: CheckRecord[]): void {
   const lim = ctx.tables.running.temperatureLimits;
   const T = ctx.lubrication.temperature;
-  // Margins as the share of the allowed rise above the surroundings (from absolute zero where they are not below the limit).
   const ambient = ctx.c.environment.ambient;
+  const grease = ctx.lubrication.supply === 'grease';
+  // Every candidate at one temperature gets the same records: kept (frozen) for the last figures asked.
+  const k = keptTemperature;
+  if (k && k.lim === lim && Object.is(k.T, T) && Object.is(k.ambient, ambient) && k.grease === grease) {
+    for (const r of k.records) checks.push(r);
+    return;
+  }
+  const records: CheckRecord[] = [];
+  // Margins as the share of the allowed rise above the surroundings (from absolute zero where they are not below the limit).
   const ref = (limit: number) => (Number.isFinite(ambient) && ambient < limit ? ambient : undefined);
-  if (ctx.lubrication.supply === 'grease')
-    checks.push(
+  if (grease)
+    records.push(
       makeCheck(
         'grease-temperature',
         kept(greaseLabels, lim.greaseAssumed, "operating temperature against the grease's upper limit (", ')'),
@@ -260,7 +290,7 @@ function temperatureChecks(ctx: EvalContext, checks: CheckRecord[]): void {
         ref(lim.grease),
       ),
     );
-  checks.push(
+  records.push(
     makeCheck(
       'steel-temperature',
       'operating temperature against the dimensional stability of standard bearing steel',
@@ -272,7 +302,18 @@ function temperatureChecks(ctx: EvalContext, checks: CheckRecord[]): void {
       ref(lim.steel),
     ),
   );
+  for (const r of records) checks.push(Object.freeze(r));
+  keptTemperature = { lim, T, ambient, grease, records };
 }
+let keptTemperature:
+  | {
+      lim: EvalContext['tables']['running']['temperatureLimits'];
+      T: number;
+      ambient: number;
+      grease: boolean;
+      records: CheckRecord[];
+    }
+  | undefined;
 
 /** Every check of one candidate, in a fixed order: what it carries, then what its surroundings allow. */
 export function candidateChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext): CheckRecord[] {
