@@ -1,7 +1,14 @@
 import type { BushingMaterial, CaseSI, Medium } from '../../case/types.js';
 import { allLimitsPass, makeAdvisoryCheck, makeCheck, type CheckRecord } from '../../core/check.js';
 import type { BushingFactors, BushingMaterialRow } from '../../data/bushing.js';
-import { rubbingThrust, thrustChecks, thrustWearRate, type ThrustFace } from '../thrust/rubbing.js';
+import {
+  rubbingThrust,
+  thrustChecks,
+  thrustWearRate,
+  type RubbingThrustInput,
+  type RubbingThrustResult,
+  type ThrustFace,
+} from '../thrust/rubbing.js';
 import { dryTemperatureRise, frictionHeat, heatResistance, meanPressure, peakPressure, wearDepth } from './formulas.js';
 import { suitability } from './suitability.js';
 import type { BushingMaterialResult, BushingThrust, DutyPoint } from './types.js';
@@ -93,7 +100,8 @@ function edgeLoadCheck(c: CaseSI, Fmax: number, L: number, pMax: number, source:
 /**
  * The thrust face over the duty: each point with axial load through rubbingThrust, then the
  * largest pressure, speed and PV, the wear life by summing the points' wear rates by share
- * (linear accumulation of Archard wear), and the friction power at the largest Fa·V.
+ * (linear accumulation of Archard wear), and the friction power at the largest Fa·V (the
+ * first point of the largest face PV). One pass over the points, no list built.
  */
 function thrustOverDuty(
   c: CaseSI,
@@ -103,38 +111,44 @@ function thrustOverDuty(
   fMotion: number,
   fEnv: number,
 ): { thrust: BushingThrust; checks: CheckRecord[]; meanPower: number } {
-  const loaded = points.filter((p) => p.Fa > 0);
-  const each = loaded.map((p) => ({
-    share: p.share,
-    r: rubbingThrust(
-      {
-        axial: p.Fa,
-        face: t.face,
-        ...(p.n !== undefined ? { speed: p.n } : {}),
-        ...(c.shaft.oscillation ? { oscillation: c.shaft.oscillation } : {}),
-        hours: c.life.hours,
-        wearAllowance: c.life.wearAllowance,
-        fMotion,
-        fEnv,
-      },
-      m,
-    ),
-  }));
-  const rate = each.reduce(
-    (s, e) => s + e.share * thrustWearRate(m.wearFactor, e.r.pressure, e.r.velocity, fMotion, fEnv),
-    0,
-  );
-  const top = each.reduce((a, b) => (b.r.pv > a.r.pv ? b : a));
+  // One input, its load and speed set for each point (rubbingThrust keeps only its face).
+  const inp: RubbingThrustInput = {
+    axial: 0,
+    face: t.face,
+    speed: undefined,
+    oscillation: c.shaft.oscillation,
+    hours: c.life.hours,
+    wearAllowance: c.life.wearAllowance,
+    fMotion,
+    fEnv,
+  };
+  let rate = 0;
+  let meanPower = 0;
+  let pressure = -Infinity;
+  let velocity = -Infinity;
+  let pv = -Infinity;
+  let top: RubbingThrustResult | undefined;
+  for (const p of points) {
+    if (!(p.Fa > 0)) continue;
+    inp.axial = p.Fa;
+    inp.speed = p.n;
+    const r = rubbingThrust(inp, m);
+    rate += p.share * thrustWearRate(m.wearFactor, r.pressure, r.velocity, fMotion, fEnv);
+    meanPower += p.share * r.frictionPower;
+    pressure = Math.max(pressure, r.pressure);
+    velocity = Math.max(velocity, r.velocity);
+    pv = Math.max(pv, r.pv);
+    if (top === undefined || r.pv > top.pv) top = r;
+  }
   const thrust: BushingThrust = {
     face: t.face,
     thickness: t.thickness,
-    pressure: Math.max(...each.map((e) => e.r.pressure)),
-    velocity: Math.max(...each.map((e) => e.r.velocity)),
-    pv: Math.max(...each.map((e) => e.r.pv)),
+    pressure,
+    velocity,
+    pv,
     lifeHours: rate > 0 ? c.life.wearAllowance / rate : Infinity,
-    frictionPower: top.r.frictionPower,
+    frictionPower: top!.frictionPower,
   };
-  const meanPower = each.reduce((s, e) => s + e.share * e.r.frictionPower, 0);
   return { thrust, checks: thrustChecks(thrust, m, c.life.hours), meanPower };
 }
 
