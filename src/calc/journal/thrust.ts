@@ -163,23 +163,26 @@ function padPath(
     inletTemperature: tIn,
   });
   const taperDepth = design.inletFilmThickness - design.minFilmThickness;
-  const evaluated = points.map((p) => ({
-    ...padBearing({
+  const form = { kind: 'tapered', taperDepth } as const;
+  const evaluated: JournalThrustPad['points'] = [];
+  let governingPoint = 0;
+  for (const p of points) {
+    // padBearing returns a new result: the point's share, load and speed are set on it, not copied with it.
+    const r = padBearing({
       ring,
-      form: { kind: 'tapered', taperDepth },
+      form,
       load: p.axial,
       speed: p.speed,
       fluid,
       inletTemperature: tIn,
-    }),
-    share: p.share,
-    axial: p.axial,
-    speed: p.speed,
-  }));
-  let governingPoint = 0;
-  evaluated.forEach((p, i) => {
-    if (p.minFilmThickness < evaluated[governingPoint]!.minFilmThickness) governingPoint = i;
-  });
+    }) as JournalThrustPad['points'][number];
+    r.share = p.share;
+    r.axial = p.axial;
+    r.speed = p.speed;
+    if (r.minFilmThickness < (evaluated[governingPoint]?.minFilmThickness ?? Infinity))
+      governingPoint = evaluated.length;
+    evaluated.push(r);
+  }
   return {
     ring,
     taperDepth,
