@@ -5,7 +5,7 @@ import { AISO_CAP, KAPPA_MAX, KAPPA_MIN } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import { candidateChecks } from './checks.js';
 import { contaminationFactor } from './conditions.js';
-import type { EvalContext } from './context.js';
+import type { CandidateFigures, EvalContext } from './context.js';
 import type { Notes } from './findings.js';
 import { frictionRow, frictionTerms, type FrictionInput, type FrictionTerms } from './friction.js';
 import { regreasingIntervalFrom } from './grease.js';
@@ -157,10 +157,12 @@ function pointLoads(
   const t = ctx.tables.load;
   const nu = ctx.lubrication.viscosity;
   const exclusions: Finding[] = [];
-  const per: PointLoad[] = [];
+  // Lists sized up front here and below: one grown by push from empty reserves room for 17.
+  const per = new Array<PointLoad>(ctx.points.length);
   let raised = false;
   let heaviest: PointLoad | undefined;
-  for (const q of ctx.points) {
+  for (let i = 0; i < ctx.points.length; i++) {
+    const q = ctx.points[i]!;
     const FaBearing = bearingAxialLoad(t, spec, p, q.Fr, q.Fa);
     const r = dynamicLoadFrom(t, p.ls, q.Fr, FaBearing, q.n);
     if (r.exclusion && !excludedFor(exclusions, r.exclusion.code))
@@ -169,7 +171,7 @@ function pointLoads(
       notes.warn(finding('rolling.key-below-table', { designation: spec.designation, key: r.key }), 'once');
     if (FaBearing > q.Fa) raised = true;
     const point: PointLoad = { P: ctx.serviceFactor * r.P, n: q.n, t: q.t, nu, Fr: q.Fr, Fa: q.Fa, FaBearing, load: r };
-    per.push(point);
+    per[i] = point;
     // The first of the largest f_d·P (NaN never replaces it).
     if (heaviest === undefined || point.P > heaviest.P) heaviest = point;
   }
@@ -224,6 +226,23 @@ function spectrumBearing(spec: CandidateSpec, p: Prepared, ctx: EvalContext): Sp
 }
 
 /**
+ * The friction kernel's input: one object, refilled for each candidate and point (frictionTerms
+ * keeps none of it; every candidate at every point of a sweep asks).
+ */
+const frictionInput: FrictionInput = {
+  kind: 'deep-groove ball',
+  form: null,
+  arrangement: 'single',
+  supply: 'grease',
+  nu: 0,
+  n: 0,
+  dm: 0,
+  Fr: 0,
+  Fa: 0,
+  C0: 0,
+};
+
+/**
  * The friction moment at each point [4], Mi from the point's loads without f_d, and its time
  * means over the duty: torque Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W).
  */
@@ -236,22 +255,19 @@ function friction(
   let sumT = 0;
   let sumM = 0;
   let sumW = 0;
-  // One input, its point's speed and loads set in turn.
-  const x: FrictionInput = {
-    kind: spec.kind,
-    form: spec.form,
-    arrangement: spec.arrangement,
-    supply: ctx.lubrication.supply,
-    nu: ctx.lubrication.viscosity,
-    n: 0,
-    dm: spec.dm,
-    Fr: 0,
-    Fa: 0,
-    // The moment's load factor is worked per bearing: one bearing's C0 (a pair's is twice it, ISO 76).
-    C0: spec.arrangement === 'single' ? spec.C0 : spec.C0 / 2,
-  };
-  const moments: FrictionTerms[] = [];
-  for (const q of per) {
+  // One input, the candidate's figures set once and each point's speed and loads in turn.
+  const x = frictionInput;
+  x.kind = spec.kind;
+  x.form = spec.form;
+  x.arrangement = spec.arrangement;
+  x.supply = ctx.lubrication.supply;
+  x.nu = ctx.lubrication.viscosity;
+  x.dm = spec.dm;
+  // The moment's load factor is worked per bearing: one bearing's C0 (a pair's is twice it, ISO 76).
+  x.C0 = spec.arrangement === 'single' ? spec.C0 : spec.C0 / 2;
+  const moments = new Array<FrictionTerms>(per.length);
+  for (let i = 0; i < per.length; i++) {
+    const q = per[i]!;
     x.n = q.n;
     x.Fr = q.Fr;
     x.Fa = q.FaBearing;
@@ -259,7 +275,7 @@ function friction(
     sumT += q.t;
     sumM += q.t * m.total;
     sumW += q.t * frictionPower(m.total, q.n);
-    moments.push(m);
+    moments[i] = m;
   }
   return { moments, torque: sumT > 0 ? sumM / sumT : 0, power: sumT > 0 ? sumW / sumT : 0 };
 }
@@ -328,14 +344,26 @@ function swingAngle(spec: CandidateSpec, c: CaseSI, notes: Notes): number | null
   return swing;
 }
 
+/** The figures the checks read: one object, refilled for each candidate (the checks keep none of it). */
+const figures: CandidateFigures = {
+  P: 0,
+  L10: null,
+  kappa: null,
+  L10mh: null,
+  s0: null,
+  ndm: 0,
+  greaseHours: null,
+  staticOnly: false,
+};
+
 /** The candidate's figures at each point, in the order of the points. */
 function pointRecords(per: PointLoad[], life: SpectrumLife, moments: FrictionTerms[]): RollingCandidate['points'] {
-  const out: RollingCandidate['points'] = [];
+  const out: RollingCandidate['points'] = new Array(per.length);
   for (let i = 0; i < per.length; i++) {
     const q = per[i]!;
     const l = life.points[i]!;
     const m = moments[i]!;
-    out.push({
+    out[i] = {
       Fr: q.Fr,
       Fa: q.FaBearing,
       n: q.n,
@@ -351,7 +379,7 @@ function pointRecords(per: PointLoad[], life: SpectrumLife, moments: FrictionTer
       static: l.static,
       frictionViscous: m.viscous,
       frictionLoad: m.load,
-    });
+    };
   }
   return out;
 }
@@ -379,20 +407,16 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
   let kappa: number | null = null;
   for (const q of life.points)
     if (q.kappa !== null && !q.static) kappa = kappa === null ? q.kappa : Math.min(kappa, q.kappa);
-  const checks = candidateChecks(
-    spec,
-    {
-      P: life.P,
-      L10: life.L10,
-      kappa,
-      L10mh: life.L10mh,
-      s0,
-      ndm: run.ndm,
-      greaseHours: run.grease,
-      staticOnly: life.staticOnly,
-    },
-    ctx,
-  );
+  const fig = figures;
+  fig.P = life.P;
+  fig.L10 = life.L10;
+  fig.kappa = kappa;
+  fig.L10mh = life.L10mh;
+  fig.s0 = s0;
+  fig.ndm = run.ndm;
+  fig.greaseHours = run.grease;
+  fig.staticOnly = life.staticOnly;
+  const checks = candidateChecks(spec, fig, ctx);
   return {
     id: spec.id,
     type: spec.type,

@@ -142,13 +142,15 @@ function pointLife(q: SpectrumPointIn, b: SpectrumBearing): SpectrumPointLife {
  *   life (no load, no time), or when C ≤ 0.
  */
 export function spectrumLife(points: readonly SpectrumPointIn[], b: SpectrumBearing): SpectrumLife {
-  const per: SpectrumPointLife[] = [];
+  // Sized up front: a list grown by push from empty reserves room for 17.
+  const per = new Array<SpectrumPointLife>(points.length);
   // How many points have a time share (spectrumMean reads only theirs, in order).
   let counted = 0;
   let allStatic = true;
-  for (const q of points) {
+  for (let i = 0; i < points.length; i++) {
+    const q = points[i]!;
     const life = pointLife(q, b);
-    per.push(life);
+    per[i] = life;
     if (!counts(q)) continue;
     counted++;
     if (!life.static) allStatic = false;
