@@ -1,4 +1,4 @@
-import { makeCheck, type CheckRecord } from '../../core/check.js';
+import { makeAdvisoryCheck, makeCheck, type CheckRecord } from '../../core/check.js';
 import { KAPPA_MIN } from './aiso.js';
 import type { CandidateSpec } from './candidates.js';
 import type { CandidateFigures, EvalContext } from './context.js';
@@ -43,16 +43,14 @@ function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext
   }
   if (fig.kappa !== null && !fig.staticOnly) {
     checks.push(
-      asAdvice(
-        makeCheck(
-          'viscosity-ratio',
-          'viscosity ratio κ = ν/ν1 within the a_ISO method (below it the method’s limiting value is taken)',
-          fig.kappa,
-          KAPPA_MIN,
-          '1',
-          'min',
-          'ISO 281:2007, a_ISO valid for 0.1 ≤ κ ≤ 4 (from memory)',
-        ),
+      makeAdvisoryCheck(
+        'viscosity-ratio',
+        'viscosity ratio κ = ν/ν1 within the a_ISO method (below it the method’s limiting value is taken)',
+        fig.kappa,
+        KAPPA_MIN,
+        '1',
+        'min',
+        'ISO 281:2007, a_ISO valid for 0.1 ≤ κ ≤ 4 (from memory)',
       ),
     );
   }
@@ -83,16 +81,6 @@ function loadChecks(spec: CandidateSpec, fig: CandidateFigures, ctx: EvalContext
       ),
     );
   }
-}
-
-/**
- * A check record of our own marked as advice in place: the record advisory() (core/check.ts)
- * returns, same fields in the same order, without building it twice (every candidate at every
- * point of a sweep has one).
- */
-function asAdvice(record: CheckRecord): CheckRecord {
-  record.advisory = true;
-  return record;
 }
 
 /**
