@@ -304,7 +304,7 @@ export function frictionLoss(spec: CandidateSpec, ctx: EvalContext): number {
  */
 function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointLoad[], P: number, notes: Notes) {
   const ndm = speedFactor(ctx.maxSpeed, spec.dm);
-  const { moments, torque, power } = friction(spec, p, ctx, per);
+  const moments = friction(spec, p, ctx, per);
   let grease: number | null = null;
   if (ctx.lubrication.supply === 'grease' && ctx.maxSpeed > 0) {
     const input = {
@@ -320,7 +320,7 @@ function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointL
     grease = ctx.lubrication.sealed ? r.life.l10Hours : r.hours;
     for (const f of r.life.findings) notes.warn(f, 'once');
   }
-  return { ndm, moments, torque, power, grease };
+  return { ndm, friction: moments, grease };
 }
 
 /**
@@ -452,8 +452,8 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
     s0,
     staticOnly: life.staticOnly,
     ndm: run.ndm,
-    frictionTorque: run.torque,
-    frictionPower: run.power,
+    frictionTorque: run.friction.torque,
+    frictionPower: run.friction.power,
     requiredDynamicRating: life.staticOnly
       ? null
       : requiredDynamicRating(life.P, life.n, ctx.c.life.hours, lifeExponent(spec.type), ctx.a1),
@@ -462,7 +462,7 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
     viscosity: ctx.lubrication.viscosity,
     ratedViscosity: kappa !== null && kappa > 0 ? ctx.lubrication.viscosity / kappa : null,
     criticalSwingAngle: swing,
-    points: pointRecords(loads.per, life, run.moments),
+    points: pointRecords(loads.per, life, run.friction.moments),
     exclusions: loads.exclusions,
     feasible: loads.exclusions.length === 0 && allLimitsPass(checks),
     checks,

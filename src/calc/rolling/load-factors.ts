@@ -227,7 +227,8 @@ export function dynamicLoadFrom(t: LoadFactors, b: BearingLoadSpec, Fr: number, 
     }
     case 'angular-contact ball': {
       const key = relativeAxialLoad(b, Fa);
-      const [min, max] = [t.angularContactKeyed.angles[0]!.angle, t.angularContactFixed.rows.at(-1)!.angle];
+      const min = t.angularContactKeyed.angles[0]!.angle;
+      const max = t.angularContactFixed.rows.at(-1)!.angle;
       const got = angularContactFactors(t, Math.min(max, Math.max(min, alpha)), key ?? 0, double)!;
       let exclusion: DynamicLoad['exclusion'] = null;
       if (!(alpha >= min && alpha <= max))
