@@ -3,7 +3,7 @@ import { assumedFinding } from '../../core/finding.js';
 import { bathTemperature, bathValues, caseSump, sumpModel, type BathTemperature } from '../sump.js';
 import type { CandidateSpec } from './candidates.js';
 import type { EvalContext } from './context.js';
-import { evaluate, frictionLoss } from './evaluate.js';
+import { evaluate, frictionLoads, frictionLoss } from './evaluate.js';
 import type { Notes } from './findings.js';
 import { bathLubrication, type Lubrication, type OilSystem } from './lubrication.js';
 import type { RollingCandidate } from './types.js';
@@ -45,26 +45,38 @@ const lastBath = new WeakMap<EvalContext, number>();
  */
 export function evaluateInBath(spec: CandidateSpec, ctx: EvalContext, system: OilSystem, notes: Notes): BathCandidate {
   const { model, area, ambient, lubricationAt } = bathOf(ctx, system);
-  const at = (t: number): EvalContext => ({ ...ctx, lubrication: lubricationAt(t) });
-  // The search asks only for the friction loss; the candidate is evaluated once, at the bath temperature found.
-  const bath = bathTemperature(ambient, area, model, (t) => frictionLoss(spec, at(t)), lastBath.get(ctx));
+  // The search asks only for the friction loss (the loads at each point worked once, the lubricant
+  // at each temperature tried); the candidate is evaluated once, at the bath temperature found.
+  const loads = frictionLoads(spec, ctx);
+  const bath = bathTemperature(
+    ambient,
+    area,
+    model,
+    (t) => frictionLoss(spec, ctx, lubricationAt(t), loads),
+    lastBath.get(ctx),
+  );
   lastBath.set(ctx, bath.temperature);
-  const own = at(bath.temperature);
+  const own: EvalContext = { ...ctx, lubrication: lubricationAt(bath.temperature) };
   return { candidate: evaluate(spec, own, notes), ctx: own, bath };
 }
 
 /** The case's sump and its oil at any bath temperature, per context and oil system (the same for every candidate). */
-const baths = new WeakMap<
-  EvalContext,
-  { system: OilSystem; sump: ReturnType<typeof caseSump>; lubricationAt: (t: number) => Lubrication }
->();
-function bathOf(ctx: EvalContext, system: OilSystem) {
+interface Bath {
+  system: OilSystem;
+  model: ReturnType<typeof caseSump>['model'];
+  area: number;
+  ambient: number;
+  lubricationAt: (t: number) => Lubrication;
+}
+const baths = new WeakMap<EvalContext, Bath>();
+function bathOf(ctx: EvalContext, system: OilSystem): Bath {
   let hit = baths.get(ctx);
   if (!hit || hit.system !== system) {
-    hit = { system, sump: caseSump(ctx.c), lubricationAt: bathLubrication(ctx.c, system) };
+    const { model, area, ambient } = caseSump(ctx.c);
+    hit = { system, model, area, ambient, lubricationAt: bathLubrication(ctx.c, system) };
     baths.set(ctx, hit);
   }
-  return { ...hit.sump, lubricationAt: hit.lubricationAt };
+  return hit;
 }
 
 /** The assumption that states the bath of the bearing shown: the model, its figures, the rise. */

@@ -7,6 +7,7 @@ import { candidateChecks } from './checks.js';
 import { contaminationFactor } from './conditions.js';
 import type { CandidateFigures, EvalContext } from './context.js';
 import type { Notes } from './findings.js';
+import type { Lubrication } from './lubrication.js';
 import { frictionRow, frictionTerms, type FrictionInput, type FrictionTerms } from './friction.js';
 import { regreasingIntervalFrom } from './grease.js';
 import { lifeExponent, requiredDynamicRating } from './life.js';
@@ -244,14 +245,16 @@ const frictionInput: FrictionInput = {
 
 /**
  * The friction moment at each point [4], Mi from the point's loads without f_d, and its time
- * means over the duty: torque Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W).
+ * means over the duty: torque Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W). Each
+ * point's moments are written to `moments` where it is given.
  */
 function friction(
   spec: CandidateSpec,
   p: Prepared,
-  ctx: EvalContext,
-  per: readonly Pick<PointLoad, 'Fr' | 'FaBearing' | 'n' | 't'>[],
-) {
+  lubrication: Lubrication,
+  per: FrictionLoads,
+  moments: FrictionTerms[] | null,
+): { torque: number; power: number } {
   let sumT = 0;
   let sumM = 0;
   let sumW = 0;
@@ -260,12 +263,11 @@ function friction(
   x.kind = spec.kind;
   x.form = spec.form;
   x.arrangement = spec.arrangement;
-  x.supply = ctx.lubrication.supply;
-  x.nu = ctx.lubrication.viscosity;
+  x.supply = lubrication.supply;
+  x.nu = lubrication.viscosity;
   x.dm = spec.dm;
   // The moment's load factor is worked per bearing: one bearing's C0 (a pair's is twice it, ISO 76).
   x.C0 = spec.arrangement === 'single' ? spec.C0 : spec.C0 / 2;
-  const moments = new Array<FrictionTerms>(per.length);
   for (let i = 0; i < per.length; i++) {
     const q = per[i]!;
     x.n = q.n;
@@ -275,25 +277,39 @@ function friction(
     sumT += q.t;
     sumM += q.t * m.total;
     sumW += q.t * frictionPower(m.total, q.n);
-    moments[i] = m;
+    if (moments) moments[i] = m;
   }
-  return { moments, torque: sumT > 0 ? sumM / sumT : 0, power: sumT > 0 ? sumW / sumT : 0 };
+  return { torque: sumT > 0 ? sumM / sumT : 0, power: sumT > 0 ? sumW / sumT : 0 };
 }
 
-/**
- * A candidate's time-mean friction power in a context, W: evaluate's frictionPower, worked
- * without its other figures and notes (an oil bath's search asks for it at several temperatures).
- */
-export function frictionLoss(spec: CandidateSpec, ctx: EvalContext): number {
+/** A candidate's loads at each point of a context as its friction reads them (N, rev/s, time share). */
+export type FrictionLoads = readonly Pick<PointLoad, 'Fr' | 'FaBearing' | 'n' | 't'>[];
+
+/** The loads frictionLoss reads: worked once for a search that asks for the loss on several lubricants. */
+export function frictionLoads(spec: CandidateSpec, ctx: EvalContext): FrictionLoads {
   const p = prepared(spec, ctx.tables);
   const t = ctx.tables.load;
-  const per = ctx.points.map((q) => ({
+  return ctx.points.map((q) => ({
     Fr: q.Fr,
     FaBearing: bearingAxialLoad(t, spec, p, q.Fr, q.Fa),
     n: q.n,
     t: q.t,
   }));
-  return friction(spec, p, ctx, per).power;
+}
+
+/**
+ * A candidate's time-mean friction power in a context, W: evaluate's frictionPower, worked
+ * without its other figures and notes (an oil bath's search asks for it at several
+ * temperatures), on `lubrication` (default the context's); `loads` from frictionLoads of the
+ * same candidate and context.
+ */
+export function frictionLoss(
+  spec: CandidateSpec,
+  ctx: EvalContext,
+  lubrication: Lubrication = ctx.lubrication,
+  loads: FrictionLoads = frictionLoads(spec, ctx),
+): number {
+  return friction(spec, prepared(spec, ctx.tables), lubrication, loads, null).power;
 }
 
 /**
@@ -304,7 +320,8 @@ export function frictionLoss(spec: CandidateSpec, ctx: EvalContext): number {
  */
 function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointLoad[], P: number, notes: Notes) {
   const ndm = speedFactor(ctx.maxSpeed, spec.dm);
-  const moments = friction(spec, p, ctx, per);
+  const moments = new Array<FrictionTerms>(per.length);
+  const means = friction(spec, p, ctx.lubrication, per, moments);
   let grease: number | null = null;
   if (ctx.lubrication.supply === 'grease' && ctx.maxSpeed > 0) {
     const input = {
@@ -320,7 +337,7 @@ function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointL
     grease = ctx.lubrication.sealed ? r.life.l10Hours : r.hours;
     for (const f of r.life.findings) notes.warn(f, 'once');
   }
-  return { ndm, friction: moments, grease };
+  return { ndm, friction: means, moments, grease };
 }
 
 /**
@@ -462,7 +479,7 @@ export function evaluate(spec: CandidateSpec, ctx: EvalContext, notes: Notes): R
     viscosity: ctx.lubrication.viscosity,
     ratedViscosity: kappa !== null && kappa > 0 ? ctx.lubrication.viscosity / kappa : null,
     criticalSwingAngle: swing,
-    points: pointRecords(loads.per, life, run.friction.moments),
+    points: pointRecords(loads.per, life, run.moments),
     exclusions: loads.exclusions,
     feasible: loads.exclusions.length === 0 && allLimitsPass(checks),
     checks,
