@@ -181,6 +181,23 @@ function closedFormFactors(t: LoadFactors, kind: RollingKind, alpha: number, dou
     : factors(r.eTan * tan(alpha), 0, r.single.xAboveE, r.single.yAboveECot * c);
 }
 
+/**
+ * closedFormFactors of a support, kept per support record while its table, kind, angle and rows
+ * stay the same: they read no load, and a sweep asks for them at every point (a tapered roller
+ * bearing twice, for its opposed partner).
+ */
+function closedFormFactorsOf(t: LoadFactors, b: BearingLoadSpec, alpha: number, double: boolean): Factors {
+  const hit = closedForms.get(b);
+  if (hit && hit.t === t && hit.kind === b.kind && Object.is(hit.alpha, alpha) && hit.double === double) return hit.f;
+  const f = closedFormFactors(t, b.kind, alpha, double);
+  closedForms.set(b, { t, kind: b.kind, alpha, double, f });
+  return f;
+}
+const closedForms = new WeakMap<
+  BearingLoadSpec,
+  { t: LoadFactors; kind: RollingKind; alpha: number; double: boolean; f: Factors }
+>();
+
 /** Nominal contact angles, degrees, for which the closed forms are taken (ISO 281 radial bearings: α ≤ 45°). */
 const CLOSED_FORM_ANGLES = { min: 0, max: 45 } as const;
 
@@ -242,7 +259,7 @@ export function dynamicLoadFrom(t: LoadFactors, b: BearingLoadSpec, Fr: number, 
     case 'spherical roller': {
       const { min, max } = CLOSED_FORM_ANGLES;
       const inside = alpha > min && alpha <= max;
-      const f = closedFormFactors(t, b.kind, inside ? alpha : Math.min(max, Math.max(1, alpha)), double);
+      const f = closedFormFactorsOf(t, b, inside ? alpha : Math.min(max, Math.max(1, alpha)), double);
       const exclusion = inside
         ? null
         : excl('rolling.contact-angle-outside-table', { kind: b.kind, contactAngle: alpha, min, max });
