@@ -9,7 +9,7 @@ import type { CandidateFigures, EvalContext } from './context.js';
 import type { Notes } from './findings.js';
 import type { Lubrication } from './lubrication.js';
 import { frictionRow, frictionTerms, type FrictionInput, type FrictionTerms } from './friction.js';
-import { regreasingIntervalFrom } from './grease.js';
+import { regreasingIntervalFrom, type GreaseLifeInput } from './grease.js';
 import { lifeExponent, requiredDynamicRating } from './life.js';
 import {
   axialCapacity,
@@ -312,6 +312,17 @@ export function frictionLoss(
   return friction(spec, prepared(spec, ctx.tables), lubrication, loads, null).power;
 }
 
+/** The grease-life kernel's input: one object, refilled for each candidate (greaseLifeFrom keeps none of it). */
+const greaseInput: GreaseLifeInput & { load: { P: number; C: number } } = {
+  kind: 'deep-groove ball',
+  form: null,
+  n: 0,
+  d: 0,
+  D: 0,
+  temperature: 0,
+  load: { P: 0, C: 0 },
+};
+
 /**
  * Speed, friction and grease [4]: n·dm at the highest speed (mm·r/min); the time means over the
  * duty of the friction moment Σ ti·Mi/Σ ti (N·m) and power Σ ti·Mi·2π·ni/Σ ti (W), Mi from the
@@ -324,15 +335,15 @@ function running(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointL
   const means = friction(spec, p, ctx.lubrication, per, moments);
   let grease: number | null = null;
   if (ctx.lubrication.supply === 'grease' && ctx.maxSpeed > 0) {
-    const input = {
-      kind: spec.kind,
-      form: spec.form,
-      n: ctx.maxSpeed,
-      d: spec.bore,
-      D: spec.outerDiameter ?? 2 * spec.dm - spec.bore,
-      temperature: ctx.lubrication.temperature,
-      load: { P, C: spec.C },
-    };
+    const input = greaseInput;
+    input.kind = spec.kind;
+    input.form = spec.form;
+    input.n = ctx.maxSpeed;
+    input.d = spec.bore;
+    input.D = spec.outerDiameter ?? 2 * spec.dm - spec.bore;
+    input.temperature = ctx.lubrication.temperature;
+    input.load.P = P;
+    input.load.C = spec.C;
     const r = regreasingIntervalFrom(ctx.tables.running, input);
     grease = ctx.lubrication.sealed ? r.life.l10Hours : r.hours;
     for (const f of r.life.findings) notes.warn(f, 'once');
