@@ -64,8 +64,8 @@ export function evalContext(c: CaseSI, notes: Notes, system: OilSystem = {}): { 
  * practice where said.
  *
  * The steps, one module each: conditions.ts (operating points, shock and life factors),
- * lubrication.ts, candidates.ts, evaluate.ts with checks.ts, select.ts, sheet.ts; findings.ts
- * collects what each step assumed and cautions, in the order the steps run.
+ * lubrication.ts, candidates.ts, evaluate.ts with point-loads.ts and checks.ts, select.ts,
+ * sheet.ts; findings.ts collects what each step assumed and cautions, in the order the steps run.
  */
 export function checkRolling(
   c: CaseSI,

@@ -2,7 +2,7 @@ import type { SheetLine } from '../../core/check.js';
 import { num } from '../../core/format.js';
 import { loadFactors } from '../../data/rolling-load-factors.js';
 import type { EvalContext } from './context.js';
-import { needsOpposedPartner } from './evaluate.js';
+import { needsOpposedPartner } from './point-loads.js';
 import { actsAsDoubleRow } from './load-factors.js';
 import type { CandidatePoint, RollingCandidate } from './types.js';
 
