@@ -77,7 +77,7 @@ const BALL_C0_OVER_C_MAX = 1.2;
  */
 export function candidateSpecs(c: CaseSI, notes: Notes): CandidateSpec[] {
   const tables = catalogue();
-  const key = JSON.stringify([c.shaft.diameter, c.space, c.rolling ?? null], exactNumbers);
+  const key = specsKey(c);
   const hit = specsMemo.get(key);
   if (hit && hit.tables === tables) {
     for (const again of hit.replay) again(notes);
@@ -95,12 +95,30 @@ export function candidateSpecs(c: CaseSI, notes: Notes): CandidateSpec[] {
       replay.push((n) => n.warn(w, sameAs));
       notes.warn(w, sameAs);
     },
+    // Every caution is built and recorded: a later collector may want what this one has.
+    wants: () => true,
   };
   const specs = specsOf(c, recorder);
   if (specsMemo.size >= SPECS_MEMO_SIZE) specsMemo.clear();
   specsMemo.set(key, { tables, specs, replay });
   return [...specs];
 }
+
+/**
+ * The memo's key of a case: what candidateSpecs reads of it, numbers exactly. Kept for the last
+ * space and rolling settings seen (cases are data, never changed once made; the cells of a
+ * sweep share them and differ in load and speed).
+ */
+function specsKey(c: CaseSI): string {
+  const rolling = c.rolling ?? null;
+  const last = lastKey;
+  if (last && last.space === c.space && last.rolling === rolling && Object.is(last.diameter, c.shaft.diameter))
+    return last.key;
+  const key = JSON.stringify([c.shaft.diameter, c.space, rolling], exactNumbers);
+  lastKey = { space: c.space, rolling, diameter: c.shaft.diameter, key };
+  return key;
+}
+let lastKey: { space: CaseSI['space']; rolling: CaseSI['rolling'] | null; diameter: number; key: string } | undefined;
 
 /**
  * The candidates of the cases seen last, with the notes they added, by what candidateSpecs

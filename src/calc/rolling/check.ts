@@ -82,7 +82,9 @@ export function checkRolling(
   const specs = candidateSpecs(c, notes);
   const inBath = bathCase ? specs.map((s) => evaluateInBath(s, ctx0, system, notes)) : [];
   const candidates = bathCase ? inBath.map((b) => b.candidate) : specs.map((s) => evaluate(s, ctx0, notes));
-  const best = bestCandidate(candidates, notes);
+  // The kinds' traits as read once for this check (ctx0.tables), for every step of the choice.
+  const kinds = ctx0.tables.kinds;
+  const best = bestCandidate(candidates, notes, kinds);
   const shown = inBath.find((b) => b.candidate === (best ?? candidates[0]));
   if (shown) notes.assume(bathAssumption(shown));
   const ctx = shown ? shown.ctx : ctx0;
@@ -96,7 +98,7 @@ export function checkRolling(
   const requiredC = requiredDynamicRating(equivalentLoad, meanSpeed, c.life.hours, lifeExponent(leadType), ctx.a1);
   if (!(c.life.hours > 0)) notes.warn(finding('rolling.no-life-target'));
 
-  const leads = leadOfEachKind(candidates);
+  const leads = leadOfEachKind(candidates, kinds);
   return {
     option: 'rolling',
     equivalentLoad,
@@ -105,9 +107,9 @@ export function checkRolling(
     requiredDynamicRatingFor: requiredC !== null ? { type: leadType, p: lifeExponent(leadType) } : null,
     candidates,
     best: best ? best.id : null,
-    kinds: leads.map(kindFacts),
-    chosen: best ? kindFacts(best) : null,
-    choice: choiceFinding(best, candidates, leads),
+    kinds: leads.map((k) => kindFacts(k, kinds)),
+    chosen: best ? kindFacts(best, kinds) : null,
+    choice: choiceFinding(best, candidates, leads, kinds),
     feasible: best !== null,
     assumed: notes.assumed,
     warnings: notes.warnings,

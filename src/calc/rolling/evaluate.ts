@@ -41,7 +41,7 @@ import type { RollingCandidate } from './types.js';
 function lives(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointLoad[], notes: Notes): SpectrumLife {
   const life = spectrumLife(per, spectrumBearing(spec, p, ctx));
   const designation = spec.designation;
-  if (life.staticOnly)
+  if (life.staticOnly && notes.wants('rolling.static-only', 'once'))
     notes.warn(
       finding('rolling.static-only', {
         speed: ctx.maxSpeed,
@@ -52,12 +52,14 @@ function lives(spec: CandidateSpec, p: Prepared, ctx: EvalContext, per: PointLoa
     );
   for (const q of life.points) {
     if (q.static || q.kappa === null) continue;
-    // Said once for the first candidate it concerns: across a catalogue of bores the same caution would repeat dozens of times.
-    if (q.kappaRange === 'above')
+    // Said once for the first candidate it concerns: across a catalogue of bores the same caution
+    // would repeat dozens of times (so it is built only while none is kept).
+    if (q.kappaRange === 'above' && notes.wants('rolling.kappa-above-range', 'once'))
       notes.warn(finding('rolling.kappa-above-range', { designation, kappa: q.kappa, kappaMax: KAPPA_MAX }), 'once');
-    if (q.kappaRange === 'below')
+    if (q.kappaRange === 'below' && notes.wants('rolling.kappa-below-range', 'once'))
       notes.warn(finding('rolling.kappa-below-range', { designation, kappa: q.kappa, kappaMin: KAPPA_MIN }), 'once');
-    if (q.capped) notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }), 'once');
+    if (q.capped && notes.wants('rolling.aiso-capped', 'once'))
+      notes.warn(finding('rolling.aiso-capped', { designation, cap: AISO_CAP }), 'once');
   }
   return life;
 }

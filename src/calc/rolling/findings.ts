@@ -15,24 +15,43 @@ export interface Notes {
   assume(a: AssumedFinding): void;
   /** Add a caution; `sameAs` names it for telling repeats apart (default: its code and values). */
   warn(w: Finding, sameAs?: string): void;
+  /**
+   * Whether warn(w, sameAs) with a caution of this code would keep it (none of that code and
+   * name is kept yet): a step asks before building a caution that most candidates repeat.
+   */
+  wants(code: string, sameAs: string): boolean;
 }
 
 /** An empty collector for one check. */
 export function newNotes(): Notes {
   const assumed: AssumedFinding[] = [];
   const warnings: Finding[] = [];
-  const seen = new Set<string>();
+  // Named cautions: the names kept per code. Others: the cautions kept per code, compared by
+  // their default key only with those of the same code (the key holds the code).
+  const named = new Map<string, Set<string>>();
+  const byCode = new Map<string, Finding[]>();
   return {
     assumed,
     warnings,
     assume: (a) => void assumed.push(a),
     warn: (w, sameAs) => {
-      // A given name is kept apart from the default key (a JSON object, which starts with "{").
-      const key = sameAs === undefined ? keyOf(w) : `${w.code}:${sameAs}`;
-      if (seen.has(key)) return;
-      seen.add(key);
+      if (sameAs !== undefined) {
+        let names = named.get(w.code);
+        if (!names) named.set(w.code, (names = new Set()));
+        if (names.has(sameAs)) return;
+        names.add(sameAs);
+      } else {
+        const same = byCode.get(w.code);
+        if (!same) byCode.set(w.code, [w]);
+        else {
+          const key = keyOf(w);
+          if (same.some((x) => keyOf(x) === key)) return;
+          same.push(w);
+        }
+      }
       warnings.push(w);
     },
+    wants: (code, sameAs) => named.get(code)?.has(sameAs) !== true,
   };
 }
 

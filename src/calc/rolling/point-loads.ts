@@ -146,7 +146,7 @@ export function pointLoads(
     const r = dynamicLoadFrom(t, p.ls, q.Fr, FaBearing, q.n);
     if (r.exclusion && !excludedFor(exclusions, r.exclusion.code))
       exclusions.push(finding(r.exclusion.code, r.exclusion.values));
-    if (r.range === 'below' && r.key !== null && r.key > 0 && r.Y > 0)
+    if (r.range === 'below' && r.key !== null && r.key > 0 && r.Y > 0 && notes.wants('rolling.key-below-table', 'once'))
       notes.warn(finding('rolling.key-below-table', { designation: spec.designation, key: r.key }), 'once');
     if (FaBearing > q.Fa) raised = true;
     const point: PointLoad = { P: ctx.serviceFactor * r.P, n: q.n, t: q.t, nu, Fr: q.Fr, Fa: q.Fa, FaBearing, load: r };
@@ -154,7 +154,8 @@ export function pointLoads(
     // The first of the largest f_d·P (NaN never replaces it).
     if (heaviest === undefined || point.P > heaviest.P) heaviest = point;
   }
-  if (p.partner && raised) notes.warn(finding('rolling.opposed-partner', {}), 'opposed-partner');
+  if (p.partner && raised && notes.wants('rolling.opposed-partner', 'opposed-partner'))
+    notes.warn(finding('rolling.opposed-partner', {}), 'opposed-partner');
   return { per, exclusions, heaviest: heaviest! };
 }
 

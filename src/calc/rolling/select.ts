@@ -30,10 +30,12 @@ function orderNullLast(a: number | null, b: number | null): number {
 /** The traits of each kind, by kind, per table read (the sort below asks for them many times). */
 const traitsByTable = new WeakMap<KindTraits[], Map<RollingKind, KindTraits>>();
 
-/** The traits of each kind of the table in use (read once per choice, not per comparison). */
+/**
+ * The traits of each kind of a table, by default the one in use (read once per choice, not per
+ * comparison; a check passes the table it read once for all its steps).
+ */
 type TraitsByKind = Map<RollingKind, KindTraits>;
-function traitsNow(): TraitsByKind {
-  const table = kindTraits();
+function traitsNow(table: KindTraits[] = kindTraits()): TraitsByKind {
   let byKind = traitsByTable.get(table);
   if (!byKind) {
     byKind = new Map(table.map((t) => [t.kind, t]));
@@ -97,11 +99,15 @@ function firstFeasible(
  * (choiceOrder). Null when none is feasible; then why the nearest miss of each kind is not
  * suitable is said.
  */
-export function bestCandidate(candidates: RollingCandidate[], notes: Notes): RollingCandidate | null {
-  const best = firstFeasible(candidates, traitsNow()) ?? null;
+export function bestCandidate(
+  candidates: RollingCandidate[],
+  notes: Notes,
+  kinds?: KindTraits[],
+): RollingCandidate | null {
+  const best = firstFeasible(candidates, traitsNow(kinds)) ?? null;
   if (best) return best;
   if (candidates.length === 0) notes.warn(finding('rolling.no-candidate'));
-  for (const k of leadOfEachKind(candidates)) {
+  for (const k of leadOfEachKind(candidates, kinds)) {
     const failing = k.checks.filter((x) => !x.pass && !x.advisory);
     notes.warn(
       finding('rolling.not-suitable', {
@@ -122,8 +128,8 @@ export function bestCandidate(candidates: RollingCandidate[], notes: Notes): Rol
  * practice chooses in, else the nearest miss (nothing excludes it outright, then the largest
  * governing margin). What a person reads first; every candidate stays in the result.
  */
-export function leadOfEachKind(candidates: RollingCandidate[]): RollingCandidate[] {
-  const byKind = traitsNow();
+export function leadOfEachKind(candidates: RollingCandidate[], kinds?: KindTraits[]): RollingCandidate[] {
+  const byKind = traitsNow(kinds);
   const out: RollingCandidate[] = [];
   for (const kind of ROLLING_KINDS) {
     const lead = firstFeasible(candidates, byKind, kind) ?? nearestMiss(candidates, kind);
@@ -192,8 +198,8 @@ export function equivalentLoadBound(
 }
 
 /** The facts of a candidate's kind (common-practice traits from data/rolling-kinds.json). */
-export function kindFacts(k: RollingCandidate): KindFacts {
-  const byKind = traitsNow();
+export function kindFacts(k: RollingCandidate, kinds?: KindTraits[]): KindFacts {
+  const byKind = traitsNow(kinds);
   const t = traitsOf(k.kind, byKind);
   return {
     kind: k.kind,
@@ -216,9 +222,10 @@ export function choiceFinding(
   best: RollingCandidate | null,
   candidates: RollingCandidate[],
   leads: RollingCandidate[] = leadOfEachKind(candidates),
+  kinds?: KindTraits[],
 ): Finding | null {
   if (!best) return null;
-  const byKind = traitsNow();
+  const byKind = traitsNow(kinds);
   const passedOver = leads
     .filter((k) => k.kind !== best.kind && !k.feasible && costClass(k, byKind) <= costClass(best, byKind))
     .map((k) => {
