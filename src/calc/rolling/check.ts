@@ -84,7 +84,8 @@ export function checkRolling(
   const candidates = bathCase ? inBath.map((b) => b.candidate) : specs.map((s) => evaluate(s, ctx0, notes));
   // The kinds' traits as read once for this check (ctx0.tables), for every step of the choice.
   const kinds = ctx0.tables.kinds;
-  const best = bestCandidate(candidates, notes, kinds);
+  const leads = leadOfEachKind(candidates, kinds);
+  const best = bestCandidate(candidates, notes, kinds, leads);
   const shown = inBath.find((b) => b.candidate === (best ?? candidates[0]));
   if (shown) notes.assume(bathAssumption(shown));
   const ctx = shown ? shown.ctx : ctx0;
@@ -98,7 +99,6 @@ export function checkRolling(
   const requiredC = requiredDynamicRating(equivalentLoad, meanSpeed, c.life.hours, lifeExponent(leadType), ctx.a1);
   if (!(c.life.hours > 0)) notes.warn(finding('rolling.no-life-target'));
 
-  const leads = leadOfEachKind(candidates, kinds);
   return {
     option: 'rolling',
     equivalentLoad,

@@ -39,8 +39,9 @@ export function spectrumMean<T extends SpectrumPoint>(
     const n = Math.max(0, q.n);
     sumT += t;
     sumNT += n * t;
-    sumPNT += Math.pow(q.P, p) * n * t;
-    sumPT += Math.pow(q.P, p) * t;
+    const Pp = Math.pow(q.P, p);
+    sumPNT += Pp * n * t;
+    sumPT += Pp * t;
   }
   if (!(sumT > 0)) return { P: 0, n: 0, byRevolutions: false };
   const n = sumNT / sumT;

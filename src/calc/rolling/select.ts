@@ -97,17 +97,18 @@ function firstFeasible(
 /**
  * The best candidate: of the feasible ones, the first in the order practice chooses in
  * (choiceOrder). Null when none is feasible; then why the nearest miss of each kind is not
- * suitable is said.
+ * suitable is said (`leads`: leadOfEachKind of the candidates, when the caller has it).
  */
 export function bestCandidate(
   candidates: RollingCandidate[],
   notes: Notes,
   kinds?: KindTraits[],
+  leads?: readonly RollingCandidate[],
 ): RollingCandidate | null {
   const best = firstFeasible(candidates, traitsNow(kinds)) ?? null;
   if (best) return best;
   if (candidates.length === 0) notes.warn(finding('rolling.no-candidate'));
-  for (const k of leadOfEachKind(candidates, kinds)) {
+  for (const k of leads ?? leadOfEachKind(candidates, kinds)) {
     const failing = k.checks.filter((x) => !x.pass && !x.advisory);
     notes.warn(
       finding('rolling.not-suitable', {
