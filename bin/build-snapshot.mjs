@@ -47,9 +47,18 @@ delete env.SHAFTWISE_RULES_DIR;
  *   grow to 4 MB collects them with a quarter of the scavenges of one held at 1 MB (src/cli/
  *   commands/map.ts holds it there without this cap) for a few MB more peak memory; the helper
  *   threads of a parallel scavenge cost more than they save on two cores (a 60 × 60 map 12.3x ->
- *   9.3x bare node, peak RSS 91 -> 94 MB).
+ *   9.3x bare node, peak RSS 91 -> 94 MB);
+ * - feedback vectors allocated at a function's first call, not after it has run a while: the
+ *   code warmed in the snapshot starts collecting type feedback at once (advise 1.93x -> 1.86x,
+ *   check 1.77x -> 1.72x over 25 runs; the 60 x 60 map 8.0x -> 8.7x over 5, a trade taken for
+ *   the commands run most).
  */
-const FLAGS = ['--interrupt-budget=270336', '--max-semi-space-size=4', '--no-parallel-scavenge'];
+const FLAGS = [
+  '--interrupt-budget=270336',
+  '--max-semi-space-size=4',
+  '--no-parallel-scavenge',
+  '--no-lazy-feedback-allocation',
+];
 const r = spawnSync(process.execPath, [...FLAGS, '--snapshot-blob', tmp, '--build-snapshot', script], {
   cwd: root,
   encoding: 'utf8',
