@@ -51,6 +51,8 @@ function shortestLengths(c: CaseSI, m: Material, Fmax: number, FVmax: number, we
  */
 interface Sources {
   heat: BushingFactors['heat'];
+  /** The row's source and the heat model's source and reference ambient the texts were made from. */
+  from: [string, string, number];
   wear: string;
   temperature: string;
   edge: string;
@@ -59,10 +61,19 @@ interface Sources {
 const sourcesOf = new WeakMap<Material, Sources>();
 function sources(m: Material, heat: BushingFactors['heat']): Sources {
   const hit = sourcesOf.get(m);
-  if (hit && hit.heat === heat) return hit;
+  // Checked against the values, not only the objects: a case's own material row may be changed in place.
   const src = m.source;
+  if (
+    hit &&
+    hit.heat === heat &&
+    hit.from[0] === src &&
+    hit.from[1] === heat.source &&
+    hit.from[2] === heat.referenceAmbient
+  )
+    return hit;
   const made: Sources = {
     heat,
+    from: [src, heat.source, heat.referenceAmbient],
     wear: `Archard wear law, The Tribology Handbook 2nd ed. 1995, A5; wear factor: ${src}`,
     temperature: `${src}; heat balance: ${heat.source}; margin: share of the allowed rise above ambient`,
     edge: `${src}; model: the tilted shaft bears only where its gap θ·x is within the wear allowance (common practice, our own estimate)`,

@@ -105,20 +105,12 @@ export function candidateSpecs(c: CaseSI, notes: Notes): CandidateSpec[] {
 }
 
 /**
- * The memo's key of a case: what candidateSpecs reads of it, numbers exactly. Kept for the last
- * space and rolling settings seen (cases are data, never changed once made; the cells of a
- * sweep share them and differ in load and speed).
+ * The memo's key of a case: what candidateSpecs reads of it, numbers exactly. Built from the
+ * values at every call: a case changed in place (the library's caller may do so) gets its own key.
  */
 function specsKey(c: CaseSI): string {
-  const rolling = c.rolling ?? null;
-  const last = lastKey;
-  if (last && last.space === c.space && last.rolling === rolling && Object.is(last.diameter, c.shaft.diameter))
-    return last.key;
-  const key = JSON.stringify([c.shaft.diameter, c.space, rolling], exactNumbers);
-  lastKey = { space: c.space, rolling, diameter: c.shaft.diameter, key };
-  return key;
+  return JSON.stringify([c.shaft.diameter, c.space, c.rolling ?? null], exactNumbers);
 }
-let lastKey: { space: CaseSI['space']; rolling: CaseSI['rolling'] | null; diameter: number; key: string } | undefined;
 
 /**
  * The candidates of the cases seen last, with the notes they added, by what candidateSpecs
