@@ -8,6 +8,7 @@ import { spawnSync } from 'node:child_process';
 import {
   copyFileSync,
   mkdirSync,
+  readdirSync,
   mkdtempSync,
   readFileSync,
   rmSync,
@@ -143,6 +144,18 @@ describe('bin/shaftwise', () => {
         utimesSync(join(root, 'package.json'), later, later);
       },
     ],
+    ...(['rules', 'data'] as const).map((folder): [string, (dir: string, root: string) => void] => [
+      `a file in ${folder}/ written after the blob (the blob holds the ${folder === 'rules' ? 'rules' : 'tables'} it read)`,
+      (dir, root) => {
+        usable(dir, root);
+        rmSync(join(root, folder));
+        mkdirSync(join(root, folder));
+        for (const f of readdirSync(join(ROOT, folder))) copyFileSync(join(ROOT, folder, f), join(root, folder, f));
+        const later = new Date(Date.now() + 60_000);
+        const first = readdirSync(join(root, folder)).find((f) => f.endsWith('.json'))!;
+        utimesSync(join(root, folder, first), later, later);
+      },
+    ]),
     ['SHAFTWISE_DATA_DIR set', usable, { SHAFTWISE_DATA_DIR: join(ROOT, 'data') }],
     ['SHAFTWISE_RULES_DIR set', usable, { SHAFTWISE_RULES_DIR: join(ROOT, 'rules') }],
   ];
