@@ -31,18 +31,19 @@ function warmingCases(): string[] {
 const MAP_WARMING_GRID = 12;
 
 /**
- * Advise every example in each format and run each check on the single-support ones; draw a
- * small map of the first single-support example, as text and SVG. Output is discarded; a case
- * that fails is skipped (the snapshot still holds what ran before it).
+ * Advise every example and run each check on the single-support ones, in the default text
+ * format; draw a small map of the first single-support example, as text and SVG. Output is
+ * discarded; a case that fails is skipped (the snapshot still holds what ran before it).
+ * The other formats (JSON, the note) compile when first used: warming them too made the blob
+ * larger and every start slower by more than they gain (about 2 ms of `advise` and `check`
+ * against about 2 ms of `--format html`, bench/startup.mjs).
  */
 async function warm(): Promise<void> {
   const skip = () => '';
   const files = warmingCases();
   for (const file of files) {
-    for (const format of ['text', 'json', 'md', 'html'] as const)
-      await runAdvise(file, { format, units: 'SI', explain: false, now: () => new Date(0) }).catch(skip);
-    for (const name of CHECKS)
-      for (const format of ['text', 'json'] as const) await runCheck(name, file, { format, units: 'SI' }).catch(skip);
+    await runAdvise(file, { format: 'text', units: 'SI', explain: false, now: () => new Date(0) }).catch(skip);
+    for (const name of CHECKS) await runCheck(name, file, { format: 'text', units: 'SI' }).catch(skip);
   }
   try {
     const loaded = loadCaseFile(files[0]!);
