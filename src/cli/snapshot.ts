@@ -35,8 +35,8 @@ const MAP_WARMING_GRID = 12;
  * format; draw a small map of the first single-support example, as text and SVG. Output is
  * discarded; a case that fails is skipped (the snapshot still holds what ran before it).
  * The other formats (JSON, the note) compile when first used: warming them too made the blob
- * larger and every start slower by more than they gain (about 2 ms of `advise` and `check`
- * against about 2 ms of `--format html`, bench/startup.mjs).
+ * 0.17 MB larger, and every start reads it (`check bushing` about 3 ms sooner without them,
+ * `advise` the same within noise, `--format html` about 2 ms later; bench/startup.mjs).
  */
 async function warm(): Promise<void> {
   const skip = () => '';
