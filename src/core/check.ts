@@ -71,8 +71,7 @@ export function makeCheck(
   reference?: number,
 ): CheckRecord {
   const margin = marginOf(value, limit, unit, sense, reference);
-  const pass = sense === 'max' ? value <= limit : value >= limit;
-  return { id, label, value, limit, unit, margin, pass, source, sense };
+  return { id, label, value, limit, unit, margin, pass: passes(value, limit, sense), source, sense };
 }
 
 /**
@@ -90,9 +89,12 @@ export function makeAdvisoryCheck(
   reference?: number,
 ): CheckRecord {
   const margin = marginOf(value, limit, unit, sense, reference);
-  const pass = sense === 'max' ? value <= limit : value >= limit;
-  return { id, label, value, limit, unit, margin, pass, source, sense, advisory: true };
+  return { id, label, value, limit, unit, margin, pass: passes(value, limit, sense), source, sense, advisory: true };
 }
+
+/** Whether value is within limit: at most it for a "max" limit, at least it for a "min" one. */
+const passes = (value: number, limit: number, sense: 'max' | 'min'): boolean =>
+  sense === 'max' ? value <= limit : value >= limit;
 
 /** The signed margin of the convention above. */
 function marginOf(value: number, limit: number, unit: string, sense: 'max' | 'min', reference?: number): number {

@@ -7,12 +7,11 @@ export const WIDTH = 100;
  * lines); number columns never wrap, so a value, limit or margin is always read whole.
  */
 export function table(head: string[], rows: string[][], indent = '  ', width = WIDTH): string {
-  // Each column's cells, heading first, and their printed widths, measured once.
+  // Each column's cells, heading first.
   const cols = head.map((h, i) => [h, ...rows.map((r) => r[i] ?? '')]);
-  const widthsOf = cols.map((col) => col.map(len));
   // A number, "—" (none) or "excluded" (the ranking's score of an excluded option) right-aligns.
   const numeric = cols.map((col) => rows.length > 0 && col.every((c, k) => k === 0 || NUMERIC.test(plain(c))));
-  const widths = widthsOf.map((ws) => Math.max(...ws));
+  const widths = cols.map((col) => Math.max(...col.map(len)));
   fitColumns(widths, numeric, cols, width - len(indent));
   const line = (cells: string[]) =>
     indent +
